@@ -1,0 +1,103 @@
+// better-auth: e-mail + password, cookie sessions stored in our database, roles via the admin plugin.
+import { betterAuth } from "better-auth";
+import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { admin } from "better-auth/plugins";
+import { z } from "zod";
+import { SIGN_UP_ROLES } from "../shared/roles";
+import type { Db } from "./db/client";
+import * as schema from "./db/schema";
+import { linkMail, type Mailer } from "./lib/mailer";
+import type { Logger } from "./lib/logger";
+
+export type AuthConfig = {
+  db: Db;
+  secret: string;
+  baseUrl: string;
+  trustedOrigins: string[];
+  mailer: Mailer;
+  logger: Logger;
+};
+
+export function createAuth({ db, secret, baseUrl, trustedOrigins, mailer, logger }: AuthConfig) {
+  const send = async (mail: Parameters<Mailer["send"]>[0]) => {
+    try {
+      await mailer.send(mail);
+    } catch (err) {
+      // A mail outage must not lose the account; the user can ask for the e-mail again.
+      logger.error({ err, to: mail.to, subject: mail.subject }, "mail could not be sent");
+    }
+  };
+
+  return betterAuth({
+    appName: "Borrowline",
+    logger: {
+      log: (level, message, ...args) => logger[level === "success" ? "info" : level]({ args }, `better-auth: ${message}`),
+    },
+    baseURL: baseUrl,
+    basePath: "/api/auth",
+    secret,
+    trustedOrigins,
+    database: drizzleAdapter(db, { provider: "pg", schema }),
+    // Rate limits are applied in Express (express-rate-limit) so every 429 has our error shape.
+    rateLimit: { enabled: false },
+    advanced: {
+      useSecureCookies: baseUrl.startsWith("https://"),
+      defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
+    },
+    emailAndPassword: {
+      enabled: true,
+      minPasswordLength: 8,
+      maxPasswordLength: 128,
+      requireEmailVerification: false,
+      revokeSessionsOnPasswordReset: true,
+      sendResetPassword: async ({ user, url }) => {
+        await send(
+          linkMail(user.email, "Reset your Borrowline password", `Someone asked to reset the password for ${user.email}.`, "Choose a new password", url),
+        );
+      },
+    },
+    emailVerification: {
+      sendOnSignUp: true,
+      autoSignInAfterVerification: true,
+      sendVerificationEmail: async ({ user, url }) => {
+        await send(
+          linkMail(user.email, "Confirm your e-mail for Borrowline", `Welcome to Borrowline, ${user.name}. Please confirm this is your e-mail address.`, "Confirm my e-mail", url),
+        );
+      },
+    },
+    user: {
+      additionalFields: {
+        // What the person chose at sign-up; it decides the role once, at creation. Never "admin".
+        accountType: {
+          type: "string",
+          required: true,
+          input: true,
+          validator: { input: z.enum(SIGN_UP_ROLES, { message: "accountType must be player or coach" }) },
+        },
+      },
+    },
+    databaseHooks: {
+      user: {
+        create: {
+          before: async (user) => {
+            const chosen = z.enum(SIGN_UP_ROLES).safeParse(user.accountType);
+            // Admin-created users (CLI, seed) arrive with a role of their own and keep it.
+            const role = typeof user.role === "string" && user.role !== "player" ? user.role : chosen.success ? chosen.data : "player";
+            return { data: { ...user, role } };
+          },
+        },
+        update: {
+          before: async (data, ctx) => {
+            // A user editing their own record never changes their role or account type.
+            if (ctx?.path?.startsWith("/admin/")) return;
+            const { role: _role, accountType: _type, ...rest } = data;
+            return { data: rest };
+          },
+        },
+      },
+    },
+    plugins: [admin({ defaultRole: "player", adminRoles: ["admin"] })],
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;

@@ -1,0 +1,48 @@
+// The invented demo scenario of the product brief: no real person, club or course.
+import type { LadderInput } from "../../shared/schemas/ladders";
+
+export const DEMO_PASSWORD = "larkspur-demo";
+
+export const DEMO_ADMIN = { name: "Borrowline Admin", email: "admin@borrowline.example" };
+export const DEMO_COACH = { name: "Dana Whitcombe", email: "dana@larkspur.example" };
+/** skill: the distance (ft) at which this junior holes half their putts in week 1, and per-week gain. */
+export const DEMO_PLAYERS = [
+  { name: "Ivo Marsh", email: "ivo@larkspur.example", halfAtFt: 5.0, gainFtPerWeek: 0.45 },
+  { name: "Leena Park", email: "leena@larkspur.example", halfAtFt: 6.0, gainFtPerWeek: 0.3 },
+  { name: "Sam Okoro", email: "sam@larkspur.example", halfAtFt: 4.5, gainFtPerWeek: 0.5 },
+  { name: "Ruth Calder", email: "ruth@larkspur.example", halfAtFt: 5.5, gainFtPerWeek: 0.35 },
+] as const;
+
+export const DEMO_GREEN = {
+  name: "Top green",
+  locationNote: "Larkspur Heath golf club, practice green by the first tee. Mostly 1.5–2.5 % slope.",
+  stimpFt: 9.5,
+};
+
+export const DEMO_SQUAD = { name: "Larkspur juniors", description: "Saturday-morning junior squad at Larkspur Heath." };
+
+const FT = 0.3048;
+
+export const DEMO_LADDERS: LadderInput[] = [
+  {
+    name: "Three-to-nine",
+    description: "Short putts that must be holed: three feet up to nine, every rung pass before moving back.",
+    failRule: "drop-one",
+    rungs: [3, 4, 5, 6, 7, 8, 9].map((ft) => ({
+      distanceM: Math.round(ft * FT * 100) / 100,
+      balls: 5,
+      passRule: ft <= 5 ? { kind: "in-a-row" as const, count: 3 } : { kind: "make" as const, made: 3 },
+    })),
+  },
+  {
+    name: "Lag ladder",
+    description: "Long putts; the goal is pace. Holed counts, and so does any ball finishing within a putter length.",
+    failRule: "repeat",
+    rungs: [20, 30, 40].map((ft) => ({
+      distanceM: Math.round(ft * FT * 100) / 100,
+      balls: 6,
+      passRule: { kind: "make" as const, made: 1 },
+      note: "Finish within a putter length past the hole",
+    })),
+  },
+];

@@ -1,0 +1,96 @@
+// Seeds the demo scenario once (idempotent: skipped when the demo coach exists).
+import { eq } from "drizzle-orm";
+import { create, all } from "mathjs";
+import type { Auth } from "../auth";
+import type { Logger } from "../lib/logger";
+import type { Db } from "./client";
+import { greens, ladders, practiceSessions, putts, squadMembers, squads, stimpReadings, user } from "./schema";
+import { DEMO_ADMIN, DEMO_COACH, DEMO_GREEN, DEMO_LADDERS, DEMO_PASSWORD, DEMO_PLAYERS, DEMO_SQUAD } from "./seed-data";
+
+const FT = 0.3048;
+const WEEKS = 6;
+
+export async function createAccount(
+  db: Db,
+  auth: Auth,
+  who: { name: string; email: string },
+  role: "player" | "coach" | "admin",
+  password = DEMO_PASSWORD,
+): Promise<string> {
+  const res = await auth.api.signUpEmail({
+    body: { name: who.name, email: who.email, password, accountType: role === "coach" ? "coach" : "player" },
+  });
+  await db.update(user).set({ role, emailVerified: true }).where(eq(user.id, res.user.id));
+  return res.user.id;
+}
+
+function isoDaysAgo(days: number, today = new Date()): string {
+  const d = new Date(Date.UTC(today.getUTCFullYear(), today.getUTCMonth(), today.getUTCDate() - days));
+  return d.toISOString().slice(0, 10);
+}
+
+export async function seedDemo(db: Db, auth: Auth, logger: Logger): Promise<void> {
+  const existing = await db.select({ id: user.id }).from(user).where(eq(user.email, DEMO_COACH.email));
+  if (existing.length > 0) return;
+  logger.info("seeding the demo scenario (Larkspur Heath)");
+
+  // Reproducible invented data: a seeded generator from mathjs.
+  const math = create(all!, { randomSeed: "larkspur-heath" });
+  const rand = () => math.random();
+
+  await createAccount(db, auth, DEMO_ADMIN, "admin");
+  const coachId = await createAccount(db, auth, DEMO_COACH, "coach");
+  const playerIds: string[] = [];
+  for (const p of DEMO_PLAYERS) playerIds.push(await createAccount(db, auth, p, "player"));
+
+  const [green] = await db.insert(greens).values({ ownerId: coachId, name: DEMO_GREEN.name, locationNote: DEMO_GREEN.locationNote }).returning();
+  await db.insert(stimpReadings).values([
+    { greenId: green!.id, measuredOn: isoDaysAgo(WEEKS * 7), stimpFt: 9.0, note: "After rain, slower" },
+    { greenId: green!.id, measuredOn: isoDaysAgo(7), stimpFt: DEMO_GREEN.stimpFt },
+  ]);
+
+  const [squad] = await db.insert(squads).values({ coachId, ...DEMO_SQUAD }).returning();
+  await db.insert(squadMembers).values(playerIds.map((playerId) => ({ squadId: squad!.id, playerId })));
+  await db.insert(ladders).values(DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l })));
+
+  const distancesFt = [3, 3, 4, 4, 5, 5, 6, 6, 8, 8, 10, 12, 15, 20, 25, 30];
+  for (const [i, p] of DEMO_PLAYERS.entries()) {
+    const playerId = playerIds[i]!;
+    for (let week = 0; week < WEEKS; week++) {
+      for (const dayOffset of [1, 4]) {
+        const daysAgo = (WEEKS - 1 - week) * 7 + (6 - dayOffset) + i;
+        const [session] = await db
+          .insert(practiceSessions)
+          .values({
+            playerId,
+            date: isoDaysAgo(daysAgo),
+            greenId: green!.id,
+            stimpFt: week < 2 ? 9.0 : DEMO_GREEN.stimpFt,
+            conditions: week < 2 ? "Damp, slow after rain" : "Dry and true",
+            tags: week < 2 ? ["damp"] : ["dry"],
+          })
+          .returning();
+        const halfAt = p.halfAtFt + p.gainFtPerWeek * week;
+        const rows = [];
+        for (let k = 0; k < 24; k++) {
+          const ft = distancesFt[Math.floor(rand() * distancesFt.length)]!;
+          const made = rand() < 1 / (1 + Math.exp((ft - halfAt) / 2.4));
+          const long = ft >= 15;
+          const pastM = long ? (rand() - 0.35) * 1.6 : 0.1 + rand() * 0.5 * (rand() < 0.3 ? -1 : 1);
+          rows.push({
+            sessionId: session!.id,
+            playerId,
+            distanceM: ft * FT,
+            holed: made,
+            missSide: made ? null : rand() < 0.55 ? "right" : "left",
+            missLengthM: made ? null : Math.round(pastM * 100) / 100,
+            breakType: ["uphill", "downhill", "left-to-right", "right-to-left", "straight"][Math.floor(rand() * 5)]!,
+            createdAt: new Date(Date.parse(`${isoDaysAgo(daysAgo)}T09:00:00Z`) + k * 60_000),
+          });
+        }
+        await db.insert(putts).values(rows);
+      }
+    }
+  }
+  logger.info("demo scenario seeded");
+}

@@ -1,0 +1,45 @@
+import type { ErrorRequestHandler, RequestHandler } from "express";
+import { ERROR_CODES, type ApiErrorBody } from "../../shared/errors";
+import { HttpError } from "../lib/http-error";
+import type { Logger } from "../lib/logger";
+
+export const apiNotFound: RequestHandler = (req, res) => {
+  const body: ApiErrorBody = { error: { code: ERROR_CODES.notFound, message: `No API route ${req.method} ${req.path}.` } };
+  res.status(404).json(body);
+};
+
+type BodyParserError = Error & { type?: string; status?: number; expose?: boolean };
+
+/** Maps every thrown error to the JSON error shape, once. No stack traces leave the server. */
+export function errorHandler(logger: Logger): ErrorRequestHandler {
+  return (err: unknown, req, res, _next) => {
+    let status = 500;
+    let body: ApiErrorBody = { error: { code: ERROR_CODES.internal, message: "Something went wrong on our side." } };
+    const e = err as BodyParserError;
+    if (err instanceof HttpError) {
+      status = err.status;
+      body = { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+    } else if (e?.type === "entity.parse.failed") {
+      status = 400;
+      body = { error: { code: ERROR_CODES.badRequest, message: "The request body is not valid JSON.", fields: { body: "malformed JSON" } } };
+    } else if (e?.type === "entity.too.large") {
+      status = 413;
+      body = { error: { code: ERROR_CODES.tooLarge, message: "The request body is too large." } };
+    } else if (typeof e?.status === "number" && e.status >= 400 && e.status < 500) {
+      status = e.status;
+      const code = status === 415 ? ERROR_CODES.unsupportedMedia : ERROR_CODES.badRequest;
+      body = { error: { code, message: e.expose && e.message ? e.message : "The request could not be read." } };
+    }
+    if (status >= 500) logger.error({ err, path: req.path }, "unhandled error");
+    if (res.headersSent) return;
+    res.status(status).json(body);
+  };
+}
+
+/** API bodies are JSON: anything else with a body is refused with 415 before it reaches a handler. */
+export const requireJsonBody: RequestHandler = (req, _res, next) => {
+  const hasBody = Number(req.headers["content-length"] ?? 0) > 0 || req.headers["transfer-encoding"] !== undefined;
+  if (!hasBody || !["POST", "PUT", "PATCH"].includes(req.method)) return next();
+  if (req.is("application/json") || req.is("multipart/form-data")) return next();
+  throw new HttpError(415, ERROR_CODES.unsupportedMedia, "Send the request body as application/json.");
+};

@@ -1,0 +1,33 @@
+import type { RequestHandler } from "express";
+import { eq } from "drizzle-orm";
+import { preferencesSchema, type Me } from "../../../shared/schemas/me";
+import type { Db } from "../../db/client";
+import { userPreferences } from "../../db/schema";
+import { currentUser, type SessionUser } from "../../middleware/session";
+import { body } from "../../middleware/validate";
+
+async function meOf(db: Db, user: SessionUser): Promise<Me> {
+  const [prefs] = await db.select().from(userPreferences).where(eq(userPreferences.userId, user.id));
+  return {
+    user,
+    preferences: { units: prefs?.units === "metric" ? "metric" : "imperial" },
+  };
+}
+
+export function getMe(db: Db): RequestHandler {
+  return async (req, res) => {
+    res.json(await meOf(db, currentUser(req)));
+  };
+}
+
+export function updatePreferences(db: Db): RequestHandler {
+  return async (req, res) => {
+    const user = currentUser(req);
+    const { units } = body(req, preferencesSchema);
+    await db
+      .insert(userPreferences)
+      .values({ userId: user.id, units })
+      .onConflictDoUpdate({ target: userPreferences.userId, set: { units, updatedAt: new Date() } });
+    res.json(await meOf(db, user));
+  };
+}

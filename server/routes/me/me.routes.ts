@@ -1,0 +1,13 @@
+import { Router } from "express";
+import { preferencesSchema } from "../../../shared/schemas/me";
+import type { AppDeps } from "../../app";
+import { requireUser } from "../../middleware/session";
+import { validateBody } from "../../middleware/validate";
+import { getMe, updatePreferences } from "./me.handlers";
+
+export function meRoutes({ database }: AppDeps) {
+  const router = Router();
+  router.get("/me", requireUser, getMe(database.db));
+  router.patch("/me/preferences", requireUser, validateBody(preferencesSchema), updatePreferences(database.db));
+  return router;
+}

@@ -1,0 +1,24 @@
+/** The one error body every API route answers with. */
+export type ApiErrorBody = {
+  error: {
+    code: string;
+    message: string;
+    /** Field path (dot-separated) → why it was refused. */
+    fields?: Record<string, string>;
+  };
+};
+
+export const ERROR_CODES = {
+  badRequest: "bad_request",
+  unauthenticated: "unauthenticated",
+  forbidden: "forbidden",
+  notFound: "not_found",
+  conflict: "conflict",
+  tooLarge: "payload_too_large",
+  unsupportedMedia: "unsupported_media_type",
+  unprocessable: "unprocessable",
+  tooManyRequests: "too_many_requests",
+  internal: "internal",
+} as const;
+
+export type ErrorCode = (typeof ERROR_CODES)[keyof typeof ERROR_CODES];

@@ -1,0 +1,40 @@
+import { z } from "zod";
+import { BREAK_TYPES } from "./putts";
+
+export const FAIL_RULES = ["repeat", "drop-one", "restart"] as const;
+export type FailRule = (typeof FAIL_RULES)[number];
+
+export const passRuleSchema = z.discriminatedUnion("kind", [
+  /** Hole at least `made` of the rung's balls. */
+  z.object({ kind: z.literal("make"), made: z.number().int().min(1).max(50) }).strict(),
+  /** Hole `count` in a row within the rung's balls. */
+  z.object({ kind: z.literal("in-a-row"), count: z.number().int().min(1).max(50) }).strict(),
+]);
+export type PassRule = z.infer<typeof passRuleSchema>;
+
+export const rungSchema = z
+  .object({
+    distanceM: z.number().finite().min(0.3).max(30),
+    balls: z.number().int().min(1).max(50),
+    passRule: passRuleSchema,
+    breakType: z.enum(BREAK_TYPES).optional(),
+    note: z.string().trim().max(200).optional(),
+  })
+  .strict()
+  .superRefine((rung, ctx) => {
+    const need = rung.passRule.kind === "make" ? rung.passRule.made : rung.passRule.count;
+    if (need > rung.balls) {
+      ctx.addIssue({ code: "custom", path: ["passRule"], message: `Needs ${need} holed but the rung has only ${rung.balls} balls` });
+    }
+  });
+export type Rung = z.infer<typeof rungSchema>;
+
+export const ladderInputSchema = z
+  .object({
+    name: z.string().trim().min(1, "Give the ladder a name").max(80),
+    description: z.string().trim().max(500).optional(),
+    failRule: z.enum(FAIL_RULES),
+    rungs: z.array(rungSchema).min(1, "A ladder needs at least one rung").max(20),
+  })
+  .strict();
+export type LadderInput = z.infer<typeof ladderInputSchema>;

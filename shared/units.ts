@@ -1,0 +1,66 @@
+/**
+ * Every unit conversion lives here. Storage and computation are SI; Stimp stays in feet,
+ * as the trade quotes it.
+ */
+export const UNIT_SYSTEMS = ["imperial", "metric"] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+/** International foot (exact by definition, 1959). */
+export const METRES_PER_FOOT = 0.3048;
+export const METRES_PER_INCH = 0.0254;
+/** Hole diameter from the Rules of Golf, Definitions "Hole": 4.25 in = 107.95 mm. */
+export const HOLE_DIAMETER_M = 4.25 * METRES_PER_INCH;
+
+export function feetToMetres(ft: number): number {
+  return ft * METRES_PER_FOOT;
+}
+export function metresToFeet(m: number): number {
+  return m / METRES_PER_FOOT;
+}
+export function inchesToMetres(inches: number): number {
+  return inches * METRES_PER_INCH;
+}
+export function metresToInches(m: number): number {
+  return m / METRES_PER_INCH;
+}
+export function metresToHoleWidths(m: number): number {
+  return m / HOLE_DIAMETER_M;
+}
+
+/** A long distance (putt length) in the user's unit: feet or metres. */
+export function toLongUnit(m: number, units: UnitSystem): number {
+  return units === "imperial" ? metresToFeet(m) : m;
+}
+export function fromLongUnit(value: number, units: UnitSystem): number {
+  return units === "imperial" ? feetToMetres(value) : value;
+}
+/** A short distance (aim offset, miss length) in the user's unit: inches or centimetres. */
+export function toShortUnit(m: number, units: UnitSystem): number {
+  return units === "imperial" ? metresToInches(m) : m * 100;
+}
+export function fromShortUnit(value: number, units: UnitSystem): number {
+  return units === "imperial" ? inchesToMetres(value) : value / 100;
+}
+export function longUnitLabel(units: UnitSystem): "ft" | "m" {
+  return units === "imperial" ? "ft" : "m";
+}
+export function shortUnitLabel(units: UnitSystem): "in" | "cm" {
+  return units === "imperial" ? "in" : "cm";
+}
+
+/** "12 ft 4 in" or "3.76 m" — a putt length for people. */
+export function formatLength(m: number, units: UnitSystem): string {
+  if (units === "metric") return `${m.toFixed(m < 10 ? 2 : 1)} m`;
+  const totalInches = Math.round(metresToInches(Math.abs(m)));
+  const ft = Math.floor(totalInches / 12);
+  const inches = totalInches % 12;
+  const sign = m < 0 ? "-" : "";
+  if (ft === 0) return `${sign}${inches} in`;
+  return inches === 0 ? `${sign}${ft} ft` : `${sign}${ft} ft ${inches} in`;
+}
+
+/** "14 in" or "36 cm" — an aim offset or miss length for people. */
+export function formatShort(m: number, units: UnitSystem): string {
+  const v = toShortUnit(Math.abs(m), units);
+  return `${v < 10 ? v.toFixed(1) : Math.round(v)} ${shortUnitLabel(units)}`;
+}

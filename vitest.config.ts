@@ -1,0 +1,32 @@
+import { defineConfig } from "vitest/config";
+import react from "@vitejs/plugin-react";
+
+// Two projects: fast unit/API tests (node or jsdom per file) and browser tests
+// that drive Debian's Chromium through playwright-core against a real server.
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        plugins: [react()],
+        test: {
+          name: "unit",
+          include: ["physics/**/*.test.ts", "shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.{ts,tsx}", "tests/api/**/*.test.ts"],
+          environment: "node",
+          setupFiles: ["tests/setup/unit.ts"],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        test: {
+          name: "e2e",
+          include: ["tests/e2e/**/*.test.ts"],
+          environment: "node",
+          testTimeout: 90_000,
+          hookTimeout: 180_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
