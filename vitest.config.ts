@@ -21,6 +21,7 @@ export default defineConfig({
         test: {
           name: "e2e",
           include: ["tests/e2e/**/*.test.ts"],
+          globalSetup: ["tests/e2e/global-setup.ts"],
           environment: "node",
           testTimeout: 90_000,
           hookTimeout: 180_000,

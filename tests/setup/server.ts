@@ -3,13 +3,35 @@
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
+import pg from "pg";
 import { readEnv } from "../../server/env";
 import { start, type Running, type StartOptions } from "../../server/start";
 
 export type TestServer = Running & { dataDir: string; stop: () => Promise<void> };
 
+/** On a PostgreSQL server each test server gets a database of its own, so files can run in parallel. */
+async function freshPostgresDatabase(adminUrl: string): Promise<{ url: string; drop: () => Promise<void> }> {
+  const name = `borrowline_test_${process.pid}_${Math.random().toString(36).slice(2, 10)}`;
+  const admin = new pg.Client({ connectionString: adminUrl });
+  await admin.connect();
+  await admin.query(`CREATE DATABASE ${name}`);
+  await admin.end();
+  const url = new URL(adminUrl);
+  url.pathname = `/${name}`;
+  return {
+    url: url.toString(),
+    drop: async () => {
+      const c = new pg.Client({ connectionString: adminUrl });
+      await c.connect();
+      await c.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+      await c.end();
+    },
+  };
+}
+
 export async function startTestServer(options: Partial<Omit<StartOptions, "env">> & { env?: Record<string, string> } = {}): Promise<TestServer> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-test-"));
+  const pgDb = process.env.DATABASE_URL ? await freshPostgresDatabase(process.env.DATABASE_URL) : undefined;
   const env = readEnv({
     NODE_ENV: "test",
     PORT: "0",
@@ -18,7 +40,7 @@ export async function startTestServer(options: Partial<Omit<StartOptions, "env">
     SEED: "0",
     LOG_LEVEL: "silent",
     BETTER_AUTH_SECRET: "test-secret-test-secret-test-secret-0123",
-    ...(process.env.DATABASE_URL ? { DATABASE_URL: process.env.DATABASE_URL } : {}),
+    ...(pgDb ? { DATABASE_URL: pgDb.url } : {}),
     ...options.env,
   });
   const running = await start({
@@ -32,6 +54,7 @@ export async function startTestServer(options: Partial<Omit<StartOptions, "env">
     dataDir,
     stop: async () => {
       await running.close();
+      await pgDb?.drop();
       fs.rmSync(dataDir, { recursive: true, force: true });
     },
   };

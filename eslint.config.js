@@ -1,0 +1,47 @@
+// One flat config: TypeScript rules, React hooks rules, and the import direction of the four roots
+// (physics ← shared ← server | src; server and src never import each other; features stay apart).
+import js from "@eslint/js";
+import tseslint from "typescript-eslint";
+import reactHooks from "eslint-plugin-react-hooks";
+import { importX } from "eslint-plugin-import-x";
+import globals from "globals";
+import { createTypeScriptImportResolver } from "eslint-import-resolver-typescript";
+
+export default tseslint.config(
+  { ignores: ["dist/", "dist-server/", "node_modules/", "data/", "coverage/", "drizzle/"] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    languageOptions: { globals: { ...globals.browser, ...globals.node } },
+    plugins: { "import-x": importX },
+    settings: { "import-x/resolver-next": [createTypeScriptImportResolver({ project: "./tsconfig.json" })] },
+    rules: {
+      "@typescript-eslint/no-explicit-any": "off",
+      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_" }],
+      "import-x/no-cycle": ["error", { maxDepth: 10 }],
+      "import-x/no-restricted-paths": [
+        "error",
+        {
+          zones: [
+            { target: "./physics", from: ["./shared", "./server", "./src", "./tests"], message: "physics/ is pure: it imports nothing of the app." },
+            { target: "./shared", from: ["./server", "./src", "./tests"], message: "shared/ imports only zod and physics/." },
+            { target: "./server", from: "./src", message: "server/ never imports the client." },
+            { target: "./src", from: "./server", message: "src/ never imports the server." },
+            {
+              target: "./src/features/!(auth)/**/*",
+              from: "./src/features",
+              except: ["./auth"],
+              message: "A feature does not import another feature (auth's current-user hook excepted); lift shared code to src/components or src/lib.",
+            },
+          ],
+        },
+      ],
+      "no-restricted-syntax": ["error", { selector: "TSEnumDeclaration", message: "Use a const object or a union instead of enum." }],
+    },
+  },
+  {
+    files: ["src/**/*.{ts,tsx}"],
+    plugins: { "react-hooks": reactHooks },
+    rules: { ...reactHooks.configs.recommended.rules },
+  },
+);

@@ -1,0 +1,7 @@
+// Browser tests run against the built client: build it once per run.
+import { execFileSync } from "node:child_process";
+
+export default function setup() {
+  if (process.env.E2E_SKIP_BUILD === "1") return;
+  execFileSync("npx", ["vite", "build", "--logLevel", "warn"], { stdio: "inherit" });
+}
