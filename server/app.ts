@@ -1,45 +1,14 @@
+export { DEFAULT_RATE_LIMITS, type AppConfig, type AppDeps } from "./deps";
 // createApp(deps) builds the Express app without listening, so tests can mount it.
 import express, { type Express, type RequestHandler } from "express";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import { toNodeHandler } from "better-auth/node";
-import type { Auth } from "./auth";
-import type { Database } from "./db/client";
-import type { Logger } from "./lib/logger";
-import type { Mailer } from "./lib/mailer";
-import type { SmtpFake } from "./lib/smtp-fake";
+import type { AppDeps } from "./deps";
 import { apiNotFound, errorHandler, requireJsonBody } from "./middleware/errors";
-import { limiter, type RateLimitConfig } from "./middleware/rate-limit";
+import { limiter } from "./middleware/rate-limit";
 import { loadSession } from "./middleware/session";
-import { devRoutes } from "./routes/dev/dev.routes";
-import { healthRoutes } from "./routes/health/health.routes";
-import { meRoutes } from "./routes/me/me.routes";
-
-export type AppConfig = {
-  baseUrl: string;
-  /** The local mailbox route exists (no real SMTP server configured). */
-  dev: boolean;
-  /** Vite's dev server injects inline scripts: CSP is off in development only. */
-  devCsp: boolean;
-  trustProxy: boolean;
-  rateLimits: { auth: RateLimitConfig; reads: RateLimitConfig };
-  /** Serves the client: built files in production, Vite middleware in development. */
-  frontend?: (app: Express) => void;
-};
-
-export type AppDeps = {
-  database: Database;
-  auth: Auth;
-  logger: Logger;
-  mailer: Mailer;
-  smtpFake?: SmtpFake;
-  config: AppConfig;
-};
-
-export const DEFAULT_RATE_LIMITS: AppConfig["rateLimits"] = {
-  auth: { windowMs: 60_000, limit: 30 },
-  reads: { windowMs: 60_000, limit: 600 },
-};
+import { apiRouters } from "./routes";
 
 const JSON_LIMIT = "100kb";
 
@@ -88,9 +57,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(requireJsonBody);
   api.use(express.json({ limit: JSON_LIMIT, strict: true }));
   api.use(loadSession(auth));
-  api.use(healthRoutes(deps));
-  api.use(meRoutes(deps));
-  if (config.dev) api.use(devRoutes(deps));
+  for (const router of apiRouters(deps)) api.use(router);
   api.use(apiNotFound);
   api.use(errorHandler(logger));
   app.use("/api", api);

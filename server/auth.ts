@@ -31,7 +31,7 @@ export function createAuth({ db, secret, baseUrl, trustedOrigins, mailer, logger
   return betterAuth({
     appName: "Borrowline",
     logger: {
-      log: (level, message, ...args) => logger[level === "success" ? "info" : level]({ args }, `better-auth: ${message}`),
+      log: (level, message, ...args) => logger[level]({ args }, `better-auth: ${message}`),
     },
     baseURL: baseUrl,
     basePath: "/api/auth",

@@ -1,5 +1,5 @@
 import { Router } from "express";
-import type { AppDeps } from "../../app";
+import type { AppDeps } from "../../deps";
 
 /** Development only: the local SMTP fake's mailbox, so sign-up and invitation e-mails can be read. */
 export function devRoutes({ smtpFake }: AppDeps) {

@@ -1,6 +1,6 @@
 import { Router } from "express";
 import { sql } from "drizzle-orm";
-import type { AppDeps } from "../../app";
+import type { AppDeps } from "../../deps";
 
 export function healthRoutes({ database }: AppDeps) {
   const router = Router();

@@ -1,6 +1,6 @@
 import { Router } from "express";
 import { preferencesSchema } from "../../../shared/schemas/me";
-import type { AppDeps } from "../../app";
+import type { AppDeps } from "../../deps";
 import { requireUser } from "../../middleware/session";
 import { validateBody } from "../../middleware/validate";
 import { getMe, updatePreferences } from "./me.handlers";
