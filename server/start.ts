@@ -79,7 +79,7 @@ export async function start(options: StartOptions): Promise<Running> {
       : [`http://localhost:${port}`, `http://127.0.0.1:${port}`];
 
     const auth = createAuth({ db: database.db, secret: authSecret(env), baseUrl, trustedOrigins, mailer, logger });
-    if (env.SEED === "1") await seedDemo(database.db, auth, logger);
+    if (env.SEED === "1") await seedDemo(database.db, logger);
 
     const app = createApp({
       database,

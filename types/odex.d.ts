@@ -42,6 +42,10 @@ export class Solver {
   relativeTolerance: number | number[];
   absoluteTolerance: number | number[];
   debug: boolean;
+  /** Observer for `solve` that calls `out` on a uniform grid of spacing dt (needs denseOutput). */
+  grid(dt: number, out: (xOut: number, yOut: number[]) => boolean | void): OutputFunction;
+  /** The first solOut call (nr = 1, at x0) has no `dense`; later calls get it when denseOutput is true. */
   solve(f: Derivative, x: number, y0: number[], xEnd: number, solOut?: OutputFunction): SolverResult;
 }
-export declare const Outcome: { Converged: number; MaxStepsExceeded: number; EarlyReturn: number };
+/** odex's enum Outcome: Converged = 0, MaxStepsExceeded = 1, EarlyReturn = 2 (SolverResult.outcome). */
+export declare const Outcome: { readonly Converged: 0; readonly MaxStepsExceeded: 1; readonly EarlyReturn: 2 };

@@ -24,7 +24,7 @@ try {
     console.log(`${email.data} is now an admin.`);
   } else {
     const password = crypto.randomBytes(12).toString("base64url");
-    await createAccount(db, running.auth, { email: email.data, name: nameParts.join(" ") || "Administrator" }, "admin", password);
+    await createAccount(db, { email: email.data, name: nameParts.join(" ") || "Administrator" }, "admin", password);
     console.log(`Created admin ${email.data} with the password: ${password}\nSign in and change it.`);
   }
 } finally {

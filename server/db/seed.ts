@@ -1,27 +1,37 @@
 // Seeds the demo scenario once (idempotent: skipped when the demo coach exists).
 import { eq } from "drizzle-orm";
 import { create, all } from "mathjs";
-import type { Auth } from "../auth";
+import crypto from "node:crypto";
+import { hashPassword } from "better-auth/crypto";
 import type { Logger } from "../lib/logger";
 import type { Db } from "./client";
-import { greens, ladders, practiceSessions, putts, squadMembers, squads, stimpReadings, user } from "./schema";
+import { account, greens, ladders, practiceSessions, putts, squadMembers, squads, stimpReadings, user } from "./schema";
 import { DEMO_ADMIN, DEMO_COACH, DEMO_GREEN, DEMO_LADDERS, DEMO_PASSWORD, DEMO_PLAYERS, DEMO_SQUAD } from "./seed-data";
 
 const FT = 0.3048;
 const WEEKS = 6;
 
+/**
+ * Creates a verified account directly (no sign-up e-mail), with better-auth's own password hashing,
+ * in the rows its e-mail/password sign-in reads. Used by the seed and the create-admin command.
+ */
 export async function createAccount(
   db: Db,
-  auth: Auth,
   who: { name: string; email: string },
   role: "player" | "coach" | "admin",
   password = DEMO_PASSWORD,
 ): Promise<string> {
-  const res = await auth.api.signUpEmail({
-    body: { name: who.name, email: who.email, password, accountType: role === "coach" ? "coach" : "player" },
+  const id = crypto.randomUUID();
+  await db.insert(user).values({
+    id,
+    name: who.name,
+    email: who.email.toLowerCase(),
+    emailVerified: true,
+    role,
+    accountType: role === "coach" ? "coach" : "player",
   });
-  await db.update(user).set({ role, emailVerified: true }).where(eq(user.id, res.user.id));
-  return res.user.id;
+  await db.insert(account).values({ id: crypto.randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
+  return id;
 }
 
 function isoDaysAgo(days: number, today = new Date()): string {
@@ -29,7 +39,7 @@ function isoDaysAgo(days: number, today = new Date()): string {
   return d.toISOString().slice(0, 10);
 }
 
-export async function seedDemo(db: Db, auth: Auth, logger: Logger): Promise<void> {
+export async function seedDemo(db: Db, logger: Logger): Promise<void> {
   const existing = await db.select({ id: user.id }).from(user).where(eq(user.email, DEMO_COACH.email));
   if (existing.length > 0) return;
   logger.info("seeding the demo scenario (Larkspur Heath)");
@@ -38,10 +48,10 @@ export async function seedDemo(db: Db, auth: Auth, logger: Logger): Promise<void
   const math = create(all!, { randomSeed: "larkspur-heath" });
   const rand = () => math.random();
 
-  await createAccount(db, auth, DEMO_ADMIN, "admin");
-  const coachId = await createAccount(db, auth, DEMO_COACH, "coach");
+  await createAccount(db, DEMO_ADMIN, "admin");
+  const coachId = await createAccount(db, DEMO_COACH, "coach");
   const playerIds: string[] = [];
-  for (const p of DEMO_PLAYERS) playerIds.push(await createAccount(db, auth, p, "player"));
+  for (const p of DEMO_PLAYERS) playerIds.push(await createAccount(db, p, "player"));
 
   const [green] = await db.insert(greens).values({ ownerId: coachId, name: DEMO_GREEN.name, locationNote: DEMO_GREEN.locationNote }).returning();
   await db.insert(stimpReadings).values([

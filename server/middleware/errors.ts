@@ -4,7 +4,7 @@ import { HttpError } from "../lib/http-error";
 import type { Logger } from "../lib/logger";
 
 export const apiNotFound: RequestHandler = (req, res) => {
-  const body: ApiErrorBody = { error: { code: ERROR_CODES.notFound, message: `No API route ${req.method} ${req.path}.` } };
+  const body: ApiErrorBody = { error: { code: ERROR_CODES.notFound, message: `No API route ${req.method} ${req.originalUrl.split("?")[0]}.` } };
   res.status(404).json(body);
 };
 

@@ -1,0 +1,30 @@
+import { Outlet, ScrollRestoration } from "react-router";
+import { VerifyEmailNotice } from "../../features/auth/components/verify-email-notice";
+import { TopBar } from "./top-bar";
+
+export function AppShell() {
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a
+        href="#main"
+        className="sr-only rounded-lg bg-coral-500 px-4 py-3 font-medium text-ink-950 focus:not-sr-only focus:fixed focus:top-3 focus:left-3 focus:z-50"
+      >
+        Skip to content
+      </a>
+      <TopBar />
+      <VerifyEmailNotice />
+      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 focus:outline-none sm:px-6 sm:py-12">
+        <Outlet />
+      </main>
+      <footer className="border-t border-ink-900/10">
+        <div className="mx-auto flex max-w-6xl flex-col gap-1 px-4 py-6 text-sm text-ink-500 sm:px-6">
+          <p>
+            <span className="font-semibold text-ink-700">Borrowline</span> — reads for the putt in front of you, practice that shows where the strokes go.
+          </p>
+          <p>A read assumes an even slope and a true-rolling ball. Grain, wind and contours are yours to judge.</p>
+        </div>
+      </footer>
+      <ScrollRestoration />
+    </div>
+  );
+}

@@ -1,0 +1,33 @@
+import { paths } from "../config/paths";
+import type { Role } from "../features/auth/api/get-me";
+
+export type NavItem = {
+  label: string;
+  to: string;
+  /** Match only this exact path (for "/"). */
+  end?: boolean;
+  /** Shown only to signed-in users with one of these roles. Hiding only: the server decides. */
+  roles?: ReadonlyArray<Role>;
+  /** Shown only to signed-in users. */
+  signedIn?: boolean;
+  /** Shown only when a condition the shell knows about holds. */
+  when?: "devMail";
+};
+
+// The main navigation. Add an item here when its route is registered in router.tsx.
+export const navItems: ReadonlyArray<NavItem> = [
+  { label: "Home", to: paths.home.href(), end: true },
+  { label: "Account", to: paths.account.href(), signedIn: true },
+  { label: "Dev mailbox", to: paths.mailbox.href(), when: "devMail" },
+];
+
+export type NavContext = { role: Role | null; devMail: boolean };
+
+export function visibleNavItems(items: ReadonlyArray<NavItem>, ctx: NavContext): NavItem[] {
+  return items.filter((item) => {
+    if ((item.signedIn || item.roles) && !ctx.role) return false;
+    if (item.roles && ctx.role && !item.roles.includes(ctx.role)) return false;
+    if (item.when === "devMail" && !ctx.devMail) return false;
+    return true;
+  });
+}

@@ -1,0 +1,25 @@
+import { useState, type ReactNode } from "react";
+import { QueryClientProvider } from "@tanstack/react-query";
+import { Toaster } from "sonner";
+import { createQueryClient } from "../lib/query-client";
+
+export function AppProvider({ children }: { children: ReactNode }) {
+  const [queryClient] = useState(createQueryClient);
+  return (
+    <QueryClientProvider client={queryClient}>
+      {children}
+      <Toaster
+        position="top-center"
+        closeButton
+        toastOptions={{
+          classNames: {
+            toast: "rounded-xl! border-ink-900/10! bg-sand-50! font-sans! text-ink-900! shadow-lg!",
+            title: "text-sm! font-medium!",
+            error: "border-bad-600/40! bg-bad-50! text-bad-800!",
+            success: "border-ok-600/40! bg-ok-50! text-ok-800!",
+          },
+        }}
+      />
+    </QueryClientProvider>
+  );
+}

@@ -1,0 +1,44 @@
+import { useMemo } from "react";
+import { useQueryClient, type QueryClient } from "@tanstack/react-query";
+import { createBrowserRouter, RouterProvider, type RouteObject } from "react-router";
+import { PageSpinner } from "../components/ui";
+import { paths } from "../config/paths";
+import { AppShell } from "./layout/app-shell";
+import { NotFoundRoute, RootErrorBoundary, RouteErrorBoundary } from "./routes/errors";
+
+// Route modules are loaded on demand and export `Component` (and, when they need one, `loader`,
+// `ErrorBoundary`). Heavy pages (the 3D green, charts) stay out of the first download this way.
+// To add a page: create src/app/routes/<name>.tsx exporting `Component`, register it below with its
+// path from src/config/paths.ts, and add a nav item in src/app/nav.ts.
+export function createAppRoutes(_queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.home.path,
+      Component: AppShell,
+      ErrorBoundary: RootErrorBoundary,
+      HydrateFallback: PageSpinner,
+      children: [
+        {
+          // Errors in a page render inside the shell, so the top bar keeps working.
+          ErrorBoundary: RouteErrorBoundary,
+          children: [
+            { index: true, lazy: () => import("./routes/home") },
+            { path: paths.signIn.path, lazy: () => import("./routes/auth/sign-in") },
+            { path: paths.signUp.path, lazy: () => import("./routes/auth/sign-up") },
+            { path: paths.forgotPassword.path, lazy: () => import("./routes/auth/forgot-password") },
+            { path: paths.resetPassword.path, lazy: () => import("./routes/auth/reset-password") },
+            { path: paths.account.path, lazy: () => import("./routes/account") },
+            { path: paths.mailbox.path, lazy: () => import("./routes/dev/mailbox") },
+            { path: "*", Component: NotFoundRoute },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export function AppRouter() {
+  const queryClient = useQueryClient();
+  const router = useMemo(() => createBrowserRouter(createAppRoutes(queryClient)), [queryClient]);
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,10 @@
+export { Alert, type AlertProps, type AlertTone } from "./alert";
+export { Button, ButtonLink, buttonClasses, type ButtonProps, type ButtonLinkProps } from "./button";
+export { Card, CardTitle, type CardProps } from "./card";
+export { ChoiceGroup, type Choice, type ChoiceGroupProps } from "./choice-group";
+export { EmptyState, type EmptyStateProps } from "./empty-state";
+export { InputField, SelectField, type InputFieldProps, type SelectFieldProps } from "./field";
+export { PageHeader, type PageHeaderProps } from "./page-header";
+export { PageSpinner, Spinner, type SpinnerProps } from "./spinner";
+export { TextLink, textLinkClasses } from "./text-link";
+export { LogoMark } from "./logo";

@@ -1,0 +1,26 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useNavigate } from "react-router";
+import { toast } from "sonner";
+import { authClient } from "../../../lib/auth-client";
+import { paths } from "../../../config/paths";
+import { authKeys } from "../api/keys";
+import { describeAuthError } from "../utils/auth-errors";
+
+export function useSignOut() {
+  const queryClient = useQueryClient();
+  const navigate = useNavigate();
+  return useMutation({
+    mutationFn: async () => {
+      const { error } = await authClient.signOut();
+      if (error) throw new Error(describeAuthError(error, "Could not sign out. Please try again.").message);
+    },
+    onSuccess: async () => {
+      queryClient.setQueryData(authKeys.me(), null);
+      // Nothing fetched for the previous account may linger in the cache.
+      queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.all[0] });
+      await queryClient.invalidateQueries({ queryKey: authKeys.all });
+      await navigate(paths.home.href());
+      toast.success("You are signed out.");
+    },
+  });
+}

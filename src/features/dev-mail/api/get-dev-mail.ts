@@ -1,0 +1,60 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { api, ApiError } from "../../../lib/api-client";
+import { apiPaths } from "../../../config/paths";
+import { devMailKeys } from "./keys";
+
+export type DevMailMessage = {
+  id: string;
+  to: string[];
+  from: string;
+  subject: string;
+  text: string;
+  html: string;
+  receivedAt: string;
+};
+
+export type DevMailList = { messages: DevMailMessage[] };
+
+/** GET /api/dev/mail, newest first whatever order the server sends. */
+export async function getDevMail(signal?: AbortSignal): Promise<DevMailList> {
+  const data = await api.get<DevMailList>(apiPaths.devMail, { signal });
+  const messages = [...(data?.messages ?? [])].sort((a, b) => Date.parse(b.receivedAt) - Date.parse(a.receivedAt));
+  return { messages };
+}
+
+export function devMailQueryOptions() {
+  return queryOptions({
+    queryKey: devMailKeys.list(),
+    queryFn: ({ signal }) => getDevMail(signal),
+    staleTime: 0,
+    refetchInterval: 5_000,
+    meta: { errorToast: false },
+  });
+}
+
+export function useDevMail() {
+  return useQuery(devMailQueryOptions());
+}
+
+/** Whether this server has the development mailbox: true in a Vite dev build, else asks the server once. */
+export async function probeDevMail(signal?: AbortSignal): Promise<boolean> {
+  try {
+    await api.get<unknown>(apiPaths.devMail, { signal });
+    return true;
+  } catch (error) {
+    if (error instanceof ApiError) return false;
+    throw error;
+  }
+}
+
+export function useDevMailAvailable(): boolean {
+  const probe = useQuery({
+    queryKey: devMailKeys.probe(),
+    queryFn: ({ signal }) => probeDevMail(signal),
+    enabled: !import.meta.env.DEV,
+    staleTime: Infinity,
+    retry: false,
+    meta: { errorToast: false },
+  });
+  return import.meta.env.DEV || probe.data === true;
+}

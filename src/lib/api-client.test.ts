@@ -1,0 +1,77 @@
+import { afterEach, expect, test, vi } from "vitest";
+import { api, ApiError, apiRequest, toApiError } from "./api-client";
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+});
+
+function answer(status: number, body?: unknown, contentType = "application/json") {
+  const fetchMock = vi.fn(async (_input: RequestInfo | URL, _init?: RequestInit) => new Response(body === undefined ? null : typeof body === "string" ? body : JSON.stringify(body), { status, headers: { "Content-Type": contentType } }));
+  vi.stubGlobal("fetch", fetchMock);
+  return fetchMock;
+}
+
+test("a 400 in the API's error shape becomes an ApiError with status, code, message and fields", async () => {
+  answer(400, { error: { code: "VALIDATION_FAILED", message: "Some fields need fixing.", fields: { distanceM: "Must be more than 0", stimpFt: "Must be between 5 and 16" } } });
+  const error = await apiRequest("/api/reads", { method: "POST", body: {} }).catch((e: unknown) => e);
+  expect(error).toBeInstanceOf(ApiError);
+  expect(error).toMatchObject({
+    name: "ApiError",
+    status: 400,
+    code: "VALIDATION_FAILED",
+    message: "Some fields need fixing.",
+    fields: { distanceM: "Must be more than 0", stimpFt: "Must be between 5 and 16" },
+  });
+});
+
+test("an error shape without fields gives an empty fields object", async () => {
+  answer(422, { error: { code: "BALL_CANNOT_STOP", message: "On this slope the ball would not stop." } });
+  const error = await api.get("/api/reads").catch((e: unknown) => e);
+  expect(error).toMatchObject({ status: 422, code: "BALL_CANNOT_STOP", message: "On this slope the ball would not stop.", fields: {} });
+});
+
+test("a body that is not the error shape still gives a readable ApiError", async () => {
+  answer(502, "<html>Bad gateway</html>", "text/html");
+  const error = await api.get("/api/me").catch((e: unknown) => e);
+  expect(error).toMatchObject({ status: 502, code: "HTTP_502", message: "The server had a problem. Please try again.", fields: {} });
+});
+
+test("non-string field reasons are dropped and arrays give their first reason", () => {
+  const error = toApiError(400, { error: { code: "BAD", message: "Bad", fields: { a: "why a", b: 3, c: ["why c", "more"] } } });
+  expect(error.fields).toEqual({ a: "why a", c: "why c" });
+});
+
+test("a flat {code, message} body, as better-auth sends, is understood too", () => {
+  expect(toApiError(401, { code: "UNAUTHORIZED", message: "Sign in first" })).toMatchObject({ status: 401, code: "UNAUTHORIZED", message: "Sign in first" });
+});
+
+test("a JSON body is sent with its content type, same-origin credentials and the chosen method", async () => {
+  const fetchMock = answer(200, { user: { id: "u1" }, preferences: { units: "metric" } });
+  const result = await api.patch<{ preferences: { units: string } }>("/api/me/preferences", { units: "metric" });
+  expect(result.preferences.units).toBe("metric");
+  expect(fetchMock).toHaveBeenCalledWith(
+    "/api/me/preferences",
+    expect.objectContaining({
+      method: "PATCH",
+      body: JSON.stringify({ units: "metric" }),
+      credentials: "same-origin",
+      headers: expect.objectContaining({ "Content-Type": "application/json", Accept: "application/json" }),
+    }),
+  );
+});
+
+test("a 204 resolves with undefined", async () => {
+  answer(204);
+  await expect(api.delete("/api/sessions/1")).resolves.toBeUndefined();
+});
+
+test("query parameters are added and undefined ones left out", async () => {
+  const fetchMock = answer(200, { messages: [] });
+  await api.get("/api/dev/mail", { query: { to: "a@b.test", limit: 5, since: undefined } });
+  expect(fetchMock.mock.calls[0]?.[0]).toBe("/api/dev/mail?to=a%40b.test&limit=5");
+});
+
+test("a network failure becomes an ApiError with status 0", async () => {
+  vi.stubGlobal("fetch", vi.fn(async () => Promise.reject(new TypeError("fetch failed"))));
+  await expect(api.get("/api/me")).rejects.toMatchObject({ status: 0, code: "NETWORK_ERROR" });
+});
