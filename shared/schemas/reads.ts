@@ -49,10 +49,19 @@ export type ReadResponse = {
   rollPastM: number;
   playsLikeM: number;
   breaks: (typeof BREAK_DIRECTIONS)[number];
-  capture: { holed: boolean; maxCaptureSpeedMps: number; marginMps: number };
+  capture: { holed: boolean; outcome: "holed" | "lip-out" | "miss"; maxCaptureSpeedMps: number; marginMps: number };
   path: [number, number][];
-  model: { name: string; v0Mps: number; rollingDecelMps2: number; gravityDecelMps2: number };
+  model: { name: string; v0Mps: number; rollingDecelMps2: number; gravityDecelMps2: number; maxStoppableSlopePct: number };
 };
+
+export const saveReadSchema = z
+  .object({
+    read: readRequestSchema,
+    greenId: z.string().uuid().optional(),
+    label: z.string().trim().max(80).optional(),
+  })
+  .strict();
+export type SaveReadInput = z.infer<typeof saveReadSchema>;
 
 export const MAX_CHART_CELLS = 400;
 
