@@ -23,7 +23,7 @@ export default tseslint.config(
         "error",
         {
           zones: [
-            { target: "./physics", from: ["./shared", "./server", "./src", "./tests"], message: "physics/ is pure: it imports nothing of the app." },
+            { target: "./physics/**/!(*.test).ts", from: ["./shared", "./server", "./src", "./tests"], message: "physics/ is pure: it imports nothing of the app." },
             { target: "./shared", from: ["./server", "./src", "./tests"], message: "shared/ imports only zod and physics/." },
             { target: "./server", from: "./src", message: "server/ never imports the client." },
             { target: "./src", from: "./server", message: "src/ never imports the server." },

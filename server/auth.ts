@@ -41,6 +41,9 @@ export function createAuth({ db, secret, baseUrl, trustedOrigins, mailer, logger
     // Rate limits are applied in Express (express-rate-limit) so every 429 has our error shape.
     rateLimit: { enabled: false },
     advanced: {
+      // better-auth skips its origin/CSRF checks when NODE_ENV is "test"; ours run with them on, always.
+      disableOriginCheck: false,
+      disableCSRFCheck: false,
       useSecureCookies: baseUrl.startsWith("https://"),
       defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
     },

@@ -21,6 +21,8 @@ export type StartOptions = {
   pgliteDir?: string;
   rateLimits?: AppConfig["rateLimits"];
   frontend?: AppConfig["frontend"];
+  /** Where log lines go (default stdout); tests read them to check nothing secret is logged. */
+  logDestination?: { write: (line: string) => void };
 };
 
 export type Running = {
@@ -44,7 +46,7 @@ function authSecret(env: Env): string {
 
 export async function start(options: StartOptions): Promise<Running> {
   const { env } = options;
-  const logger = createLogger(env.LOG_LEVEL);
+  const logger = createLogger(env.LOG_LEVEL, options.logDestination);
   const releases: Array<() => Promise<void>> = [];
   try {
     let database: Database;

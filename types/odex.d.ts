@@ -1,13 +1,7 @@
 // odex ships TypeScript source but no declarations; this is the part we use.
 // Resolved through package.json "imports" (#odex) so tsc, tsx, vitest and esbuild agree.
 export type Derivative = (x: number, y: number[]) => number[];
-export type OutputFunction = (
-  nr: number,
-  xold: number,
-  x: number,
-  y: number[],
-  dense?: (c: number, x: number) => number,
-) => boolean | void;
+export type OutputFunction = (nr: number, xold: number, x: number, y: number[], dense?: (c: number, x: number) => number) => boolean | void;
 export interface SolverResult {
   y: number[];
   outcome: number;

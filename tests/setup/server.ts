@@ -48,6 +48,7 @@ export async function startTestServer(options: Partial<Omit<StartOptions, "env">
     pgliteDir: options.pgliteDir ?? "memory://",
     rateLimits: options.rateLimits ?? { auth: { windowMs: 60_000, limit: 10_000 }, reads: { windowMs: 60_000, limit: 100_000 } },
     frontend: options.frontend,
+    logDestination: options.logDestination,
   });
   return {
     ...running,

@@ -1,0 +1,115 @@
+// Public result types of the read calculator, and small helpers shared by its solvers.
+import type { Capture } from "./capture";
+import type { RollState } from "./roll";
+import type { GreenInput, ModelSummary } from "./roll-model";
+
+/**
+ * How firmly the ball is rolled: how far past the hole centre it would finish along its path if the hole were
+ * covered (m), or its speed at the hole centre (m/s). 0 in either means a dying putt.
+ */
+export type Pace = { readonly rollPastM: number } | { readonly entrySpeedMps: number };
+
+/** Inputs of a read: distance ball→hole (m), the green, and the pace (default roll-past 0.45 m). */
+export interface ReadInput extends GreenInput {
+  readonly distanceM: number;
+  readonly pace?: Pace;
+}
+
+/** Which side the putt breaks to, seen by the golfer. */
+export type BreakDirection = "left-to-right" | "right-to-left" | "none";
+
+/** The work a solver did, beside its result. */
+export interface ReadDiagnostics {
+  readonly method: "straight-closed-form" | "homogeneous-1d" | "direct-2d";
+  readonly iterations: number;
+  readonly integrations: number;
+  readonly steps: number;
+  readonly evaluations: number;
+}
+
+/**
+ * A solved read. Angles in degrees, signed + = golfer's right; lengths in m; speeds in m/s. `aimOffsetM` is
+ * D·tan(start line); it is only meaningful while |startLineDeg| < 90 (near the cannot-stop threshold a dying putt
+ * can need a start line up the slope, sideways or behind: use the start line then).
+ */
+export interface Read {
+  readonly launchSpeedMps: number;
+  readonly startLineDeg: number;
+  readonly aimOffsetM: number;
+  readonly entrySpeedMps: number;
+  readonly rollPastM: number;
+  readonly playsLikeM: number;
+  readonly breaks: BreakDirection;
+  readonly capture: Capture;
+  /** [x, y] points in m from the ball to its rest point (hole covered), in the putt frame. */
+  readonly path: [number, number][];
+  readonly restM: [number, number];
+  readonly model: ModelSummary;
+  readonly diagnostics: ReadDiagnostics;
+}
+
+/** The expected outcome "this ball cannot stop on this green" (a_g ≥ a_r), as a value. */
+export interface CannotStop {
+  readonly ok: false;
+  readonly reason: "cannot-stop";
+  /** True when a_g < a_r but within the practical margin (the ball would stop only hundreds of metres away). */
+  readonly nearThreshold: boolean;
+  readonly message: string;
+  readonly model: ModelSummary;
+}
+
+/** Result of a read: `{ ok: true, read }` or the cannot-stop value. */
+export type ReadResult = { readonly ok: true; readonly read: Read } | CannotStop;
+
+/**
+ * The cannot-stop value for a green (a_g ≥ a_r: a ball on it never comes to rest; derived from the equation of
+ * motion). @example cannotStop(describeModel(green)).reason // "cannot-stop"
+ */
+export function cannotStop(model: ModelSummary): CannotStop {
+  const nearThreshold = model.gravityDecelMps2 < model.rollingDecelMps2;
+  return {
+    ok: false,
+    reason: "cannot-stop",
+    nearThreshold,
+    message:
+      (nearThreshold
+        ? "A ball would roll hundreds of metres before stopping on this green, so it is treated as unable to stop: gravity"
+        : "A ball cannot stop on this green: gravity") +
+      ` along the slope (${model.gravityDecelMps2.toFixed(3)} m/s²) is ${nearThreshold ? "within 1 % of" : "at least"} ` +
+      `the rolling resistance (${model.rollingDecelMps2.toFixed(3)} m/s²); ` +
+      `the steepest stoppable slope at this Stimp is ${model.maxStoppableSlopePct.toFixed(1)} %.`,
+    model,
+  };
+}
+
+/**
+ * Turn roll samples into a drawable path: scaled by `scale`, mirrored by `mirror` (±1) in x, ending at `rest`,
+ * with points closer than `minGapM` dropped and at most ~120 points kept.
+ * @example toPath(trace.samples, trace.rest, 1, 1) // [[0, 0], …, [xRest, yRest]]
+ */
+export function toPath(samples: readonly RollState[], rest: RollState, scale: number, mirror: number): [number, number][] {
+  const total = rest.alongPathM * scale;
+  const minGap = Math.max(total / 110, 1e-4);
+  const out: [number, number][] = [[0, 0]];
+  let lastS = 0;
+  for (const p of samples) {
+    const s = p.alongPathM * scale;
+    if (s - lastS >= minGap && total - s >= minGap / 2) {
+      out.push([mirror * p.xM * scale, p.yM * scale]);
+      lastS = s;
+    }
+  }
+  out.push([mirror * rest.xM * scale, rest.yM * scale]);
+  return out;
+}
+
+/** Check a distance, pace and the green's numbers are in the model's domain; throws RangeError otherwise. */
+export function validateReadInput(input: ReadInput): Pace {
+  if (!Number.isFinite(input.distanceM) || input.distanceM <= 0) {
+    throw new RangeError(`distanceM must be a finite number > 0 (got ${input.distanceM})`);
+  }
+  const pace = input.pace ?? { rollPastM: 0.45 };
+  const value = "rollPastM" in pace ? pace.rollPastM : pace.entrySpeedMps;
+  if (!Number.isFinite(value) || value < 0) throw new RangeError(`pace must be a finite number ≥ 0 (got ${value})`);
+  return pace;
+}
