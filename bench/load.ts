@@ -1,0 +1,149 @@
+// npm run bench:load — drives the real server (a child process on 127.0.0.1 only) with autocannon.
+// Each scenario is bounded in time and stops by itself; figures are printed, never asserted.
+import { spawn } from "node:child_process";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import readline from "node:readline";
+import autocannon from "autocannon";
+
+const SECONDS = Number(process.env.LOAD_SECONDS ?? 10);
+const PLAYERS = 50;
+if (SECONDS > 30) throw new Error("LOAD_SECONDS is at most 30 per scenario");
+
+type Figures = { name: string; rps: number; p50: number; p99: number; errors: number; non2xx: number; total: number; goal: string; met: boolean };
+
+async function startServer(): Promise<{ url: string; stop: () => Promise<void> }> {
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-load-"));
+  const child = spawn(process.execPath, ["--import", "tsx", "bench/load-server.ts"], {
+    env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir, PORT: "0" },
+    stdio: ["ignore", "pipe", "inherit"],
+  });
+  const line = await new Promise<string>((resolve, reject) => {
+    const rl = readline.createInterface({ input: child.stdout! });
+    rl.once("line", resolve);
+    child.once("exit", (code) => reject(new Error(`server exited with ${code}`)));
+  });
+  const { url } = JSON.parse(line) as { url: string };
+  return {
+    url,
+    stop: async () => {
+      const exited = new Promise((r) => child.once("exit", r));
+      child.kill("SIGTERM");
+      await exited;
+      fs.rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+async function signIn(url: string, i: number): Promise<{ cookie: string; sessionId: string }> {
+  const res = await fetch(`${url}/api/auth/sign-up/email`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: url },
+    body: JSON.stringify({ name: `Load Player ${i}`, email: `load-${i}@example.test`, password: "load-test-password", accountType: "player" }),
+  });
+  if (!res.ok) throw new Error(`sign-up ${i}: ${res.status}`);
+  const cookie = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const s = await fetch(`${url}/api/sessions`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: url, cookie },
+    body: JSON.stringify({ date: new Date().toISOString().slice(0, 10) }),
+  });
+  if (!s.ok) throw new Error(`session ${i}: ${s.status} ${await s.text()}`);
+  return { cookie, sessionId: ((await s.json()) as { id: string }).id };
+}
+
+function run(opts: autocannon.Options): Promise<autocannon.Result> {
+  return new Promise((resolve, reject) => {
+    const instance = autocannon({ ...opts, duration: SECONDS }, (err, result) => (err ? reject(err) : resolve(result)));
+    autocannon.track(instance, { renderProgressBar: false, renderResultsTable: false, renderLatencyTable: false });
+  });
+}
+
+function figures(name: string, r: autocannon.Result, goal: { rps: number; p99?: number }): Figures {
+  const met = r.requests.average >= goal.rps && (goal.p99 === undefined || r.latency.p99 <= goal.p99) && r.errors === 0 && r.non2xx === 0;
+  return {
+    name,
+    rps: r.requests.average,
+    p50: r.latency.p50,
+    p99: r.latency.p99,
+    errors: r.errors + r.timeouts,
+    non2xx: r.non2xx,
+    total: r.requests.total,
+    goal: `≥ ${goal.rps} req/s${goal.p99 ? `, p99 ≤ ${goal.p99} ms` : ""}, 0 errors`,
+    met,
+  };
+}
+
+const server = await startServer();
+const results: Figures[] = [];
+try {
+  const players: { cookie: string; sessionId: string }[] = [];
+  for (let i = 0; i < PLAYERS; i++) players.push(await signIn(server.url, i));
+  let next = 0;
+  const bodies = [1, 1.5, 2, 3, 4.5, 6].map((d) => JSON.stringify({ distanceM: d, holed: d < 2 }));
+
+  const putts = await run({
+    url: server.url,
+    connections: PLAYERS,
+    requests: [{ method: "POST", path: "/api/sessions/placeholder/putts" }],
+    setupClient: (client) => {
+      // One connection per signed-in player, each logging into their own session.
+      const p = players[next++ % PLAYERS]!;
+      let k = 0;
+      client.setHeaders({ "content-type": "application/json", origin: server.url, cookie: p.cookie });
+      client.setRequests([
+        {
+          method: "POST",
+          path: `/api/sessions/${p.sessionId}/putts`,
+          headers: { "content-type": "application/json", origin: server.url, cookie: p.cookie },
+          setupRequest: (req) => ({ ...req, body: bodies[k++ % bodies.length] }),
+        },
+      ]);
+    },
+  });
+  results.push(figures(`putt logging (${PLAYERS} signed-in players)`, putts, { rps: 200, p99: 100 }));
+
+  next = 0;
+  const stats = await run({
+    url: server.url,
+    connections: PLAYERS,
+    requests: [{ method: "GET", path: "/api/stats/make-rates" }],
+    setupClient: (client) => {
+      const p = players[next++ % PLAYERS]!;
+      client.setHeaders({ origin: server.url, cookie: p.cookie });
+    },
+  });
+  results.push(figures("make-rate reads", stats, { rps: 200 }));
+
+  const readBodies = [
+    { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
+    { distanceM: 6, slopePct: 1.5, fallLineDeg: 135, stimpFt: 9.5 },
+    { distanceM: 1.5, slopePct: 2.5, fallLineDeg: 250, stimpFt: 11 },
+    { distanceM: 9, slopePct: 3, fallLineDeg: 30, stimpFt: 12 },
+  ].map((b) => JSON.stringify(b));
+  let j = 0;
+  const reads = await run({
+    url: server.url,
+    connections: 20,
+    requests: [
+      {
+        method: "POST",
+        path: "/api/reads/solve",
+        headers: { "content-type": "application/json" },
+        setupRequest: (req) => ({ ...req, body: readBodies[j++ % readBodies.length] }),
+      },
+    ],
+  });
+  results.push(figures("public read API (solve)", reads, { rps: 300 }));
+} finally {
+  await server.stop();
+}
+
+console.log(`\n== load (${SECONDS} s per scenario, 127.0.0.1 only)`);
+console.log("scenario".padEnd(42) + "req/s".padStart(9) + "p50 ms".padStart(9) + "p99 ms".padStart(9) + "errors".padStart(8) + "non-2xx".padStart(9) + "  goal");
+for (const f of results) {
+  console.log(
+    f.name.padEnd(42) + f.rps.toFixed(0).padStart(9) + String(f.p50).padStart(9) + String(f.p99).padStart(9) + String(f.errors).padStart(8) + String(f.non2xx).padStart(9) + `  ${f.goal}: ${f.met ? "met" : "NOT met"}`,
+  );
+}
