@@ -36,13 +36,13 @@ export const DEMO_LADDERS: LadderInput[] = [
   },
   {
     name: "Lag ladder",
-    description: "Long putts; the goal is pace. Holed counts, and so does any ball finishing within a putter length.",
+    description: "Long putts for pace: hole one of six to move on, and leave every miss inside a putter length.",
     failRule: "repeat",
-    rungs: [20, 30, 40].map((ft) => ({
+    rungs: [15, 20, 25].map((ft) => ({
       distanceM: Math.round(ft * FT * 100) / 100,
       balls: 6,
       passRule: { kind: "make" as const, made: 1 },
-      note: "Finish within a putter length past the hole",
+      note: "Judge the pace: every miss should finish within a putter length past the hole",
     })),
   },
 ];

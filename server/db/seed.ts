@@ -6,6 +6,7 @@ import { hashPassword } from "better-auth/crypto";
 import type { Logger } from "../lib/logger";
 import type { Db } from "./client";
 import { account, greens, ladders, practiceSessions, putts, squadMembers, squads, stimpReadings, user } from "./schema";
+import { seedCoaching } from "./seed-coaching";
 import { DEMO_ADMIN, DEMO_COACH, DEMO_GREEN, DEMO_LADDERS, DEMO_PASSWORD, DEMO_PLAYERS, DEMO_SQUAD } from "./seed-data";
 
 const FT = 0.3048;
@@ -86,7 +87,10 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
           const ft = distancesFt[Math.floor(rand() * distancesFt.length)]!;
           const made = rand() < 1 / (1 + Math.exp((ft - halfAt) / 2.4));
           const long = ft >= 15;
-          const pastM = long ? (rand() - 0.35) * 1.6 : 0.1 + rand() * 0.5 * (rand() < 0.3 ? -1 : 1);
+          // A lag's leave grows with its length (about ±40 % of it at first, tightening each week), so
+          // three-putt range (> 1 m) is a real share of the long putts and falls as the juniors improve.
+          const lagSpread = ft * FT * (0.4 - 0.03 * week);
+          const pastM = long ? (rand() - 0.35) * lagSpread : 0.1 + rand() * 0.5 * (rand() < 0.3 ? -1 : 1);
           rows.push({
             sessionId: session!.id,
             playerId,
@@ -102,5 +106,6 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
       }
     }
   }
+  await seedCoaching(db, { coachId, squadId: squad!.id, playerIds });
   logger.info("demo scenario seeded");
 }

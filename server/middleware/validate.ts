@@ -3,18 +3,22 @@ import type { z } from "zod";
 import { badRequest } from "../lib/http-error";
 
 /** zod issues → { "field.path": "why" } for the error body. */
-export function zodFields(error: z.ZodError): Record<string, string> {
+export function zodFields(error: z.ZodError, root = "body"): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
-    const key = issue.path.length > 0 ? issue.path.join(".") : "body";
+    const key = issue.path.length > 0 ? issue.path.join(".") : root;
     fields[key] ??= issue.message;
   }
   return fields;
 }
 
+/** `where` names the thing in the message, and is the field name when the value itself (not a member) is wrong. */
 export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, where: string): z.infer<S> {
   const result = schema.safeParse(value);
-  if (!result.success) throw badRequest(`The ${where} is not valid.`, zodFields(result.error));
+  if (!result.success) {
+    const root = where === "request body" ? "body" : where === "query string" ? "query" : where;
+    throw badRequest(`The ${where} is not valid.`, zodFields(result.error, root));
+  }
   return result.data;
 }
 

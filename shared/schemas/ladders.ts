@@ -38,3 +38,15 @@ export const ladderInputSchema = z
   })
   .strict();
 export type LadderInput = z.infer<typeof ladderInputSchema>;
+
+/** A ladder as the API answers it: the coach's own (ownerId set) or one of Borrowline's built-in ones. */
+export type Ladder = LadderInput & {
+  id: string;
+  builtIn: boolean;
+  ownerId: string | null;
+  createdAt: string | null;
+  updatedAt: string | null;
+};
+
+/** POST /api/ladders/:id/copy: an optional new name (default: the original's, with " (copy)" for one's own). */
+export const ladderCopySchema = z.object({ name: z.string().trim().min(1, "Give the ladder a name").max(80).optional() }).strict();

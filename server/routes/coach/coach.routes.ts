@@ -1,0 +1,15 @@
+import { Router } from "express";
+import type { AppDeps } from "../../deps";
+import { requireRole } from "../../middleware/session";
+import { getCoachedPlayer, listCoachedPlayers, listSquadAssignments } from "./coach.handlers";
+
+const coach = requireRole("coach", "admin");
+
+export function coachRoutes({ database }: AppDeps) {
+  const db = database.db;
+  const router = Router();
+  router.get("/coach/players", coach, listCoachedPlayers(db));
+  router.get("/coach/players/:playerId", coach, getCoachedPlayer(db));
+  router.get("/coach/squads/:id/assignments", coach, listSquadAssignments(db));
+  return router;
+}

@@ -1,0 +1,303 @@
+import type { RequestHandler } from "express";
+import { and, asc, eq, gte, lte, sql, type SQL } from "drizzle-orm";
+import { z } from "zod";
+import { isoDateSchema } from "../../../shared/schemas/common";
+import {
+  BREAK_TYPES,
+  csvExportQuerySchema,
+  csvImportFieldsSchema,
+  csvMappingSchema,
+  holedHasNoMiss,
+  puttFieldsSchema,
+  type CsvImportResult,
+  type CsvMapping,
+  type CsvPreview,
+  type CsvRowError,
+} from "../../../shared/schemas/putts";
+import { fromLongUnit, fromShortUnit, METRES_PER_FOOT, type UnitSystem } from "../../../shared/units";
+import type { Db } from "../../db/client";
+import { greens, practiceSessions, putts, userPreferences } from "../../db/schema";
+import { csvText, parseCsv, toCsv, unguard } from "../../lib/csv";
+import { badRequest } from "../../lib/http-error";
+import { targetPlayerId } from "../../lib/player-access";
+import { currentUser } from "../../middleware/session";
+import { body, query, zodFields } from "../../middleware/validate";
+import { ERROR_CODES } from "../../../shared/errors";
+
+const PREVIEW_ROWS = 10;
+
+async function unitsOf(db: Db, userId: string): Promise<UnitSystem> {
+  const [p] = await db.select({ units: userPreferences.units }).from(userPreferences).where(eq(userPreferences.userId, userId));
+  return p?.units === "metric" ? "metric" : "imperial";
+}
+
+const norm = (h: string) => h.toLowerCase().replace(/[^a-z0-9]+/g, " ").trim();
+
+/** Header words we recognise (our own export's names first), for the suggested mapping. */
+const HEADER_HINTS: { key: keyof CsvMapping; pattern: RegExp }[] = [
+  { key: "date", pattern: /^(date|day|session date|practice date)$/ },
+  { key: "distance", pattern: /^(distance|dist|length|putt length|putt distance)( (m|ft|feet|metres|meters))?$/ },
+  { key: "holed", pattern: /^(holed|made|make|in|result)$/ },
+  { key: "missSide", pattern: /^(miss side|side|missed side)$/ },
+  { key: "missLength", pattern: /^(miss length|leave|miss distance|miss|past short)( (m|cm|ft|in|inches))?$/ },
+  { key: "breakType", pattern: /^(break type|break|slope)$/ },
+  { key: "green", pattern: /^(green|green name|practice green)$/ },
+  { key: "session", pattern: /^(session|session id|session name)$/ },
+];
+
+export function suggestMapping(headers: string[], units: UnitSystem): Partial<CsvMapping> {
+  const out: Partial<CsvMapping> = {};
+  for (const h of headers) {
+    const n = norm(h);
+    const hint = HEADER_HINTS.find((x) => x.pattern.test(n) && out[x.key] === undefined);
+    if (!hint) continue;
+    (out as Record<string, string>)[hint.key] = h;
+    if (hint.key === "distance") out.distanceUnit = / (ft|feet)$/.test(n) ? "ft" : / (m|metres|meters)$/.test(n) ? "m" : units === "imperial" ? "ft" : "m";
+    if (hint.key === "missLength") {
+      const u = n.match(/ (m|cm|ft|in|inches)$/)?.[1];
+      if (u) out.missLengthUnit = u === "inches" ? "in" : (u as CsvMapping["missLengthUnit"]);
+    }
+  }
+  return out;
+}
+
+export function previewCsv(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const csv = parseCsv(csvText(req.file));
+    const preview: CsvPreview = {
+      headers: csv.headers,
+      rows: csv.rows.filter((r) => r.length > 0).slice(0, PREVIEW_ROWS),
+      rowCount: csv.rows.filter((r) => r.length > 0).length,
+      delimiter: csv.delimiter,
+      suggestedMapping: suggestMapping(csv.headers, await unitsOf(db, me.id)),
+    };
+    res.json(preview);
+  };
+}
+
+// ---- import -----------------------------------------------------------------------------------
+
+const HOLED_WORDS: Record<string, boolean> = { true: true, yes: true, y: true, "1": true, holed: true, made: true, make: true, in: true, false: false, no: false, n: false, "0": false, missed: false, miss: false, out: false };
+const SIDE_WORDS: Record<string, "left" | "right"> = { left: "left", l: "left", right: "right", r: "right" };
+/** Maps the API's field names back to the mapping's, so row errors name what the user mapped. */
+const FIELD_OF: Record<string, keyof CsvMapping> = { distanceM: "distance", holed: "holed", missSide: "missSide", missLengthM: "missLength", breakType: "breakType" };
+
+const csvPuttSchema = puttFieldsSchema.superRefine(holedHasNoMiss);
+type CsvPutt = z.infer<typeof csvPuttSchema> & { date: string; group: string; greenName: string | null };
+
+function parseNumber(cell: string): number | null {
+  const t = cell.trim();
+  if (t === "" || !/^[+-]?(\d+(\.\d*)?|\.\d+)$/.test(t)) return null;
+  return Number(t);
+}
+
+function convertRow(cells: string[], col: Record<string, number>, m: CsvMapping): { putt?: CsvPutt; errors: { field: string; message: string }[] } {
+  const errors: { field: string; message: string }[] = [];
+  const cell = (key: keyof CsvMapping) => (col[key] === undefined ? "" : unguard((cells[col[key]!] ?? "").trim()));
+  const date = cell("date");
+  if (!isoDateSchema.safeParse(date).success) errors.push({ field: "date", message: date === "" ? "missing date" : `"${date}" is not a date as YYYY-MM-DD` });
+  const rawDistance = parseNumber(cell("distance"));
+  if (rawDistance === null) errors.push({ field: "distance", message: `"${cell("distance")}" is not a number` });
+  const holedWord = cell("holed").toLowerCase();
+  const holed = HOLED_WORDS[holedWord];
+  if (holed === undefined) errors.push({ field: "holed", message: `"${cell("holed")}" is not yes/no, true/false, 1/0 or holed/missed` });
+  const sideWord = cell("missSide").toLowerCase();
+  const missSide = sideWord === "" ? null : SIDE_WORDS[sideWord];
+  if (missSide === undefined) errors.push({ field: "missSide", message: `"${cell("missSide")}" is not left or right` });
+  const lengthCell = cell("missLength");
+  const rawLength = lengthCell === "" ? null : parseNumber(lengthCell);
+  if (lengthCell !== "" && rawLength === null) errors.push({ field: "missLength", message: `"${lengthCell}" is not a number` });
+  const breakWord = cell("breakType").toLowerCase().replace(/[\s_]+/g, "-");
+  const breakType = breakWord === "" ? null : (BREAK_TYPES as readonly string[]).includes(breakWord) ? (breakWord as (typeof BREAK_TYPES)[number]) : undefined;
+  if (breakType === undefined) errors.push({ field: "breakType", message: `"${cell("breakType")}" is not one of ${BREAK_TYPES.join(", ")}` });
+  if (errors.length > 0) return { errors };
+
+  const shortUnit = m.missLengthUnit ?? m.distanceUnit;
+  const lengthM = rawLength === null ? null : shortUnit === "m" ? rawLength : shortUnit === "ft" ? rawLength * METRES_PER_FOOT : fromShortUnit(rawLength, shortUnit === "in" ? "imperial" : "metric");
+  const candidate = {
+    distanceM: fromLongUnit(rawDistance!, m.distanceUnit === "ft" ? "imperial" : "metric"),
+    holed: holed!,
+    missSide,
+    missLengthM: lengthM,
+    breakType,
+  };
+  const checked = csvPuttSchema.safeParse(candidate);
+  if (!checked.success) {
+    for (const [path, message] of Object.entries(zodFields(checked.error))) errors.push({ field: FIELD_OF[path] ?? path, message });
+    return { errors };
+  }
+  const greenName = cell("green") || null;
+  const group = `${date}\u0000${m.session ? cell("session") : (greenName ?? "").toLowerCase()}`;
+  return { putt: { ...checked.data, date, group, greenName }, errors };
+}
+
+function readMapping(raw: string, headers: string[]): { mapping: CsvMapping; col: Record<string, number> } {
+  let json: unknown;
+  try {
+    json = JSON.parse(raw);
+  } catch {
+    throw badRequest("The mapping is not valid JSON.", { mapping: "not valid JSON" });
+  }
+  const parsed = csvMappingSchema.safeParse(json);
+  if (!parsed.success) {
+    const fields = Object.fromEntries(Object.entries(zodFields(parsed.error)).map(([k, v]) => [k === "body" ? "mapping" : `mapping.${k}`, v]));
+    throw badRequest("The mapping is not valid.", fields);
+  }
+  const mapping = parsed.data;
+  const col: Record<string, number> = {};
+  const fields: Record<string, string> = {};
+  for (const key of ["date", "distance", "holed", "missSide", "missLength", "breakType", "green", "session"] as const) {
+    const name = mapping[key];
+    if (name === undefined) continue;
+    const at = headers.map((h, i) => (h === name ? i : -1)).filter((i) => i >= 0);
+    if (at.length === 0) fields[`mapping.${key}`] = `No column named "${name}"`;
+    else if (at.length > 1) fields[`mapping.${key}`] = `${at.length} columns are named "${name}"`;
+    else col[key] = at[0]!;
+  }
+  if (Object.keys(fields).length > 0) throw badRequest("The mapping names columns the file does not have.", fields);
+  return { mapping, col };
+}
+
+const CHUNK = 1000;
+
+/**
+ * Imports putts. Policy: all-or-nothing unless skipInvalid=true. Any bad row → 422 with every bad row
+ * listed and nothing stored; with skipInvalid=true the valid rows are stored and the bad ones still
+ * listed. Rows are numbered from 1 at the first record after the header (spreadsheet row = row + 1,
+ * given as `line`). Everything is written in one transaction.
+ */
+export function importCsv(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const fields = body(req, csvImportFieldsSchema);
+    const csv = parseCsv(csvText(req.file));
+    const { mapping, col } = readMapping(fields.mapping, csv.headers);
+    const errors: CsvRowError[] = [];
+    const good: CsvPutt[] = [];
+    const problemRows = new Map(csv.problems.map((p) => [p.row, p.message]));
+    csv.rows.forEach((cells, i) => {
+      const row = i + 1;
+      if (cells.length === 0) return;
+      const problem = problemRows.get(row);
+      if (problem) {
+        errors.push({ row, line: row + 1, field: "row", message: problem });
+        return;
+      }
+      const out = convertRow(cells, col, mapping);
+      for (const e of out.errors) errors.push({ row, line: row + 1, ...e });
+      if (out.putt) good.push(out.putt);
+    });
+    if (good.length === 0 && errors.length === 0) throw badRequest("The file has no data rows.", { file: "no data rows under the header" });
+    const skipInvalid = fields.skipInvalid === "true";
+    if (errors.length > 0 && !skipInvalid) {
+      const bad = new Set(errors.map((e) => e.row)).size;
+      res.status(422).json({
+        error: { code: ERROR_CODES.unprocessable, message: `${bad} row(s) have errors; nothing was imported. Fix them, or import with skipInvalid=true to store only the valid rows.`, fields: { file: `${bad} invalid row(s)` } },
+        imported: 0,
+        sessionsCreated: 0,
+        greensCreated: 0,
+        skipped: bad,
+        errors,
+      });
+      return;
+    }
+    const result = await db.transaction(async (tx) => {
+      const own = await tx.select({ id: greens.id, name: greens.name }).from(greens).where(eq(greens.ownerId, me.id));
+      const greenIds = new Map(own.map((g) => [g.name.toLowerCase(), g.id]));
+      let greensCreated = 0;
+      for (const name of new Set(good.map((p) => p.greenName).filter((n): n is string => n !== null))) {
+        if (greenIds.has(name.toLowerCase())) continue;
+        const [g] = await tx.insert(greens).values({ ownerId: me.id, name: name.slice(0, 80) }).returning({ id: greens.id });
+        greenIds.set(name.toLowerCase(), g!.id);
+        greensCreated += 1;
+      }
+      const groups = new Map<string, CsvPutt[]>();
+      for (const p of good) groups.set(p.group, [...(groups.get(p.group) ?? []), p]);
+      const rows: (typeof putts.$inferInsert)[] = [];
+      const base = Date.now();
+      for (const group of groups.values()) {
+        const first = group[0]!;
+        const [s] = await tx
+          .insert(practiceSessions)
+          .values({ playerId: me.id, date: first.date, greenId: first.greenName ? greenIds.get(first.greenName.toLowerCase())! : null, tags: ["csv-import"] })
+          .returning({ id: practiceSessions.id });
+        for (const p of group) {
+          rows.push({ sessionId: s!.id, playerId: me.id, distanceM: p.distanceM, holed: p.holed, missSide: p.missSide ?? null, missLengthM: p.missLengthM ?? null, breakType: p.breakType ?? null, createdAt: new Date(base + rows.length) });
+        }
+      }
+      for (let i = 0; i < rows.length; i += CHUNK) await tx.insert(putts).values(rows.slice(i, i + CHUNK));
+      return { imported: rows.length, sessionsCreated: groups.size, greensCreated };
+    });
+    const out: CsvImportResult = { ...result, skipped: new Set(errors.map((e) => e.row)).size, errors };
+    res.status(200).json(out);
+  };
+}
+
+// ---- export -----------------------------------------------------------------------------------
+
+function attachment(res: Parameters<RequestHandler>[1], name: string, csv: string): void {
+  res.setHeader("Content-Type", "text/csv; charset=utf-8");
+  res.setHeader("Content-Disposition", `attachment; filename="${name}"`);
+  res.send(csv);
+}
+
+function exportFilter(playerId: string, q: { from?: string; to?: string }): SQL {
+  const where: SQL[] = [eq(practiceSessions.playerId, playerId)];
+  if (q.from) where.push(gte(practiceSessions.date, q.from));
+  if (q.to) where.push(lte(practiceSessions.date, q.to));
+  return and(...where)!;
+}
+
+export const PUTT_EXPORT_COLUMNS = ["date", "green", "distance_m", "holed", "miss_side", "miss_length_m", "break_type", "session_id", "putt_id"];
+export const SESSION_EXPORT_COLUMNS = ["date", "green", "stimp_ft", "conditions", "tags", "notes", "putts", "holed", "session_id"];
+
+export function exportPutts(db: Db): RequestHandler {
+  return async (req, res) => {
+    const viewer = currentUser(req);
+    const q = query(req, csvExportQuerySchema);
+    const playerId = await targetPlayerId(db, viewer, q.playerId);
+    const rows = await db
+      .select({ date: practiceSessions.date, green: greens.name, distanceM: putts.distanceM, holed: putts.holed, missSide: putts.missSide, missLengthM: putts.missLengthM, breakType: putts.breakType, sessionId: putts.sessionId, id: putts.id })
+      .from(putts)
+      .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
+      .leftJoin(greens, eq(greens.id, practiceSessions.greenId))
+      .where(and(eq(putts.playerId, playerId), exportFilter(playerId, q)))
+      .orderBy(asc(practiceSessions.date), asc(putts.createdAt), asc(putts.id));
+    const csv = toCsv(
+      PUTT_EXPORT_COLUMNS,
+      rows.map((r) => [r.date, r.green, r.distanceM, r.holed, r.missSide, r.missLengthM, r.breakType, r.sessionId, r.id]),
+    );
+    attachment(res, `borrowline-putts-${new Date().toISOString().slice(0, 10)}.csv`, csv);
+  };
+}
+
+export function exportSessions(db: Db): RequestHandler {
+  return async (req, res) => {
+    const viewer = currentUser(req);
+    const q = query(req, csvExportQuerySchema);
+    const playerId = await targetPlayerId(db, viewer, q.playerId);
+    const rows = await db
+      .select({
+        date: practiceSessions.date,
+        green: greens.name,
+        stimpFt: practiceSessions.stimpFt,
+        conditions: practiceSessions.conditions,
+        tags: practiceSessions.tags,
+        notes: practiceSessions.notes,
+        putts: sql<number>`(select count(*)::int from ${putts} where ${putts.sessionId} = ${practiceSessions.id})`,
+        holed: sql<number>`(select (count(*) filter (where ${putts.holed}))::int from ${putts} where ${putts.sessionId} = ${practiceSessions.id})`,
+        id: practiceSessions.id,
+      })
+      .from(practiceSessions)
+      .leftJoin(greens, eq(greens.id, practiceSessions.greenId))
+      .where(exportFilter(playerId, q))
+      .orderBy(asc(practiceSessions.date), asc(practiceSessions.createdAt));
+    const csv = toCsv(
+      SESSION_EXPORT_COLUMNS,
+      rows.map((r) => [r.date, r.green, r.stimpFt, r.conditions, r.tags.join("; "), r.notes, Number(r.putts), Number(r.holed), r.id]),
+    );
+    attachment(res, `borrowline-sessions-${new Date().toISOString().slice(0, 10)}.csv`, csv);
+  };
+}
+

@@ -1,0 +1,199 @@
+import crypto from "node:crypto";
+import type { RequestHandler } from "express";
+import { and, desc, eq, gt, ne, sql } from "drizzle-orm";
+import { ERROR_CODES } from "../../../shared/errors";
+import { idSchema } from "../../../shared/schemas/common";
+import {
+  invitationInputSchema,
+  invitationTokenSchema,
+  type Invitation,
+  type InvitationPreview,
+  type InvitationStatus,
+} from "../../../shared/schemas/squads";
+import type { AppDeps } from "../../deps";
+import type { Db } from "../../db/client";
+import { invitations, squadMembers, squads, user } from "../../db/schema";
+import { conflict, forbidden, HttpError, notFound } from "../../lib/http-error";
+import { linkMail } from "../../lib/mailer";
+import { currentUser } from "../../middleware/session";
+import { body, parseOrThrow } from "../../middleware/validate";
+import { findOwnSquad, ownedBy } from "../squads/squad-access";
+
+export const INVITATION_DAYS = 14;
+
+type InvitationRow = typeof invitations.$inferSelect;
+
+export function hashToken(token: string): string {
+  return crypto.createHash("sha256").update(token).digest("hex");
+}
+
+/** "expired" is not stored: a pending invitation past its expiry reads as expired. */
+function statusOf(row: InvitationRow, now = new Date()): InvitationStatus {
+  if (row.status === "pending" && row.expiresAt.getTime() <= now.getTime()) return "expired";
+  return row.status as InvitationStatus;
+}
+
+function invitationView(row: InvitationRow): Invitation {
+  return {
+    id: row.id,
+    squadId: row.squadId,
+    email: row.email,
+    status: statusOf(row),
+    expiresAt: row.expiresAt.toISOString(),
+    createdAt: row.createdAt.toISOString(),
+    acceptedAt: row.acceptedAt?.toISOString() ?? null,
+    acceptedBy: row.acceptedBy,
+  };
+}
+
+/** Why an invitation can no longer be accepted, or null when it still can. */
+function refusal(status: InvitationStatus): string | null {
+  if (status === "accepted") return "This invitation has already been used.";
+  if (status === "revoked") return "This invitation was withdrawn by the coach.";
+  if (status === "expired") return "This invitation has expired. Ask your coach for a new one.";
+  return null;
+}
+
+/**
+ * A single-use token travels only in the e-mail; the database keeps its SHA-256. Inviting the same
+ * address again sends a fresh link and withdraws the older pending ones.
+ */
+export function createInvitation({ database, mailer, config, logger }: AppDeps): RequestHandler {
+  const db = database.db;
+  return async (req, res) => {
+    const me = currentUser(req);
+    const squad = await findOwnSquad(db, me, parseOrThrow(idSchema, req.params.id, "id"));
+    const { email } = body(req, invitationInputSchema);
+
+    const [member] = await db
+      .select({ id: user.id })
+      .from(squadMembers)
+      .innerJoin(user, eq(user.id, squadMembers.playerId))
+      .where(and(eq(squadMembers.squadId, squad.id), sql`lower(${user.email}) = ${email}`));
+    if (member) throw conflict(`${email} is already in ${squad.name}.`);
+
+    const token = crypto.randomBytes(32).toString("base64url");
+    const expiresAt = new Date(Date.now() + INVITATION_DAYS * 24 * 3600 * 1000);
+    const [row] = await db
+      .insert(invitations)
+      .values({ squadId: squad.id, email, tokenHash: hashToken(token), expiresAt })
+      .returning();
+    const [coach] = await db.select({ name: user.name }).from(user).where(eq(user.id, squad.coachId));
+
+    const intro =
+      `${coach?.name ?? "Your coach"} invites you to join the squad "${squad.name}" on Borrowline, to run the putting ladders ` +
+      `they set and share your progress with them. The invitation is for ${email} and can be used once, until ${expiresAt.toISOString().slice(0, 10)}.`;
+    try {
+      await mailer.send(linkMail(email, `Join ${squad.name} on Borrowline`, intro, "Join the squad", `${config.baseUrl}/join/${token}`));
+    } catch (err) {
+      await db.delete(invitations).where(eq(invitations.id, row!.id));
+      logger.error({ err, to: email }, "invitation e-mail could not be sent");
+      throw new HttpError(503, ERROR_CODES.internal, "The invitation e-mail could not be sent. Try again in a moment.");
+    }
+    await db
+      .update(invitations)
+      .set({ status: "revoked" })
+      .where(
+        and(
+          eq(invitations.squadId, squad.id),
+          eq(invitations.email, email),
+          eq(invitations.status, "pending"),
+          ne(invitations.id, row!.id),
+        ),
+      );
+    res.status(201).json({ invitation: invitationView(row!) });
+  };
+}
+
+export function listInvitations(db: Db): RequestHandler {
+  return async (req, res) => {
+    const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
+    const rows = await db
+      .select()
+      .from(invitations)
+      .where(eq(invitations.squadId, squad.id))
+      .orderBy(desc(invitations.createdAt), invitations.id);
+    res.json({ invitations: rows.map(invitationView) });
+  };
+}
+
+/** Withdraws a pending (or expired) invitation; revoking twice is fine; an accepted one is 409. */
+export function revokeInvitation(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const id = parseOrThrow(idSchema, req.params.id, "id");
+    const [found] = await db
+      .select({ invitation: invitations })
+      .from(invitations)
+      .innerJoin(squads, eq(squads.id, invitations.squadId))
+      .where(and(eq(invitations.id, id), ownedBy(squads.coachId, me)));
+    if (!found) throw notFound("Invitation");
+    if (found.invitation.status === "accepted")
+      throw conflict("This invitation was already accepted; remove the member from the squad instead.");
+    await db.update(invitations).set({ status: "revoked" }).where(eq(invitations.id, id));
+    res.status(204).end();
+  };
+}
+
+async function findByToken(db: Db, raw: unknown) {
+  const token = parseOrThrow(invitationTokenSchema, raw, "token");
+  const [found] = await db
+    .select({ invitation: invitations, squad: squads, coachName: user.name })
+    .from(invitations)
+    .innerJoin(squads, eq(squads.id, invitations.squadId))
+    .innerJoin(user, eq(user.id, squads.coachId))
+    .where(eq(invitations.tokenHash, hashToken(token)));
+  if (!found) throw notFound("Invitation");
+  return found;
+}
+
+/** Public: the join page shows whom the link is for before anyone signs in. */
+export function previewInvitation(db: Db): RequestHandler {
+  return async (req, res) => {
+    const { invitation, squad, coachName } = await findByToken(db, req.params.token);
+    const preview: InvitationPreview = {
+      squad: { name: squad.name },
+      coach: { name: coachName },
+      email: invitation.email,
+      status: statusOf(invitation),
+      expiresAt: invitation.expiresAt.toISOString(),
+    };
+    res.json(preview);
+  };
+}
+
+/**
+ * The signed-in player joins the squad. The account's e-mail must be the invited one (compared without
+ * case); coach and admin accounts cannot join squads. Used, withdrawn or expired links answer 409.
+ */
+export function acceptInvitation(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const { invitation, squad, coachName } = await findByToken(db, req.params.token);
+    const why = refusal(statusOf(invitation));
+    if (why) throw conflict(why);
+    if (me.role !== "player") throw forbidden(`Only player accounts can join a squad; you are signed in as a ${me.role}.`);
+    if (me.email.toLowerCase() !== invitation.email.toLowerCase()) {
+      throw forbidden(`This invitation was sent to ${invitation.email}. Sign in with that e-mail address to accept it.`);
+    }
+    const joinedAt = await db.transaction(async (tx) => {
+      // The status guard makes the token single-use even when two accepts race.
+      const used = await tx
+        .update(invitations)
+        .set({ status: "accepted", acceptedBy: me.id, acceptedAt: new Date() })
+        .where(and(eq(invitations.id, invitation.id), eq(invitations.status, "pending"), gt(invitations.expiresAt, new Date())))
+        .returning({ id: invitations.id });
+      if (used.length === 0) throw conflict("This invitation has already been used.");
+      await tx.insert(squadMembers).values({ squadId: squad.id, playerId: me.id }).onConflictDoNothing();
+      const [m] = await tx
+        .select({ joinedAt: squadMembers.joinedAt })
+        .from(squadMembers)
+        .where(and(eq(squadMembers.squadId, squad.id), eq(squadMembers.playerId, me.id)));
+      return m!.joinedAt;
+    });
+    res.json({
+      squad: { id: squad.id, name: squad.name, coach: { id: squad.coachId, name: coachName } },
+      joinedAt: joinedAt.toISOString(),
+    });
+  };
+}

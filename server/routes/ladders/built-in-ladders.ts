@@ -1,0 +1,43 @@
+// Borrowline's own ladders, offered to every coach to assign or copy. Designed for this product; they
+// live in code (not in the database), so their ids are fixed and no one can change them.
+import type { Ladder, LadderInput } from "../../../shared/schemas/ladders";
+
+const builtIn = (id: string, ladder: LadderInput): Ladder => ({
+  id,
+  builtIn: true,
+  ownerId: null,
+  createdAt: null,
+  updatedAt: null,
+  ...ladder,
+});
+
+export const BUILT_IN_LADDERS: readonly Ladder[] = [
+  builtIn("b0a7c1e0-0000-4000-8000-000000000001", {
+    name: "Circle of four",
+    description:
+      "Four balls around the hole at the same distance, one from each side, so every rung has an uphill, a downhill and both side-hill putts. Hole all four in a row to step back; any miss starts the ladder again.",
+    failRule: "restart",
+    rungs: [0.9, 1.2, 1.5, 1.8].map((distanceM) => ({
+      distanceM,
+      balls: 4,
+      passRule: { kind: "in-a-row" as const, count: 4 },
+      note: "One ball from each side of the hole",
+    })),
+  }),
+  builtIn("b0a7c1e0-0000-4000-8000-000000000002", {
+    name: "Pace ladder",
+    description:
+      "Mid-range putts rolled at a pace that would finish about half a metre past the hole. The rungs get longer and need fewer holed; a failed rung sends you down one.",
+    failRule: "drop-one",
+    rungs: [
+      { distanceM: 3, balls: 6, passRule: { kind: "make", made: 2 } },
+      { distanceM: 4.5, balls: 6, passRule: { kind: "make", made: 2 } },
+      { distanceM: 6, balls: 8, passRule: { kind: "make", made: 1 } },
+      { distanceM: 7.5, balls: 8, passRule: { kind: "make", made: 1 } },
+    ],
+  }),
+];
+
+export function findBuiltInLadder(id: string): Ladder | undefined {
+  return BUILT_IN_LADDERS.find((l) => l.id === id);
+}

@@ -1,0 +1,118 @@
+import type { RequestHandler } from "express";
+import { and, desc, eq } from "drizzle-orm";
+import { idSchema } from "../../../shared/schemas/common";
+import {
+  ladderCopySchema,
+  ladderInputSchema,
+  type FailRule,
+  type Ladder,
+  type LadderInput,
+  type Rung,
+} from "../../../shared/schemas/ladders";
+import type { Db } from "../../db/client";
+import { ladders } from "../../db/schema";
+import { forbidden, notFound } from "../../lib/http-error";
+import { currentUser, type SessionUser } from "../../middleware/session";
+import { body, parseOrThrow } from "../../middleware/validate";
+import { ownedBy } from "../squads/squad-access";
+import { BUILT_IN_LADDERS, findBuiltInLadder } from "./built-in-ladders";
+
+type LadderRow = typeof ladders.$inferSelect;
+
+export function ladderView(row: LadderRow): Ladder {
+  return {
+    id: row.id,
+    builtIn: false,
+    ownerId: row.ownerId,
+    name: row.name,
+    ...(row.description ? { description: row.description } : {}),
+    failRule: row.failRule as FailRule,
+    rungs: row.rungs as Rung[],
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+/** A built-in ladder, or one of the user's own (any for an admin); another coach's ladder is a 404. */
+export async function findLadder(db: Db, me: SessionUser, id: string): Promise<Ladder> {
+  const builtIn = findBuiltInLadder(id);
+  if (builtIn) return builtIn;
+  const [row] = await db
+    .select()
+    .from(ladders)
+    .where(and(eq(ladders.id, id), ownedBy(ladders.ownerId, me)));
+  if (!row) throw notFound("Ladder");
+  return ladderView(row);
+}
+
+async function findOwnEditable(db: Db, me: SessionUser, rawId: unknown): Promise<Ladder> {
+  const ladder = await findLadder(db, me, parseOrThrow(idSchema, rawId, "id"));
+  if (ladder.builtIn) throw forbidden("Built-in ladders cannot be changed; copy one to make it your own.");
+  return ladder;
+}
+
+function columns(input: LadderInput) {
+  return { name: input.name, description: input.description ?? null, failRule: input.failRule, rungs: input.rungs };
+}
+
+export function createLadder(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const [row] = await db
+      .insert(ladders)
+      .values({ ownerId: me.id, ...columns(body(req, ladderInputSchema)) })
+      .returning();
+    res.status(201).json(ladderView(row!));
+  };
+}
+
+/** The user's own library (newest first), then the built-in ladders. */
+export function listLadders(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const rows = await db.select().from(ladders).where(ownedBy(ladders.ownerId, me)).orderBy(desc(ladders.createdAt), ladders.id);
+    res.json({ ladders: [...rows.map(ladderView), ...BUILT_IN_LADDERS] });
+  };
+}
+
+export function getLadder(db: Db): RequestHandler {
+  return async (req, res) => {
+    res.json(await findLadder(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id")));
+  };
+}
+
+/** Replaces the ladder. Assignments already made keep the copy they were given. */
+export function updateLadder(db: Db): RequestHandler {
+  return async (req, res) => {
+    const ladder = await findOwnEditable(db, currentUser(req), req.params.id);
+    const [row] = await db
+      .update(ladders)
+      .set({ ...columns(body(req, ladderInputSchema)), updatedAt: new Date() })
+      .where(eq(ladders.id, ladder.id))
+      .returning();
+    res.json(ladderView(row!));
+  };
+}
+
+export function deleteLadder(db: Db): RequestHandler {
+  return async (req, res) => {
+    const ladder = await findOwnEditable(db, currentUser(req), req.params.id);
+    await db.delete(ladders).where(eq(ladders.id, ladder.id));
+    res.status(204).end();
+  };
+}
+
+/** A copy in the user's own library: of a built-in ladder (same name) or of their own (" (copy)"). */
+export function copyLadder(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const source = await findLadder(db, me, parseOrThrow(idSchema, req.params.id, "id"));
+    const { name } = body(req, ladderCopySchema);
+    const copyName = name ?? (source.builtIn ? source.name : `${source.name.slice(0, 73)} (copy)`);
+    const [row] = await db
+      .insert(ladders)
+      .values({ ownerId: me.id, ...columns({ ...source, name: copyName }) })
+      .returning();
+    res.status(201).json(ladderView(row!));
+  };
+}

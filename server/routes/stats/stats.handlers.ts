@@ -1,0 +1,151 @@
+import type { RequestHandler } from "express";
+import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
+import { compareQuerySchema, makeRatesQuerySchema, sessionStatsQuerySchema, trendQuerySchema, type BandRate, type MakeRates } from "../../../shared/schemas/stats";
+import { bandsFromEdges, DEFAULT_BAND_EDGES_M, type Band } from "../../../shared/stats/bands";
+import { BASELINE_INTERPOLATION, TOUR_EXPECTED_PUTTS, TOUR_ONE_PUTT_RATE, type BaselineSeries } from "../../../shared/stats/baseline";
+import { ASSUMED_LEAVE_FRACTION, ASSUMED_LEAVE_MIN_M, LONG_PUTT_M, summarisePutts, THREE_PUTT_RANGE_M, type PracticePutt } from "../../../shared/stats/strokes-gained";
+import { twoProportionZTest } from "../../../shared/stats/two-proportion";
+import { rateOf } from "../../../shared/stats/wilson";
+import { METRES_PER_FOOT } from "../../../shared/units";
+import type { Db } from "../../db/client";
+import { greens, practiceSessions, putts, userPreferences } from "../../db/schema";
+import { targetPlayerId } from "../../lib/player-access";
+import { currentUser } from "../../middleware/session";
+import { query } from "../../middleware/validate";
+import { bandCounts, periodCounts, weeklyCounts } from "./band-counts";
+
+/** The bands asked for, or the defaults for the viewer's unit preference. */
+async function edgesFor(db: Db, viewerId: string, asked: number[] | undefined): Promise<number[]> {
+  if (asked) return asked;
+  const [prefs] = await db.select({ units: userPreferences.units }).from(userPreferences).where(eq(userPreferences.userId, viewerId));
+  return DEFAULT_BAND_EDGES_M[prefs?.units === "metric" ? "metric" : "imperial"];
+}
+
+const band = (b: Band) => ({ fromM: b.fromM, toM: b.toM });
+
+export function makeRates(db: Db): RequestHandler {
+  return async (req, res) => {
+    const viewer = currentUser(req);
+    const qs = query(req, makeRatesQuerySchema);
+    const playerId = await targetPlayerId(db, viewer, qs.playerId);
+    const edges = await edgesFor(db, viewer.id, qs.bands);
+    const counts = new Map((await bandCounts(db, { playerId, from: qs.from, to: qs.to, source: qs.source }, edges)).map((c) => [c.band, c]));
+    const bands: BandRate[] = bandsFromEdges(edges).map((b, i) => ({ ...band(b), ...rateOf(counts.get(i)?.made ?? 0, counts.get(i)?.attempts ?? 0) }));
+    const out: MakeRates = { playerId, from: qs.from ?? null, to: qs.to ?? null, source: qs.source, bands };
+    res.json(out);
+  };
+}
+
+export function trend(db: Db): RequestHandler {
+  return async (req, res) => {
+    const viewer = currentUser(req);
+    const qs = query(req, trendQuerySchema);
+    const playerId = await targetPlayerId(db, viewer, qs.playerId);
+    const edges = await edgesFor(db, viewer.id, qs.bands);
+    const rows = await weeklyCounts(db, { playerId, from: qs.from, to: qs.to, source: qs.source }, edges, qs.window === "rolling" ? qs.windowWeeks : undefined);
+    const bands = bandsFromEdges(edges);
+    const weeks = new Map<string, ReturnType<typeof rateOf>[]>();
+    for (const r of rows) {
+      if (!weeks.has(r.week)) weeks.set(r.week, bands.map(() => rateOf(0, 0)));
+      weeks.get(r.week)![r.band] = rateOf(r.made, r.attempts);
+    }
+    res.json({
+      playerId,
+      from: qs.from ?? null,
+      to: qs.to ?? null,
+      source: qs.source,
+      window: qs.window,
+      windowWeeks: qs.window === "rolling" ? qs.windowWeeks : 1,
+      bands: bands.map(band),
+      weeks: [...weeks].map(([weekStart, cells]) => ({ weekStart, bands: cells })),
+    });
+  };
+}
+
+export function compare(db: Db): RequestHandler {
+  return async (req, res) => {
+    const viewer = currentUser(req);
+    const qs = query(req, compareQuerySchema);
+    const playerId = await targetPlayerId(db, viewer, qs.playerId);
+    const edges = await edgesFor(db, viewer.id, qs.bands);
+    const a = { from: qs.aFrom, to: qs.aTo };
+    const b = { from: qs.bFrom, to: qs.bTo };
+    const rows = new Map((await periodCounts(db, { playerId, source: qs.source, a, b }, edges)).map((r) => [r.band, r]));
+    const side = (made: number, n: number, mb: number, nb: number) => ({ a: rateOf(made, n), b: rateOf(mb, nb), ...twoProportionZTest(made, n, mb, nb) });
+    const bands = bandsFromEdges(edges).map((bd, i) => {
+      const r = rows.get(i);
+      return { ...band(bd), ...side(r?.aMade ?? 0, r?.aAttempts ?? 0, r?.bMade ?? 0, r?.bAttempts ?? 0) };
+    });
+    const sum = (k: "aMade" | "aAttempts" | "bMade" | "bAttempts") => [...rows.values()].reduce((s, r) => s + r[k], 0);
+    res.json({
+      playerId,
+      source: qs.source,
+      a,
+      b,
+      // Overlapping periods count a putt in both; the z-test then overstates the evidence.
+      overlap: a.from <= b.to && b.from <= a.to,
+      bands,
+      overall: side(sum("aMade"), sum("aAttempts"), sum("bMade"), sum("bAttempts")),
+    });
+  };
+}
+
+const series = (s: BaselineSeries) => ({
+  label: s.label,
+  source: s.source,
+  firmness: s.firmness,
+  points: s.points.map((p) => ({ distanceFt: p.distanceFt, distanceM: p.distanceFt * METRES_PER_FOOT, value: p.value })),
+});
+
+export const baseline: RequestHandler = (_req, res) => {
+  res.json({
+    onePuttRate: series(TOUR_ONE_PUTT_RATE),
+    expectedPutts: series(TOUR_EXPECTED_PUTTS),
+    interpolation: BASELINE_INTERPOLATION,
+    strokesGained: {
+      definition: "SG = baseline expected putts from the putt's distance − putts taken; a holed putt took 1, a miss 1 + expected putts from its leave (M. Broadie, Interfaces 42(2), 2012).",
+      unknownLeave: `A miss without a recorded leave is assumed to finish max(${ASSUMED_LEAVE_MIN_M} m, ${ASSUMED_LEAVE_FRACTION * 100} % of its length) away.`,
+      longPuttM: LONG_PUTT_M,
+      threePuttRangeM: THREE_PUTT_RANGE_M,
+    },
+  });
+};
+
+export function sessionStats(db: Db): RequestHandler {
+  return async (req, res) => {
+    const viewer = currentUser(req);
+    const qs = query(req, sessionStatsQuerySchema);
+    const playerId = await targetPlayerId(db, viewer, qs.playerId);
+    const where: SQL[] = [eq(practiceSessions.playerId, playerId)];
+    if (qs.from) where.push(gte(practiceSessions.date, qs.from));
+    if (qs.to) where.push(lte(practiceSessions.date, qs.to));
+    const cond = and(...where)!;
+    const [sessions, [total]] = await Promise.all([
+      db
+        .select({ id: practiceSessions.id, date: practiceSessions.date, greenName: greens.name, stimpFt: practiceSessions.stimpFt })
+        .from(practiceSessions)
+        .leftJoin(greens, eq(greens.id, practiceSessions.greenId))
+        .where(cond)
+        .orderBy(desc(practiceSessions.date), desc(practiceSessions.createdAt), asc(practiceSessions.id))
+        .limit(qs.pageSize)
+        .offset((qs.page - 1) * qs.pageSize),
+      db.select({ n: sql<number>`count(*)::int` }).from(practiceSessions).where(cond),
+    ]);
+    const ids = sessions.map((s) => s.id);
+    const byId = new Map<string, PracticePutt[]>(ids.map((id) => [id, []]));
+    if (ids.length > 0) {
+      const rows = await db
+        .select({ sessionId: putts.sessionId, distanceM: putts.distanceM, holed: putts.holed, missLengthM: putts.missLengthM })
+        .from(putts)
+        .where(and(eq(putts.playerId, playerId), inArray(putts.sessionId, ids)));
+      for (const r of rows) byId.get(r.sessionId)!.push(r);
+    }
+    res.json({
+      playerId,
+      items: sessions.map((s) => ({ sessionId: s.id, date: s.date, greenName: s.greenName, stimpFt: s.stimpFt, ...summarisePutts(byId.get(s.id)!) })),
+      total: Number(total?.n ?? 0),
+      page: qs.page,
+      pageSize: qs.pageSize,
+    });
+  };
+}

@@ -1,0 +1,78 @@
+import { z } from "zod";
+import { isoDateSchema } from "./common";
+
+/** Stimp readings accepted, ft: the USGA survey's slowest category is 4′6″; tournament greens reach 14+. */
+export const STIMP_LIMITS = { minFt: 3, maxFt: 16 } as const;
+/** One direction of a two-way reading on a slope may roll far longer (Brede's example: 981 cm ≈ 32 ft). */
+export const ONE_WAY_LIMITS = { minFt: 1, maxFt: 40 } as const;
+
+export const stimpFtSchema = z
+  .number({ message: "stimpFt must be a number (feet)" })
+  .finite()
+  .min(STIMP_LIMITS.minFt, `stimpFt must be at least ${STIMP_LIMITS.minFt} ft`)
+  .max(STIMP_LIMITS.maxFt, `stimpFt must be at most ${STIMP_LIMITS.maxFt} ft`);
+
+const oneWayFt = (name: string) =>
+  z
+    .number({ message: `${name} must be a number (feet)` })
+    .finite()
+    .min(ONE_WAY_LIMITS.minFt, `${name} must be at least ${ONE_WAY_LIMITS.minFt} ft`)
+    .max(ONE_WAY_LIMITS.maxFt, `${name} must be at most ${ONE_WAY_LIMITS.maxFt} ft`);
+
+const name = z.string().trim().min(1, "Give the green a name").max(80, "At most 80 characters");
+const locationNote = z.string().trim().max(500, "At most 500 characters");
+
+export const greenInputSchema = z.object({ name, locationNote: locationNote.nullish() }).strict();
+export type GreenInput = z.infer<typeof greenInputSchema>;
+
+export const greenPatchSchema = z
+  .object({ name: name.optional(), locationNote: locationNote.nullable().optional() })
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, { message: "Send at least one of name, locationNote", path: ["body"] });
+export type GreenPatch = z.infer<typeof greenPatchSchema>;
+
+/**
+ * A reading: either the Stimp itself, or the two directions of a reading on a slope (upFt rolled uphill,
+ * downFt downhill), which the server corrects with Brede's formula (A. D. Brede, USGA Green Section Record
+ * 28(6), 1990).
+ */
+export const stimpReadingInputSchema = z
+  .object({
+    measuredOn: isoDateSchema,
+    stimpFt: stimpFtSchema.optional(),
+    upFt: oneWayFt("upFt").optional(),
+    downFt: oneWayFt("downFt").optional(),
+    note: z.string().trim().max(200).nullish(),
+  })
+  .strict()
+  .superRefine((v, ctx) => {
+    const twoWay = v.upFt !== undefined || v.downFt !== undefined;
+    if (v.stimpFt !== undefined && twoWay) {
+      ctx.addIssue({ code: "custom", path: ["stimpFt"], message: "Send either stimpFt or upFt and downFt, not both" });
+    } else if (v.stimpFt === undefined && !twoWay) {
+      ctx.addIssue({ code: "custom", path: ["stimpFt"], message: "Send stimpFt, or upFt and downFt for a reading on a slope" });
+    } else if (twoWay) {
+      if (v.upFt === undefined) ctx.addIssue({ code: "custom", path: ["upFt"], message: "A two-way reading needs upFt as well" });
+      if (v.downFt === undefined) ctx.addIssue({ code: "custom", path: ["downFt"], message: "A two-way reading needs downFt as well" });
+    }
+  });
+export type StimpReadingInput = z.infer<typeof stimpReadingInputSchema>;
+
+export type StimpReading = {
+  id: string;
+  measuredOn: string;
+  stimpFt: number;
+  upFt: number | null;
+  downFt: number | null;
+  note: string | null;
+};
+
+export type GreenSummary = {
+  id: string;
+  name: string;
+  locationNote: string | null;
+  /** The latest reading's Stimp (by measuredOn, then by when it was entered); null without readings. */
+  currentStimpFt: number | null;
+  createdAt: string;
+};
+export type Green = GreenSummary & { readings: StimpReading[] };
