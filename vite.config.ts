@@ -20,7 +20,9 @@ export default defineConfig({
           groups: [
             { name: "three", test: /[\\/]node_modules[\\/](three|@react-three|three-stdlib|troika-[^\\/]+|camera-controls|maath)[\\/]/, priority: 30 },
             { name: "charts", test: /[\\/]node_modules[\\/](recharts|d3-[^\\/]+|victory-vendor|decimal\.js-light)[\\/]/, priority: 20 },
-            { name: "react", test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router)[\\/]/, priority: 10 },
+            // Highest priority: a group also takes its modules' dependencies, so if "three" (which imports React)
+            // outranked this one, React would land in the three chunk and the entry would have to load it.
+            { name: "react", test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router)[\\/]/, priority: 40 },
           ],
         },
       },

@@ -17,6 +17,10 @@ export type NavItem = {
 // The main navigation. Add an item here when its route is registered in router.tsx.
 export const navItems: ReadonlyArray<NavItem> = [
   { label: "Home", to: paths.home.href(), end: true },
+  { label: "Read a putt", to: paths.read.href() },
+  { label: "Break chart", to: paths.breakChart.href() },
+  { label: "Rehearse", to: paths.rehearse.href() },
+  { label: "Read training", to: paths.train.href() },
   { label: "Account", to: paths.account.href(), signedIn: true },
   { label: "Dev mailbox", to: paths.mailbox.href(), when: "devMail" },
 ];

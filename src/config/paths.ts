@@ -17,9 +17,12 @@ export const paths = {
   account: { path: "/account", href: () => "/account" },
 
   // the five flows (reserved; routes are registered as each feature lands)
-  read: { path: "/read", href: () => "/read" },
-  rehearse: { path: "/rehearse", href: () => "/rehearse" },
-  train: { path: "/train", href: () => "/train" },
+  // `query` is a read's URL query without "?" (see src/features/reads/utils/read-query.ts), so a read can be shared.
+  read: { path: "/read", href: (query?: string) => (query ? `/read?${query}` : "/read") },
+  breakChart: { path: "/chart", href: (query?: string) => (query ? `/chart?${query}` : "/chart") },
+  rehearse: { path: "/rehearse", href: (query?: string) => (query ? `/rehearse?${query}` : "/rehearse") },
+  // `query` e.g. "level=club&seed=12345&n=0": the seed replays a round of read training.
+  train: { path: "/train", href: (query?: string) => (query ? `/train?${query}` : "/train") },
   practice: { path: "/practice", href: () => "/practice" },
   session: { path: "/practice/:sessionId", href: (sessionId: string) => `/practice/${encodeURIComponent(sessionId)}` },
   greens: { path: "/greens", href: () => "/greens" },
@@ -40,4 +43,10 @@ export const apiPaths = {
   me: "/api/me",
   mePreferences: "/api/me/preferences",
   devMail: "/api/dev/mail",
+  readsSolve: "/api/reads/solve",
+  readsChart: "/api/reads/chart",
+  reads: "/api/reads",
+  read: (id: string) => `/api/reads/${encodeURIComponent(id)}`,
+  greens: "/api/greens",
+  trainingAttempts: "/api/training/attempts",
 } as const;

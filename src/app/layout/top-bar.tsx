@@ -49,7 +49,7 @@ export function TopBar() {
   }, [open]);
 
   return (
-    <header className="sticky top-0 z-40 bg-ink-900 text-sand-50 shadow-[0_1px_0_rgb(0_0_0/0.2)]">
+    <header className="sticky top-0 z-40 bg-ink-900 print:hidden text-sand-50 shadow-[0_1px_0_rgb(0_0_0/0.2)]">
       <div className="mx-auto flex h-16 max-w-6xl items-center gap-4 px-4 sm:px-6">
         <Link to={paths.home.href()} className="flex min-h-11 items-center gap-2.5 rounded-lg pr-2 text-xl font-semibold tracking-tight">
           <LogoMark />

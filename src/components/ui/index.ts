@@ -8,3 +8,4 @@ export { PageHeader, type PageHeaderProps } from "./page-header";
 export { PageSpinner, Spinner, type SpinnerProps } from "./spinner";
 export { TextLink, textLinkClasses } from "./text-link";
 export { LogoMark } from "./logo";
+export { ErrorBoundary, type ErrorBoundaryProps } from "./error-boundary";

@@ -1,0 +1,7 @@
+import { ReadPage } from "../../features/reads/components/read-page";
+
+export function ReadRoute() {
+  return <ReadPage />;
+}
+
+export { ReadRoute as Component };

@@ -1,0 +1,28 @@
+import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
+import type { ChartRequest } from "../../../../shared/schemas/reads";
+import { apiPaths } from "../../../config/paths";
+import { api } from "../../../lib/api-client";
+import type { BreakChartAnswer } from "../utils/chart-data";
+import { readsKeys } from "./keys";
+
+export type BreakChartResponse = BreakChartAnswer & { slopePct: number; stimpFt: number; model: { maxStoppableSlopePct: number } };
+
+/** POST /api/reads/chart: aim offsets over distances × fall-line directions (at most 400 cells). */
+export function getBreakChart(input: ChartRequest, signal?: AbortSignal): Promise<BreakChartResponse> {
+  return api.post<BreakChartResponse>(apiPaths.readsChart, input, { signal });
+}
+
+export function breakChartQueryOptions(input: ChartRequest | null) {
+  return queryOptions({
+    queryKey: readsKeys.chart(input),
+    queryFn: ({ signal }) => getBreakChart(input as ChartRequest, signal),
+    enabled: input !== null,
+    staleTime: Infinity,
+    placeholderData: keepPreviousData,
+    meta: { errorToast: false },
+  });
+}
+
+export function useBreakChart(input: ChartRequest | null) {
+  return useQuery(breakChartQueryOptions(input));
+}

@@ -1,0 +1,10 @@
+// Query keys for reads. Mutations invalidate `readsKeys.saved()`; everything here sits under `readsKeys.all`.
+import type { ChartRequest, ReadRequest } from "../../../../shared/schemas/reads";
+
+export const readsKeys = {
+  all: ["reads"] as const,
+  solve: (input: ReadRequest | null) => [...readsKeys.all, "solve", input] as const,
+  chart: (input: ChartRequest | null) => [...readsKeys.all, "chart", input] as const,
+  saved: () => [...readsKeys.all, "saved"] as const,
+  greens: () => [...readsKeys.all, "greens"] as const,
+};

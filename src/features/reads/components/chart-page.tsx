@@ -1,0 +1,240 @@
+import { lazy, Suspense, useEffect, useLayoutEffect, useMemo, useRef } from "react";
+import { useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useSearchParams } from "react-router";
+import type { ChartRequest } from "../../../../shared/schemas/reads";
+import { Alert, Button, Card, ErrorBoundary, InputField, PageHeader, PageSpinner, Spinner } from "../../../components/ui";
+import { useBreakChart } from "../api/get-break-chart";
+import { useUnits } from "../hooks/use-units";
+import { CHART_DIRECTIONS_DEG, cannotStopCount, chartDistancesM } from "../utils/chart-data";
+import { cannotStopWords } from "../utils/answer-text";
+import {
+  chartFormSchema,
+  fieldLimits,
+  fieldSi,
+  formatNumber,
+  FIELD_SPECS,
+  type ChartFormValues,
+  type ExactMemory,
+} from "../utils/read-form";
+import { defaultReadValues } from "../utils/read-query";
+import { BreakChartTable } from "./break-chart-table";
+import { UnitsSwitch } from "./units-switch";
+
+// recharts is heavy: the graph is its own chunk, loaded after the table is on screen.
+const BreakChartGraph = lazy(() => import("./break-chart-graph").then((m) => ({ default: m.BreakChartGraph })));
+
+type ChartSettings = { slopePct: number; stimpFt: number; rollPastM: number };
+
+function readSettings(params: URLSearchParams, fallback: ChartSettings): ChartSettings {
+  const n = (k: string, d: number) => {
+    const v = Number(params.get(k));
+    return params.get(k) !== null && Number.isFinite(v) ? v : d;
+  };
+  return { slopePct: n("s", fallback.slopePct), stimpFt: n("st", fallback.stimpFt), rollPastM: n("rp", fallback.rollPastM) };
+}
+
+function toText(s: ChartSettings, units: ReturnType<typeof useUnits>["units"]): { values: ChartFormValues; memory: ExactMemory } {
+  const slope = formatNumber(s.slopePct, 1);
+  const stimp = formatNumber(s.stimpFt, 1);
+  const rollPast = formatNumber(FIELD_SPECS.rollPast.toUnit(s.rollPastM, units), 0);
+  return {
+    values: { slope, stimp, rollPast },
+    memory: {
+      slope: { text: slope, si: s.slopePct },
+      stimp: { text: stimp, si: s.stimpFt },
+      rollPast: { text: rollPast, si: s.rollPastM },
+    },
+  };
+}
+
+function ChartControls({
+  settings,
+  onApply,
+  units,
+  busy,
+}: {
+  settings: ChartSettings;
+  onApply: (s: ChartSettings) => void;
+  units: ReturnType<typeof useUnits>["units"];
+  busy: boolean;
+}) {
+  const start = toText(settings, units);
+  const memory = useRef<ExactMemory>(start.memory);
+  const { register, handleSubmit, formState, reset } = useForm<ChartFormValues>({
+    resolver: zodResolver(chartFormSchema(units)),
+    defaultValues: start.values,
+  });
+  const key = `${settings.slopePct}|${settings.stimpFt}|${settings.rollPastM}|${units}`;
+  const shown = useRef(key);
+  useLayoutEffect(() => {
+    if (shown.current === key) return;
+    shown.current = key;
+    const next = toText(settings, units);
+    memory.current = next.memory;
+    reset(next.values);
+  }, [key, settings, units, reset]);
+
+  const rp = fieldLimits("rollPast", units);
+  return (
+    <form
+      noValidate
+      aria-label="Chart settings"
+      className="grid grid-cols-2 items-start gap-3 sm:grid-cols-[repeat(3,minmax(0,11rem))_auto] print:hidden"
+      onSubmit={(event) => {
+        const apply = (v: ChartFormValues) =>
+          onApply({
+            slopePct: fieldSi("slope", v.slope, units, memory.current),
+            stimpFt: fieldSi("stimp", v.stimp, units, memory.current),
+            rollPastM: fieldSi("rollPast", v.rollPast, units, memory.current),
+          });
+        void handleSubmit(apply)(event);
+      }}
+    >
+      <InputField label="Slope (%)" inputMode="decimal" autoComplete="off" error={formState.errors.slope?.message} {...register("slope")} />
+      <InputField
+        label="Stimp (ft)"
+        inputMode="decimal"
+        autoComplete="off"
+        error={formState.errors.stimp?.message}
+        {...register("stimp")}
+      />
+      <InputField
+        label={`Finish past (${rp.unit})`}
+        inputMode="decimal"
+        autoComplete="off"
+        error={formState.errors.rollPast?.message}
+        {...register("rollPast")}
+      />
+      <Button type="submit" loading={busy} loadingText="Working…" className="col-span-2 self-end sm:col-span-1 sm:mt-7">
+        Show the chart
+      </Button>
+    </form>
+  );
+}
+
+export function ChartPage() {
+  const { units, setUnits, ready, saving } = useUnits();
+  const [params, setParams] = useSearchParams();
+  const query = params.toString();
+  const defaults = defaultReadValues(units);
+  const settings = useMemo(
+    () =>
+      readSettings(new URLSearchParams(query), { slopePct: defaults.slopePct, stimpFt: defaults.stimpFt, rollPastM: defaults.rollPastM }),
+    [query, defaults.slopePct, defaults.stimpFt, defaults.rollPastM],
+  );
+  const request: ChartRequest | null = ready
+    ? {
+        slopePct: settings.slopePct,
+        stimpFt: settings.stimpFt,
+        pace: { rollPastM: settings.rollPastM },
+        distances: chartDistancesM(units),
+        fallLineDegs: [...CHART_DIRECTIONS_DEG],
+      }
+    : null;
+  const chart = useBreakChart(request);
+
+  useEffect(() => {
+    if (ready && (!params.has("s") || !params.has("st") || !params.has("rp"))) {
+      setParams(
+        new URLSearchParams({
+          s: String(settings.slopePct),
+          st: String(settings.stimpFt),
+          rp: String(Number(settings.rollPastM.toFixed(6))),
+        }),
+        { replace: true },
+      );
+    }
+  }, [ready, params, settings, setParams]);
+
+  if (!ready) return <PageSpinner label="Getting the chart ready" />;
+
+  const caption = `Aim offset at the hole: how far left (L) or right (R) of the hole centre to start the ball. Slope ${settings.slopePct} %, Stimp ${settings.stimpFt}, finishing ${formatNumber(FIELD_SPECS.rollPast.toUnit(settings.rollPastM, units), 0)} ${fieldLimits("rollPast", units).unit} past. Assumes an even slope and a true roll.`;
+  const answer = chart.data;
+
+  return (
+    <>
+      <title>Break chart · Borrowline</title>
+      <PageHeader
+        eyebrow="Break chart"
+        title="Aim for every length and direction"
+        description="One slope, one green speed, one pace: where to aim from close range to long putts, whichever way the green falls. Print it for the yardage book."
+        actions={
+          <div className="flex flex-wrap items-center gap-3 print:hidden">
+            <UnitsSwitch value={units} onChange={setUnits} saving={saving} />
+            <Button variant="secondary" size="sm" onClick={() => window.print()}>
+              Print
+            </Button>
+          </div>
+        }
+      />
+      <Card className="mb-6 print:hidden">
+        <ChartControls
+          settings={settings}
+          units={units}
+          busy={chart.isFetching}
+          onApply={(s) =>
+            setParams(new URLSearchParams({ s: String(s.slopePct), st: String(s.stimpFt), rp: String(Number(s.rollPastM.toFixed(6))) }))
+          }
+        />
+      </Card>
+
+      {chart.isError ? (
+        <Alert
+          tone="error"
+          title="Could not work out the chart"
+          action={
+            <Button size="sm" variant="secondary" onClick={() => void chart.refetch()}>
+              Try again
+            </Button>
+          }
+        >
+          {chart.error.message}
+        </Alert>
+      ) : null}
+      {chart.isPending && !chart.isError ? <PageSpinner label="Working out the chart" /> : null}
+
+      {answer ? (
+        <div className="flex flex-col gap-6" aria-busy={chart.isPlaceholderData || undefined}>
+          {!answer.canStop ? (
+            <Alert tone="warning" title="No ball stops on this green">
+              {cannotStopWords(settings.slopePct, settings.stimpFt, answer.model?.maxStoppableSlopePct)}
+            </Alert>
+          ) : cannotStopCount(answer) > 0 ? (
+            <Alert tone="info">Cells marked &ldquo;won&apos;t stop&rdquo; are putts where the ball would not come to rest.</Alert>
+          ) : null}
+          <Card className="print:p-0 print:shadow-none print:ring-0">
+            {chart.isPlaceholderData ? (
+              <p className="mb-2 text-sm text-ink-500 print:hidden">
+                <Spinner size="sm" label="" /> Updating…
+              </p>
+            ) : null}
+            <BreakChartTable answer={answer} units={units} caption={caption} />
+          </Card>
+          <Card className="print:hidden">
+            <h2 className="mb-4 text-lg font-semibold tracking-tight">Aim against distance</h2>
+            <ErrorBoundary
+              fallback={(_e, retry) => (
+                <Alert
+                  tone="error"
+                  title="The graph could not be drawn"
+                  action={
+                    <Button size="sm" variant="secondary" onClick={retry}>
+                      Try again
+                    </Button>
+                  }
+                >
+                  The table above has the same numbers.
+                </Alert>
+              )}
+            >
+              <Suspense fallback={<PageSpinner label="Loading the graph" />}>
+                <BreakChartGraph answer={answer} units={units} />
+              </Suspense>
+            </ErrorBoundary>
+          </Card>
+        </div>
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,180 @@
+import { useCallback, useEffect, useMemo, useState } from "react";
+import { useSearchParams } from "react-router";
+// The live preview while the dial is dragged is computed in the browser with the physics engine itself (about a
+// millisecond a read), so the line follows the finger at 60 fps; the answer the page commits to always comes from
+// POST /api/reads/solve through TanStack Query once the dial is let go or typing pauses.
+import { solveRead as solveReadInBrowser } from "../../../../physics";
+import type { ReadResponse } from "../../../../shared/schemas/reads";
+import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner, TextLink } from "../../../components/ui";
+import { paths } from "../../../config/paths";
+import { isApiError } from "../../../lib/api-client";
+import { useSolveRead } from "../api/solve-read";
+import { useUnits } from "../hooks/use-units";
+import { cannotStopWords, steepestFromMessage } from "../utils/answer-text";
+import { formFieldForApi, type NumericField } from "../utils/read-form";
+import { decodeReadQuery, encodeReadQuery, isCompleteReadQuery, toReadRequest, type ReadValues } from "../utils/read-query";
+import { AnswerBar } from "./answer-bar";
+import { ReadAnswer } from "./read-answer";
+import { ReadForm } from "./read-form";
+import { SavedReadsList } from "./saved-reads-list";
+import { SaveReadPanel } from "./save-read-panel";
+import { UnitsSwitch } from "./units-switch";
+
+function previewRead(values: ReadValues | null): ReadResponse | null {
+  if (!values) return null;
+  const request = toReadRequest(values);
+  if (!request) return null;
+  const result = solveReadInBrowser(request);
+  return result.ok ? result.read : null;
+}
+
+function CopyLinkButton() {
+  const [copied, setCopied] = useState(false);
+  if (typeof navigator === "undefined" || !navigator.clipboard) return null;
+  return (
+    <Button
+      variant="ghost"
+      size="sm"
+      onClick={() => {
+        void navigator.clipboard.writeText(window.location.href).then(() => setCopied(true));
+        window.setTimeout(() => setCopied(false), 2500);
+      }}
+    >
+      {copied ? "Link copied" : "Copy link to this read"}
+    </Button>
+  );
+}
+
+export function ReadPage() {
+  const { units, setUnits, ready, saving, signedIn } = useUnits();
+  const [params, setParams] = useSearchParams();
+  const query = params.toString();
+  const values = useMemo(() => decodeReadQuery(new URLSearchParams(query), units), [query, units]);
+  const request = useMemo(() => toReadRequest(values), [values]);
+  const solve = useSolveRead(request);
+  const [liveValues, setLiveValues] = useState<ReadValues | null>(null);
+  const live = useMemo(() => previewRead(liveValues), [liveValues]);
+
+  // A bare /read (or a partial link) gets every value written into the address, so it can be shared as it is.
+  useEffect(() => {
+    if (ready && !isCompleteReadQuery(new URLSearchParams(query))) setParams(encodeReadQuery(values), { replace: true });
+  }, [ready, query, values, setParams]);
+
+  const onCommit = useCallback((next: ReadValues) => setParams(encodeReadQuery(next), { replace: true }), [setParams]);
+
+  if (!ready) return <PageSpinner label="Getting the read calculator ready" />;
+
+  const error = solve.error;
+  const cannotStop = isApiError(error) && error.status === 422;
+  const serverErrors: Partial<Record<NumericField, string>> = {};
+  if (isApiError(error) && error.status === 400) {
+    for (const [key, why] of Object.entries(error.fields)) {
+      const field = formFieldForApi(key);
+      if (field) serverErrors[field] = why;
+    }
+  }
+  const unplacedError = error && !cannotStop && Object.keys(serverErrors).length === 0 ? error : null;
+  const steepest = cannotStop && isApiError(error) ? steepestFromMessage(error.fields.slopePct, error.message) : undefined;
+  const shownRead = live ?? solve.data;
+  const encoded = encodeReadQuery(values);
+
+  return (
+    <>
+      <title>Read a putt · Borrowline</title>
+      <PageHeader
+        eyebrow="Read a putt"
+        title="Where to start it, and how firmly"
+        description="Give the distance, the slope, which way the green falls and its speed."
+        actions={<UnitsSwitch value={units} onChange={setUnits} saving={saving} />}
+      />
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+        <Card>
+          <ReadForm
+            units={units}
+            values={values}
+            onCommit={onCommit}
+            onLive={setLiveValues}
+            serverErrors={serverErrors}
+            slopeNote={steepest !== undefined ? `Steepest a ball stops on at this Stimp: ${steepest.toFixed(1)} %` : undefined}
+            solving={solve.isFetching}
+          />
+        </Card>
+
+        <div className="flex flex-col gap-6 lg:sticky lg:top-20">
+          <Card id="answer">
+            {cannotStop && !live ? (
+              <div className="flex flex-col gap-3">
+                <h2 className="text-sm font-semibold tracking-wide text-coral-700 uppercase">The read</h2>
+                <Alert tone="warning" title="This ball would not stop">
+                  {cannotStopWords(values.slopePct, values.stimpFt, steepest)} Try a gentler slope or a slower green.
+                </Alert>
+              </div>
+            ) : unplacedError && !live ? (
+              <Alert
+                tone="error"
+                title="Could not work out the read"
+                action={
+                  <Button size="sm" variant="secondary" onClick={() => void solve.refetch()}>
+                    Try again
+                  </Button>
+                }
+              >
+                {unplacedError.message}
+              </Alert>
+            ) : shownRead ? (
+              <ReadAnswer
+                read={shownRead}
+                distanceM={live && liveValues ? liveValues.distanceM : values.distanceM}
+                fallLineDeg={live && liveValues ? liveValues.fallLineDeg : values.fallLineDeg}
+                units={units}
+                state={live ? "live" : solve.isPlaceholderData ? "updating" : "fresh"}
+              />
+            ) : !request ? (
+              <p className="text-ink-600">Fix the values marked in the form and the read appears here.</p>
+            ) : (
+              <PageSpinner label="Working out the read" />
+            )}
+            <div className="mt-5 flex flex-wrap items-center gap-2 border-t border-ink-900/10 pt-4 print:hidden">
+              {cannotStop ? null : (
+                <ButtonLink to={paths.rehearse.href(encoded)} variant="accent" size="sm">
+                  Rehearse this putt
+                </ButtonLink>
+              )}
+              <ButtonLink
+                to={paths.breakChart.href(new URLSearchParams({ s: String(values.slopePct), st: String(values.stimpFt) }).toString())}
+                variant="secondary"
+                size="sm"
+              >
+                Break chart for this green
+              </ButtonLink>
+              <CopyLinkButton />
+            </div>
+          </Card>
+
+          {signedIn ? (
+            <Card>
+              {request && !cannotStop ? (
+                <SaveReadPanel request={request} />
+              ) : (
+                <p className="text-ink-600">A read that works out can be saved.</p>
+              )}
+            </Card>
+          ) : (
+            <p className="text-sm text-ink-600">
+              <TextLink to={paths.signIn.href(`${paths.read.path}?${encoded}`)}>Sign in</TextLink> to save reads for the course or the
+              practice green.
+            </p>
+          )}
+        </div>
+      </div>
+
+      {signedIn ? (
+        <Card className="mt-6">
+          <SavedReadsList units={units} />
+        </Card>
+      ) : null}
+      <div className="h-20 lg:hidden print:hidden" aria-hidden="true" />
+      <AnswerBar read={shownRead} cannotStop={cannotStop && !live} units={units} targetId="answer" />
+    </>
+  );
+}

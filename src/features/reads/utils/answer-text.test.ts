@@ -1,0 +1,63 @@
+import { expect, test } from "vitest";
+import { HOLE_DIAMETER_M, inchesToMetres } from "../../../../shared/units";
+import { aOrAn, aimWords, formatAim, captureWords, cannotStopWords, paceWords, steepestFromMessage } from "./answer-text";
+
+test("an aim outside the hole is given from the edge, and from the centre in hole widths", () => {
+  const aim = aimWords(-2.5 * HOLE_DIAMETER_M, -5.2, "imperial");
+  // 2.5 widths = 10.625 in from centre; the edge is 2.125 in from centre: 8.5 in, said as 9.
+  expect(aim.headline).toBe("Start it 9 in outside the left edge");
+  expect(aim.detail).toBe("2.5 hole widths (11 in) left of centre");
+  expect(aim.startLine).toBe("Start line 5.2° left of the straight line to the hole");
+});
+
+test("aims are rounded the way a golfer says them", () => {
+  expect(formatAim(inchesToMetres(1.3), "imperial")).toBe("1.5 in");
+  expect(formatAim(inchesToMetres(2.6), "imperial")).toBe("3 in");
+  expect(formatAim(0.032, "metric")).toBe("3.2 cm");
+  expect(formatAim(-0.274, "metric")).toBe("27 cm");
+});
+
+test("a small aim stays inside the hole, a tiny one is the centre", () => {
+  expect(aimWords(inchesToMetres(1.5), 0.7, "metric").headline).toBe("Aim inside the right edge");
+  expect(aimWords(0.002, 0.05, "metric").headline).toBe("Aim at the centre of the hole");
+});
+
+test("a very wide start line is given as an angle, not as a spot beside the hole", () => {
+  expect(aimWords(-3, -65, "metric").headline).toBe("Start it 65° left of the hole");
+});
+
+test("pace reads as the distance past and the flat putt it plays like", () => {
+  const p = paceWords(inchesToMetres(17), 3.3528, "imperial");
+  expect(p.headline).toBe("Firm enough to finish 17 in past if it misses");
+  expect(p.playsLike).toBe("Plays like an 11 ft putt on the flat");
+  expect(paceWords(0, 3, "metric").headline).toMatch(/dying pace/);
+});
+
+test("capture says whether the hole holds the ball and by how much", () => {
+  expect(captureWords(0.67, { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.637, marginMps: 0.967 }).verdict).toBe(
+    "The hole holds it: up to 1.64 m/s drops, 0.97 m/s to spare",
+  );
+  const fast = captureWords(1.9, { holed: false, outcome: "lip-out", maxCaptureSpeedMps: 1.637, marginMps: -0.263 });
+  expect(fast.tone).toBe("warn");
+  expect(fast.verdict).toMatch(/0\.26 m\/s over/);
+});
+
+test("the cannot-stop answer names the slope, the Stimp and the steepest stoppable slope", () => {
+  expect(cannotStopWords(8, 10, 7.86)).toBe("On an 8 % slope at Stimp 10 the ball would not stop — the steepest it stops on is 7.9 %.");
+  expect(cannotStopWords(6.5, 13, undefined)).toBe("On a 6.5 % slope at Stimp 13 the ball would not stop.");
+});
+
+test("the steepest stoppable slope is read from either of the API's wordings", () => {
+  expect(steepestFromMessage("too steep to stop a ball at Stimp 10 ft (steepest: 7.9 %)")).toBe(7.9);
+  expect(steepestFromMessage(undefined, "… the steepest stoppable slope at this Stimp is 4.8 %.")).toBe(4.8);
+  expect(steepestFromMessage("no number here")).toBeUndefined();
+});
+
+test("articles follow how numbers are said", () => {
+  expect(aOrAn("8 ft")).toBe("an");
+  expect(aOrAn("11 ft 3 in")).toBe("an");
+  expect(aOrAn("18 ft")).toBe("an");
+  expect(aOrAn("10 ft")).toBe("a");
+  expect(aOrAn("110 ft")).toBe("a");
+  expect(aOrAn("1.83 m")).toBe("a");
+});

@@ -1,0 +1,120 @@
+// The answer in words, in the user's units. Signed lengths: + = the golfer's right.
+import { HOLE_DIAMETER_M, formatLength, formatShort, metresToHoleWidths, toShortUnit, type UnitSystem } from "../../../../shared/units";
+
+const HOLE_RADIUS_M = HOLE_DIAMETER_M / 2;
+/** Below this the aim is "the centre": about a fifth of an inch, less than anyone can aim. */
+const CENTRE_M = 0.005;
+/** Past this the start line is so wide that an offset "at the hole's distance" stops meaning much. */
+const WIDE_START_LINE_DEG = 60;
+
+export type AimWords = {
+  /** The big line: "Start it 8.7 in outside the left edge". */
+  headline: string;
+  /** The same aim from the centre: "2.5 hole widths (10.8 in) left of centre". */
+  detail: string;
+  /** "5.2° left of the straight line to the hole". */
+  startLine: string;
+};
+
+/** An aim as a golfer says it: whole inches (half inches under 2 in), whole centimetres (tenths under 5 cm). */
+export function formatAim(m: number, units: UnitSystem): string {
+  const v = toShortUnit(Math.abs(m), units);
+  if (units === "imperial") return `${v < 2 ? String(Math.round(v * 2) / 2) : Math.round(v)} in`;
+  return `${v < 5 ? v.toFixed(1) : Math.round(v)} cm`;
+}
+
+function side(m: number): "left" | "right" {
+  return m < 0 ? "left" : "right";
+}
+
+function holeWidths(m: number): string {
+  const w = metresToHoleWidths(Math.abs(m));
+  const s = w.toFixed(1);
+  return `${s} hole ${s === "1.0" ? "width" : "widths"}`;
+}
+
+export function startLineWords(startLineDeg: number): string {
+  const a = Math.abs(startLineDeg);
+  if (a < 0.05) return "Start line straight at the hole";
+  return `Start line ${a.toFixed(1)}° ${side(startLineDeg)} of the straight line to the hole`;
+}
+
+export function aimWords(aimOffsetM: number, startLineDeg: number, units: UnitSystem): AimWords {
+  const startLine = startLineWords(startLineDeg);
+  const abs = Math.abs(aimOffsetM);
+  if (Math.abs(startLineDeg) >= WIDE_START_LINE_DEG) {
+    return {
+      headline: `Start it ${Math.abs(startLineDeg).toFixed(0)}° ${side(startLineDeg)} of the hole`,
+      detail: "A very wide line: judge it by the start direction, not a spot beside the hole.",
+      startLine,
+    };
+  }
+  if (abs < CENTRE_M) return { headline: "Aim at the centre of the hole", detail: "No borrow to play", startLine };
+  const s = side(aimOffsetM);
+  const fromCentre = `${holeWidths(aimOffsetM)} (${formatAim(aimOffsetM, units)}) ${s} of centre`;
+  if (abs <= HOLE_RADIUS_M) return { headline: `Aim inside the ${s} edge`, detail: fromCentre, startLine };
+  return { headline: `Start it ${formatAim(abs - HOLE_RADIUS_M, units)} outside the ${s} edge`, detail: fromCentre, startLine };
+}
+
+/** "Firm enough to finish 17 in past" and "Plays like a 11 ft 3 in putt on the flat". */
+export function paceWords(rollPastM: number, playsLikeM: number, units: UnitSystem): { headline: string; playsLike: string } {
+  const past =
+    rollPastM < 0.01 ? "Just reach the hole: a dying pace" : `Firm enough to finish ${formatShort(rollPastM, units)} past if it misses`;
+  return {
+    headline: past,
+    playsLike: `Plays like ${aOrAn(formatLength(playsLikeM, units))} ${formatLength(playsLikeM, units)} putt on the flat`,
+  };
+}
+
+export type CaptureSummary = { holed: boolean; outcome: "holed" | "lip-out" | "miss"; maxCaptureSpeedMps: number; marginMps: number };
+
+/** Entry speed and whether the hole holds it (capture model: Holmes 1991, centre-of-ball criterion). */
+export function captureWords(entrySpeedMps: number, capture: CaptureSummary): { entry: string; verdict: string; tone: "ok" | "warn" } {
+  const entry = `Reaches the hole at ${entrySpeedMps.toFixed(2)} m/s`;
+  if (capture.outcome === "holed") {
+    return {
+      entry,
+      verdict: `The hole holds it: up to ${capture.maxCaptureSpeedMps.toFixed(2)} m/s drops, ${capture.marginMps.toFixed(2)} m/s to spare`,
+      tone: "ok",
+    };
+  }
+  if (capture.outcome === "lip-out") {
+    return {
+      entry,
+      verdict: `Too fast to drop: the hole holds up to ${capture.maxCaptureSpeedMps.toFixed(2)} m/s, this is ${Math.abs(capture.marginMps).toFixed(2)} m/s over`,
+      tone: "warn",
+    };
+  }
+  return { entry, verdict: "It does not pass over the hole", tone: "warn" };
+}
+
+/** The 422 "cannot stop" answer, in words: "On an 8 % slope at Stimp 10 the ball would not stop — …". */
+export function cannotStopWords(slopePct: number, stimpFt: number, steepestPct: number | undefined): string {
+  const slope = formatPct(slopePct);
+  const article = aOrAn(slope);
+  const tail = steepestPct !== undefined ? ` — the steepest it stops on is ${steepestPct.toFixed(1)} %` : "";
+  return `On ${article} ${slope} % slope at Stimp ${formatPct(stimpFt)} the ball would not stop${tail}.`;
+}
+
+/** "an 8 ft", "an 11 ft", "an 18 ft", but "a 10 ft" (numbers read aloud). */
+export function aOrAn(numberText: string): "a" | "an" {
+  return /^(8|11(?!\d)|18(?!\d))/.test(numberText) ? "an" : "a";
+}
+
+function formatPct(n: number): string {
+  return String(Math.round(n * 10) / 10);
+}
+
+/** The steepest stoppable slope out of the API's 422 wording ("… (steepest: 7.9 %)" or "… is 7.9 %."). */
+export function steepestFromMessage(...texts: Array<string | undefined>): number | undefined {
+  for (const t of texts) {
+    const m = t?.match(/steepest[^0-9]*(\d+(?:\.\d+)?)\s*%/i);
+    if (m?.[1]) return Number(m[1]);
+  }
+  return undefined;
+}
+
+/** One line describing a read's inputs: "10 ft, 2 % falls to the right, Stimp 10". */
+export function readInputSummary(distanceM: number, slopePct: number, direction: string, stimpFt: number, units: UnitSystem): string {
+  return `${formatLength(distanceM, units)}, ${formatPct(slopePct)} % ${direction}, Stimp ${formatPct(stimpFt)}`;
+}

@@ -1,0 +1,57 @@
+import { expect, test } from "vitest";
+import { decodeReadQuery, defaultReadValues, encodeReadQuery, fromReadRequest, isCompleteReadQuery, toReadRequest } from "./read-query";
+
+test("a read's query is SI, in a fixed key order, and decodes back to the same values", () => {
+  const v = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, paceMode: "rollPast" as const, rollPastM: 0.45, entrySpeedMps: 0.8 };
+  const q = encodeReadQuery(v);
+  expect(q).toBe("d=3&s=2&f=90&st=10&rp=0.45");
+  expect(decodeReadQuery(new URLSearchParams(q), "metric")).toEqual(v);
+});
+
+test("the brief's example link reproduces its read", () => {
+  const v = decodeReadQuery(new URLSearchParams("d=3&s=2&f=90&st=10&rp=0.45"), "imperial");
+  expect(toReadRequest(v)).toEqual({ distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } });
+});
+
+test("an entry-speed link keeps its pace mode and writes es, not rp", () => {
+  const v = decodeReadQuery(new URLSearchParams("d=4&s=1.5&f=270&st=11&es=0.9"), "imperial");
+  expect(v.paceMode).toBe("entrySpeed");
+  expect(v.entrySpeedMps).toBe(0.9);
+  expect(encodeReadQuery(v)).toBe("d=4&s=1.5&f=270&st=11&es=0.9");
+  expect(toReadRequest(v)?.pace).toEqual({ entrySpeedMps: 0.9 });
+});
+
+test("missing or garbled values take the defaults of the user's units", () => {
+  const v = decodeReadQuery(new URLSearchParams("d=abc&s=&f=45"), "imperial");
+  const base = defaultReadValues("imperial");
+  expect(v.distanceM).toBeCloseTo(3.048, 12);
+  expect(v.slopePct).toBe(base.slopePct);
+  expect(v.fallLineDeg).toBe(45);
+  expect(v.rollPastM).toBeCloseTo(0.4318, 12);
+  expect(decodeReadQuery(new URLSearchParams(""), "metric").distanceM).toBe(3);
+  expect(decodeReadQuery(new URLSearchParams(""), "metric").rollPastM).toBe(0.45);
+});
+
+test("a value outside the API's limits is kept (the form flags it) but gives no request", () => {
+  const v = decodeReadQuery(new URLSearchParams("d=50&s=2&f=90&st=10&rp=0.45"), "metric");
+  expect(v.distanceM).toBe(50);
+  expect(toReadRequest(v)).toBeNull();
+});
+
+test("only a query naming every part of a read counts as complete", () => {
+  expect(isCompleteReadQuery(new URLSearchParams("d=3&s=2&f=90&st=10&rp=0.45"))).toBe(true);
+  expect(isCompleteReadQuery(new URLSearchParams("d=3&s=2&f=90&st=10&es=0.7"))).toBe(true);
+  expect(isCompleteReadQuery(new URLSearchParams("d=3&s=2&f=90&st=10"))).toBe(false);
+  expect(isCompleteReadQuery(new URLSearchParams("d=3&s=x&f=90&st=10&rp=0.4"))).toBe(false);
+});
+
+test("links stay short: floating-point dust is cut at six decimals without changing the putt", () => {
+  const q = encodeReadQuery({ ...defaultReadValues("imperial"), distanceM: 11 * 0.3048 });
+  expect(q).toContain("d=3.3528&");
+  expect(q).toContain("rp=0.4318");
+});
+
+test("a saved read's request becomes the same link as the read it came from", () => {
+  const request = { distanceM: 2.5, slopePct: 3, fallLineDeg: 135, stimpFt: 9.5, pace: { rollPastM: 0.3 } };
+  expect(toReadRequest(fromReadRequest(request, "imperial"))).toEqual(request);
+});
