@@ -13,6 +13,7 @@ export default defineConfig({
           include: ["physics/**/*.test.ts", "shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.{ts,tsx}", "tests/api/**/*.test.ts"],
           environment: "node",
           setupFiles: ["tests/setup/unit.ts"],
+          globalSetup: ["tests/setup/global-unit.ts"],
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },

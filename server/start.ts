@@ -19,6 +19,8 @@ export type StartOptions = {
   env: Env;
   /** "memory://" for an in-memory PGlite (tests); default DATA_DIR/pglite. */
   pgliteDir?: string;
+  /** A PGlite data-directory dump to start from (tests: a migrated template). */
+  pgliteLoad?: Blob;
   rateLimits?: AppConfig["rateLimits"];
   frontend?: AppConfig["frontend"];
   /** Where log lines go (default stdout); tests read them to check nothing secret is logged. */
@@ -55,7 +57,7 @@ export async function start(options: StartOptions): Promise<Running> {
     } else {
       const dir = options.pgliteDir ?? path.join(env.DATA_DIR, "pglite");
       if (!dir.startsWith("memory://")) releases.push(await lockDataDir(env.DATA_DIR));
-      database = await openPglite(dir);
+      database = await openPglite(dir, options.pgliteLoad);
     }
     releases.unshift(() => database.close());
     await migrate(database);

@@ -18,9 +18,9 @@ export type Database = {
   pglite?: PGlite;
 };
 
-/** dataDir: a folder, or "memory://" for an in-memory database (tests). */
-export async function openPglite(dataDir: string): Promise<Database> {
-  const client = await PGlite.create(dataDir);
+/** dataDir: a folder, or "memory://" for an in-memory database (tests); `load`: a data-directory dump to start from. */
+export async function openPglite(dataDir: string, load?: Blob): Promise<Database> {
+  const client = await PGlite.create(dataDir, load ? { loadDataDir: load } : {});
   const db = drizzlePglite(client, { schema }) as unknown as Db;
   return { db, kind: "pglite", pglite: client, close: () => client.close() };
 }

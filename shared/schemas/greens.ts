@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "./text";
 import { isoDateSchema } from "./common";
 
 /** Stimp readings accepted, ft: the USGA survey's slowest category is 4′6″; tournament greens reach 14+. */
@@ -19,8 +20,8 @@ const oneWayFt = (name: string) =>
     .min(ONE_WAY_LIMITS.minFt, `${name} must be at least ${ONE_WAY_LIMITS.minFt} ft`)
     .max(ONE_WAY_LIMITS.maxFt, `${name} must be at most ${ONE_WAY_LIMITS.maxFt} ft`);
 
-const name = z.string().trim().min(1, "Give the green a name").max(80, "At most 80 characters");
-const locationNote = z.string().trim().max(500, "At most 500 characters");
+const name = plainText(80, 1, "Give the green a name");
+const locationNote = plainText(500);
 
 export const greenInputSchema = z.object({ name, locationNote: locationNote.nullish() }).strict();
 export type GreenInput = z.infer<typeof greenInputSchema>;
@@ -42,7 +43,7 @@ export const stimpReadingInputSchema = z
     stimpFt: stimpFtSchema.optional(),
     upFt: oneWayFt("upFt").optional(),
     downFt: oneWayFt("downFt").optional(),
-    note: z.string().trim().max(200).nullish(),
+    note: plainText(200).nullish(),
   })
   .strict()
   .superRefine((v, ctx) => {

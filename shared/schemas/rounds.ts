@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "./text";
 import { isoDateSchema } from "./common";
 import { distanceMSchema } from "./putts";
 import { dateRangeFields, fromNotAfterTo, pageFields, playerIdSchema } from "./sessions";
@@ -41,8 +42,8 @@ export const roundHoleInputSchema = z
 export const roundInputSchema = z
   .object({
     date: isoDateSchema,
-    course: z.string().trim().max(120, "At most 120 characters").nullish(),
-    notes: z.string().trim().max(2000, "At most 2000 characters").nullish(),
+    course: plainText(120).nullish(),
+    notes: plainText(2000).nullish(),
     holes: z.array(roundHoleInputSchema).max(18, "A round has at most 18 holes").default([]),
   })
   .strict()

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "./text";
 import { idSchema, isoDateSchema } from "./common";
 import { stimpFtSchema } from "./greens";
 
@@ -15,16 +16,16 @@ export function fromNotAfterTo(v: { from?: string; to?: string }, ctx: z.Refinem
 }
 
 /** A coach (own squads only) or an admin may read another player's data. */
-export const playerIdSchema = z.string().trim().min(1).max(64);
+export const playerIdSchema = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/, "Not a player id");
 
-const tag = z.string().trim().min(1, "A tag cannot be empty").max(30, "A tag is at most 30 characters");
+const tag = plainText(30, 1, "A tag cannot be empty");
 const sessionFields = {
   date: isoDateSchema,
   greenId: idSchema.nullish(),
   stimpFt: stimpFtSchema.nullish(),
-  conditions: z.string().trim().max(200, "At most 200 characters").nullish(),
+  conditions: plainText(200).nullish(),
   tags: z.array(tag).max(10, "At most 10 tags"),
-  notes: z.string().trim().max(2000, "At most 2000 characters").nullish(),
+  notes: plainText(2000).nullish(),
 };
 
 export const sessionInputSchema = z

@@ -4,10 +4,22 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import pg from "pg";
+import { inject } from "vitest";
 import { readEnv } from "../../server/env";
 import { start, type Running, type StartOptions } from "../../server/start";
 
 export type TestServer = Running & { dataDir: string; stop: () => Promise<void> };
+
+/** The migrated database made once per run by tests/setup/global-unit.ts (absent outside vitest's unit project). */
+function templateBlob(): Blob | undefined {
+  let file: string | undefined;
+  try {
+    file = inject("pgliteTemplate");
+  } catch {
+    return undefined;
+  }
+  return file && fs.existsSync(file) ? new Blob([fs.readFileSync(file)]) : undefined;
+}
 
 /** On a PostgreSQL server each test server gets a database of its own, so files can run in parallel. */
 async function freshPostgresDatabase(adminUrl: string): Promise<{ url: string; drop: () => Promise<void> }> {
@@ -46,6 +58,7 @@ export async function startTestServer(options: Partial<Omit<StartOptions, "env">
   const running = await start({
     env,
     pgliteDir: options.pgliteDir ?? "memory://",
+    pgliteLoad: options.pgliteDir === undefined && !pgDb ? templateBlob() : undefined,
     rateLimits: options.rateLimits ?? { auth: { windowMs: 60_000, limit: 10_000 }, reads: { windowMs: 60_000, limit: 100_000 } },
     frontend: options.frontend,
     logDestination: options.logDestination,

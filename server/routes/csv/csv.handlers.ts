@@ -2,6 +2,7 @@ import type { RequestHandler } from "express";
 import { and, asc, eq, gte, lte, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { isoDateSchema } from "../../../shared/schemas/common";
+import { plainText } from "../../../shared/schemas/text";
 import {
   BREAK_TYPES,
   csvExportQuerySchema,
@@ -84,6 +85,7 @@ const SIDE_WORDS: Record<string, "left" | "right"> = { left: "left", l: "left", 
 const FIELD_OF: Record<string, keyof CsvMapping> = { distanceM: "distance", holed: "holed", missSide: "missSide", missLengthM: "missLength", breakType: "breakType" };
 
 const csvPuttSchema = puttFieldsSchema.superRefine(holedHasNoMiss);
+const greenNameSchema = plainText(80);
 type CsvPutt = z.infer<typeof csvPuttSchema> & { date: string; group: string; greenName: string | null };
 
 function parseNumber(cell: string): number | null {
@@ -111,6 +113,8 @@ function convertRow(cells: string[], col: Record<string, number>, m: CsvMapping)
   const breakWord = cell("breakType").toLowerCase().replace(/[\s_]+/g, "-");
   const breakType = breakWord === "" ? null : (BREAK_TYPES as readonly string[]).includes(breakWord) ? (breakWord as (typeof BREAK_TYPES)[number]) : undefined;
   if (breakType === undefined) errors.push({ field: "breakType", message: `"${cell("breakType")}" is not one of ${BREAK_TYPES.join(", ")}` });
+  const greenCheck = greenNameSchema.safeParse(cell("green"));
+  if (!greenCheck.success) errors.push({ field: "green", message: greenCheck.error.issues[0]?.message ?? "not a green name" });
   if (errors.length > 0) return { errors };
 
   const shortUnit = m.missLengthUnit ?? m.distanceUnit;
@@ -208,12 +212,16 @@ export function importCsv(db: Db): RequestHandler {
       let greensCreated = 0;
       for (const name of new Set(good.map((p) => p.greenName).filter((n): n is string => n !== null))) {
         if (greenIds.has(name.toLowerCase())) continue;
-        const [g] = await tx.insert(greens).values({ ownerId: me.id, name: name.slice(0, 80) }).returning({ id: greens.id });
+        const [g] = await tx.insert(greens).values({ ownerId: me.id, name }).returning({ id: greens.id });
         greenIds.set(name.toLowerCase(), g!.id);
         greensCreated += 1;
       }
       const groups = new Map<string, CsvPutt[]>();
-      for (const p of good) groups.set(p.group, [...(groups.get(p.group) ?? []), p]);
+      for (const p of good) {
+        const group = groups.get(p.group);
+        if (group) group.push(p);
+        else groups.set(p.group, [p]);
+      }
       const rows: (typeof putts.$inferInsert)[] = [];
       const base = Date.now();
       for (const group of groups.values()) {
