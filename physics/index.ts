@@ -44,3 +44,53 @@ export {
   type PaceSweepInput,
 } from "./break-chart";
 export { rollRhs, STATE } from "./roll";
+export {
+  newPlanarRollOut,
+  planarRollField,
+  rollClosedForm,
+  rollPlanarInto,
+  type PlanarRoll,
+  type PlanarRollField,
+  type PlanarRollOut,
+} from "./planar-roll";
+export { standardNormals, type UniformRandom } from "./normal-deviates";
+export {
+  DEFAULT_BEST_PACE_GRID_M,
+  MAX_MONTE_CARLO_SAMPLES,
+  bestPace,
+  makeProbability,
+  simulatePuttOutcomes,
+  type BestPace,
+  type BestPaceInput,
+  type BestPaceResult,
+  type MakeProbability,
+  type MakeProbabilityInput,
+  type MakeProbabilityResult,
+  type MissSummary,
+  type PaceOutcome,
+  type PaceRead,
+  type PuttDispersion,
+  type SimulatedPutt,
+} from "./make-probability";
+export {
+  CLUB_GOLFER_PRIOR,
+  estimateDispersion,
+  type DispersionEstimate,
+  type DispersionPrior,
+  type EstimateOptions,
+  type Interval,
+  type LoggedPutt,
+} from "./dispersion";
+export { surfaceFromGrid, type HeightGrid, type HeightSurface } from "./height-surface";
+export {
+  simulateRollOnSurface,
+  solveReadOnSurface,
+  type NoSurfaceRead,
+  type SurfaceNoRest,
+  type SurfaceRead,
+  type SurfaceReadInput,
+  type SurfaceReadResult,
+  type SurfaceRoll,
+  type SurfaceRollInput,
+  type SurfaceRollResult,
+} from "./surface-roll";

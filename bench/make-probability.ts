@@ -1,0 +1,101 @@
+// Make-probability benchmark: median time of 10 000 simulated putts (closed-form rolls) for several reads, of
+// "your best pace" (30 paces scanned), and of the dispersion estimate from a 600-putt log; the reference in the
+// same run is odex (simulateRoll) per roll, scaled to 10 000 rolls. Run alone: npx tsx bench/make-probability.ts
+import { pathToFileURL } from "node:url";
+import { bestPace, estimateDispersion, makeProbability, simulatePuttOutcomes, simulateRoll, type LoggedPutt } from "../physics/index";
+import { seededUniform } from "../shared/seeded-random";
+
+export interface MakeProbabilityBenchFigures {
+  cases: { name: string; medianMs: number; makeProbability: number; odexPerRollMs: number; ratio: number }[];
+  samples: number;
+  medianMs: number;
+  bestPaceMedianMs: number;
+  estimateMedianMs: number;
+  estimatePutts: number;
+  goals: { samplesMs: number };
+}
+
+const CASES = [
+  { name: "3 m, 2 %, 90°, Stimp 10", distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
+  { name: "6 m, 3 %, 135°, Stimp 11", distanceM: 6, slopePct: 3, fallLineDeg: 135, stimpFt: 11 },
+  { name: "1.5 m, 1 %, 270°, Stimp 12", distanceM: 1.5, slopePct: 1, fallLineDeg: 270, stimpFt: 12 },
+  { name: "10 m, 2.5 %, 60°, Stimp 9", distanceM: 10, slopePct: 2.5, fallLineDeg: 60, stimpFt: 9 },
+  { name: "4 m, flat, Stimp 10", distanceM: 4, slopePct: 0, fallLineDeg: 0, stimpFt: 10 },
+];
+const DISPERSION = { angleDeg: 1.2, pace: 0.12 };
+const SAMPLES = 10_000;
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m]! : 0.5 * (s[m - 1]! + s[m]!);
+}
+
+function timeMs(fn: () => void, runs: number, warmup: number): number {
+  for (let i = 0; i < warmup; i++) fn();
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t0 = performance.now();
+    fn();
+    times.push(performance.now() - t0);
+  }
+  return median(times);
+}
+
+/** Run the benchmark and return its figures (times are medians, ms). */
+export function runMakeProbabilityBench(options: { runs?: number; odexRolls?: number } = {}): MakeProbabilityBenchFigures {
+  const runs = options.runs ?? 15;
+  const odexRolls = options.odexRolls ?? 200;
+  const cases = CASES.map(({ name, ...read }) => {
+    const input = { ...read, dispersion: DISPERSION, samples: SAMPLES };
+    const r = makeProbability({ ...input, random: seededUniform(1) });
+    if (!r.ok) throw new Error(`bench case ${name} cannot stop`);
+    const medianMs = timeMs(() => makeProbability({ ...input, random: seededUniform(1) }), runs, 3);
+    const { launchSpeedMps, startLineDeg } = r.result.read;
+    const odexMs = timeMs(
+      () => {
+        for (let i = 0; i < odexRolls; i++) simulateRoll({ ...read, launchSpeedMps: launchSpeedMps * (1 + 0.001 * i), startLineDeg });
+      },
+      3,
+      1,
+    );
+    const odexPerRollMs = odexMs / odexRolls;
+    return { name, medianMs, makeProbability: r.result.makeProbability, odexPerRollMs, ratio: (odexPerRollMs * SAMPLES) / medianMs };
+  });
+  const { name: _n, ...first } = CASES[0]!;
+  const bestPaceMedianMs = timeMs(() => bestPace({ ...first, dispersion: DISPERSION, samples: SAMPLES, random: seededUniform(1) }), 5, 1);
+  const log: LoggedPutt[] = [];
+  const random = seededUniform(2);
+  for (const distanceM of [1, 1.5, 2, 3, 4, 6, 8, 10]) {
+    const r = simulatePuttOutcomes({ distanceM, slopePct: 0, fallLineDeg: 0, stimpFt: 10, dispersion: DISPERSION, samples: 75, random });
+    if (r.ok) for (const p of r.putts) log.push({ distanceM, holed: p.holed, missSide: p.missSide, missLengthM: p.missLengthM });
+  }
+  const estimateMedianMs = timeMs(() => estimateDispersion(log), 7, 1);
+  return {
+    cases,
+    samples: SAMPLES,
+    medianMs: median(cases.map((c) => c.medianMs)),
+    bestPaceMedianMs,
+    estimateMedianMs,
+    estimatePutts: log.length,
+    goals: { samplesMs: 250 },
+  };
+}
+
+/** Print the figures as a table. */
+export function printMakeProbabilityBench(f: MakeProbabilityBenchFigures): void {
+  const pad = (s: string, n: number) => s.padEnd(n);
+  const num = (x: number, d = 3) => x.toFixed(d).padStart(10);
+  console.log(pad("case", 30) + `  ${f.samples} putts ms   P(make)  odex ms/roll   ratio`);
+  for (const c of f.cases) {
+    console.log(pad(c.name, 30) + num(c.medianMs, 1).padStart(17) + num(c.makeProbability, 3) + num(c.odexPerRollMs, 3).padStart(14) + num(c.ratio, 0).padStart(8));
+  }
+  const ok = (b: boolean) => (b ? "met" : "NOT met");
+  console.log(`\n${f.samples} simulated putts (median of cases): ${f.medianMs.toFixed(1)} ms  goal ≤ ${f.goals.samplesMs} ms: ${ok(f.medianMs <= f.goals.samplesMs)}`);
+  console.log(`best pace (30 paces × 4000 + 2 × ${f.samples} putts): ${f.bestPaceMedianMs.toFixed(1)} ms`);
+  console.log(`dispersion estimate from ${f.estimatePutts} logged putts: ${f.estimateMedianMs.toFixed(1)} ms`);
+}
+
+if (process.argv[1] !== undefined && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  printMakeProbabilityBench(runMakeProbabilityBench());
+}

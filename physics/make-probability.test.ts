@@ -1,0 +1,141 @@
+import { describe, expect, test } from "vitest";
+import fc from "fast-check";
+import jStat from "jstat";
+import { seededUniform } from "../shared/seeded-random";
+import { bestPace, makeProbability, maxCaptureSpeedMps, HOLE_RADIUS_M, type MakeProbabilityInput } from "./index";
+
+const sideHill = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 };
+const club = { angleDeg: 1.2, pace: 0.12 };
+const run = (over: Partial<MakeProbabilityInput> = {}, seed = 7) => {
+  const r = makeProbability({ ...sideHill, dispersion: club, samples: 4000, random: seededUniform(seed), ...over });
+  if (!r.ok) throw new Error("must stop");
+  return r.result;
+};
+/** Uniform on [min, max] in 10⁶ steps (fc.double is log-biased toward tiny values). */
+const uniform = (min: number, max: number) => fc.integer({ min: 0, max: 1_000_000 }).map((k) => min + ((max - min) * k) / 1_000_000);
+
+test("with no dispersion a holed read is made every time (derived)", () => {
+  const r = run({ dispersion: { angleDeg: 0, pace: 0 }, samples: 500 });
+  expect(r.makeProbability).toBe(1);
+  expect(r.secondPuttOverProbability).toBe(0);
+  expect(r.finishHoled.every(Boolean)).toBe(true);
+});
+
+test("with no dispersion a read too firm to drop is never made (Holmes 1991: v_c(0) ≈ 1.636 m/s)", () => {
+  // 3 m past on a side hill at Stimp 10 enters at √(2·a_r·3) ≈ 1.81 m/s (derived) > 1.636: a lip-out every time.
+  const r = run({ dispersion: { angleDeg: 0, pace: 0 }, samples: 500, pace: { rollPastM: 3 } });
+  expect(r.makeProbability).toBe(0);
+  expect(r.misses.lipOutProbability).toBe(1);
+  expect(r.secondPuttOverProbability).toBe(1);
+});
+
+test("make probability falls as the start-line dispersion grows, and as the pace dispersion grows (same seed)", () => {
+  const byAngle = [0.25, 0.5, 1, 2, 4].map((angleDeg) => run({ dispersion: { angleDeg, pace: 0.08 } }).makeProbability);
+  for (let i = 1; i < byAngle.length; i++) expect(byAngle[i]!).toBeLessThan(byAngle[i - 1]!);
+  const byPace = [0.02, 0.1, 0.2, 0.4].map((pace) => run({ dispersion: { angleDeg: 0.3, pace }, pace: { rollPastM: 0.3 } }).makeProbability);
+  for (let i = 1; i < byPace.length; i++) expect(byPace[i]!).toBeLessThan(byPace[i - 1]!);
+});
+
+test("flat straight putt with start-line error only matches the closed form 2Φ(asin(b_c/D)/σ) − 1 (derived, Holmes 1991)", () => {
+  // Entry speed v_e from the roll-past on a flat green; holed iff |D·sin δ| < b_c = √(r_h² − (v_e·t_R/2)²), since
+  // v_c(b) = 2√(r_h² − b²)/t_R. The Monte Carlo must agree within 4 standard errors.
+  const D = 4;
+  const stimpFt = 10;
+  const rollPastM = 0.4;
+  const ar = 1.8288 ** 2 / (2 * stimpFt * 0.3048);
+  const ve = Math.sqrt(2 * ar * rollPastM);
+  const tR = (2 * HOLE_RADIUS_M) / maxCaptureSpeedMps(0); // v_c(0) = 2·r_h/t_R
+  const bc = Math.sqrt(HOLE_RADIUS_M ** 2 - ((ve * tR) / 2) ** 2);
+  const sigmaDeg = 1;
+  const exact = 2 * jStat.normal.cdf((Math.asin(bc / D) * 180) / Math.PI / sigmaDeg, 0, 1) - 1;
+  const r = makeProbability({
+    distanceM: D,
+    slopePct: 0,
+    fallLineDeg: 0,
+    stimpFt,
+    pace: { rollPastM },
+    dispersion: { angleDeg: sigmaDeg, pace: 0 },
+    samples: 20000,
+    random: seededUniform(3),
+  });
+  if (!r.ok) throw new Error("must stop");
+  expect(Math.abs(r.result.makeProbability - exact)).toBeLessThan(4 * r.result.makeProbabilityStandardError);
+});
+
+test("same seed, same result; another seed, another sample", () => {
+  expect(run({}, 11)).toEqual(run({}, 11));
+  expect(run({}, 11).finishes).not.toEqual(run({}, 12).finishes);
+});
+
+test("finishes are the first 100 rest points, holed balls at the hole, and the miss summary adds up", () => {
+  const r = run();
+  expect(r.finishes).toHaveLength(100);
+  r.finishes.forEach((p, i) => {
+    if (r.finishHoled[i]) expect(p).toEqual([0, 3]);
+  });
+  const m = r.misses;
+  expect(m.missProbability).toBeCloseTo(1 - r.makeProbability, 12);
+  expect(m.shortProbability + m.longProbability).toBeCloseTo(m.missProbability, 12);
+  expect(m.leftProbability + m.rightProbability).toBeCloseTo(m.missProbability, 12);
+  expect(m.medianLeaveM).toBeLessThanOrEqual(m.p90LeaveM);
+});
+
+describe("a wider hole never lowers the make probability (common random numbers: the same seed)", () => {
+  test("property over reads, dispersions and radii", () => {
+    fc.assert(
+      fc.property(
+        fc.record({
+          distanceM: uniform(0.5, 10),
+          slopePct: uniform(0, 4),
+          fallLineDeg: uniform(0, 360),
+          stimpFt: uniform(8, 13),
+          rollPastM: uniform(0, 1.5),
+          angleDeg: uniform(0, 3),
+          pace: uniform(0, 0.3),
+          r1: uniform(0.03, 0.08),
+          grow: uniform(0, 0.04),
+          seed: fc.integer({ min: 0, max: 1e6 }),
+        }),
+        ({ rollPastM, angleDeg, pace, r1, grow, seed, ...green }) => {
+          const at = (holeRadiusM: number) =>
+            makeProbability({ ...green, pace: { rollPastM }, dispersion: { angleDeg, pace }, samples: 300, random: seededUniform(seed), holeRadiusM });
+          const a = at(r1);
+          const b = at(r1 + grow);
+          if (!a.ok || !b.ok) return a.ok === b.ok;
+          return b.result.makeProbability >= a.result.makeProbability;
+        },
+      ),
+      { numRuns: 40, seed: 99 },
+    );
+  });
+});
+
+test("best pace: the most makes among the paces tried whose second-putt risk is within the limit", () => {
+  const grid = [0.1, 0.2, 0.3, 0.45, 0.6, 0.8, 1.0];
+  const r = bestPace({ ...sideHill, dispersion: club, samples: 3000, scanSamples: 3000, random: seededUniform(5), rollPastGridM: grid, secondPuttRiskMax: 0.1 });
+  if (!r.ok) throw new Error("must stop");
+  const { best, curve, requested } = r.result;
+  expect(curve.map((c) => c.rollPastM)).toEqual(grid);
+  const feasible = curve.filter((c) => c.secondPuttOverProbability <= 0.1);
+  expect(feasible.length).toBeGreaterThan(0);
+  expect(best.meetsRiskLimit).toBe(true);
+  expect(best.makeProbability).toBe(Math.max(...feasible.map((c) => c.makeProbability)));
+  // The requested 0.45 m is on the grid and scanned with the same deviates.
+  if (requested.secondPuttOverProbability <= 0.1) expect(best.makeProbability).toBeGreaterThanOrEqual(requested.makeProbability);
+  // Its read is the solved read at that pace.
+  expect(best.read.launchSpeedMps).toBeGreaterThan(0);
+  expect(best.read.startLineDeg).toBeLessThan(0);
+});
+
+test("best pace with an impossible risk limit returns the safest pace, flagged", () => {
+  const r = bestPace({ ...sideHill, distanceM: 12, dispersion: { angleDeg: 2, pace: 0.2 }, samples: 1000, random: seededUniform(5), secondPuttRiskMax: 0 });
+  if (!r.ok) throw new Error("must stop");
+  expect(r.result.best.meetsRiskLimit).toBe(false);
+  const minRisk = Math.min(...r.result.curve.map((c) => c.secondPuttOverProbability));
+  expect(r.result.best.rollPastM).toBe(r.result.curve.find((c) => c.secondPuttOverProbability === minRisk)!.rollPastM);
+});
+
+test("make probability on a cannot-stop green is the cannot-stop value", () => {
+  const r = makeProbability({ ...sideHill, slopePct: 8, dispersion: club, samples: 10, random: seededUniform(1) });
+  expect(r.ok).toBe(false);
+});

@@ -1,0 +1,353 @@
+// A player's make probability for a read (Monte Carlo over their start-line and pace dispersion), and the pace
+// that makes the most putts while keeping long second putts rare: "your best pace".
+import { maxCaptureSpeedMps } from "./capture";
+import { HOLE_RADIUS_M } from "./constants";
+import { standardNormals, type UniformRandom } from "./normal-deviates";
+import { newPlanarRollOut, planarRollField, rollPlanarInto, type PlanarRollField } from "./planar-roll";
+import { describeModel, resolveGreen, stopsInPractice } from "./roll-model";
+import { cannotStop, validateReadInput, type CannotStop, type ReadInput } from "./read-types";
+import { solveRead } from "./solve-read";
+
+/**
+ * A player's dispersion, one standard deviation each:
+ * - `angleDeg`: start-line error, degrees (the ball starts on the read's line + N(0, σ²)).
+ * - `pace`: the natural log of (actual ÷ intended) total roll length, i.e. the length of the whole roll with the hole
+ *   covered, from the ball to where it would stop. 0.10 ≈ "rolls 10 % longer or shorter than meant, one σ". On a
+ *   planar green the path scales with the launch speed squared (homogeneity), so this is v = v_read·exp(ε/2),
+ *   ε ~ N(0, σ²); a log scale keeps lengths positive. A fraction of the whole roll rather than of the roll-past, so
+ *   that a long lag is looser than a short putt, as distance control is (common practice).
+ * @example const club: PuttDispersion = { angleDeg: 1.2, pace: 0.12 };
+ */
+export interface PuttDispersion {
+  readonly angleDeg: number;
+  readonly pace: number;
+}
+
+/** Inputs of {@link makeProbability}: a read (distance, green, pace), the dispersion and the sampling. */
+export interface MakeProbabilityInput extends ReadInput {
+  readonly dispersion: PuttDispersion;
+  /** Number of simulated putts (1 … 200 000). */
+  readonly samples: number;
+  /** Seeded uniform generator on [0, 1); the same seed gives the same result. */
+  readonly random: UniformRandom;
+  /** Hole radius for the capture test, m (default 54 mm, Rules of Golf); a test parameter. */
+  readonly holeRadiusM?: number;
+  /** A second putt "longer than" this counts as a risk, m (default 1 m). */
+  readonly secondPuttM?: number;
+  /** How many rest points to return, from the first samples (default 100). */
+  readonly finishesKept?: number;
+}
+
+/** The nominal read at one pace: start line (°, + = right), aim offset (m) and launch and entry speeds (m/s). */
+export interface PaceRead {
+  readonly aimOffsetM: number;
+  readonly startLineDeg: number;
+  readonly launchSpeedMps: number;
+  readonly entrySpeedMps: number;
+}
+
+/** Outcome of the simulated putts at one pace. Probabilities in [0, 1]; their Monte Carlo standard errors beside. */
+export interface PaceOutcome {
+  readonly rollPastM: number;
+  readonly makeProbability: number;
+  readonly makeProbabilityStandardError: number;
+  /** Probability of a miss that leaves the ball more than `secondPuttM` from the hole centre. */
+  readonly secondPuttOverProbability: number;
+  readonly read: PaceRead;
+}
+
+/** Where the misses finished: fractions of all samples, and distances (m) from the hole centre. */
+export interface MissSummary {
+  readonly missProbability: number;
+  /** Misses that stopped short of the hole (rest point before the hole along the ball→hole line). */
+  readonly shortProbability: number;
+  readonly longProbability: number;
+  /** Misses finishing left / right of the hole, seen by the golfer. */
+  readonly leftProbability: number;
+  readonly rightProbability: number;
+  /** Lip-outs: over the hole, too fast to drop (Holmes's criterion). */
+  readonly lipOutProbability: number;
+  readonly meanLeaveM: number;
+  readonly medianLeaveM: number;
+  readonly p90LeaveM: number;
+}
+
+/** Result of {@link makeProbability}. `finishes` are rest points [x, y] (m, putt frame; a holed ball at the hole). */
+export interface MakeProbability extends PaceOutcome {
+  readonly finishes: [number, number][];
+  readonly finishHoled: boolean[];
+  readonly misses: MissSummary;
+  readonly samples: number;
+  readonly dispersion: PuttDispersion;
+  readonly holeRadiusM: number;
+  readonly secondPuttM: number;
+}
+
+/** `{ ok: true, result }` or the cannot-stop value of the green. */
+export type MakeProbabilityResult = { readonly ok: true; readonly result: MakeProbability } | CannotStop;
+
+/** Hard cap on samples per call (the API allows 20 000); a product limit, not physics. @example MAX_MONTE_CARLO_SAMPLES // 200000 */
+export const MAX_MONTE_CARLO_SAMPLES = 200_000;
+
+/**
+ * Make probability of a read for a player with the given dispersion, by Monte Carlo: each simulated putt starts on
+ * the read's start line + N(0, σ_angle²) with launch speed v·exp(ε/2), ε ~ N(0, σ_pace²) (see {@link PuttDispersion}),
+ * rolls to rest on the planar green in closed form ({@link rollPlanarInto}; the same model as simulateRoll) and is
+ * holed by Holmes's capture criterion at its closest pass (Am. J. Phys. 59(2), 1991; the ball stopping within a
+ * hole radius of the centre counts as holed, as in simulateRoll). Deviates come from Box–Muller on the caller's
+ * seeded generator, two per sample, in order (common random numbers across calls with the same seed).
+ * @example makeProbability({ distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, dispersion: { angleDeg: 1.2, pace: 0.12 }, samples: 10000, random })
+ */
+export function makeProbability(input: MakeProbabilityInput): MakeProbabilityResult {
+  const setup = prepare(input);
+  if (!setup.ok) return setup;
+  const normals = standardNormals(input.random, 2 * input.samples);
+  const read = solvedRead(input);
+  if (!read.ok) return read;
+  const tally = simulatePace(setup.sim, read.read, read.rollPastM, normals, input.samples, setup.keep);
+  return { ok: true, result: describe(setup.sim, tally, input.samples, input.dispersion) };
+}
+
+/** Inputs of {@link bestPace}: those of makeProbability plus the second-putt risk limit and the paces to try. */
+export interface BestPaceInput extends MakeProbabilityInput {
+  /** Largest acceptable probability of a second putt longer than `secondPuttM` (default 0.10). */
+  readonly secondPuttRiskMax?: number;
+  /** Roll-past values to try, m (default 0.05 … 1.50 in 0.05 m steps). */
+  readonly rollPastGridM?: readonly number[];
+  /** Samples per pace while scanning (default min(samples, 4000)); the two reported paces use all `samples`. */
+  readonly scanSamples?: number;
+}
+
+/** Result of {@link bestPace}. `curve` is the scan (for a chart); `requested` is the input's own pace. */
+export interface BestPace {
+  readonly best: PaceOutcome & { readonly meetsRiskLimit: boolean };
+  readonly requested: MakeProbability;
+  readonly curve: PaceOutcome[];
+  readonly secondPuttRiskMax: number;
+}
+
+/** `{ ok: true, result }` or the cannot-stop value. */
+export type BestPaceResult = { readonly ok: true; readonly result: BestPace } | CannotStop;
+
+/** Default paces scanned by {@link bestPace}: 0.05 … 1.50 m past in 5 cm steps (m). @example DEFAULT_BEST_PACE_GRID_M[0] // 0.05 */
+export const DEFAULT_BEST_PACE_GRID_M: readonly number[] = Object.freeze(Array.from({ length: 30 }, (_, i) => Math.round((i + 1) * 5) / 100));
+
+/**
+ * "Your best pace": the roll-past (from `rollPastGridM`) whose read holes the most simulated putts while the chance
+ * of leaving a second putt longer than `secondPuttM` stays at or under `secondPuttRiskMax` (default 10 %). Every
+ * pace is simulated with the same deviates (common random numbers), so the comparison is not blurred by sampling
+ * noise between paces; the scan uses `scanSamples`, the winner and the requested pace are re-run with all samples.
+ * When no pace meets the limit, the one with the lowest risk is returned with `meetsRiskLimit: false`.
+ * @example bestPace({ ...input, secondPuttRiskMax: 0.1 }).result.best.rollPastM // e.g. 0.35
+ */
+export function bestPace(input: BestPaceInput): BestPaceResult {
+  const setup = prepare(input);
+  if (!setup.ok) return setup;
+  const riskMax = input.secondPuttRiskMax ?? 0.1;
+  if (!(riskMax >= 0 && riskMax <= 1)) throw new RangeError(`secondPuttRiskMax must be in [0, 1] (got ${riskMax})`);
+  const grid = input.rollPastGridM ?? DEFAULT_BEST_PACE_GRID_M;
+  if (grid.length === 0 || grid.some((p) => !(p >= 0) || !Number.isFinite(p))) throw new RangeError("rollPastGridM must be finite values ≥ 0");
+  const scanSamples = Math.min(input.samples, input.scanSamples ?? 4000);
+  const normals = standardNormals(input.random, 2 * input.samples);
+  const requestedRead = solvedRead(input);
+  if (!requestedRead.ok) return requestedRead;
+  const requested = describe(setup.sim, simulatePace(setup.sim, requestedRead.read, requestedRead.rollPastM, normals, input.samples, setup.keep), input.samples, input.dispersion);
+
+  const curve: { outcome: PaceOutcome; read: SimRead }[] = [];
+  for (const rollPastM of grid) {
+    const r = solvedRead({ ...input, pace: { rollPastM } });
+    if (!r.ok) return r;
+    curve.push({ outcome: outcomeOf(simulatePace(setup.sim, r.read, rollPastM, normals, scanSamples, 0), scanSamples), read: r.read });
+  }
+  const feasible = curve.filter((c) => c.outcome.secondPuttOverProbability <= riskMax);
+  const pick =
+    feasible.length > 0
+      ? feasible.reduce((a, b) => (b.outcome.makeProbability > a.outcome.makeProbability ? b : a))
+      : curve.reduce((a, b) => (b.outcome.secondPuttOverProbability < a.outcome.secondPuttOverProbability ? b : a));
+  const full = outcomeOf(simulatePace(setup.sim, pick.read, pick.outcome.rollPastM, normals, input.samples, 0), input.samples);
+  return {
+    ok: true,
+    result: {
+      best: { ...full, meetsRiskLimit: full.secondPuttOverProbability <= riskMax },
+      requested,
+      curve: curve.map((c) => c.outcome),
+      secondPuttRiskMax: riskMax,
+    },
+  };
+}
+
+interface Sim {
+  readonly field: PlanarRollField;
+  readonly distanceM: number;
+  readonly dispersion: PuttDispersion;
+  readonly holeRadiusM: number;
+  readonly secondPuttM: number;
+}
+
+interface SimRead extends PaceRead {
+  readonly startLineRad: number;
+}
+
+function prepare(input: MakeProbabilityInput): ({ ok: true; field: PlanarRollField; sim: Sim; keep: number }) | CannotStop {
+  validateReadInput(input);
+  const { angleDeg, pace } = input.dispersion;
+  if (!(angleDeg >= 0) || !Number.isFinite(angleDeg)) throw new RangeError(`dispersion.angleDeg must be finite and ≥ 0 (got ${angleDeg})`);
+  if (!(pace >= 0) || !Number.isFinite(pace)) throw new RangeError(`dispersion.pace must be finite and ≥ 0 (got ${pace})`);
+  if (!Number.isInteger(input.samples) || input.samples < 1 || input.samples > MAX_MONTE_CARLO_SAMPLES) {
+    throw new RangeError(`samples must be an integer in 1…${MAX_MONTE_CARLO_SAMPLES} (got ${input.samples})`);
+  }
+  const holeRadiusM = input.holeRadiusM ?? HOLE_RADIUS_M;
+  if (!(holeRadiusM > 0) || !Number.isFinite(holeRadiusM)) throw new RangeError(`holeRadiusM must be > 0 (got ${holeRadiusM})`);
+  const secondPuttM = input.secondPuttM ?? 1;
+  if (!(secondPuttM >= 0) || !Number.isFinite(secondPuttM)) throw new RangeError(`secondPuttM must be ≥ 0 (got ${secondPuttM})`);
+  const green = resolveGreen(input);
+  if (!stopsInPractice(green)) return cannotStop(describeModel(green));
+  if (green.model.resistanceSpeedFactor !== null) throw new RangeError("makeProbability needs the constant-resistance model (closed-form rolls)");
+  const field = planarRollField(green);
+  const keep = Math.min(input.samples, Math.max(0, Math.floor(input.finishesKept ?? 100)));
+  return { ok: true, field, keep, sim: { field, distanceM: input.distanceM, dispersion: input.dispersion, holeRadiusM, secondPuttM } };
+}
+
+function solvedRead(input: ReadInput): ({ ok: true; read: SimRead; rollPastM: number }) | CannotStop {
+  const r = solveRead(input);
+  if (!r.ok) return r;
+  const { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps, rollPastM } = r.read;
+  return { ok: true, rollPastM, read: { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps, startLineRad: (startLineDeg * Math.PI) / 180 } };
+}
+
+interface Tally {
+  readonly rollPastM: number;
+  readonly read: SimRead;
+  holed: number;
+  lipOut: number;
+  over: number;
+  short: number;
+  left: number;
+  right: number;
+  leaves: Float64Array;
+  misses: number;
+  finishes: [number, number][];
+  finishHoled: boolean[];
+}
+
+function simulatePace(sim: Sim, read: SimRead, rollPastM: number, normals: Float64Array, samples: number, keep: number): Tally {
+  const { field, distanceM: D, holeRadiusM: rh, secondPuttM } = sim;
+  const sigmaA = (sim.dispersion.angleDeg * Math.PI) / 180;
+  const halfSigmaP = sim.dispersion.pace / 2;
+  const out = newPlanarRollOut();
+  const t: Tally = {
+    rollPastM,
+    read,
+    holed: 0,
+    lipOut: 0,
+    over: 0,
+    short: 0,
+    left: 0,
+    right: 0,
+    leaves: new Float64Array(samples),
+    misses: 0,
+    finishes: [],
+    finishHoled: [],
+  };
+  for (let i = 0; i < samples; i++) {
+    const line = read.startLineRad + sigmaA * normals[2 * i]!;
+    const speed = read.launchSpeedMps * Math.exp(halfSigmaP * normals[2 * i + 1]!);
+    rollPlanarInto(field, speed, line, 0, D, out, rh);
+    const b = out.passDistanceM;
+    const holed = b < rh && out.passSpeedMps < maxCaptureSpeedMps(b, rh);
+    if (i < keep) {
+      t.finishes.push(holed ? [0, D] : [out.restX, out.restY]);
+      t.finishHoled.push(holed);
+    }
+    if (holed) {
+      t.holed++;
+      continue;
+    }
+    if (b < rh) t.lipOut++;
+    const leave = Math.sqrt(out.restX * out.restX + (out.restY - D) * (out.restY - D));
+    t.leaves[t.misses++] = leave;
+    if (leave > secondPuttM) t.over++;
+    if (out.restY < D) t.short++;
+    if (out.restX < 0) t.left++;
+    else t.right++;
+  }
+  return t;
+}
+
+function outcomeOf(t: Tally, samples: number): PaceOutcome {
+  const p = t.holed / samples;
+  const { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps } = t.read;
+  return {
+    rollPastM: t.rollPastM,
+    makeProbability: p,
+    makeProbabilityStandardError: Math.sqrt((p * (1 - p)) / samples),
+    secondPuttOverProbability: t.over / samples,
+    read: { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps },
+  };
+}
+
+function describe(sim: Sim, t: Tally, samples: number, dispersion: PuttDispersion): MakeProbability {
+  const leaves = t.leaves.subarray(0, t.misses).slice().sort();
+  const quantile = (q: number) => (leaves.length === 0 ? 0 : leaves[Math.min(leaves.length - 1, Math.floor(q * leaves.length))]!);
+  let sum = 0;
+  for (const x of leaves) sum += x;
+  return {
+    ...outcomeOf(t, samples),
+    finishes: t.finishes,
+    finishHoled: t.finishHoled,
+    misses: {
+      missProbability: t.misses / samples,
+      shortProbability: t.short / samples,
+      longProbability: (t.misses - t.short) / samples,
+      leftProbability: t.left / samples,
+      rightProbability: t.right / samples,
+      lipOutProbability: t.lipOut / samples,
+      meanLeaveM: leaves.length === 0 ? 0 : sum / leaves.length,
+      medianLeaveM: quantile(0.5),
+      p90LeaveM: quantile(0.9),
+    },
+    samples,
+    dispersion,
+    holeRadiusM: sim.holeRadiusM,
+    secondPuttM: sim.secondPuttM,
+  };
+}
+
+/** One simulated putt as a practice log would record it (see {@link simulatePuttOutcomes}). */
+export interface SimulatedPutt {
+  readonly holed: boolean;
+  readonly restM: [number, number];
+  readonly missSide: "left" | "right" | null;
+  /** Signed along the ball→hole line: − short, + past (null when holed). */
+  readonly missLengthM: number | null;
+}
+
+/**
+ * The individual simulated putts of {@link makeProbability} (same deviates, same capture rule), recorded as a
+ * practice log records a putt: holed, or the side and signed length of the miss (rest point − hole along the line).
+ * For synthetic logs (tests of the dispersion estimator) and demonstrations.
+ * @example simulatePuttOutcomes({ ...read, dispersion, samples: 20, random }).putts[0] // { holed: false, missSide: "left", missLengthM: 0.31, … }
+ */
+export function simulatePuttOutcomes(input: MakeProbabilityInput): { readonly ok: true; readonly putts: SimulatedPutt[] } | CannotStop {
+  const setup = prepare(input);
+  if (!setup.ok) return setup;
+  const normals = standardNormals(input.random, 2 * input.samples);
+  const read = solvedRead(input);
+  if (!read.ok) return read;
+  const { field, distanceM: D, holeRadiusM: rh, dispersion } = setup.sim;
+  const sigmaA = (dispersion.angleDeg * Math.PI) / 180;
+  const out = newPlanarRollOut();
+  const putts: SimulatedPutt[] = [];
+  for (let i = 0; i < input.samples; i++) {
+    const line = read.read.startLineRad + sigmaA * normals[2 * i]!;
+    const speed = read.read.launchSpeedMps * Math.exp((dispersion.pace / 2) * normals[2 * i + 1]!);
+    rollPlanarInto(field, speed, line, 0, D, out, rh);
+    const holed = out.passDistanceM < rh && out.passSpeedMps < maxCaptureSpeedMps(out.passDistanceM, rh);
+    putts.push(
+      holed
+        ? { holed, restM: [0, D], missSide: null, missLengthM: null }
+        : { holed, restM: [out.restX, out.restY], missSide: out.restX < 0 ? "left" : "right", missLengthM: out.restY - D },
+    );
+  }
+  return { ok: true, putts };
+}

@@ -1,0 +1,140 @@
+import crypto from "node:crypto";
+import type { RequestHandler } from "express";
+import { and, desc, eq } from "drizzle-orm";
+import { bestPace, estimateDispersion, type DispersionEstimate, type PaceOutcome } from "../../../physics";
+import { seededUniform } from "../../../shared/seeded-random";
+import {
+  dispersionQuerySchema,
+  makeProbabilityRequestSchema,
+  type DispersionResponse,
+  type MakeProbabilityResponse,
+  type PaceResult,
+} from "../../../shared/schemas/make-probability";
+import type { Db } from "../../db/client";
+import { practiceSessions, putts, squadMembers, squads, user } from "../../db/schema";
+import { notFound, unprocessable } from "../../lib/http-error";
+import { currentUser, type SessionUser } from "../../middleware/session";
+import { body, query } from "../../middleware/validate";
+
+/** The most recent putts the estimate uses (older ones say less about the player's stroke today). */
+const MAX_PUTTS = 2000;
+
+/** The player whose dispersion is asked for: me, a player in one of my squads (coach), anyone (admin); else 404. */
+async function readablePlayer(db: Db, viewer: SessionUser, playerId: string | undefined): Promise<string> {
+  if (playerId === undefined || playerId === viewer.id) return viewer.id;
+  if (viewer.role === "admin") {
+    const [found] = await db.select({ id: user.id }).from(user).where(eq(user.id, playerId)).limit(1);
+    if (found) return playerId;
+  } else if (viewer.role === "coach") {
+    const [member] = await db
+      .select({ id: squadMembers.playerId })
+      .from(squadMembers)
+      .innerJoin(squads, eq(squads.id, squadMembers.squadId))
+      .where(and(eq(squads.coachId, viewer.id), eq(squadMembers.playerId, playerId)))
+      .limit(1);
+    if (member) return playerId;
+  }
+  throw notFound("That player");
+}
+
+async function dispersionOf(db: Db, playerId: string): Promise<DispersionEstimate> {
+  const rows = await db
+    .select({
+      distanceM: putts.distanceM,
+      holed: putts.holed,
+      missSide: putts.missSide,
+      missLengthM: putts.missLengthM,
+      stimpFt: practiceSessions.stimpFt,
+    })
+    .from(putts)
+    .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
+    .where(eq(putts.playerId, playerId))
+    .orderBy(desc(putts.createdAt))
+    .limit(MAX_PUTTS);
+  return estimateDispersion(
+    rows.map((r) => ({ ...r, missSide: r.missSide === "left" || r.missSide === "right" ? r.missSide : null })),
+  );
+}
+
+function toDispersionResponse(e: DispersionEstimate): DispersionResponse {
+  const p = e.prior;
+  const range = (median: number, logSd: number): [number, number] => [median * Math.exp(-1.96 * logSd), median * Math.exp(1.96 * logSd)];
+  return {
+    angleDeg: e.angleDeg,
+    pace: e.pace,
+    rollPastM: e.rollPastM,
+    putts: e.usedPutts,
+    prior: {
+      angleDeg: p.angleDeg.median,
+      pace: p.pace.median,
+      angleDegRange: range(p.angleDeg.median, p.angleDeg.logSd),
+      paceRange: range(p.pace.median, p.pace.logSd),
+      why: p.why,
+    },
+    priorWeight: e.priorWeight,
+    usedPrior: e.usedPrior,
+  };
+}
+
+export function getDispersion(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const { playerId } = query(req, dispersionQuerySchema);
+    const target = await readablePlayer(db, me, playerId);
+    res.json(toDispersionResponse(await dispersionOf(db, target)));
+  };
+}
+
+const paceResult = (o: PaceOutcome): PaceResult => ({
+  rollPastM: o.rollPastM,
+  makeProbability: o.makeProbability,
+  makeProbabilityStandardError: o.makeProbabilityStandardError,
+  secondPuttOver1mProbability: o.secondPuttOverProbability,
+  read: o.read,
+});
+
+export function postMakeProbability(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const input = body(req, makeProbabilityRequestSchema);
+    let dispersion: MakeProbabilityResponse["dispersion"];
+    if (input.dispersion) {
+      dispersion = { ...input.dispersion, source: "request", putts: null, usedPrior: null };
+    } else {
+      const e = await dispersionOf(db, me.id);
+      dispersion = { angleDeg: e.angleDeg.estimate, pace: e.pace.estimate, source: "my-putts", putts: e.usedPutts, usedPrior: e.usedPrior };
+    }
+    const seed = input.seed ?? crypto.randomInt(0, 2 ** 31 - 1);
+    const result = bestPace({
+      ...input.read,
+      dispersion: { angleDeg: dispersion.angleDeg, pace: dispersion.pace },
+      samples: input.samples,
+      random: seededUniform(seed),
+      secondPuttRiskMax: input.secondPuttRiskMax,
+      secondPuttM: 1,
+    });
+    if (!result.ok) {
+      throw unprocessable(result.message, {
+        "read.slopePct": `too steep to stop a ball at Stimp ${input.read.stimpFt} ft (steepest: ${result.model.maxStoppableSlopePct.toFixed(1)} %)`,
+      });
+    }
+    const { best, requested, curve, secondPuttRiskMax } = result.result;
+    const response: MakeProbabilityResponse = {
+      makeProbability: requested.makeProbability,
+      makeProbabilityStandardError: requested.makeProbabilityStandardError,
+      secondPuttOver1mProbability: requested.secondPuttOverProbability,
+      finishes: requested.finishes,
+      finishHoled: requested.finishHoled,
+      misses: requested.misses,
+      bestPace: { ...paceResult(best), meetsRiskLimit: best.meetsRiskLimit },
+      defaultPace: paceResult(requested),
+      paceCurve: curve.map((c) => ({ rollPastM: c.rollPastM, makeProbability: c.makeProbability, secondPuttOver1mProbability: c.secondPuttOverProbability })),
+      dispersion,
+      seed,
+      samples: input.samples,
+      secondPuttRiskMax,
+    };
+    res.json(response);
+  };
+}
+

@@ -1,0 +1,115 @@
+import { z } from "zod";
+import { readRequestSchema } from "./reads";
+
+/** Limits of the make-probability API. σ caps are far beyond any golfer (a 15° start-line σ misses a 1 m putt). */
+export const MAKE_PROBABILITY_LIMITS = {
+  samples: { min: 100, max: 20_000, default: 10_000 },
+  angleDeg: { min: 0, max: 15 },
+  pace: { min: 0, max: 1 },
+  seed: { min: 0, max: 2 ** 31 - 1 },
+  secondPuttRiskMax: { min: 0, max: 1, default: 0.1 },
+} as const;
+
+const bounded = (name: string, { min, max }: { min: number; max: number }, unit: string) =>
+  z
+    .number({ message: `${name} must be a number` })
+    .finite()
+    .min(min, `${name} must be at least ${min}${unit}`)
+    .max(max, `${name} must be at most ${max}${unit}`);
+
+/**
+ * A dispersion, one σ each: `angleDeg` the start line (degrees), `pace` the σ of ln(actual ÷ intended roll length)
+ * (0.10 ≈ the whole roll 10 % long or short).
+ */
+export const dispersionSchema = z
+  .object({
+    angleDeg: bounded("angleDeg", MAKE_PROBABILITY_LIMITS.angleDeg, "°"),
+    pace: bounded("pace", MAKE_PROBABILITY_LIMITS.pace, " (fraction of the roll length)"),
+  })
+  .strict();
+export type Dispersion = z.infer<typeof dispersionSchema>;
+
+export const makeProbabilityRequestSchema = z
+  .object({
+    read: readRequestSchema,
+    /** Default: the signed-in player's own, estimated from their logged putts. */
+    dispersion: dispersionSchema.optional(),
+    samples: z
+      .number({ message: "samples must be a whole number" })
+      .int("samples must be a whole number")
+      .min(MAKE_PROBABILITY_LIMITS.samples.min, `samples must be at least ${MAKE_PROBABILITY_LIMITS.samples.min}`)
+      .max(MAKE_PROBABILITY_LIMITS.samples.max, `samples must be at most ${MAKE_PROBABILITY_LIMITS.samples.max}`)
+      .default(MAKE_PROBABILITY_LIMITS.samples.default),
+    /** Default: a fresh seed, returned in the answer so the same result can be asked for again. */
+    seed: z
+      .number({ message: "seed must be a whole number" })
+      .int("seed must be a whole number")
+      .min(MAKE_PROBABILITY_LIMITS.seed.min, "seed must be ≥ 0")
+      .max(MAKE_PROBABILITY_LIMITS.seed.max, `seed must be at most ${MAKE_PROBABILITY_LIMITS.seed.max}`)
+      .optional(),
+    secondPuttRiskMax: bounded("secondPuttRiskMax", MAKE_PROBABILITY_LIMITS.secondPuttRiskMax, "").default(
+      MAKE_PROBABILITY_LIMITS.secondPuttRiskMax.default,
+    ),
+  })
+  .strict();
+export type MakeProbabilityRequest = z.infer<typeof makeProbabilityRequestSchema>;
+
+/** The read at one pace, and how it plays for this player. Probabilities in [0, 1]. */
+export type PaceResult = {
+  rollPastM: number;
+  makeProbability: number;
+  /** Monte Carlo standard error of makeProbability, √(p(1 − p)/samples). */
+  makeProbabilityStandardError: number;
+  /** A miss that leaves more than 1 m to the hole centre. */
+  secondPuttOver1mProbability: number;
+  read: { aimOffsetM: number; startLineDeg: number; launchSpeedMps: number; entrySpeedMps: number };
+};
+
+export type MakeProbabilityResponse = {
+  /** At the read's own pace (= defaultPace.makeProbability). */
+  makeProbability: number;
+  makeProbabilityStandardError: number;
+  secondPuttOver1mProbability: number;
+  /** Rest points [x, y] (m, putt frame: ball at 0,0, hole at 0,D) of the first 100 simulated putts; holed → the hole. */
+  finishes: [number, number][];
+  finishHoled: boolean[];
+  /** Where misses finished: fractions of all simulated putts, and distances (m) left to the hole centre. */
+  misses: {
+    missProbability: number;
+    shortProbability: number;
+    longProbability: number;
+    leftProbability: number;
+    rightProbability: number;
+    lipOutProbability: number;
+    meanLeaveM: number;
+    medianLeaveM: number;
+    p90LeaveM: number;
+  };
+  /** The most makes with P(second putt > 1 m) ≤ secondPuttRiskMax; if no pace meets it, the safest (meetsRiskLimit false). */
+  bestPace: PaceResult & { meetsRiskLimit: boolean };
+  defaultPace: PaceResult;
+  /** The scan behind bestPace (fewer samples per pace): for a chart of make and risk against roll-past. */
+  paceCurve: { rollPastM: number; makeProbability: number; secondPuttOver1mProbability: number }[];
+  dispersion: Dispersion & { source: "request" | "my-putts"; putts: number | null; usedPrior: boolean | null };
+  seed: number;
+  samples: number;
+  secondPuttRiskMax: number;
+};
+
+export const dispersionQuerySchema = z.object({ playerId: z.string().trim().min(1).max(64).optional() }).strict();
+
+export type Interval = { estimate: number; lo: number; hi: number };
+
+export type DispersionResponse = {
+  /** Start-line σ, degrees: posterior median and 95 % credible interval. */
+  angleDeg: Interval;
+  /** Pace σ: of ln(actual ÷ intended roll length). */
+  pace: Interval;
+  /** The habitual roll-past your misses imply, m. */
+  rollPastM: Interval;
+  putts: number;
+  prior: { angleDeg: number; pace: number; angleDegRange: [number, number]; paceRange: [number, number]; why: string };
+  /** Share of the information that is still the prior's, per σ (0 … 1). */
+  priorWeight: { angleDeg: number; pace: number };
+  usedPrior: boolean;
+};

@@ -1,0 +1,103 @@
+import { afterAll, beforeAll, expect, test } from "vitest";
+import { evaluateAttempt } from "../../shared/training";
+import { signedUpClient } from "../factories/users";
+import { HttpClient } from "../setup/http";
+import { startTestServer, type TestServer } from "../setup/server";
+
+let server: TestServer;
+let anon: HttpClient;
+beforeAll(async () => {
+  server = await startTestServer();
+  anon = new HttpClient(server.url);
+});
+afterAll(async () => {
+  await server?.stop();
+});
+
+const putt = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 };
+const attempt = { level: "club", putt, guess: { aimOffsetM: -0.15, playsLikeM: 3.5 } };
+
+test("POST /api/training/attempts scores the read on the server and keeps it", async () => {
+  const { client } = await signedUpClient(server);
+  const res = await client.post("/api/training/attempts", attempt);
+  expect(res.status).toBe(201);
+  const expected = evaluateAttempt(putt, attempt.guess);
+  if (!expected.ok) throw new Error("cannot stop");
+  expect(res.body).toMatchObject({ id: expect.any(String), level: "club", putt, guess: attempt.guess, score: expected.score });
+  expect(res.body.aimErrorM).toBeCloseTo(expected.aimErrorM, 9);
+  expect(res.body.paceErrorM).toBeCloseTo(expected.paceErrorM, 9);
+  // Falls to the right: the true line starts left of the hole, at the 0.45 m target pace.
+  expect(res.body.truth.aimOffsetM).toBeLessThan(0);
+  expect(res.body.truth.rollPastM).toBeCloseTo(0.45, 2);
+  expect(res.body.yours).toMatchObject({ holed: expect.any(Boolean), restM: [expect.any(Number), expect.any(Number)] });
+});
+
+test("POST /api/training/attempts: the true read scores 100", async () => {
+  const { client } = await signedUpClient(server);
+  const first = await client.post("/api/training/attempts", attempt);
+  const { aimOffsetM, playsLikeM } = first.body.truth;
+  const exact = await client.post("/api/training/attempts", { ...attempt, guess: { aimOffsetM, playsLikeM } });
+  expect(exact.status).toBe(201);
+  expect(exact.body.score).toBe(100);
+  expect(exact.body.yours.holed).toBe(true);
+});
+
+test("POST /api/training/attempts refuses a score sent by the client as an unknown field", async () => {
+  const { client } = await signedUpClient(server);
+  const res = await client.post("/api/training/attempts", { ...attempt, score: 100 });
+  expect(res.status).toBe(400);
+  expect(JSON.stringify(res.body.error.fields)).toMatch(/score/);
+  expect((await client.get("/api/training/attempts")).body.items).toHaveLength(0);
+});
+
+test("POST /api/training/attempts answers 401 when signed out", async () => {
+  const res = await anon.post("/api/training/attempts", attempt);
+  expect(res.status).toBe(401);
+});
+
+test.each([
+  ["level", { level: "pro" }],
+  ["putt.distanceM", { putt: { ...putt, distanceM: 0 } }],
+  ["putt.distanceM", { level: "gentle", putt: { ...putt, distanceM: 9 } }],
+  ["putt.slopePct", { putt: { ...putt, slopePct: "steep" } }],
+  ["putt.fallLineDeg", { putt: { ...putt, fallLineDeg: 400 } }],
+  ["putt.extra", { putt: { ...putt, extra: 1 } }],
+  ["guess", { guess: { aimOffsetM: 0 } }],
+  ["guess", { guess: { aimOffsetM: 9, playsLikeM: 3 } }],
+  ["guess", { guess: { aimOffsetM: 0, playsLikeM: 0 } }],
+])("POST /api/training/attempts refuses bad %s with a 400 naming the field", async (field, change) => {
+  const { client } = await signedUpClient(server);
+  const res = await client.post("/api/training/attempts", { ...attempt, ...change });
+  expect(res.status).toBe(400);
+  const named = Object.keys(res.body.error.fields ?? {});
+  const top = field.split(".")[0]!;
+  expect(named.some((k) => k === field || k.startsWith(top))).toBe(true);
+});
+
+test("GET /api/training/attempts lists mine only, newest first, up to the limit", async () => {
+  const a = await signedUpClient(server);
+  const b = await signedUpClient(server);
+  for (const aimOffsetM of [-0.3, -0.2, -0.1]) {
+    expect((await a.client.post("/api/training/attempts", { ...attempt, guess: { aimOffsetM, playsLikeM: 3.4 } })).status).toBe(201);
+  }
+  expect((await b.client.post("/api/training/attempts", attempt)).status).toBe(201);
+
+  const mine = await a.client.get("/api/training/attempts");
+  expect(mine.status).toBe(200);
+  expect(mine.body.items).toHaveLength(3);
+  expect(mine.body.items.map((i: { guess: { aimOffsetM: number } }) => i.guess.aimOffsetM)).toEqual([-0.1, -0.2, -0.3]);
+  expect(mine.body.items[0]).toMatchObject({ level: "club", putt, score: expect.any(Number), createdAt: expect.any(String) });
+
+  const theirs = await b.client.get("/api/training/attempts");
+  expect(theirs.body.items).toHaveLength(1);
+
+  const limited = await a.client.get("/api/training/attempts?limit=2");
+  expect(limited.body.items).toHaveLength(2);
+  const bad = await a.client.get("/api/training/attempts?limit=0");
+  expect(bad.status).toBe(400);
+  expect(bad.body.error.fields).toHaveProperty("limit");
+});
+
+test("GET /api/training/attempts answers 401 when signed out", async () => {
+  expect((await anon.get("/api/training/attempts")).status).toBe(401);
+});
