@@ -36,7 +36,10 @@ test("falling to the left (270) mirrors falling to the right", () => {
 });
 
 test("exaggeration scales heights and nothing else", () => {
-  expect(heightAtM(1, 2, { slopePct: 2, fallLineDeg: 40, exaggeration: 5 })).toBeCloseTo(5 * heightAtM(1, 2, { slopePct: 2, fallLineDeg: 40 }), 12);
+  expect(heightAtM(1, 2, { slopePct: 2, fallLineDeg: 40, exaggeration: 5 })).toBeCloseTo(
+    5 * heightAtM(1, 2, { slopePct: 2, fallLineDeg: 40 }),
+    12,
+  );
 });
 
 test("the scene mapping: putt x → scene x, height → scene y, putt y → scene −z", () => {

@@ -6,7 +6,11 @@
 // Scene (three.js, right-handed, y up): scene x = putt x, scene y = height, scene z = −putt y. A camera behind the
 // ball looking down −z then has the golfer's right on its right.
 
-export type PuttPlane = { slopePct: number; fallLineDeg: number; /** heights drawn this many times steeper (1 = true) */ exaggeration?: number };
+export type PuttPlane = {
+  slopePct: number;
+  fallLineDeg: number;
+  /** heights drawn this many times steeper (1 = true) */ exaggeration?: number;
+};
 export type Vec2 = readonly [number, number];
 export type Vec3 = [number, number, number];
 
@@ -68,7 +72,10 @@ export function ellipsePoints(shape: GreenShape, count = 96, grow = 0): [number,
 }
 
 /** Lowest and highest true heights on the green (m, relative to the ball), and where they are. */
-export function heightRange(shape: GreenShape, plane: PuttPlane): { minM: number; maxM: number; highPoint: [number, number]; lowPoint: [number, number] } {
+export function heightRange(
+  shape: GreenShape,
+  plane: PuttPlane,
+): { minM: number; maxM: number; highPoint: [number, number]; lowPoint: [number, number] } {
   const [ux, uy] = fallVector(plane.fallLineDeg);
   const r = Math.hypot(shape.a * ux, shape.b * uy);
   // Extremes of p·u over the ellipse lie at the centre ± (a²·ux, b²·uy)/r.
@@ -97,7 +104,11 @@ export function contourIntervalM(rangeM: number, units: "metric" | "imperial", m
  * Contour lines of the planar green clipped to its ellipse: for each height k·interval, the chord where
  * h(x, y) = k·interval, as two putt-frame end points and the (true) height.
  */
-export function contourSegments(shape: GreenShape, plane: PuttPlane, intervalM: number): { heightM: number; from: [number, number]; to: [number, number] }[] {
+export function contourSegments(
+  shape: GreenShape,
+  plane: PuttPlane,
+  intervalM: number,
+): { heightM: number; from: [number, number]; to: [number, number] }[] {
   const t = plane.slopePct / 100;
   if (!(t > 0) || !(intervalM > 0)) return [];
   const [ux, uy] = fallVector(plane.fallLineDeg);
@@ -123,7 +134,13 @@ export function contourSegments(shape: GreenShape, plane: PuttPlane, intervalM: 
 }
 
 /** Linear interpolation of a timed path at time t (clamped to its ends). `hint` speeds up monotone playback. */
-export function sampleAtTime(times: readonly number[], xs: readonly number[], ys: readonly number[], t: number, hint = 0): { x: number; y: number; index: number } {
+export function sampleAtTime(
+  times: readonly number[],
+  xs: readonly number[],
+  ys: readonly number[],
+  t: number,
+  hint = 0,
+): { x: number; y: number; index: number } {
   const n = times.length;
   if (n === 0) return { x: 0, y: 0, index: 0 };
   if (t <= times[0]!) return { x: xs[0]!, y: ys[0]!, index: 0 };

@@ -6,8 +6,27 @@ import { Canvas, useFrame, useThree, type ThreeEvent } from "@react-three/fiber"
 import { Line, OrbitControls } from "@react-three/drei";
 import * as THREE from "three";
 import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
-import { contourSegments, ellipsePoints, fallVector, greenShape, heightRange, surfaceNormal, surfacePoint, type GreenShape, type PuttPlane } from "./frame";
-import { AIM_LIMIT_M, LINE_COLOURS, LINE_NAMES, type CameraView, type GreenSceneProps, type Replay, type SceneAim, type ScenePutt } from "./scene-types";
+import {
+  contourSegments,
+  ellipsePoints,
+  fallVector,
+  greenShape,
+  heightRange,
+  surfaceNormal,
+  surfacePoint,
+  type GreenShape,
+  type PuttPlane,
+} from "./frame";
+import {
+  AIM_LIMIT_M,
+  LINE_COLOURS,
+  LINE_NAMES,
+  type CameraView,
+  type GreenSceneProps,
+  type Replay,
+  type SceneAim,
+  type ScenePutt,
+} from "./scene-types";
 
 const BALL_RADIUS_M = 0.04267 / 2;
 const HOLE_RADIUS_M = 0.054;
@@ -61,7 +80,14 @@ export default function GreenScene(props: GreenSceneProps) {
   );
 }
 
-type SceneLabel = { id: string; at: [number, number, number]; text: string; tone: "light" | "dark"; side: "up" | "left" | "right"; colour?: string };
+type SceneLabel = {
+  id: string;
+  at: [number, number, number];
+  text: string;
+  tone: "light" | "dark";
+  side: "up" | "left" | "right";
+  colour?: string;
+};
 
 /** Words on the green: "higher" and "lower" near its rim, and each aim spot's name above its pin. */
 function sceneLabels({ putt, aims, exaggeration = 1 }: GreenSceneProps): SceneLabel[] {
@@ -71,10 +97,20 @@ function sceneLabels({ putt, aims, exaggeration = 1 }: GreenSceneProps): SceneLa
   if (plane.slopePct > 0) {
     const r = heightRange(shape, plane);
     const at = (p: [number, number]) => surfacePoint(shape.cx + (p[0] - shape.cx) * 0.78, shape.cy + (p[1] - shape.cy) * 0.78, plane, 0.05);
-    out.push({ id: "higher", at: at(r.highPoint), text: "higher", tone: "light", side: "up" }, { id: "lower", at: at(r.lowPoint), text: "lower", tone: "dark", side: "up" });
+    out.push(
+      { id: "higher", at: at(r.highPoint), text: "higher", tone: "light", side: "up" },
+      { id: "lower", at: at(r.lowPoint), text: "lower", tone: "dark", side: "up" },
+    );
   }
   for (const a of aims) {
-    out.push({ id: `aim-${a.id}`, at: surfacePoint(a.xM, putt.distanceM, plane, PIN_M), text: a.label ?? LINE_NAMES[a.style], tone: "dark", side: a.labelSide ?? "up", colour: LINE_COLOURS[a.style] });
+    out.push({
+      id: `aim-${a.id}`,
+      at: surfacePoint(a.xM, putt.distanceM, plane, PIN_M),
+      text: a.label ?? LINE_NAMES[a.style],
+      tone: "dark",
+      side: a.labelSide ?? "up",
+      colour: LINE_COLOURS[a.style],
+    });
   }
   return out;
 }
@@ -102,7 +138,10 @@ function LabelProjector({ labels, els }: { labels: SceneLabel[]; els: RefObject<
 
 function SceneContents(props: GreenSceneProps) {
   const { putt, lines, aims, restMarkers = [], contourIntervalM, exaggeration = 1, onAimChange } = props;
-  const plane: PuttPlane = useMemo(() => ({ slopePct: putt.slopePct, fallLineDeg: putt.fallLineDeg, exaggeration }), [putt.slopePct, putt.fallLineDeg, exaggeration]);
+  const plane: PuttPlane = useMemo(
+    () => ({ slopePct: putt.slopePct, fallLineDeg: putt.fallLineDeg, exaggeration }),
+    [putt.slopePct, putt.fallLineDeg, exaggeration],
+  );
   const shape = useMemo(() => greenShape(putt.distanceM), [putt.distanceM]);
   const dragging = useRef(false);
   const get = useThree((s) => s.get);
@@ -194,7 +233,9 @@ function GreenSurface({ shape, plane, events }: { shape: GreenShape; plane: Putt
   const geometry = useMemo(() => {
     const range = heightRange(shape, plane);
     const span = range.maxM - range.minM;
-    return fanGeometry(shape, plane, 0, (h) => (span > 1e-9 ? LOW.clone().lerp(HIGH, (h / (plane.exaggeration ?? 1) - range.minM) / span) : LOW.clone().lerp(HIGH, 0.55)));
+    return fanGeometry(shape, plane, 0, (h) =>
+      span > 1e-9 ? LOW.clone().lerp(HIGH, (h / (plane.exaggeration ?? 1) - range.minM) / span) : LOW.clone().lerp(HIGH, 0.55),
+    );
   }, [shape, plane]);
   const fringe = useMemo(() => fanGeometry(shape, plane, 0.45, () => new THREE.Color("#3d6f3a"), -0.006), [shape, plane]);
   useEffect(() => () => geometry.dispose(), [geometry]);
@@ -216,7 +257,13 @@ function GreenSurface({ shape, plane, events }: { shape: GreenShape; plane: Putt
 }
 
 /** A fan of triangles over the ellipse; the surface is planar and the shading linear, so a fan is exact. */
-function fanGeometry(shape: GreenShape, plane: PuttPlane, grow: number, colourAt: (h: number) => THREE.Color, lift = 0): THREE.BufferGeometry {
+function fanGeometry(
+  shape: GreenShape,
+  plane: PuttPlane,
+  grow: number,
+  colourAt: (h: number) => THREE.Color,
+  lift = 0,
+): THREE.BufferGeometry {
   const rim = ellipsePoints(shape, 96, grow);
   const pts: [number, number][] = [[shape.cx, shape.cy], ...rim];
   const positions = new Float32Array(pts.length * 3);
@@ -277,7 +324,17 @@ function Hole({ putt, plane }: { putt: ScenePutt; plane: PuttPlane }) {
   );
 }
 
-function AimSpot({ aim, putt, plane, onGrab }: { aim: SceneAim; putt: ScenePutt; plane: PuttPlane; onGrab?: (e: ThreeEvent<PointerEvent>) => void }) {
+function AimSpot({
+  aim,
+  putt,
+  plane,
+  onGrab,
+}: {
+  aim: SceneAim;
+  putt: ScenePutt;
+  plane: PuttPlane;
+  onGrab?: (e: ThreeEvent<PointerEvent>) => void;
+}) {
   const colour = LINE_COLOURS[aim.style];
   const start = surfacePoint(0, 0, plane, 0.003);
   const end = surfacePoint(aim.xM, putt.distanceM, plane, 0.003);
@@ -428,7 +485,19 @@ function cameraGoal(view: CameraView, putt: ScenePutt, box: FrameBox, plane: Put
 }
 
 /** Moves the camera to a named view over 0.6 s (refs only); the user's own orbiting cancels the move. */
-function CameraRig({ putt, box, plane, view, viewKey }: { putt: ScenePutt; box: FrameBox; plane: PuttPlane; view: CameraView; viewKey: number }) {
+function CameraRig({
+  putt,
+  box,
+  plane,
+  view,
+  viewKey,
+}: {
+  putt: ScenePutt;
+  box: FrameBox;
+  plane: PuttPlane;
+  view: CameraView;
+  viewKey: number;
+}) {
   const camera = useThree((s) => s.camera) as THREE.PerspectiveCamera;
   const controls = useThree((s) => s.controls) as OrbitControlsImpl | null;
   const aspect = useThree((s) => s.size.width / Math.max(1, s.size.height));

@@ -8,7 +8,13 @@ export type LineStyle = "chosen" | "dying" | "firm" | "yours" | "truth";
 
 export type SceneLine = { id: string; path: readonly (readonly [number, number])[]; style: LineStyle; label?: string };
 /** An aim spot at the hole's distance, `xM` to the side (+ right); drawn with a dashed start line from the ball. */
-export type SceneAim = { id: string; xM: number; style: LineStyle; label?: string; /** where the label sits, so labels of near spots do not overlap */ labelSide?: "left" | "right" | "up" };
+export type SceneAim = {
+  id: string;
+  xM: number;
+  style: LineStyle;
+  label?: string;
+  /** where the label sits, so labels of near spots do not overlap */ labelSide?: "left" | "right" | "up";
+};
 export type ScenePutt = { distanceM: number; slopePct: number; fallLineDeg: number };
 
 /** A roll to replay: timed samples from simulateRoll; `holeTimeS` when the ball drops. */

@@ -23,15 +23,31 @@ export function PuttEditor({ putt, units, onSubmit }: { putt: RehearsePutt; unit
   const submit = (e: FormEvent) => {
     e.preventDefault();
     const distanceM = fromLongUnit(Number(draft.distance), units);
-    const next = { ...putt, distanceM, slopePct: Number(draft.slopePct), fallLineDeg: Number(draft.fallLineDeg), stimpFt: Number(draft.stimpFt) };
+    const next = {
+      ...putt,
+      distanceM,
+      slopePct: Number(draft.slopePct),
+      fallLineDeg: Number(draft.fallLineDeg),
+      stimpFt: Number(draft.stimpFt),
+    };
     const bad: Partial<Record<keyof Draft, string>> = {};
     const check = (k: keyof Draft, v: number, [min, max]: [number, number], words: string) => {
       if (!Number.isFinite(v) || v < min || v > max || draft[k].trim() === "") bad[k] = words;
     };
-    check("distance", distanceM, [READ_LIMITS.distanceM.min, READ_LIMITS.distanceM.max], `From ${toLongUnit(READ_LIMITS.distanceM.min, units).toFixed(1)} to ${Math.round(toLongUnit(READ_LIMITS.distanceM.max, units))} ${unit}`);
+    check(
+      "distance",
+      distanceM,
+      [READ_LIMITS.distanceM.min, READ_LIMITS.distanceM.max],
+      `From ${toLongUnit(READ_LIMITS.distanceM.min, units).toFixed(1)} to ${Math.round(toLongUnit(READ_LIMITS.distanceM.max, units))} ${unit}`,
+    );
     check("slopePct", next.slopePct, [0, READ_LIMITS.slopePct.max], `From 0 to ${READ_LIMITS.slopePct.max} %`);
     check("fallLineDeg", next.fallLineDeg, [0, 359.999], "From 0 to 359°");
-    check("stimpFt", next.stimpFt, [READ_LIMITS.stimpFt.min, READ_LIMITS.stimpFt.max], `From ${READ_LIMITS.stimpFt.min} to ${READ_LIMITS.stimpFt.max} ft`);
+    check(
+      "stimpFt",
+      next.stimpFt,
+      [READ_LIMITS.stimpFt.min, READ_LIMITS.stimpFt.max],
+      `From ${READ_LIMITS.stimpFt.min} to ${READ_LIMITS.stimpFt.max} ft`,
+    );
     setErrors(bad);
     if (Object.keys(bad).length === 0) onSubmit(next);
   };

@@ -29,7 +29,11 @@ export function ReadNumbers({ read, units }: { read: Read; units: UnitSystem }) 
       />
       <Row term="Roll-past" value={`${rollPastWords(read.rollPastM, units)} past`} detail="if it misses" />
       <Row term="Plays like" value={formatLength(read.playsLikeM, units)} detail="a flat putt of this length" />
-      <Row term="Entry speed" value={`${read.entrySpeedMps.toFixed(2)} m/s`} detail={`at the hole; ${read.launchSpeedMps.toFixed(2)} m/s off the putter`} />
+      <Row
+        term="Entry speed"
+        value={`${read.entrySpeedMps.toFixed(2)} m/s`}
+        detail={`at the hole; ${read.launchSpeedMps.toFixed(2)} m/s off the putter`}
+      />
     </dl>
   );
 }

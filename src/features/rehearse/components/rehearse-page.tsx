@@ -49,7 +49,12 @@ export function RehearsePage() {
   );
 }
 
-type ViewProps = { putt: RehearsePutt; units: UnitSystem; onPuttChange: (p: RehearsePutt) => void; onPaceSettled: (rollPastM: number) => void };
+type ViewProps = {
+  putt: RehearsePutt;
+  units: UnitSystem;
+  onPuttChange: (p: RehearsePutt) => void;
+  onPaceSettled: (rollPastM: number) => void;
+};
 
 function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
   const [rollPastM, setRollPastM] = useState(putt.rollPastM);
@@ -87,12 +92,30 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
       const outside = dying.read.aimOffsetM < 0 ? "left" : "right";
       lines.push({ id: "dying", path: dying.read.path, style: "dying" }, { id: "firm", path: firm.read.path, style: "firm" });
       aims.push(
-        { id: "dying", xM: dying.read.aimOffsetM, style: "dying", label: `Dying: ${formatShort(dying.read.aimOffsetM, units)} ${dying.read.aimOffsetM < 0 ? "left" : "right"}`, labelSide: outside },
-        { id: "firm", xM: firm.read.aimOffsetM, style: "firm", label: `Firm: ${formatShort(firm.read.aimOffsetM, units)} ${firm.read.aimOffsetM < 0 ? "left" : "right"}`, labelSide: outside === "left" ? "right" : "left" },
+        {
+          id: "dying",
+          xM: dying.read.aimOffsetM,
+          style: "dying",
+          label: `Dying: ${formatShort(dying.read.aimOffsetM, units)} ${dying.read.aimOffsetM < 0 ? "left" : "right"}`,
+          labelSide: outside,
+        },
+        {
+          id: "firm",
+          xM: firm.read.aimOffsetM,
+          style: "firm",
+          label: `Firm: ${formatShort(firm.read.aimOffsetM, units)} ${firm.read.aimOffsetM < 0 ? "left" : "right"}`,
+          labelSide: outside === "left" ? "right" : "left",
+        },
       );
     }
     lines.push({ id: "chosen", path: current.read.path, style: "chosen" });
-    aims.push({ id: "chosen", xM: current.read.aimOffsetM, style: "chosen", label: compare ? "Your pace" : `Aim: ${aimWords(current.read.aimOffsetM, units)}`, labelSide: "up" });
+    aims.push({
+      id: "chosen",
+      xM: current.read.aimOffsetM,
+      style: "chosen",
+      label: compare ? "Your pace" : `Aim: ${aimWords(current.read.aimOffsetM, units)}`,
+      labelSide: "up",
+    });
   }
 
   const sceneLabel = current.ok
@@ -171,8 +194,8 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
           </div>
         </details>
         <p className="text-sm text-ink-500">
-          The read assumes an even, planar slope and a true-rolling ball. Grain, wind and the green&apos;s own contours change real putts: use it as a starting
-          point for your own judgement.
+          The read assumes an even, planar slope and a true-rolling ball. Grain, wind and the green&apos;s own contours change real putts:
+          use it as a starting point for your own judgement.
         </p>
         <p className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
           <TextLink to={paths.read.href(encodeRehearseQuery({ ...putt, rollPastM }))}>Open in the read calculator</TextLink>
@@ -191,7 +214,12 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
         >
           {webgl ? (
             <label className="flex min-h-11 items-center gap-2 font-medium text-ink-800">
-              <input type="checkbox" checked={exaggerate} onChange={(e) => setExaggerate(e.target.checked)} className="size-5 accent-coral-500" />
+              <input
+                type="checkbox"
+                checked={exaggerate}
+                onChange={(e) => setExaggerate(e.target.checked)}
+                className="size-5 accent-coral-500"
+              />
               Draw the tilt {EXAGGERATION}× steeper
             </label>
           ) : null}

@@ -12,9 +12,18 @@ type Green = Omit<RehearsePutt, "rollPastM">;
  */
 export function useRehearseReads(green: Green, rollPastM: number): { current: ReadResult; dying: ReadResult; firm: ReadResult } {
   const { distanceM, slopePct, fallLineDeg, stimpFt } = green;
-  const current = useMemo(() => solveRead({ distanceM, slopePct, fallLineDeg, stimpFt, pace: { rollPastM } }), [distanceM, slopePct, fallLineDeg, stimpFt, rollPastM]);
-  const dying = useMemo(() => solveRead({ distanceM, slopePct, fallLineDeg, stimpFt, pace: { rollPastM: ROLL_PAST_RANGE_M.min } }), [distanceM, slopePct, fallLineDeg, stimpFt]);
-  const firm = useMemo(() => solveRead({ distanceM, slopePct, fallLineDeg, stimpFt, pace: { rollPastM: ROLL_PAST_RANGE_M.max } }), [distanceM, slopePct, fallLineDeg, stimpFt]);
+  const current = useMemo(
+    () => solveRead({ distanceM, slopePct, fallLineDeg, stimpFt, pace: { rollPastM } }),
+    [distanceM, slopePct, fallLineDeg, stimpFt, rollPastM],
+  );
+  const dying = useMemo(
+    () => solveRead({ distanceM, slopePct, fallLineDeg, stimpFt, pace: { rollPastM: ROLL_PAST_RANGE_M.min } }),
+    [distanceM, slopePct, fallLineDeg, stimpFt],
+  );
+  const firm = useMemo(
+    () => solveRead({ distanceM, slopePct, fallLineDeg, stimpFt, pace: { rollPastM: ROLL_PAST_RANGE_M.max } }),
+    [distanceM, slopePct, fallLineDeg, stimpFt],
+  );
   return { current, dying, firm };
 }
 
@@ -27,5 +36,12 @@ export function replayOf(green: Green, read: Read, rate: number, key: number): R
   const rolled = simulateRoll({ ...green, launchSpeedMps: read.launchSpeedMps, startLineDeg: read.startLineDeg });
   if (!rolled.ok) return null;
   const r = rolled.roll;
-  return { key, rate, timeS: r.samples.timeS, xM: r.samples.xM, yM: r.samples.yM, holeTimeS: r.capture.holed ? r.closestApproach.timeS : null };
+  return {
+    key,
+    rate,
+    timeS: r.samples.timeS,
+    xM: r.samples.xM,
+    yM: r.samples.yM,
+    holeTimeS: r.capture.holed ? r.closestApproach.timeS : null,
+  };
 }

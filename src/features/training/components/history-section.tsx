@@ -16,8 +16,8 @@ export function HistorySection({ signedIn }: { signedIn: boolean }) {
     return (
       <Alert tone="info" title="Sign in to keep a history">
         You can train without an account. <TextLink to={paths.signIn.href(`${location.pathname}${location.search}`)}>Sign in</TextLink> or{" "}
-        <TextLink to={paths.signUp.href(`${location.pathname}${location.search}`)}>create an account</TextLink> to keep your scores and see your reading
-        improve.
+        <TextLink to={paths.signUp.href(`${location.pathname}${location.search}`)}>create an account</TextLink> to keep your scores and see
+        your reading improve.
       </Alert>
     );
   }
@@ -34,10 +34,12 @@ export function HistorySection({ signedIn }: { signedIn: boolean }) {
       ) : (
         <>
           <p className="mt-1 text-ink-600">
-            {rows.length} read{rows.length === 1 ? "" : "s"} kept. Mean of the last {last.length}: <strong>{last[last.length - 1]!.rollingMean}</strong>; best
-            score: <strong>{Math.max(...rows.map((r) => r.score))}</strong>.
+            {rows.length} read{rows.length === 1 ? "" : "s"} kept. Mean of the last {last.length}:{" "}
+            <strong>{last[last.length - 1]!.rollingMean}</strong>; best score: <strong>{Math.max(...rows.map((r) => r.score))}</strong>.
           </p>
-          <ErrorBoundary fallback={() => <p className="mt-3 text-sm text-ink-500">The chart could not be drawn here; the numbers above still stand.</p>}>
+          <ErrorBoundary
+            fallback={() => <p className="mt-3 text-sm text-ink-500">The chart could not be drawn here; the numbers above still stand.</p>}
+          >
             <Suspense fallback={<Spinner label="Loading the chart" />}>
               <div className="mt-3">
                 <HistoryChart rows={rows} window={ROLLING_WINDOW} />

@@ -1,6 +1,15 @@
 // The player's read: an aim (slider, or an amount and a side) and a pace as "plays like" (slider or a number).
 import { useId, useState } from "react";
-import { formatLength, fromLongUnit, fromShortUnit, longUnitLabel, shortUnitLabel, toLongUnit, toShortUnit, type UnitSystem } from "../../../../shared/units";
+import {
+  formatLength,
+  fromLongUnit,
+  fromShortUnit,
+  longUnitLabel,
+  shortUnitLabel,
+  toLongUnit,
+  toShortUnit,
+  type UnitSystem,
+} from "../../../../shared/units";
 import { aimWords } from "../../../components/green-3d/words";
 
 const inputClass =
@@ -16,7 +25,19 @@ export function playsLikeRangeM(distanceM: number): { min: number; max: number }
   return { min: Math.max(0.3, Math.floor(0.3 * distanceM * 10) / 10), max: Math.ceil((2 * distanceM + 0.5) * 10) / 10 };
 }
 
-export function AimControl({ aimOffsetM, distanceM, units, disabled, onChange }: { aimOffsetM: number; distanceM: number; units: UnitSystem; disabled?: boolean; onChange: (m: number) => void }) {
+export function AimControl({
+  aimOffsetM,
+  distanceM,
+  units,
+  disabled,
+  onChange,
+}: {
+  aimOffsetM: number;
+  distanceM: number;
+  units: UnitSystem;
+  disabled?: boolean;
+  onChange: (m: number) => void;
+}) {
   const id = useId();
   const range = aimRangeM(distanceM);
   const fmt = (m: number) => String(Number(toShortUnit(Math.abs(m), units).toFixed(1)));
@@ -101,7 +122,19 @@ export function AimControl({ aimOffsetM, distanceM, units, disabled, onChange }:
   );
 }
 
-export function PlaysLikeControl({ playsLikeM, distanceM, units, disabled, onChange }: { playsLikeM: number; distanceM: number; units: UnitSystem; disabled?: boolean; onChange: (m: number) => void }) {
+export function PlaysLikeControl({
+  playsLikeM,
+  distanceM,
+  units,
+  disabled,
+  onChange,
+}: {
+  playsLikeM: number;
+  distanceM: number;
+  units: UnitSystem;
+  disabled?: boolean;
+  onChange: (m: number) => void;
+}) {
   const id = useId();
   const { min, max } = playsLikeRangeM(distanceM);
   const fmt = (m: number) => String(Number(toLongUnit(m, units).toFixed(units === "metric" ? 2 : 1)));

@@ -12,8 +12,10 @@ function lengthWords(m: number, units: UnitSystem): string {
 function finishWords(e: Ok, units: UnitSystem): string {
   const y = e.yours;
   if (y.holed) return "Your ball drops.";
-  const along = Math.abs(y.finishPastM) < 0.01 ? "level with the hole" : `${lengthWords(y.finishPastM, units)} ${y.finishPastM > 0 ? "past" : "short"}`;
-  const side = Math.abs(y.finishSideM) < 0.01 ? "" : ` and ${lengthWords(y.finishSideM, units)} ${y.finishSideM > 0 ? "right" : "left"} of it`;
+  const along =
+    Math.abs(y.finishPastM) < 0.01 ? "level with the hole" : `${lengthWords(y.finishPastM, units)} ${y.finishPastM > 0 ? "past" : "short"}`;
+  const side =
+    Math.abs(y.finishSideM) < 0.01 ? "" : ` and ${lengthWords(y.finishSideM, units)} ${y.finishSideM > 0 ? "right" : "left"} of it`;
   return `${y.outcome === "lip-out" ? "It lips out and" : "Your ball misses and"} stops ${along}${side}.`;
 }
 
@@ -46,8 +48,8 @@ export function ResultPanel({ result, distanceM, units }: { result: Ok; distance
         <li>{aimErrorWords(result, units)}</li>
         <li>{paceErrorWords(result, distanceM, units)}</li>
         <li>
-          The true read, for a pace that would finish {formatShort(TARGET_ROLL_PAST_M, units)} past: aim {aimWords(result.truth.aimOffsetM, units)}, and it plays like{" "}
-          {formatLength(result.truth.playsLikeM, units)}.
+          The true read, for a pace that would finish {formatShort(TARGET_ROLL_PAST_M, units)} past: aim{" "}
+          {aimWords(result.truth.aimOffsetM, units)}, and it plays like {formatLength(result.truth.playsLikeM, units)}.
         </li>
       </ul>
     </section>

@@ -89,7 +89,14 @@ function LevelPicker({ level, onChange }: { level: TrainingLevelId; onChange: (l
                 level === id ? "border-ink-900 bg-ink-50" : "border-ink-900/15 bg-white hover:border-ink-900/30",
               )}
             >
-              <input type="radio" name="training-level" value={id} checked={level === id} onChange={() => onChange(id)} className="sr-only" />
+              <input
+                type="radio"
+                name="training-level"
+                value={id}
+                checked={level === id}
+                onChange={() => onChange(id)}
+                className="sr-only"
+              />
               <span className="font-medium text-ink-900">{l.label}</span>
               <span className="text-xs text-ink-500">{l.description}</span>
             </label>
@@ -100,7 +107,15 @@ function LevelPicker({ level, onChange }: { level: TrainingLevelId; onChange: (l
   );
 }
 
-type RoundProps = { level: TrainingLevelId; seed: number; n: number; units: UnitSystem; signedIn: boolean; onNext: () => void; onNewRound: () => void };
+type RoundProps = {
+  level: TrainingLevelId;
+  seed: number;
+  n: number;
+  units: UnitSystem;
+  signedIn: boolean;
+  onNext: () => void;
+  onNewRound: () => void;
+};
 
 function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: RoundProps) {
   const putt = useMemo(() => roundPutt(level, seed, n), [level, seed, n]);
@@ -199,7 +214,13 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
 
       <div className="flex flex-col gap-4 lg:col-start-2 lg:row-span-3 lg:row-start-1">
         <Card padded={false} className="flex flex-col gap-5 p-4 sm:p-5">
-          <AimControl aimOffsetM={aimOffsetM} distanceM={putt.distanceM} units={units} disabled={revealed} onChange={(m) => setAim(clampAim(m))} />
+          <AimControl
+            aimOffsetM={aimOffsetM}
+            distanceM={putt.distanceM}
+            units={units}
+            disabled={revealed}
+            onChange={(m) => setAim(clampAim(m))}
+          />
           <PlaysLikeControl playsLikeM={playsLikeM} distanceM={putt.distanceM} units={units} disabled={revealed} onChange={setPlaysLike} />
           {!revealed ? (
             <Button variant="accent" size="lg" onClick={reveal}>
@@ -213,7 +234,13 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
             <ResultPanel result={ok} distanceM={putt.distanceM} units={units} />
             {signedIn ? (
               <p role="status" className="text-sm text-ink-600">
-                {save.isPending ? "Keeping this read in your history…" : save.isSuccess ? "Kept in your history." : save.isError ? "This read could not be kept." : null}
+                {save.isPending
+                  ? "Keeping this read in your history…"
+                  : save.isSuccess
+                    ? "Kept in your history."
+                    : save.isError
+                      ? "This read could not be kept."
+                      : null}
               </p>
             ) : null}
             <div className="flex flex-wrap gap-2">
@@ -231,7 +258,11 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
         ) : null}
         <p className="text-sm text-ink-500">
           Round {seed}: the same link gives the same putts.{" "}
-          <button type="button" onClick={onNewRound} className="font-medium text-ink-900 underline decoration-coral-500 decoration-2 underline-offset-4">
+          <button
+            type="button"
+            onClick={onNewRound}
+            className="font-medium text-ink-900 underline decoration-coral-500 decoration-2 underline-offset-4"
+          >
             Start a new round
           </button>
         </p>
@@ -241,10 +272,22 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
       </div>
 
       <Card padded={false} className="p-4 lg:col-start-1 lg:row-start-3">
-        <SlopeLegend slopePct={putt.slopePct} fallLineDeg={putt.fallLineDeg} contourIntervalM={interval} units={units} exaggeration={exaggerate ? 5 : 1} shaded={webgl}>
+        <SlopeLegend
+          slopePct={putt.slopePct}
+          fallLineDeg={putt.fallLineDeg}
+          contourIntervalM={interval}
+          units={units}
+          exaggeration={exaggerate ? 5 : 1}
+          shaded={webgl}
+        >
           {webgl ? (
             <label className="flex min-h-11 items-center gap-2 font-medium text-ink-800">
-              <input type="checkbox" checked={exaggerate} onChange={(e) => setExaggerate(e.target.checked)} className="size-5 accent-coral-500" />
+              <input
+                type="checkbox"
+                checked={exaggerate}
+                onChange={(e) => setExaggerate(e.target.checked)}
+                className="size-5 accent-coral-500"
+              />
               Draw the tilt 5× steeper
             </label>
           ) : null}
