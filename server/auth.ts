@@ -47,6 +47,11 @@ export function createAuth({ db, secret, baseUrl, trustedOrigins, mailer, logger
       useSecureCookies: baseUrl.startsWith("https://"),
       defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
     },
+    session: {
+      // A signed copy of the session in a cookie spares the database a session lookup on every request
+      // (putt logging on a phone is the hot path). A revoked session or a changed role is seen within a minute.
+      cookieCache: { enabled: true, maxAge: 60 },
+    },
     emailAndPassword: {
       enabled: true,
       minPasswordLength: 8,

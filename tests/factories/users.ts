@@ -24,5 +24,9 @@ export async function signedUpClient(server: TestServer, accountType: "player" |
 export async function adminClient(server: TestServer) {
   const made = await signedUpClient(server, "player", "Test Admin");
   await server.database.db.update(user).set({ role: "admin" }).where(eq(user.email, made.email));
-  return made;
+  // Sign in afresh: the session cookie carries a cached copy of the user (role included) for a minute.
+  const client = new HttpClient(server.url);
+  const res = await client.post("/api/auth/sign-in/email", { email: made.email, password: TEST_PASSWORD });
+  if (res.status !== 200) throw new Error(`admin sign-in failed: ${res.status}`);
+  return { ...made, client };
 }
