@@ -32,34 +32,28 @@ export function addPutt(db: Db): RequestHandler {
     const me = currentUser(req);
     const sessionId = sessionIdParam(req);
     const input = body(req, puttInputSchema);
-    const [own] = await db.select({ id: practiceSessions.id }).from(practiceSessions).where(and(eq(practiceSessions.id, sessionId), eq(practiceSessions.playerId, me.id)));
-    if (!own) throw notFound("That session");
-    const values = {
-      sessionId,
-      playerId: me.id,
-      clientId: input.clientId ?? null,
-      distanceM: input.distanceM,
-      holed: input.holed,
-      missSide: input.missSide ?? null,
-      missLengthM: input.missLengthM ?? null,
-      breakType: input.breakType ?? null,
-    };
-    if (!input.clientId) {
-      const [row] = await db.insert(putts).values(values).returning({ id: putts.id });
-      res.status(201).json({ id: row!.id });
-      return;
-    }
-    // A retry with the same clientId (the phone lost the first answer) finds the putt already stored.
-    const [row] = await db.insert(putts).values(values).onConflictDoNothing({ target: [putts.playerId, putts.clientId] }).returning({ id: putts.id });
+    // The hot path of logging on the green: one statement checks the session is mine and stores the putt.
+    // A retry with the same clientId (the phone lost the first answer) conflicts and stores nothing.
+    const inserted = await db.execute(sql`
+      insert into ${putts} (session_id, player_id, client_id, distance_m, holed, miss_side, miss_length_m, break_type)
+      select ${practiceSessions.id}, ${practiceSessions.playerId}, ${input.clientId ?? null}, ${input.distanceM}, ${input.holed},
+             ${input.missSide ?? null}, ${input.missLengthM ?? null}, ${input.breakType ?? null}
+      from ${practiceSessions}
+      where ${practiceSessions.id} = ${sessionId} and ${practiceSessions.playerId} = ${me.id}
+      on conflict (player_id, client_id) do nothing
+      returning id`);
+    // node-postgres and PGlite both answer { rows }.
+    const row = (inserted as unknown as { rows: { id: string }[] }).rows[0];
     if (row) {
       res.status(201).json({ id: row.id });
       return;
     }
-    const [existing] = await db
-      .select({ id: putts.id, sessionId: putts.sessionId })
-      .from(putts)
-      .where(and(eq(putts.playerId, me.id), eq(putts.clientId, input.clientId)));
-    if (!existing) throw conflict("That clientId is being stored; retry.");
+    const [own] = await db.select({ id: practiceSessions.id }).from(practiceSessions).where(and(eq(practiceSessions.id, sessionId), eq(practiceSessions.playerId, me.id)));
+    if (!own) throw notFound("That session");
+    const [existing] = input.clientId
+      ? await db.select({ id: putts.id, sessionId: putts.sessionId }).from(putts).where(and(eq(putts.playerId, me.id), eq(putts.clientId, input.clientId)))
+      : [];
+    if (!existing) throw conflict("That putt is being stored; retry.");
     if (existing.sessionId !== sessionId) throw conflict("That clientId belongs to a putt in another session.");
     res.status(200).json({ id: existing.id });
   };
