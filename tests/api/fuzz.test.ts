@@ -2,8 +2,8 @@
 // and non-finite numbers, malformed JSON, wrong content types, oversized bodies. Every answer must be a
 // well-formed response below 500 (a 4xx with the JSON error shape when refused), never a hang, and a
 // refused request must leave the database exactly as it was.
+import { databaseFingerprint } from "../setup/fingerprint";
 import fc from "fast-check";
-import { sql } from "drizzle-orm";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { signedUpClient } from "../factories/users";
 import { HttpClient } from "../setup/http";
@@ -39,18 +39,7 @@ afterAll(async () => {
   await server?.stop();
 });
 
-/** One query that changes whenever any application row changes. */
-async function fingerprint(): Promise<string> {
-  const tables = [
-    "user", "session", "account", "verification", "user_preferences", "greens", "stimp_readings", "saved_reads",
-    "practice_sessions", "putts", "rounds", "round_holes", "squads", "squad_members", "invitations", "ladders",
-    "ladder_assignments", "training_attempts",
-  ];
-  const parts = tables.map((t) => `(select coalesce(md5(string_agg(x::text, '|' order by x::text)), '') from "${t}" x)`);
-  const result = await server.database.db.execute(sql.raw(`select md5(${parts.join(" || ")}) as f`));
-  const rows = (Array.isArray(result) ? result : (result as { rows: { f: string }[] }).rows) as { f: string }[];
-  return rows[0]!.f;
-}
+const fingerprint = () => databaseFingerprint(server.database.db);
 
 const weirdNumber = fc.oneof(
   fc.constantFrom(-1, 0, -0, 1e308, -1e308, 2 ** 53, 0.1, 1e-320),
