@@ -21,8 +21,24 @@ export const navItems: ReadonlyArray<NavItem> = [
   { label: "Break chart", to: paths.breakChart.href() },
   { label: "Rehearse", to: paths.rehearse.href() },
   { label: "Read training", to: paths.train.href() },
+  // The practice log's other pages (Greens, Rounds) sit in its own sub-navigation (practiceNavItems), so the phone menu stays short.
+  { label: "Practice", to: paths.practice.href(), signedIn: true },
+  { label: "Make rates", to: paths.stats.href(), signedIn: true },
+  // coaching (issue 6)
+  { label: "My ladders", to: paths.myLadders.href(), roles: ["player"] },
+  { label: "Squads", to: paths.squads.href(), roles: ["coach", "admin"] },
+  { label: "Ladders", to: paths.ladders.href(), roles: ["coach", "admin"] },
+  { label: "Coach dashboard", to: paths.coach.href(), roles: ["coach", "admin"] },
   { label: "Account", to: paths.account.href(), signedIn: true },
   { label: "Dev mailbox", to: paths.mailbox.href(), when: "devMail" },
+];
+
+/** The practice log's own tabs, shown at the top of each of its pages (src/app/layout/practice-nav.tsx). */
+export const practiceNavItems: ReadonlyArray<NavItem> = [
+  { label: "Practice", to: paths.practice.href(), signedIn: true },
+  { label: "Rounds", to: paths.rounds.href(), signedIn: true },
+  { label: "Greens", to: paths.greens.href(), signedIn: true },
+  { label: "Make rates", to: paths.stats.href(), signedIn: true },
 ];
 
 export type NavContext = { role: Role | null; devMail: boolean };

@@ -1,10 +1,13 @@
-import { useState, type ReactNode } from "react";
+import { useEffect, useState, type ReactNode } from "react";
 import { QueryClientProvider } from "@tanstack/react-query";
 import { Toaster } from "sonner";
 import { createQueryClient } from "../lib/query-client";
+import { registerPuttMutations } from "../features/practice/api/add-putt";
 
 export function AppProvider({ children }: { children: ReactNode }) {
   const [queryClient] = useState(createQueryClient);
+  // Putts logged on the green wait in localStorage until the server has them; resume that queue at start.
+  useEffect(() => registerPuttMutations(queryClient), [queryClient]);
   return (
     <QueryClientProvider client={queryClient}>
       {children}

@@ -1,5 +1,5 @@
 import { afterEach, expect, test, vi } from "vitest";
-import { api, ApiError, apiRequest, toApiError } from "./api-client";
+import { api, ApiError, apiRequest, attachmentName, downloadFile, toApiError } from "./api-client";
 
 afterEach(() => {
   vi.unstubAllGlobals();
@@ -74,4 +74,34 @@ test("query parameters are added and undefined ones left out", async () => {
 test("a network failure becomes an ApiError with status 0", async () => {
   vi.stubGlobal("fetch", vi.fn(async () => Promise.reject(new TypeError("fetch failed"))));
   await expect(api.get("/api/me")).rejects.toMatchObject({ status: 0, code: "NETWORK_ERROR" });
+});
+
+test("a FormData body is passed through as it is, without a JSON content type", async () => {
+  const fetchMock = answer(200, { headers: ["date"] });
+  const form = new FormData();
+  form.append("file", new Blob(["date\n2024-05-01\n"], { type: "text/csv" }), "putts.csv");
+  await api.post("/api/csv/putts/preview", form);
+  const init = fetchMock.mock.calls[0]?.[1];
+  expect(init?.body).toBe(form);
+  expect((init?.headers as Record<string, string>)["Content-Type"]).toBeUndefined();
+});
+
+test("an error answer keeps its whole body, so extra fields such as row errors can be read", async () => {
+  const body = { error: { code: "unprocessable", message: "2 row(s) have errors" }, errors: [{ row: 1, line: 2, field: "date", message: "missing date" }] };
+  answer(422, body);
+  const error = await api.post("/api/csv/putts/import", new FormData()).catch((e: unknown) => e);
+  expect(error).toMatchObject({ status: 422, message: "2 row(s) have errors", body });
+});
+
+test("attachmentName reads quoted, bare and RFC 5987 file names", () => {
+  expect(attachmentName('attachment; filename="borrowline-putts-2024-05-01.csv"')).toBe("borrowline-putts-2024-05-01.csv");
+  expect(attachmentName("attachment; filename=plain.csv")).toBe("plain.csv");
+  expect(attachmentName("attachment; filename*=UTF-8''gr%C3%BCn.csv")).toBe("grün.csv");
+  expect(attachmentName(null)).toBeNull();
+  expect(attachmentName("inline")).toBeNull();
+});
+
+test("a failed download rejects with the API's error", async () => {
+  answer(401, { error: { code: "UNAUTHORIZED", message: "Sign in first" } });
+  await expect(downloadFile("/api/csv/putts/export")).rejects.toMatchObject({ status: 401, message: "Sign in first" });
 });

@@ -8,12 +8,15 @@ export class ApiError extends Error {
   readonly status: number;
   readonly code: string;
   readonly fields: FieldErrors;
+  /** The parsed error body as the server sent it, for answers that carry more than the error (a CSV import's row errors). */
+  readonly body: unknown;
 
-  constructor(status: number, code: string, message: string, fields: FieldErrors = {}) {
+  constructor(status: number, code: string, message: string, fields: FieldErrors = {}, body?: unknown) {
     super(message);
     this.status = status;
     this.code = code;
     this.fields = fields;
+    this.body = body;
   }
 }
 
@@ -27,6 +30,8 @@ const FALLBACK_MESSAGES: Record<number, string> = {
   403: "You do not have access to this.",
   404: "That could not be found.",
   409: "That conflicts with something that already exists.",
+  413: "That upload is too large.",
+  415: "That kind of file is not accepted.",
   422: "That request cannot be worked out.",
   429: "Too many requests. Please wait a moment and try again.",
 };
@@ -56,7 +61,7 @@ export function toApiError(status: number, body: unknown): ApiError {
   const code = inner && typeof inner.code === "string" && inner.code ? inner.code : `HTTP_${status}`;
   const message = inner && typeof inner.message === "string" && inner.message ? inner.message : fallbackMessage(status);
   const fields = inner ? readFields(inner.fields) : {};
-  return new ApiError(status, code, message, fields);
+  return new ApiError(status, code, message, fields, body);
 }
 
 export type RequestOptions = {
@@ -124,3 +129,48 @@ export const api = {
   patch: <T>(url: string, body?: unknown, options?: Omit<RequestOptions, "method" | "body">) => apiRequest<T>(url, { ...options, method: "PATCH", body }),
   delete: <T>(url: string, options?: Omit<RequestOptions, "method" | "body">) => apiRequest<T>(url, { ...options, method: "DELETE" }),
 };
+
+/** The file name from a Content-Disposition header (`attachment; filename="x.csv"`), or null. */
+export function attachmentName(header: string | null): string | null {
+  if (!header) return null;
+  const star = /filename\*=(?:UTF-8'')?([^;]+)/i.exec(header);
+  if (star?.[1]) {
+    try {
+      return decodeURIComponent(star[1].trim().replace(/^"|"$/g, ""));
+    } catch {
+      // fall through to the plain filename
+    }
+  }
+  const plain = /filename="?([^";]+)"?/i.exec(header);
+  return plain?.[1]?.trim() || null;
+}
+
+/**
+ * Downloads a file the API answers (a CSV export) and hands it to the browser as a download.
+ * Resolves with the file name used; rejects with an ApiError like every other call.
+ */
+export async function downloadFile(url: string, options: { query?: RequestOptions["query"]; fallbackName?: string } = {}): Promise<string> {
+  let response: Response;
+  try {
+    response = await fetch(withQuery(url, options.query), { method: "GET", credentials: "same-origin" });
+  } catch {
+    throw new ApiError(0, "NETWORK_ERROR", "Could not reach Borrowline. Check your connection and try again.");
+  }
+  if (!response.ok) throw toApiError(response.status, await readBody(response));
+  const name = attachmentName(response.headers.get("Content-Disposition")) ?? options.fallbackName ?? "download";
+  const blob = await response.blob();
+  const href = URL.createObjectURL(blob);
+  try {
+    const a = document.createElement("a");
+    a.href = href;
+    a.download = name;
+    a.rel = "noopener";
+    document.body.append(a);
+    a.click();
+    a.remove();
+  } finally {
+    // Give the browser a moment to start the download before the object URL goes.
+    setTimeout(() => URL.revokeObjectURL(href), 10_000);
+  }
+  return name;
+}

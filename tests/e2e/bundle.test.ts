@@ -53,6 +53,13 @@ test("the rehearse and training routes load three.js only through a dynamic impo
   expect([...staticClosure("src/components/green-3d/green-scene.tsx")].some(hasThree)).toBe(true);
 });
 
+test("the green map route loads three.js only through a dynamic import of the surface scene", () => {
+  const closure = staticClosure("src/app/routes/green-map.tsx");
+  expect([...closure].filter(hasThree)).toEqual([]);
+  expect([...closure].flatMap((k) => manifest[k]?.dynamicImports ?? [])).toContain("src/components/green-3d/surface-scene.tsx");
+  expect([...staticClosure("src/components/green-3d/surface-scene.tsx")].some(hasThree)).toBe(true);
+});
+
 test("recharts stays out of the first page too", () => {
   const first = [...staticClosure("index.html")];
   expect(first.filter((k) => /recharts|charts/i.test(manifest[k]!.name ?? "") || read(k).includes("recharts-wrapper"))).toEqual([]);

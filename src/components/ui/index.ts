@@ -1,6 +1,7 @@
 export { Alert, type AlertProps, type AlertTone } from "./alert";
 export { Button, ButtonLink, buttonClasses, type ButtonProps, type ButtonLinkProps } from "./button";
 export { Card, CardTitle, type CardProps } from "./card";
+export { ConfirmDialog, type ConfirmDialogProps } from "./confirm-dialog";
 export { ChoiceGroup, type Choice, type ChoiceGroupProps } from "./choice-group";
 export { EmptyState, type EmptyStateProps } from "./empty-state";
 export { InputField, SelectField, type InputFieldProps, type SelectFieldProps } from "./field";
@@ -9,3 +10,5 @@ export { PageSpinner, Spinner, type SpinnerProps } from "./spinner";
 export { TextLink, textLinkClasses } from "./text-link";
 export { LogoMark } from "./logo";
 export { ErrorBoundary, type ErrorBoundaryProps } from "./error-boundary";
+export { ChipGroup, type ChipGroupProps, type ChipOption } from "./chip-group";
+export { Stepper, type StepperProps } from "./stepper";

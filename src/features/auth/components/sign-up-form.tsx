@@ -1,13 +1,16 @@
 import { useState } from "react";
+import { useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
 import { signUpSchema, type SignUpValues } from "../../../../shared/schemas/auth";
+import type { SignUpRole } from "../../../../shared/roles";
 import { toast } from "sonner";
 import { Alert, Button, ChoiceGroup, InputField } from "../../../components/ui";
 import { authClient } from "../../../lib/auth-client";
 import { describeAuthError } from "../utils/auth-errors";
 import { useAfterSignIn } from "../hooks/use-after-sign-in";
+import { authKeys } from "../api/keys";
 
 type SignUpInput = Parameters<typeof authClient.signUp.email>[0];
 
@@ -16,8 +19,18 @@ const roleChoices = [
   { value: "coach", label: "I am a coach", description: "Everything a player can do, plus squads and ladders." },
 ] as const;
 
-export function SignUpForm() {
+export type SignUpFormProps = {
+  /** Prefills the e-mail (an invitation's address). */
+  defaultEmail?: string;
+  /** Fixes the account type and leaves out the choice (an invitation to a squad is for a player). */
+  role?: SignUpRole;
+  /** Runs once the account exists and the current user is refreshed, instead of going to `?next=` or home. */
+  onSignedUp?: () => Promise<void> | void;
+};
+
+export function SignUpForm({ defaultEmail = "", role, onSignedUp }: SignUpFormProps = {}) {
   const afterSignIn = useAfterSignIn();
+  const queryClient = useQueryClient();
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
@@ -26,7 +39,7 @@ export function SignUpForm() {
     formState: { errors, isSubmitting },
   } = useForm<z.input<typeof signUpSchema>, unknown, SignUpValues>({
     resolver: zodResolver(signUpSchema),
-    defaultValues: { name: "", email: "", password: "" },
+    defaultValues: { name: "", email: defaultEmail, password: "", ...(role ? { role } : {}) },
   });
 
   const onSubmit = async ({ name, email, password, role }: SignUpValues) => {
@@ -44,7 +57,12 @@ export function SignUpForm() {
         return;
       }
       toast.success(data?.token ? `Welcome to Borrowline, ${name}.` : "Account created. Check your inbox to confirm your e-mail, then sign in.");
-      await afterSignIn();
+      if (onSignedUp) {
+        await queryClient.invalidateQueries({ queryKey: authKeys.all });
+        await onSignedUp();
+      } else {
+        await afterSignIn();
+      }
     } catch {
       setFormError("Could not reach Borrowline. Check your connection and try again.");
     }
@@ -63,7 +81,11 @@ export function SignUpForm() {
         error={errors.password?.message}
         {...register("password")}
       />
-      <ChoiceGroup legend="How will you use Borrowline?" choices={roleChoices} error={errors.role?.message} inputProps={register("role")} />
+      {role ? (
+        <p className="text-sm text-ink-600">{roleChoices.find((c) => c.value === role)?.description}</p>
+      ) : (
+        <ChoiceGroup legend="How will you use Borrowline?" choices={roleChoices} error={errors.role?.message} inputProps={register("role")} />
+      )}
       <Button type="submit" size="lg" fullWidth loading={isSubmitting} loadingText="Creating your account…">
         Create account
       </Button>

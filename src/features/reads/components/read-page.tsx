@@ -1,10 +1,11 @@
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { useCallback, useEffect, useMemo, useState, type ReactNode } from "react";
 import { useSearchParams } from "react-router";
 // The live preview while the dial is dragged is computed in the browser with the physics engine itself (about a
 // millisecond a read), so the line follows the finger at 60 fps; the answer the page commits to always comes from
 // POST /api/reads/solve through TanStack Query once the dial is let go or typing pauses.
 import { solveRead as solveReadInBrowser } from "../../../../physics";
-import type { ReadResponse } from "../../../../shared/schemas/reads";
+import type { ReadRequest, ReadResponse } from "../../../../shared/schemas/reads";
+import type { UnitSystem } from "../../../../shared/units";
 import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
@@ -28,6 +29,11 @@ function previewRead(values: ReadValues | null): ReadResponse | null {
   return result.ok ? result.read : null;
 }
 
+/** A signed-in player's panel gets a card; a signed-out visitor's invitation is one line, like the one to save reads. */
+function BesideRead({ signedIn, children }: { signedIn: boolean; children: ReactNode }) {
+  return signedIn ? <Card>{children}</Card> : <div>{children}</div>;
+}
+
 function CopyLinkButton() {
   const [copied, setCopied] = useState(false);
   if (typeof navigator === "undefined" || !navigator.clipboard) return null;
@@ -45,7 +51,28 @@ function CopyLinkButton() {
   );
 }
 
-export function ReadPage() {
+/** What a panel beside the read (the route module's slot) gets to work with; the reads feature knows nothing else of it. */
+export type ReadSlotContext = {
+  /** The committed read (debounced: after a pause in typing or when the dial is let go); null while invalid. */
+  request: ReadRequest | null;
+  /** The read under the finger while the dial is dragged, else null. */
+  liveRequest: ReadRequest | null;
+  /** The line of the read shown (live or committed), putt frame. */
+  line: ReadonlyArray<readonly [number, number]> | null;
+  units: UnitSystem;
+  signedIn: boolean;
+  /** Sign in, then back to this read. */
+  signInHref: string;
+  /** Sets the form's pace to this roll-past (and commits it). */
+  applyRollPast: (rollPastM: number) => void;
+};
+
+export type ReadPageProps = {
+  /** A panel under the answer, e.g. the player's own make probability (composed by src/app/routes/read.tsx). */
+  besideRead?: (context: ReadSlotContext) => ReactNode;
+};
+
+export function ReadPage({ besideRead }: ReadPageProps = {}) {
   const { units, setUnits, ready, saving, signedIn } = useUnits();
   const [params, setParams] = useSearchParams();
   const query = params.toString();
@@ -54,6 +81,7 @@ export function ReadPage() {
   const solve = useSolveRead(request);
   const [liveValues, setLiveValues] = useState<ReadValues | null>(null);
   const live = useMemo(() => previewRead(liveValues), [liveValues]);
+  const liveRequest = useMemo(() => (liveValues ? toReadRequest(liveValues) : null), [liveValues]);
 
   // A bare /read (or a partial link) gets every value written into the address, so it can be shared as it is.
   useEffect(() => {
@@ -61,6 +89,11 @@ export function ReadPage() {
   }, [ready, query, values, setParams]);
 
   const onCommit = useCallback((next: ReadValues) => setParams(encodeReadQuery(next), { replace: true }), [setParams]);
+  const applyRollPast = useCallback(
+    (rollPastM: number) =>
+      setParams(encodeReadQuery({ ...values, paceMode: "rollPast", rollPastM }), { replace: true, preventScrollReset: true }),
+    [values, setParams],
+  );
 
   if (!ready) return <PageSpinner label="Getting the read calculator ready" />;
 
@@ -150,6 +183,20 @@ export function ReadPage() {
               <CopyLinkButton />
             </div>
           </Card>
+
+          {besideRead ? (
+            <BesideRead signedIn={signedIn}>
+              {besideRead({
+                request,
+                liveRequest,
+                line: shownRead?.path ?? null,
+                units,
+                signedIn,
+                signInHref: paths.signIn.href(`${paths.read.path}?${encoded}`),
+                applyRollPast,
+              })}
+            </BesideRead>
+          ) : null}
 
           {signedIn ? (
             <Card>

@@ -1,0 +1,28 @@
+import { NavLink } from "react-router";
+import clsx from "clsx";
+import { practiceNavItems } from "../nav";
+
+/** Tabs across the practice log's pages: sessions, rounds on the course, greens, make rates. */
+export function PracticeNav() {
+  return (
+    <nav aria-label="Practice log" className="mb-6 print:hidden">
+      <ul className="grid grid-cols-4 gap-1 rounded-xl bg-ink-900/5 p-1 sm:inline-grid">
+        {practiceNavItems.map((item) => (
+          <li key={item.to}>
+            <NavLink
+              to={item.to}
+              className={({ isActive }) =>
+                clsx(
+                  "flex min-h-11 items-center justify-center rounded-lg px-2 text-sm font-medium whitespace-nowrap transition-colors sm:px-4",
+                  isActive ? "bg-white text-ink-900 shadow-sm" : "text-ink-600 hover:text-ink-900",
+                )
+              }
+            >
+              {item.label}
+            </NavLink>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}

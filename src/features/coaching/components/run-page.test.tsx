@@ -1,0 +1,214 @@
+// @vitest-environment jsdom
+import "@testing-library/jest-dom/vitest";
+import { afterEach, beforeEach, expect, test, vi } from "vitest";
+import { act, cleanup, screen, waitFor, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { replay } from "../../../../shared/ladder-engine";
+import type { AssignmentDetail, LadderSnapshot } from "../../../../shared/schemas/assignments";
+import { feetToMetres } from "../../../../shared/units";
+import { renderRoute } from "../../../testing/render";
+import { forgetRunStores } from "../hooks/run-store";
+import { RunPage } from "./run-page";
+
+vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
+
+const ID = "aaaaaaaa-aaaa-4aaa-8aaa-aaaaaaaaaaaa";
+const me = { user: { id: "p1", name: "Ivo Marsh", email: "ivo@example.test", role: "player", emailVerified: true }, preferences: { units: "imperial" } };
+const ladder: LadderSnapshot = {
+  sourceLadderId: "l1",
+  name: "Short stuff",
+  description: null,
+  failRule: "drop-one",
+  rungs: [
+    { distanceM: feetToMetres(3), balls: 2, passRule: { kind: "make", made: 1 } },
+    { distanceM: feetToMetres(5), balls: 3, passRule: { kind: "in-a-row", count: 2 } },
+  ],
+};
+
+/** The server's side: the stored outcomes, answered as the handlers do (replayed by the same engine). */
+let stored: boolean[] = [];
+let posts: { holed: boolean; clientId?: string }[] = [];
+let answerPost: (body: { holed: boolean; clientId?: string }) => Promise<Response>;
+
+function detail(): AssignmentDetail {
+  const progress = replay(ladder, stored);
+  return {
+    id: ID,
+    ladder,
+    player: { id: "p1", name: "Ivo Marsh" },
+    assignedBy: { id: "c1", name: "Dana Whitcombe" },
+    squadId: null,
+    sessionId: null,
+    dueDate: null,
+    overdue: false,
+    status: progress.completed ? "completed" : stored.length ? "in-progress" : "assigned",
+    createdAt: "2025-05-01T10:00:00.000Z",
+    lastActivityAt: null,
+    completedAt: null,
+    progress,
+    currentRung: progress.completed ? null : ladder.rungs[progress.rungIndex]!,
+    putts: [],
+  };
+}
+
+function json(status: number, body?: unknown) {
+  return new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
+}
+
+function storeAndAnswer(body: { holed: boolean }) {
+  stored.push(body.holed);
+  return Promise.resolve(json(201, detail()));
+}
+
+beforeEach(() => {
+  stored = [];
+  posts = [];
+  answerPost = storeAndAnswer;
+  window.localStorage.clear();
+  forgetRunStores();
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
+      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
+      const method = init?.method ?? "GET";
+      if (url.pathname === "/api/me") return json(200, me);
+      if (url.pathname === `/api/assignments/${ID}` && method === "GET") return json(200, detail());
+      if (url.pathname === `/api/assignments/${ID}/putts` && method === "POST") {
+        const body = JSON.parse(String(init?.body)) as { holed: boolean; clientId?: string };
+        posts.push(body);
+        return answerPost(body);
+      }
+      if (url.pathname === `/api/assignments/${ID}/putts/last` && method === "DELETE") {
+        stored.pop();
+        return json(200, detail());
+      }
+      return json(404, { error: { code: "NOT_FOUND", message: "Not found" } });
+    }),
+  );
+});
+afterEach(() => {
+  cleanup();
+  forgetRunStores();
+  vi.unstubAllGlobals();
+});
+
+function renderRun() {
+  return renderRoute(<RunPage assignmentId={ID} />, { at: `/ladders/run/${ID}`, routes: [{ path: "/ladders/mine", element: <p>My ladders page</p> }] });
+}
+
+const stat = (label: string) => within(screen.getByRole("region", { name: "Current rung" })).getByText(label).nextElementSibling?.textContent;
+
+test("a tap shows the new state at once, before the server has answered", async () => {
+  answerPost = () => new Promise<Response>(() => {});
+  const user = userEvent.setup();
+  renderRun();
+  expect(await screen.findByText("3 ft")).toBeInTheDocument();
+  expect(stat("Balls left")).toBe("2");
+
+  await user.click(screen.getByRole("button", { name: "Missed" }));
+  expect(stat("Balls left")).toBe("1");
+  expect(stat("Holed")).toBe("0");
+  // The miss can take details; it already counts, and goes to the server once they are given or skipped.
+  expect(screen.getByRole("region", { name: "Miss details" })).toBeInTheDocument();
+  expect(screen.getByText("The miss is saved after its details")).toBeInTheDocument();
+  expect(posts).toEqual([]);
+  await user.click(screen.getByRole("button", { name: "Skip" }));
+  expect(screen.getByText("Saving…")).toBeInTheDocument();
+  expect(stat("Balls left")).toBe("1");
+  expect(posts).toHaveLength(1);
+});
+
+test("passing a rung moves up with a clear message, and the server's answer agrees", async () => {
+  const user = userEvent.setup();
+  renderRun();
+  await screen.findByText("3 ft");
+  await user.click(screen.getByRole("button", { name: "Holed" }));
+
+  expect(screen.getByText("Rung passed — on to 5 ft")).toBeInTheDocument();
+  expect(within(screen.getByRole("region", { name: "Current rung" })).getByText("Rung 2 of 2")).toBeInTheDocument();
+  expect(within(screen.getByRole("region", { name: "Current rung" })).getByText("5 ft")).toBeInTheDocument();
+  expect(stat("In a row")).toBe("0");
+  expect(await screen.findByText("Every putt saved")).toBeInTheDocument();
+  expect(posts).toEqual([{ holed: true, clientId: expect.stringMatching(/^[0-9a-f-]{36}$/) }]);
+});
+
+test("failing a rung applies the ladder's rule: drop one rung", async () => {
+  const user = userEvent.setup();
+  renderRun();
+  await screen.findByText("3 ft");
+  await user.click(screen.getByRole("button", { name: "Holed" }));
+  await user.click(screen.getByRole("button", { name: "Holed" }));
+  // On rung 2 (2 in a row of 3): holed, then missed leaves one ball, too few for a run of two.
+  await user.click(screen.getByRole("button", { name: "Missed" }));
+  expect(screen.getByText("Missed the rung — back to 3 ft")).toBeInTheDocument();
+  expect(within(screen.getByRole("region", { name: "Current rung" })).getByText("Rung 1 of 2")).toBeInTheDocument();
+  // The miss waits for its details; skipping sends it.
+  await user.click(screen.getByRole("button", { name: "Skip" }));
+  await waitFor(() => expect(stored).toEqual([true, true, false]));
+});
+
+test("miss details go with the putt; skipping sends it without them", async () => {
+  const user = userEvent.setup();
+  renderRun();
+  await screen.findByText("3 ft");
+  await user.click(screen.getByRole("button", { name: "Missed" }));
+  await user.click(screen.getByRole("button", { name: "Left" }));
+  await user.click(screen.getByRole("button", { name: "Short" }));
+  await user.type(screen.getByLabelText("How far short (in)"), "12");
+  await user.click(screen.getByRole("button", { name: "Save miss" }));
+  await waitFor(() => expect(posts).toHaveLength(1));
+  expect(posts[0]).toMatchObject({ holed: false, missSide: "left", missLengthM: -0.305 });
+
+  await user.click(screen.getByRole("button", { name: "Missed" }));
+  await user.click(screen.getByRole("button", { name: "Skip" }));
+  await waitFor(() => expect(posts).toHaveLength(2));
+  expect(posts[1]).toEqual({ holed: false, clientId: expect.any(String) });
+});
+
+test("without a connection the putts wait on the phone and go out, once each, when it comes back", async () => {
+  let online = false;
+  answerPost = (body) => (online ? storeAndAnswer(body) : Promise.reject(new TypeError("Failed to fetch")));
+  const user = userEvent.setup();
+  renderRun();
+  await screen.findByText("3 ft");
+  await user.click(screen.getByRole("button", { name: "Missed" }));
+  await user.click(screen.getByRole("button", { name: "Skip" }));
+  expect(await screen.findByText(/No connection/)).toBeInTheDocument();
+  expect(JSON.parse(window.localStorage.getItem(`borrowline.ladder-run.${ID}`) ?? "[]")).toHaveLength(1);
+  await user.click(screen.getByRole("button", { name: "Holed" }));
+  expect(screen.getByText("Rung passed — on to 5 ft")).toBeInTheDocument();
+
+  online = true;
+  await act(async () => {
+    window.dispatchEvent(new Event("online"));
+  });
+  expect(await screen.findByText("Every putt saved")).toBeInTheDocument();
+  expect(stored).toEqual([false, true]);
+  // The first putt was tried offline and again online, with the same clientId both times.
+  const ids = posts.map((p) => p.clientId);
+  expect(new Set(ids).size).toBe(2);
+  expect(ids[0]).toBe(ids[1]);
+  expect(window.localStorage.getItem(`borrowline.ladder-run.${ID}`)).toBeNull();
+});
+
+test("undo takes back the last putt", async () => {
+  const user = userEvent.setup();
+  renderRun();
+  await screen.findByText("3 ft");
+  await user.click(screen.getByRole("button", { name: "Holed" }));
+  await screen.findByText("Every putt saved");
+  await user.click(screen.getByRole("button", { name: "Undo last putt" }));
+  await waitFor(() => expect(within(screen.getByRole("region", { name: "Current rung" })).getByText("Rung 1 of 2")).toBeInTheDocument());
+  expect(stored).toEqual([]);
+  expect(stat("Balls left")).toBe("2");
+});
+
+test("the top rung passed shows the completed screen", async () => {
+  const user = userEvent.setup();
+  renderRun();
+  await screen.findByText("3 ft");
+  for (let i = 0; i < 3; i++) await user.click(screen.getByRole("button", { name: "Holed" }));
+  expect(screen.getByRole("heading", { name: "Ladder completed" })).toBeInTheDocument();
+  expect(screen.getByText(/All 2 rungs passed in 3 putts, without missing a rung/)).toBeInTheDocument();
+  await waitFor(() => expect(stored).toEqual([true, true, true]));
+});

@@ -1,0 +1,179 @@
+// @vitest-environment jsdom
+import "@testing-library/jest-dom/vitest";
+import { afterEach, beforeEach, expect, test, vi } from "vitest";
+import { cleanup, fireEvent, screen, waitFor, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { renderRoute } from "../../../testing/render";
+import { mapLayout } from "../utils/map-view";
+import { GreenMapPage } from "./green-map-page";
+import { HeightMapUpload } from "./height-map-upload";
+
+vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
+
+type Call = { url: string; method: string; body: unknown };
+let calls: Call[] = [];
+
+const GREEN_ID = "6c9c2f0e-6f5e-4c1f-9d4e-0a1b2c3d4e5f";
+const me = {
+  user: { id: "u1", name: "Ivo", email: "ivo@example.com", role: "player", emailVerified: true },
+  preferences: { units: "metric" },
+};
+const green = { id: GREEN_ID, name: "Top green", locationNote: null, currentStimpFt: 9.5, createdAt: "2026-01-01T00:00:00Z", readings: [] };
+// A 12 m × 12 m plane falling to the east, 5 × 5 heights 3 m apart, origin at (0, 0).
+const heightsM = Array.from({ length: 5 }, () => [0.12, 0.09, 0.06, 0.03, 0]);
+const heightMap = {
+  nx: 5,
+  ny: 5,
+  spacingM: 3,
+  originM: [0, 0],
+  widthM: 12,
+  depthM: 12,
+  minHeightM: 0,
+  maxHeightM: 0.12,
+  maxSlopePct: 1,
+  source: "grid",
+  spotCount: null,
+  heightsM,
+};
+const surfaceRead = {
+  launchSpeedMps: 2.1,
+  startLineDeg: -3.1,
+  aimOffsetM: -0.41,
+  entrySpeedMps: 0.7,
+  rollPastM: 0.45,
+  playsLikeM: 7.6,
+  breaks: "right-to-left",
+  capture: { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.6, marginMps: 0.9 },
+  path: [
+    [3, 2],
+    [3.2, 5],
+    [6, 9],
+    [6.1, 9.4],
+  ],
+  puttFramePath: [
+    [0, 0],
+    [0, 7.6],
+  ],
+  restM: [6.1, 9.4],
+  distanceM: 7.62,
+  meanPlane: { slopePct: 1, fallLineDeg: 60 },
+  model: { name: "m", v0Mps: 1.83, rollingDecelMps2: 0.55, gravityDecelMps2: 0.14, maxStoppableSlopePct: 7.86 },
+  diagnostics: { method: "surface-newton", iterations: 4, integrations: 12 },
+};
+
+function json(status: number, body: unknown) {
+  return new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
+}
+
+function stubApi(put?: () => Response) {
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
+      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
+      const method = init?.method ?? "GET";
+      const body = init?.body instanceof FormData ? init.body : init?.body ? JSON.parse(String(init.body)) : undefined;
+      calls.push({ url: url.pathname, method, body });
+      if (url.pathname === "/api/me") return json(200, me);
+      if (url.pathname === `/api/greens/${GREEN_ID}`) return json(200, green);
+      if (url.pathname === `/api/greens/${GREEN_ID}/height-map` && method === "GET") return json(200, heightMap);
+      if (url.pathname === `/api/greens/${GREEN_ID}/height-map` && method === "PUT" && put) return put();
+      if (url.pathname === `/api/greens/${GREEN_ID}/reads/solve`) return json(200, surfaceRead);
+      return json(404, { error: { code: "not_found", message: "Not found" } });
+    }),
+  );
+}
+
+beforeEach(() => {
+  calls = [];
+  // jsdom has no canvas: the WebGL probe answers "no", as a browser without WebGL would.
+  vi.spyOn(HTMLCanvasElement.prototype, "getContext").mockReturnValue(null);
+});
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+test("tapping the ball and then the hole asks for the read with both positions in metres in the green's frame", async () => {
+  stubApi();
+  renderRoute(<GreenMapPage greenId={GREEN_ID} />, { at: "/greens/x/map" });
+  const svg = await screen.findByTestId("surface-map");
+  // Drawn at half its viewBox size, 40 px in and 200 px down the page.
+  const layout = mapLayout({ minX: 0, maxX: 12, minY: 0, maxY: 12 });
+  const scale = 0.5;
+  svg.getBoundingClientRect = () => ({ left: 40, top: 200, width: layout.width * scale, height: layout.height * scale }) as DOMRect;
+  const tapAt = (xM: number, yM: number) =>
+    fireEvent.click(svg, { clientX: 40 + layout.toX(xM) * scale, clientY: 200 + layout.toY(yM) * scale });
+
+  tapAt(3, 2);
+  expect(screen.getByTestId("placement")).toHaveTextContent("Ball 3.0 m east, 2.0 m north · hole not placed");
+  tapAt(6, 9);
+  await waitFor(() => expect(calls.filter((c) => c.url.endsWith("/reads/solve"))).toHaveLength(1));
+  expect(calls.find((c) => c.url.endsWith("/reads/solve"))!.body).toEqual({
+    ball: [3, 2],
+    hole: [6, 9],
+    // The green's latest Stimp reading is the default.
+    stimpFt: 9.5,
+    pace: { rollPastM: 0.45 },
+  });
+  expect(await screen.findByTestId("surface-aim")).toHaveTextContent("Aim 41 cm left of the hole");
+  expect(screen.getByTestId("surface-plays-like")).toHaveTextContent("7.60 m on the flat");
+  expect(screen.getByTestId("surface-line")).toBeInTheDocument();
+  // Without WebGL the 3D view says so; the map above stands in for it.
+  expect(screen.getByText(/cannot draw the 3D green/)).toBeInTheDocument();
+});
+
+test("with both placed, a tap moves the one chosen; the summary shows the map's size and steepest grade", async () => {
+  stubApi();
+  renderRoute(<GreenMapPage greenId={GREEN_ID} />, { at: "/greens/x/map" });
+  const svg = await screen.findByTestId("surface-map");
+  const layout = mapLayout({ minX: 0, maxX: 12, minY: 0, maxY: 12 });
+  svg.getBoundingClientRect = () => ({ left: 0, top: 0, width: layout.width, height: layout.height }) as DOMRect;
+  const tapAt = (xM: number, yM: number) => fireEvent.click(svg, { clientX: layout.toX(xM), clientY: layout.toY(yM) });
+  tapAt(3, 2);
+  tapAt(6, 9);
+  await userEvent.click(screen.getByRole("button", { name: "the ball" }));
+  tapAt(1.5, 1);
+  await waitFor(() =>
+    expect(calls.filter((c) => c.url.endsWith("/reads/solve")).at(-1)?.body).toMatchObject({ ball: [1.5, 1], hole: [6, 9] }),
+  );
+  const summary = within(screen.getByRole("region", { name: "The height map" }));
+  expect(summary.getByText("Size").nextSibling).toHaveTextContent("12.0 m east–west × 12.0 m north–south (5 × 5 heights)");
+  expect(summary.getByText("Steepest").nextSibling).toHaveTextContent("1.0 % between neighbouring heights");
+});
+
+test("a refused upload lists the server's row and column errors, and the spacing error beside its field", async () => {
+  stubApi(() =>
+    json(400, {
+      error: {
+        code: "bad_request",
+        message: "The grid has 3 problem(s).",
+        fields: {
+          "row 3, column 2": '"x" is not a height in metres',
+          "row 2": "has 1 values; row 1 has 3 (every row needs the same number)",
+          spacingM: "spacingM must be at least 0.05 m",
+        },
+      },
+    }),
+  );
+  renderRoute(<HeightMapUpload greenId={GREEN_ID} replacing={false} />, { at: "/greens/x/map" });
+  await userEvent.upload(screen.getByLabelText("CSV file"), new File(["0,0,0\n0\n0,x,0\n"], "bumpy.csv", { type: "text/csv" }));
+  await userEvent.clear(screen.getByLabelText("Spacing (m)"));
+  await userEvent.type(screen.getByLabelText("Spacing (m)"), "0.01");
+  await userEvent.click(screen.getByRole("button", { name: "Upload height map" }));
+
+  const alert = await screen.findByRole("alert");
+  expect(alert).toHaveTextContent("The grid has 3 problem(s).");
+  const items = within(within(alert).getByRole("list", { name: "Problems in the file" })).getAllByRole("listitem");
+  // In the order the file reads: row 2 before row 3.
+  expect(items.map((li) => li.textContent)).toEqual([
+    "Row 2 has 1 values; row 1 has 3 (every row needs the same number)",
+    'Row 3, column 2 "x" is not a height in metres',
+  ]);
+  expect(screen.getByText("spacingM must be at least 0.05 m")).toBeInTheDocument();
+  const put = calls.find((c) => c.method === "PUT")!;
+  const form = put.body as FormData;
+  expect(form.get("format")).toBe("grid");
+  expect(form.get("spacingM")).toBe("0.01");
+  expect(form.get("originXM")).toBe("0");
+  expect((form.get("file") as File).name).toBe("bumpy.csv");
+});

@@ -1,0 +1,365 @@
+// A green's height map: upload it, see its summary, tap the ball and the hole on the map, and get the read on that
+// real surface (POST /api/greens/:id/reads/solve), drawn on the map and in 3D.
+import { useMemo, useState } from "react";
+import clsx from "clsx";
+import { surfaceFromGrid } from "../../../../physics";
+import type { HeightMapResponse } from "../../../../shared/schemas/height-map";
+import { formatLength, formatShort, shortUnitLabel, type UnitSystem } from "../../../../shared/units";
+import { aimWords } from "../../../components/green-3d/words";
+import { CameraButtons } from "../../../components/green-3d/camera-buttons";
+import { contourIntervalM } from "../../../components/green-3d/frame";
+import type { CameraView } from "../../../components/green-3d/scene-types";
+import { heightRaster } from "../../../components/green-3d/surface-grid";
+import { SurfaceView } from "../../../components/green-3d/surface-view";
+import { useWebGL } from "../../../components/green-3d/webgl";
+import { Alert, Button, ButtonLink, Card, InputField, PageHeader, PageSpinner } from "../../../components/ui";
+import { paths } from "../../../config/paths";
+import { isApiError } from "../../../lib/api-client";
+import { useMe } from "../../auth/api/get-me";
+import { useGreen } from "../api/get-green";
+import { useHeightMap } from "../api/get-height-map";
+import { useSurfaceRead } from "../api/solve-on-surface";
+import { useDebouncedValue } from "../hooks/use-debounced-value";
+import { downhillArrows } from "../utils/downhill-arrows";
+import { aimPoint, roundCm } from "../utils/map-view";
+import { surfaceSolveRequest } from "../utils/solve-request";
+import { HeightMapSummary } from "./height-map-summary";
+import { HeightMapUpload } from "./height-map-upload";
+import { MapLegend } from "./map-legend";
+import { SurfaceMap } from "./surface-map";
+import { SurfaceReadAnswer } from "./surface-read-answer";
+
+const EXAGGERATION = 5;
+
+export function GreenMapPage({ greenId }: { greenId: string }) {
+  const me = useMe();
+  const units: UnitSystem = me.data?.preferences.units ?? "imperial";
+  const green = useGreen(greenId);
+  const map = useHeightMap(greenId);
+
+  if (green.isPending || map.isPending) return <PageSpinner label="Getting the green" />;
+  if (green.isError && isApiError(green.error) && green.error.status === 404) {
+    return (
+      <>
+        <PageHeader eyebrow="Green map" title="Green not found" />
+        <Alert tone="info">This green does not exist, or it is not yours.</Alert>
+      </>
+    );
+  }
+  const failed = green.error ?? map.error;
+  if (failed) {
+    return (
+      <Alert
+        tone="error"
+        title="Could not load the green"
+        action={
+          <Button size="sm" variant="secondary" onClick={() => void Promise.all([green.refetch(), map.refetch()])}>
+            Try again
+          </Button>
+        }
+      >
+        {failed.message}
+      </Alert>
+    );
+  }
+  const name = green.data?.name ?? "Green";
+  const stimpFt = green.data?.currentStimpFt ?? null;
+
+  return (
+    <>
+      <title>{`${name} map · Borrowline`}</title>
+      <PageHeader
+        eyebrow="Green map"
+        title={name}
+        description={
+          map.data
+            ? "Tap where the ball lies and where the hole is cut; the read is rolled on this green's own surface."
+            : "Upload the green's height map to read putts on its real surface, bumps and all."
+        }
+        actions={
+          <ButtonLink to={paths.green.href(greenId)} variant="secondary" size="sm">
+            Back to the green
+          </ButtonLink>
+        }
+      />
+      {map.data ? (
+        <MapWorkspace key={mapIdentity(map.data)} greenId={greenId} map={map.data} units={units} greenStimpFt={stimpFt} />
+      ) : (
+        <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)]">
+          <Card>
+            <HeightMapUpload greenId={greenId} replacing={false} />
+          </Card>
+          <Card>
+            <CsvHelp />
+          </Card>
+        </div>
+      )}
+    </>
+  );
+}
+
+function CsvHelp() {
+  return (
+    <div className="flex flex-col gap-2 text-sm text-ink-700">
+      <h2 className="text-lg font-semibold tracking-tight text-ink-900">What the file looks like</h2>
+      <p>
+        A grid: one line per row of heights in metres, the northern edge first, each line running west to east, all lines the same length.
+        Lines starting with # are notes. The spacing is the distance between neighbouring heights; the south-west corner is where the last
+        line starts.
+      </p>
+      <pre className="overflow-x-auto rounded-lg bg-ink-900 p-3 text-xs text-sand-50">
+        {"0.000,-0.010,-0.018\n0.017,0.008,-0.001\n0.034,0.025,0.016"}
+      </pre>
+      <p>Spot heights: one x,y,z line per surveyed point (metres east, north, up), with points at the corners of the area.</p>
+    </div>
+  );
+}
+
+type Placing = "ball" | "hole";
+
+/** Changes only when a different map is uploaded (not on a refetch of the same one), so the placed putt survives a refetch. */
+function mapIdentity(m: HeightMapResponse): string {
+  return [m.nx, m.ny, m.spacingM, m.originM.join(","), m.minHeightM, m.maxHeightM, m.maxSlopePct].join("|");
+}
+
+function MapWorkspace({
+  greenId,
+  map,
+  units,
+  greenStimpFt,
+}: {
+  greenId: string;
+  map: HeightMapResponse;
+  units: UnitSystem;
+  greenStimpFt: number | null;
+}) {
+  const [ball, setBall] = useState<[number, number] | null>(null);
+  const [hole, setHole] = useState<[number, number] | null>(null);
+  const [placing, setPlacing] = useState<Placing>("ball");
+  const [stimpText, setStimpText] = useState(String(greenStimpFt ?? 10));
+  const [rollPastText, setRollPastText] = useState(units === "imperial" ? "17" : "45");
+  const [view, setView] = useState<{ view: CameraView; key: number }>({ view: "free", key: 0 });
+  const [exaggerate, setExaggerate] = useState(false);
+  const webgl = useWebGL();
+
+  const surface = useMemo(() => surfaceFromGrid(map), [map]);
+  const raster = useMemo(() => heightRaster(map, 128, surface), [map, surface]);
+  const arrows = useMemo(() => downhillArrows(surface, raster.bounds), [surface, raster]);
+  const interval = contourIntervalM(raster.maxM - raster.minM, units, 14);
+
+  const { request, errors } = surfaceSolveRequest({ ball, hole, stimpText, rollPastText, units });
+  const settled = useDebouncedValue(request, 300);
+  const read = useSurfaceRead(greenId, settled);
+  const answer = request && read.data && !read.isError ? read.data : null;
+  const aim = answer && ball && hole ? aimPoint(ball, hole, answer.aimOffsetM) : null;
+
+  const place = (point: [number, number]) => {
+    if (placing === "ball") {
+      setBall(point);
+      if (!hole) setPlacing("hole");
+    } else {
+      setHole(point);
+    }
+  };
+
+  const readError = read.error;
+  const fieldErrors = isApiError(readError) ? readError.fields : {};
+  const description = `${ball ? `Ball ${positionWords(ball)}` : "No ball placed yet"}; ${hole ? `hole ${positionWords(hole)}` : "no hole placed yet"}.${answer ? ` Aim ${formatShort(answer.aimOffsetM, units)} ${answer.aimOffsetM < 0 ? "left" : "right"} of the hole.` : ""}`;
+
+  return (
+    <div className="flex flex-col gap-6">
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)]">
+        <Card className="flex flex-col gap-4">
+          <div role="group" aria-label="What a tap places" className="flex flex-wrap items-center gap-2">
+            <span className="text-sm font-medium text-ink-800">A tap places</span>
+            {(["ball", "hole"] as const).map((p) => (
+              <button
+                key={p}
+                type="button"
+                aria-pressed={placing === p}
+                onClick={() => setPlacing(p)}
+                className={clsx(
+                  "min-h-11 rounded-xl border-2 px-4 text-sm font-medium transition-colors focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500",
+                  placing === p
+                    ? "border-ink-900 bg-ink-900 text-sand-50"
+                    : "border-ink-900/15 bg-sand-50 text-ink-900 hover:border-ink-900/30",
+                )}
+              >
+                {p === "ball" ? "the ball" : "the hole"}
+              </button>
+            ))}
+          </div>
+          <SurfaceMap
+            raster={raster}
+            contourIntervalM={interval}
+            arrows={arrows}
+            ball={ball}
+            hole={hole}
+            aim={aim}
+            line={answer?.path ?? null}
+            placing={placing}
+            onTap={place}
+            units={units}
+            description={description}
+          />
+          {answer ? (
+            <p className="font-semibold text-ink-900 lg:hidden" aria-hidden="true">
+              Aim {aimWords(answer.aimOffsetM, units)}, finish {formatShort(answer.rollPastM, units)} past; plays like{" "}
+              {formatLength(answer.playsLikeM, units)}.
+            </p>
+          ) : null}
+          <p className="text-sm text-ink-600" data-testid="placement">
+            {ball ? `Ball ${positionWords(ball)}` : "Ball not placed"} · {hole ? `hole ${positionWords(hole)}` : "hole not placed"}{" "}
+            <span className="text-ink-500">(metres from the south-west corner of the map)</span>
+          </p>
+          <MapLegend contourIntervalM={interval} units={units} />
+          <PositionInputs ball={ball} hole={hole} onBall={setBall} onHole={setHole} />
+        </Card>
+
+        <div className="flex flex-col gap-6 lg:sticky lg:top-20">
+          <Card className="flex flex-col gap-4">
+            <div className="grid grid-cols-2 gap-4">
+              <InputField
+                label="Stimp (ft)"
+                inputMode="decimal"
+                value={stimpText}
+                onChange={(e) => setStimpText(e.target.value)}
+                hint={greenStimpFt !== null ? `This green's latest: ${greenStimpFt} ft` : "Green speed, 4–16 ft"}
+                error={errors.stimp ?? fieldErrors.stimpFt}
+              />
+              <InputField
+                label={`Past the hole (${shortUnitLabel(units)})`}
+                inputMode="decimal"
+                value={rollPastText}
+                onChange={(e) => setRollPastText(e.target.value)}
+                hint="Where it stops if it misses"
+                error={errors.rollPast ?? fieldErrors["pace.rollPastM"]}
+              />
+            </div>
+            {errors.placement ? (
+              <p className="text-ink-600" role="status">
+                {errors.placement}
+              </p>
+            ) : readError && isApiError(readError) && readError.status === 422 ? (
+              <Alert tone="warning" title="No read from here at this pace">
+                {readError.message} Try a firmer pace or another spot.
+              </Alert>
+            ) : readError ? (
+              <Alert tone="error" title="Could not work out the read">
+                {Object.values(fieldErrors).join("; ") || readError.message}
+              </Alert>
+            ) : answer ? (
+              <SurfaceReadAnswer
+                read={answer}
+                units={units}
+                updating={read.isFetching || read.isPlaceholderData || JSON.stringify(settled) !== JSON.stringify(request)}
+              />
+            ) : (
+              <PageSpinner label="Rolling the putt on this green" />
+            )}
+          </Card>
+        </div>
+      </div>
+
+      <Card padded={false} className="overflow-hidden">
+        <div className="p-5 pb-3 sm:px-7">
+          <h2 className="text-lg font-semibold tracking-tight">The green in 3D</h2>
+          <p className="text-sm text-ink-600">Drag to turn it, pinch or scroll to zoom.</p>
+        </div>
+        <SurfaceView
+          className="h-[380px] sm:h-[460px]"
+          webgl={webgl}
+          map={map}
+          ball={ball}
+          hole={hole}
+          aim={aim}
+          line={answer?.path ?? null}
+          contourIntervalM={interval}
+          exaggeration={exaggerate ? EXAGGERATION : 1}
+          view={view.view}
+          viewKey={view.key}
+          label={`The green in 3D. ${description}`}
+          toolbar={<CameraButtons view={view.view} onView={(v) => setView((s) => ({ view: v, key: s.key + 1 }))} />}
+        />
+        <div className="flex flex-col gap-3 p-5 sm:px-7">
+          <MapLegend contourIntervalM={interval} units={units} arrows={false} />
+          <label className="flex min-h-11 items-center gap-3 text-sm font-medium">
+            <input
+              type="checkbox"
+              className="size-5 accent-ink-900"
+              checked={exaggerate}
+              onChange={(e) => setExaggerate(e.target.checked)}
+            />
+            Draw the heights {EXAGGERATION}× taller than they are
+          </label>
+        </div>
+      </Card>
+
+      <div className="grid items-start gap-6 lg:grid-cols-2">
+        <Card>
+          <HeightMapSummary greenId={greenId} summary={map} units={units} />
+        </Card>
+        <Card>
+          <HeightMapUpload greenId={greenId} replacing />
+        </Card>
+      </div>
+    </div>
+  );
+}
+
+function positionWords([x, y]: readonly [number, number]): string {
+  return `${x.toFixed(1)} m east, ${y.toFixed(1)} m north`;
+}
+
+/** The keyboard's way to place the ball and the hole: metres east and north of the map's south-west corner. */
+function PositionInputs({
+  ball,
+  hole,
+  onBall,
+  onHole,
+}: {
+  ball: [number, number] | null;
+  hole: [number, number] | null;
+  onBall: (p: [number, number]) => void;
+  onHole: (p: [number, number]) => void;
+}) {
+  const [text, setText] = useState({ bx: "", by: "", hx: "", hy: "" });
+  const num = (t: string) => Number(t.trim().replace(",", "."));
+  const apply = () => {
+    const b: [number, number] = [num(text.bx), num(text.by)];
+    const h: [number, number] = [num(text.hx), num(text.hy)];
+    if (text.bx && text.by && b.every(Number.isFinite)) onBall([roundCm(b[0]), roundCm(b[1])]);
+    if (text.hx && text.hy && h.every(Number.isFinite)) onHole([roundCm(h[0]), roundCm(h[1])]);
+  };
+  const field = (key: keyof typeof text, label: string, current: number | undefined) => (
+    <InputField
+      label={label}
+      inputMode="decimal"
+      value={text[key]}
+      placeholder={current !== undefined ? String(current) : undefined}
+      onChange={(e) => setText((t) => ({ ...t, [key]: e.target.value }))}
+    />
+  );
+  return (
+    <details className="rounded-xl border-2 border-ink-900/10 px-4 py-3">
+      <summary className="min-h-8 cursor-pointer text-sm font-medium">Type the positions instead</summary>
+      <form
+        className="mt-3 grid grid-cols-2 gap-3"
+        onSubmit={(e) => {
+          e.preventDefault();
+          apply();
+        }}
+      >
+        {field("bx", "Ball, east (m)", ball?.[0])}
+        {field("by", "Ball, north (m)", ball?.[1])}
+        {field("hx", "Hole, east (m)", hole?.[0])}
+        {field("hy", "Hole, north (m)", hole?.[1])}
+        <div className="col-span-2">
+          <Button type="submit" size="sm" variant="secondary">
+            Place them
+          </Button>
+        </div>
+      </form>
+    </details>
+  );
+}

@@ -1,0 +1,81 @@
+// @vitest-environment jsdom
+import { afterEach, beforeEach, expect, test, vi } from "vitest";
+import { onlineManager, QueryClient } from "@tanstack/react-query";
+import { OUTBOX_STORAGE_KEY, registerPuttMutations, undoQueuedPutt, type NewPutt } from "./add-putt";
+import { practiceKeys } from "./keys";
+
+const SESSION = "11111111-1111-4111-8111-111111111111";
+const putt = (clientId: string, holed = true): NewPutt => ({ sessionId: SESSION, clientId, distanceM: 1.5, holed, loggedAt: new Date().toISOString() });
+
+function newClient() {
+  return new QueryClient({ defaultOptions: { queries: { retry: false } } });
+}
+
+function run(client: QueryClient, v: NewPutt) {
+  const m = client.getMutationCache().build(client, { mutationKey: practiceKeys.addPutt(), scope: { id: `putts:${v.sessionId}` } });
+  return m.execute(v).catch(() => undefined);
+}
+
+const stored = () => JSON.parse(window.localStorage.getItem(OUTBOX_STORAGE_KEY) ?? "null") as { mutations: { state: { variables: NewPutt } }[] } | null;
+
+beforeEach(() => {
+  window.localStorage.clear();
+});
+afterEach(() => {
+  onlineManager.setOnline(true);
+  vi.unstubAllGlobals();
+});
+
+test("a putt logged offline waits in localStorage and a fresh page sends it, once, when the connection is back", async () => {
+  const fetchMock = vi.fn(async () => Promise.reject(new TypeError("Failed to fetch")));
+  vi.stubGlobal("fetch", fetchMock);
+  onlineManager.setOnline(false);
+  const first = newClient();
+  const stop = registerPuttMutations(first, { retryDelay: () => 0 });
+  void run(first, putt("c-1"));
+  void run(first, putt("c-2", false));
+  await vi.waitFor(() => expect(stored()?.mutations.map((m) => m.state.variables.clientId)).toEqual(["c-1", "c-2"]));
+  // offlineFirst: the first putt was tried once and then paused; the second waits its turn behind it.
+  await vi.waitFor(() => expect(fetchMock).toHaveBeenCalledTimes(1));
+  await new Promise((r) => setTimeout(r, 30));
+  expect(fetchMock).toHaveBeenCalledTimes(1);
+  expect(first.getMutationCache().getAll().map((m) => m.state.isPaused)).toEqual([true, true]);
+  stop();
+
+  // "Reload": a new client restores the queue and sends it when the browser is online again.
+  const sent: Record<string, unknown>[] = [];
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (_url: RequestInfo | URL, init?: RequestInit) => {
+      sent.push(JSON.parse(String(init?.body)));
+      return new Response(JSON.stringify({ id: `id-${sent.length}` }), { status: 201, headers: { "Content-Type": "application/json" } });
+    }),
+  );
+  const second = newClient();
+  const stop2 = registerPuttMutations(second, { retryDelay: () => 0 });
+  expect(second.getMutationCache().findAll({ mutationKey: practiceKeys.addPutt(), status: "pending" })).toHaveLength(2);
+  expect(sent).toHaveLength(0);
+  onlineManager.setOnline(true);
+  await second.resumePausedMutations();
+  await vi.waitFor(() => expect(sent.map((b) => b.clientId)).toEqual(["c-1", "c-2"]));
+  await vi.waitFor(() => expect(stored()).toBeNull());
+  // The body is the API's: no session id or local timestamp in it.
+  expect(sent[1]).toEqual({ clientId: "c-2", distanceM: 1.5, holed: false });
+  stop2();
+});
+
+test("undoing a putt that is still waiting takes it out of the queue and out of storage", async () => {
+  const fetchMock = vi.fn(async () => Promise.reject(new TypeError("Failed to fetch")));
+  vi.stubGlobal("fetch", fetchMock);
+  onlineManager.setOnline(false);
+  const client = newClient();
+  const stop = registerPuttMutations(client, { retryDelay: () => 0 });
+  void run(client, putt("c-1"));
+  void run(client, putt("c-2"));
+  await vi.waitFor(() => expect(stored()?.mutations).toHaveLength(2));
+
+  expect(undoQueuedPutt(client, "c-2")).toBe(true);
+  expect(stored()?.mutations.map((m) => m.state.variables.clientId)).toEqual(["c-1"]);
+  expect(undoQueuedPutt(client, "no-such")).toBe(false);
+  stop();
+});

@@ -1,0 +1,118 @@
+// @vitest-environment jsdom
+import "@testing-library/jest-dom/vitest";
+import { afterEach, expect, test, vi } from "vitest";
+import { cleanup, screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { renderRoute } from "../../../testing/render";
+import { CsvImportPage } from "./csv-import-page";
+
+const me = { user: { id: "u1", name: "Ivo", email: "ivo@example.test", role: "player", emailVerified: true }, preferences: { units: "imperial" } };
+const preview = {
+  headers: ["Date", "Distance (ft)", "Made", "Side", "Green"],
+  rows: [
+    ["2024-05-01", "10", "no", "left", "Top green"],
+    ["2024-05-01", "three", "yes", "", "Top green"],
+    ["May 2", "6", "maybe", "", "Top green"],
+  ],
+  rowCount: 3,
+  delimiter: ",",
+  suggestedMapping: { date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side", green: "Green" },
+};
+const rowErrors = [
+  { row: 2, line: 3, field: "distance", message: '"three" is not a number' },
+  { row: 3, line: 4, field: "date", message: '"May 2" is not a date as YYYY-MM-DD' },
+  { row: 3, line: 4, field: "holed", message: '"maybe" is not yes/no, true/false, 1/0 or holed/missed' },
+];
+
+type Call = { url: string; fields: Record<string, string> };
+
+function stubApi(answers: { preview?: { status: number; body: unknown }; imports?: { status: number; body: unknown }[] }) {
+  const calls: Call[] = [];
+  let imports = 0;
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
+      const url = typeof input === "string" ? input : input instanceof URL ? input.href : input.url;
+      const fields: Record<string, string> = {};
+      if (init?.body instanceof FormData) for (const [k, v] of init.body.entries()) fields[k] = typeof v === "string" ? v : `file:${v.name}`;
+      calls.push({ url, fields });
+      const reply = (a: { status: number; body: unknown }) => new Response(JSON.stringify(a.body), { status: a.status, headers: { "Content-Type": "application/json" } });
+      if (url === "/api/me") return reply({ status: 200, body: me });
+      if (url === "/api/csv/putts/preview") return reply(answers.preview ?? { status: 200, body: preview });
+      if (url === "/api/csv/putts/import") return reply(answers.imports![imports++]!);
+      return reply({ status: 404, body: { error: { code: "NOT_FOUND", message: "Not found" } } });
+    }),
+  );
+  return calls;
+}
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const file = () => new File(["Date,Distance (ft),Made\n"], "putts.csv", { type: "text/csv" });
+
+test("the mapping is prefilled from the suggestion, and a refused import lists each bad row with its field and why", async () => {
+  const calls = stubApi({
+    imports: [
+      { status: 422, body: { error: { code: "unprocessable", message: "2 row(s) have errors; nothing was imported.", fields: { file: "2 invalid row(s)" } }, imported: 0, sessionsCreated: 0, greensCreated: 0, skipped: 2, errors: rowErrors } },
+      { status: 200, body: { imported: 1, sessionsCreated: 1, greensCreated: 1, skipped: 2, errors: rowErrors } },
+    ],
+  });
+  const user = userEvent.setup();
+  renderRoute(<CsvImportPage />, { at: "/practice/import" });
+  await user.upload(screen.getByLabelText("CSV file"), file());
+
+  expect(await screen.findByRole("heading", { name: "putts.csv" })).toBeInTheDocument();
+  expect(screen.getByRole("table", { name: "The first rows of the file" })).toHaveTextContent("three");
+  expect(screen.getByLabelText("Day (required)")).toHaveValue("Date");
+  expect(screen.getByLabelText("Distance (required)")).toHaveValue("Distance (ft)");
+  expect(screen.getByLabelText("Holed (required)")).toHaveValue("Made");
+  expect(screen.getByLabelText("Miss side")).toHaveValue("Side");
+  expect(screen.getByLabelText("Break")).toHaveValue("");
+  expect(screen.getByLabelText("Distances are in")).toHaveValue("ft");
+
+  await user.click(screen.getByRole("button", { name: "Import 3 rows" }));
+
+  const report = await screen.findByRole("table", { name: "Rows that could not be imported" });
+  const rows = within(report).getAllByRole("row").slice(1);
+  expect(rows.map((r) => within(r).getAllByRole("cell").map((c) => c.textContent))).toEqual([
+    ["2", "3", "Distance", '"three" is not a number'],
+    ["3", "4", "Day", '"May 2" is not a date as YYYY-MM-DD'],
+    ["3", "4", "Holed", '"maybe" is not yes/no, true/false, 1/0 or holed/missed'],
+  ]);
+  expect(screen.getByText(/2 of 3 rows have problems/)).toBeInTheDocument();
+  expect(calls.find((c) => c.url === "/api/csv/putts/import")?.fields).toMatchObject({ skipInvalid: "false", file: "file:putts.csv" });
+  expect(JSON.parse(calls.find((c) => c.url === "/api/csv/putts/import")!.fields.mapping!)).toEqual({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side", green: "Green" });
+
+  await user.click(screen.getByRole("button", { name: "Import the 1 valid rows only" }));
+  expect(await screen.findByText("Imported 1 putt")).toBeInTheDocument();
+  expect(calls.filter((c) => c.url === "/api/csv/putts/import").map((c) => c.fields.skipInvalid)).toEqual(["false", "true"]);
+});
+
+test("a required column left unmapped stops the import before anything is sent", async () => {
+  const calls = stubApi({});
+  const user = userEvent.setup();
+  renderRoute(<CsvImportPage />, { at: "/practice/import" });
+  await user.upload(screen.getByLabelText("CSV file"), file());
+  await user.selectOptions(await screen.findByLabelText("Holed (required)"), "");
+  expect(screen.getByText(/Choose a column for Holed/)).toBeInTheDocument();
+  expect(screen.getByRole("button", { name: "Import 3 rows" })).toBeDisabled();
+  expect(calls.some((c) => c.url === "/api/csv/putts/import")).toBe(false);
+});
+
+test("too large and not-CSV uploads are explained in plain words", async () => {
+  stubApi({ preview: { status: 413, body: { error: { code: "payload_too_large", message: "The file is larger than 1 MB.", fields: { file: "at most 1 MB" } } } } });
+  const user = userEvent.setup();
+  renderRoute(<CsvImportPage />, { at: "/practice/import" });
+  await user.upload(screen.getByLabelText("CSV file"), file());
+  expect(await screen.findByRole("alert")).toHaveTextContent("That file is too large: the limit is 1 MB.");
+  cleanup();
+
+  stubApi({ preview: { status: 415, body: { error: { code: "unsupported_media_type", message: "Upload a CSV file (got image/png)." } } } });
+  renderRoute(<CsvImportPage />, { at: "/practice/import" });
+  // The picker offers CSV files only, but a dropped file (or "All files" in the picker) can be anything.
+  await userEvent.setup({ applyAccept: false }).upload(screen.getByLabelText("CSV file"), new File(["x"], "photo.png", { type: "image/png" }));
+  expect(await screen.findByRole("alert")).toHaveTextContent("That file is not a CSV.");
+});
