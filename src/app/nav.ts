@@ -10,36 +10,72 @@ export type NavItem = {
   roles?: ReadonlyArray<Role>;
   /** Shown only to signed-in users. */
   signedIn?: boolean;
+  /** Paths that belong to this item's area: it shows as active on any of them. */
+  match?: readonly string[];
   /** Shown only when a condition the shell knows about holds. */
   when?: "devMail";
 };
 
-// The main navigation. Add an item here when its route is registered in router.tsx.
+// The main navigation: one item per area of the product, so the bar fits a desktop and the phone menu stays
+// short. An area's pages are reached through its section tabs (sectionNavs below). Add an item here only when
+// its route is registered in router.tsx.
 export const navItems: ReadonlyArray<NavItem> = [
-  { label: "Home", to: paths.home.href(), end: true },
-  { label: "Read a putt", to: paths.read.href() },
-  { label: "Break chart", to: paths.breakChart.href() },
-  { label: "Rehearse", to: paths.rehearse.href() },
-  { label: "Read training", to: paths.train.href() },
-  // The practice log's other pages (Greens, Rounds) sit in its own sub-navigation (practiceNavItems), so the phone menu stays short.
-  { label: "Practice", to: paths.practice.href(), signedIn: true },
-  { label: "Make rates", to: paths.stats.href(), signedIn: true },
-  // coaching (issue 6)
-  { label: "My ladders", to: paths.myLadders.href(), roles: ["player"] },
-  { label: "Squads", to: paths.squads.href(), roles: ["coach", "admin"] },
-  { label: "Ladders", to: paths.ladders.href(), roles: ["coach", "admin"] },
-  { label: "Coach dashboard", to: paths.coach.href(), roles: ["coach", "admin"] },
-  { label: "Account", to: paths.account.href(), signedIn: true },
-  { label: "Dev mailbox", to: paths.mailbox.href(), when: "devMail" },
+  { label: "Read a putt", to: paths.read.href(), match: ["/read", "/rehearse", "/train", "/chart"] },
+  { label: "Practice", to: paths.practice.href(), signedIn: true, match: ["/practice", "/rounds", "/greens", "/stats"] },
+  { label: "My ladders", to: paths.myLadders.href(), roles: ["player"], match: ["/ladders/mine", "/ladders/run", "/squads"] },
+  { label: "Coaching", to: paths.coach.href(), roles: ["coach", "admin"], match: ["/coach", "/squads", "/ladders"] },
 ];
 
-/** The practice log's own tabs, shown at the top of each of its pages (src/app/layout/practice-nav.tsx). */
-export const practiceNavItems: ReadonlyArray<NavItem> = [
-  { label: "Practice", to: paths.practice.href(), signedIn: true },
-  { label: "Rounds", to: paths.rounds.href(), signedIn: true },
-  { label: "Greens", to: paths.greens.href(), signedIn: true },
-  { label: "Make rates", to: paths.stats.href(), signedIn: true },
+/** Tabs across the pages of one area, shown by the app shell on those pages. */
+export type SectionNav = { label: string; match: readonly string[]; roles?: ReadonlyArray<Role>; items: ReadonlyArray<NavItem> };
+
+export const sectionNavs: ReadonlyArray<SectionNav> = [
+  {
+    label: "Reading putts",
+    match: ["/read", "/rehearse", "/train", "/chart"],
+    items: [
+      { label: "Read a putt", to: paths.read.href() },
+      { label: "Rehearse", to: paths.rehearse.href() },
+      { label: "Read training", to: paths.train.href() },
+      { label: "Break chart", to: paths.breakChart.href() },
+    ],
+  },
+  {
+    label: "Coaching",
+    roles: ["coach", "admin"],
+    match: ["/coach", "/squads", "/ladders"],
+    items: [
+      { label: "Dashboard", to: paths.coach.href() },
+      { label: "Squads", to: paths.squads.href() },
+      { label: "Ladders", to: paths.ladders.href() },
+    ],
+  },
+  {
+    label: "Your ladders and squads",
+    roles: ["player"],
+    match: ["/ladders/mine", "/ladders/run", "/squads"],
+    items: [
+      { label: "My ladders", to: paths.myLadders.href() },
+      { label: "My squads", to: paths.squads.href() },
+    ],
+  },
 ];
+
+/** Whether `pathname` is `prefix` or below it. */
+export function isUnder(pathname: string, prefix: string): boolean {
+  return pathname === prefix || pathname.startsWith(prefix.endsWith("/") ? prefix : `${prefix}/`);
+}
+
+/** The section whose tabs belong on this page, if any. */
+export function sectionFor(pathname: string, role: Role | null): SectionNav | undefined {
+  return sectionNavs.find((s) => (!s.roles || (role !== null && s.roles.includes(role))) && s.match.some((m) => isUnder(pathname, m)));
+}
+
+/** A nav item is active on its own page and, with `match`, anywhere in its area. */
+export function isNavItemActive(pathname: string, item: NavItem): boolean {
+  if (item.match) return item.match.some((m) => isUnder(pathname, m));
+  return item.end ? pathname === item.to : isUnder(pathname, item.to.split("?")[0]!);
+}
 
 export type NavContext = { role: Role | null; devMail: boolean };
 
@@ -51,3 +87,11 @@ export function visibleNavItems(items: ReadonlyArray<NavItem>, ctx: NavContext):
     return true;
   });
 }
+
+/** Tabs across the practice log's pages (rendered by the practice pages themselves). */
+export const practiceNavItems: ReadonlyArray<NavItem> = [
+  { label: "Practice", to: paths.practice.href(), signedIn: true },
+  { label: "Rounds", to: paths.rounds.href(), signedIn: true },
+  { label: "Greens", to: paths.greens.href(), signedIn: true },
+  { label: "Make rates", to: paths.stats.href(), signedIn: true },
+];

@@ -35,5 +35,5 @@ test("an unknown address shows the page-not-found page inside the app", async ()
 test("the home page offers a signed-out visitor the way in", async () => {
   renderAt("/");
   expect(await screen.findByRole("heading", { level: 1, name: /Know where to start the ball/ })).toBeInTheDocument();
-  expect(await screen.findByRole("link", { name: "Create a free account" })).toHaveAttribute("href", "/sign-up");
+  expect(await screen.findByRole("link", { name: "create a free account" })).toHaveAttribute("href", "/sign-up");
 });

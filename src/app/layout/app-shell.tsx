@@ -1,6 +1,25 @@
 import { Outlet, ScrollRestoration } from "react-router";
 import { VerifyEmailNotice } from "../../features/auth/components/verify-email-notice";
+import { Link } from "react-router";
+import { paths } from "../../config/paths";
+import { useDevMailAvailable } from "../../features/dev-mail/api/get-dev-mail";
+import { SectionNav } from "./section-nav";
 import { TopBar } from "./top-bar";
+
+/** No real mail server is configured: the e-mails Borrowline sends wait in a local mailbox. */
+function DevMailLink() {
+  const available = useDevMailAvailable();
+  if (!available) return null;
+  return (
+    <p>
+      E-mail goes to the built-in{" "}
+      <Link className="font-medium text-ink-700 underline underline-offset-4" to={paths.mailbox.href()}>
+        local mailbox
+      </Link>{" "}
+      (no mail server is set up).
+    </p>
+  );
+}
 
 export function AppShell() {
   return (
@@ -16,6 +35,7 @@ export function AppShell() {
         <VerifyEmailNotice />
       </div>
       <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 focus:outline-none sm:px-6 sm:py-12 print:max-w-none print:p-0">
+        <SectionNav />
         <Outlet />
       </main>
       <footer className="border-t border-ink-900/10 print:hidden">
@@ -24,6 +44,7 @@ export function AppShell() {
             <span className="font-semibold text-ink-700">Borrowline</span> — reads for the putt in front of you, practice that shows where the strokes go.
           </p>
           <p>A read assumes an even slope and a true-rolling ball. Grain, wind and contours are yours to judge.</p>
+          <DevMailLink />
         </div>
       </footer>
       <ScrollRestoration />

@@ -29,7 +29,7 @@ test("a signed-in user sees who they are signed in as, with their role", async (
 test("the menu button opens and closes the menu, and Escape closes it", async () => {
   vi.stubGlobal("fetch", vi.fn(fakeFetch({ "/api/me": { status: 401, body: { error: { code: "UNAUTHORIZED", message: "Sign in" } } } })));
   const user = userEvent.setup();
-  renderRoute(<TopBar />, { at: "/" });
+  renderRoute(<TopBar />, { at: "/rehearse" });
 
   const button = screen.getByRole("button", { name: "Menu" });
   expect(button).toHaveAttribute("aria-expanded", "false");
@@ -40,7 +40,8 @@ test("the menu button opens and closes the menu, and Escape closes it", async ()
   expect(button).toHaveAttribute("aria-expanded", "true");
   expect(menu).toBeVisible();
   expect(await within(menu as HTMLElement).findByRole("link", { name: "Sign in" })).toBeInTheDocument();
-  expect(within(menu as HTMLElement).getByRole("link", { name: "Home" })).toHaveAttribute("aria-current", "page");
+  // On any page of an area (here Rehearse), the area's item is the current one.
+  expect(within(menu as HTMLElement).getByRole("link", { name: "Read a putt" })).toHaveAttribute("aria-current", "page");
   expect(within(menu as HTMLElement).queryByRole("link", { name: "Account" })).not.toBeInTheDocument();
 
   await user.keyboard("{Escape}");

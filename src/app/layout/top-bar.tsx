@@ -1,12 +1,12 @@
 import { useEffect, useId, useRef, useState } from "react";
-import { Link, NavLink, useLocation } from "react-router";
+import { Link, useLocation } from "react-router";
 import clsx from "clsx";
 import { LogoMark } from "../../components/ui";
 import { paths } from "../../config/paths";
 import { useMe } from "../../features/auth/api/get-me";
 import { AccountIndicator } from "../../features/auth/components/account-indicator";
 import { useDevMailAvailable } from "../../features/dev-mail/api/get-dev-mail";
-import { navItems, visibleNavItems } from "../nav";
+import { isNavItemActive, navItems, visibleNavItems } from "../nav";
 
 function useVisibleNav() {
   const me = useMe();
@@ -60,9 +60,9 @@ export function TopBar() {
           <ul className="flex items-center gap-1">
             {items.map((item) => (
               <li key={item.to}>
-                <NavLink to={item.to} end={item.end} className={desktopLink}>
+                <Link to={item.to} aria-current={isNavItemActive(pathname, item) ? "page" : undefined} className={desktopLink({ isActive: isNavItemActive(pathname, item) })}>
                   {item.label}
-                </NavLink>
+                </Link>
               </li>
             ))}
           </ul>
@@ -96,9 +96,9 @@ export function TopBar() {
           <ul className="flex flex-col gap-1">
             {items.map((item) => (
               <li key={item.to}>
-                <NavLink to={item.to} end={item.end} className={mobileLink} onClick={() => setOpen(false)}>
+                <Link to={item.to} aria-current={isNavItemActive(pathname, item) ? "page" : undefined} className={mobileLink({ isActive: isNavItemActive(pathname, item) })} onClick={() => setOpen(false)}>
                   {item.label}
-                </NavLink>
+                </Link>
               </li>
             ))}
           </ul>

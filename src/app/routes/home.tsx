@@ -1,3 +1,4 @@
+import { Link } from "react-router";
 import { ButtonLink, Card } from "../../components/ui";
 import { BreakDiagram } from "../../components/illustrations/break-diagram";
 import { paths } from "../../config/paths";
@@ -25,25 +26,38 @@ const pillars = [
   },
 ];
 
+/** The calculator needs no account, so reading a putt is the first thing on offer to everyone. */
 function Welcome() {
   const me = useMe();
   if (me.data) {
+    const coach = me.data.user.role !== "player";
     return (
       <div className="flex flex-col gap-3 sm:flex-row">
-        <ButtonLink to={paths.account.href()} variant="accent" size="lg">
-          Your account and units
+        <ButtonLink to={paths.read.href()} variant="accent" size="lg">
+          Read a putt
+        </ButtonLink>
+        <ButtonLink to={coach ? paths.coach.href() : paths.practice.href()} variant="on-dark" size="lg">
+          {coach ? "Your squads" : "Log practice"}
         </ButtonLink>
       </div>
     );
   }
   return (
-    <div className="flex flex-col gap-3 sm:flex-row">
-      <ButtonLink to={paths.signUp.href()} variant="accent" size="lg">
-        Create a free account
+    <div className="flex flex-col gap-3">
+      <ButtonLink to={paths.read.href()} variant="accent" size="lg">
+        Read a putt — no account needed
       </ButtonLink>
-      <ButtonLink to={paths.signIn.href()} variant="on-dark" size="lg">
-        Sign in
-      </ButtonLink>
+      <p className="text-sm text-sand-300">
+        To log practice, see your make rates or coach a squad,{" "}
+        <Link className="font-semibold text-sand-50 underline underline-offset-4" to={paths.signUp.href()}>
+          create a free account
+        </Link>{" "}
+        or{" "}
+        <Link className="font-semibold text-sand-50 underline underline-offset-4" to={paths.signIn.href()}>
+          sign in
+        </Link>
+        .
+      </p>
     </div>
   );
 }
