@@ -151,12 +151,12 @@ export type MappingFormProps = {
 export function MappingForm({ preview, mapping, onChange }: MappingFormProps) {
   const options = [{ value: "", label: "— not in the file —" }, ...preview.headers.filter(Boolean).map((h) => ({ value: h, label: h }))];
   return (
-    <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+    <div className="grid grid-cols-2 gap-x-3 gap-y-4 lg:grid-cols-3">
       {COLUMN_FIELDS.map((f) => (
         <SelectField
           key={f.key}
           label={`${f.label}${f.required ? " (required)" : ""}`}
-          hint={f.hint}
+          hint={<span className="text-xs">{f.hint}</span>}
           value={mapping[f.key]}
           options={f.required ? [{ value: "", label: "— choose a column —" }, ...options.slice(1)] : options}
           onChange={(e) => onChange({ ...mapping, [f.key]: e.target.value })}

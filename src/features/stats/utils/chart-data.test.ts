@@ -74,6 +74,8 @@ test("a compared band reads as a real change only below p = 0.05, with the direc
   const chance = { a: rateOf(1, 10), b: rateOf(2, 10), ...twoProportionZTest(1, 10, 2, 10) };
   expect(verdict(chance)).toMatchObject({ tone: "chance", words: expect.stringMatching(/^could be chance/) });
   expect(verdict({ a: rateOf(0, 0), b: rateOf(3, 4), difference: null, z: null, pValue: null }).tone).toBe("none");
+  expect(verdict({ a: rateOf(0, 5), b: rateOf(0, 7), ...twoProportionZTest(0, 5, 0, 7) }).words).toBe("none holed in either period: nothing to test");
+  expect(verdict({ a: rateOf(5, 5), b: rateOf(7, 7), ...twoProportionZTest(5, 5, 7, 7) }).words).toBe("all holed in both periods: nothing to test");
   expect(formatP(0.0004)).toBe("p < 0.001");
   expect(formatP(0.2345)).toBe("p = 0.23");
 

@@ -127,7 +127,10 @@ export function formatP(p: number): string {
 /** The difference and its p-value in words: "likely a real change" / "could be chance" / not enough to compare. */
 export function verdict(side: { a: Rate; b: Rate; difference: number | null; z?: number | null; pValue: number | null }): Verdict {
   if (side.a.attempts === 0 || side.b.attempts === 0) return { words: "no putts in one of the periods", tone: "none" };
-  if (side.difference === null || side.pValue === null) return { words: "all made or all missed in both: nothing to test", tone: "none" };
+  if (side.difference === null || side.pValue === null) {
+    const none = side.a.made + side.b.made === 0;
+    return { words: none ? "none holed in either period: nothing to test" : "all holed in both periods: nothing to test", tone: "none" };
+  }
   const dir = side.difference > 0 ? "better" : side.difference < 0 ? "worse" : "no change";
   if (side.pValue < SIGNIFICANT_P) return { words: `likely a real change (${dir}, ${formatP(side.pValue)})`, tone: "real" };
   return { words: `could be chance (${formatP(side.pValue)})`, tone: "chance" };
@@ -164,6 +167,7 @@ function rangeText(r: Rate): string {
 export function compareRows(compare: Compare, units: UnitSystem): CompareRow[] {
   return compare.bands.map((b, i) => {
     const smaller = Math.min(b.a.attempts, b.b.attempts);
+    const v = verdict(b);
     return {
       key: `band-${i}`,
       label: bandLabel(b.fromM, b.toM, units),
@@ -176,8 +180,9 @@ export function compareRows(compare: Compare, units: UnitSystem): CompareRow[] {
       aRange: rangeText(b.a),
       bRange: rangeText(b.b),
       difference: pct(b.difference),
-      verdict: verdict(b),
-      caution: smaller > 0 && smaller < SMALL_SAMPLE ? `${smaller} putts in the smaller period — read the intervals, not the test` : null,
+      verdict: v,
+      // Only where a test was made: "nothing to test" needs no second warning.
+      caution: v.tone !== "none" && smaller < SMALL_SAMPLE ? `${smaller} putts in the smaller period — read the intervals, not the test` : null,
     };
   });
 }
