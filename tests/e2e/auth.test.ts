@@ -22,7 +22,7 @@ test("a new user signs up, lands in the app, stays signed in across a reload and
     await page.getByRole("button", { name: /create/i }).click();
 
     await page.getByText("Signed in as").first().waitFor();
-    expect(new URL(page.url()).pathname).toBe("/");
+    await page.waitForURL((url) => url.pathname === "/");
     await expect(page.getByText("(player)").first().isVisible()).resolves.toBe(true);
     await screenshot(page, "auth-signed-in-desktop");
 

@@ -41,8 +41,8 @@ test("a signed-out golfer reads a putt on a phone, and the same link in a fresh 
     await panelShot(page.getByRole("form", { name: "The putt" }), "read-phone-form");
 
     await page.getByLabel("Distance (ft)").fill("20");
-    // click, not check(): the radio is controlled, and check() asserts its state before React's next render.
-    await page.getByRole("radio", { name: "Uphill, falls left" }).click({ force: true });
+    // Tap the named direction's card as a golfer would (the radio inside it is visually hidden).
+    await page.locator("label", { hasText: /^Uphill, falls left$/ }).click();
     await page.waitForURL(/d=6\.096&s=2&f=225&st=10/);
     await page.getByText("Breaks right to left", { exact: true }).waitFor();
     await page

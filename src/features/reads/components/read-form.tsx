@@ -216,7 +216,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
                     <label
                       key={d.deg}
                       className={clsx(
-                        "flex min-h-12 cursor-pointer items-center justify-center rounded-xl border-2 px-1.5 py-1 text-center text-[13px] leading-tight transition-colors has-focus-visible:outline-3 has-focus-visible:outline-offset-2 has-focus-visible:outline-coral-500",
+                        "relative flex min-h-12 cursor-pointer items-center justify-center rounded-xl border-2 px-1.5 py-1 text-center text-[13px] leading-tight transition-colors has-focus-visible:outline-3 has-focus-visible:outline-offset-2 has-focus-visible:outline-coral-500",
                         checked
                           ? "border-ink-900 bg-ink-900 text-sand-50"
                           : "border-ink-900/15 bg-white text-ink-800 hover:border-ink-900/30",
