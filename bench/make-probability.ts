@@ -4,6 +4,7 @@
 import { pathToFileURL } from "node:url";
 import { bestPace, estimateDispersion, makeProbability, simulatePuttOutcomes, simulateRoll, type LoggedPutt } from "../physics/index";
 import { seededUniform } from "../shared/seeded-random";
+import { median, timeMs } from "./timing";
 
 export interface MakeProbabilityBenchFigures {
   cases: { name: string; medianMs: number; makeProbability: number; odexPerRollMs: number; ratio: number }[];
@@ -24,23 +25,6 @@ const CASES = [
 ];
 const DISPERSION = { angleDeg: 1.2, pace: 0.12 };
 const SAMPLES = 10_000;
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 ? s[m]! : 0.5 * (s[m - 1]! + s[m]!);
-}
-
-function timeMs(fn: () => void, runs: number, warmup: number): number {
-  for (let i = 0; i < warmup; i++) fn();
-  const times: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    fn();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
 
 /** Run the benchmark and return its figures (times are medians, ms). */
 export function runMakeProbabilityBench(options: { runs?: number; odexRolls?: number } = {}): MakeProbabilityBenchFigures {

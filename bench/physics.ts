@@ -3,6 +3,7 @@
 import { pathToFileURL } from "node:url";
 import { breakChart, solveRead } from "../physics/index";
 import { baselineRead } from "./physics-baseline";
+import { median, timeMs } from "./timing";
 
 export interface PhysicsBenchFigures {
   reads: {
@@ -30,23 +31,6 @@ const CASES = [
   { name: "10 m, 2.5 %, 60°, Stimp 9", distanceM: 10, slopePct: 2.5, fallLineDeg: 60, stimpFt: 9 },
 ];
 const ROLL_PAST_M = 0.45;
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 ? s[m]! : 0.5 * (s[m - 1]! + s[m]!);
-}
-
-function timeMs(fn: () => void, runs: number, warmup: number): number {
-  for (let i = 0; i < warmup; i++) fn();
-  const times: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    fn();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
 
 /** Run the benchmark and return its figures (times are medians, ms). */
 export function runPhysicsBench(options: { readRuns?: number; chartRuns?: number; baselineRuns?: number } = {}): PhysicsBenchFigures {

@@ -10,6 +10,7 @@ import { openPglite } from "../server/db/client";
 import { migrate } from "../server/db/migrate";
 import { practiceSessions, putts, user } from "../server/db/schema";
 import { bandCounts } from "../server/routes/stats/band-counts";
+import { timeMsAsync } from "./timing";
 
 export type StatsBenchResult = {
   putts: number;
@@ -25,23 +26,6 @@ export type StatsBenchResult = {
   ratioVsCountScan: number;
   goalMs: number;
 };
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = Math.floor(s.length / 2);
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
-}
-
-async function timeIt(runs: number, fn: () => Promise<unknown>): Promise<number> {
-  for (let i = 0; i < 3; i++) await fn();
-  const times: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    await fn();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
 
 export async function runStatsBench({ totalPutts = 50_000, perSession = 50, runs = 15 } = {}): Promise<StatsBenchResult> {
   const database = await openPglite("memory://");
@@ -97,10 +81,10 @@ export async function runStatsBench({ totalPutts = 50_000, perSession = 50, runs
       if (js.get(c.band)?.attempts !== c.attempts || js.get(c.band)?.made !== c.made) throw new Error(`SQL and JS disagree on band ${c.band}`);
     }
 
-    const makeRateMs = await timeIt(runs, () => bandCounts(db, all, edges));
-    const makeRateYearMs = await timeIt(runs, () => bandCounts(db, year, edges));
-    const naiveJsMs = await timeIt(runs, naive);
-    const countScanMs = await timeIt(runs, () => db.execute(sql`select count(*) from ${putts}`));
+    const makeRateMs = await timeMsAsync(() => bandCounts(db, all, edges), runs, 3);
+    const makeRateYearMs = await timeMsAsync(() => bandCounts(db, year, edges), runs, 3);
+    const naiveJsMs = await timeMsAsync(naive, runs, 3);
+    const countScanMs = await timeMsAsync(() => db.execute(sql`select count(*) from ${putts}`), runs, 3);
     return {
       putts: made,
       sessions: sessionCount,

@@ -1,6 +1,6 @@
 import crypto from "node:crypto";
 import type { RequestHandler } from "express";
-import { and, desc, eq } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import { bestPace, estimateDispersion, type DispersionEstimate, type PaceOutcome } from "../../../physics";
 import { seededUniform } from "../../../shared/seeded-random";
 import {
@@ -11,30 +11,22 @@ import {
   type PaceResult,
 } from "../../../shared/schemas/make-probability";
 import type { Db } from "../../db/client";
-import { practiceSessions, putts, squadMembers, squads, user } from "../../db/schema";
+import { practiceSessions, putts } from "../../db/schema";
 import { notFound, unprocessable } from "../../lib/http-error";
+import { targetPlayerId } from "../../lib/player-access";
 import { currentUser, type SessionUser } from "../../middleware/session";
 import { body, query } from "../../middleware/validate";
 
 /** The most recent putts the estimate uses (older ones say less about the player's stroke today). */
 const MAX_PUTTS = 2000;
 
-/** The player whose dispersion is asked for: me, a player in one of my squads (coach), anyone (admin); else 404. */
+/**
+ * The player whose dispersion is asked for: the shared read rule (me, a coach's squad player, anyone for an admin).
+ * Unlike the stats routes, a player naming someone else gets 404 here rather than 403.
+ */
 async function readablePlayer(db: Db, viewer: SessionUser, playerId: string | undefined): Promise<string> {
-  if (playerId === undefined || playerId === viewer.id) return viewer.id;
-  if (viewer.role === "admin") {
-    const [found] = await db.select({ id: user.id }).from(user).where(eq(user.id, playerId)).limit(1);
-    if (found) return playerId;
-  } else if (viewer.role === "coach") {
-    const [member] = await db
-      .select({ id: squadMembers.playerId })
-      .from(squadMembers)
-      .innerJoin(squads, eq(squads.id, squadMembers.squadId))
-      .where(and(eq(squads.coachId, viewer.id), eq(squadMembers.playerId, playerId)))
-      .limit(1);
-    if (member) return playerId;
-  }
-  throw notFound("That player");
+  if (viewer.role === "player" && playerId !== undefined && playerId !== viewer.id) throw notFound("That player");
+  return targetPlayerId(db, viewer, playerId);
 }
 
 async function dispersionOf(db: Db, playerId: string): Promise<DispersionEstimate> {
