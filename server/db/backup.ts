@@ -17,9 +17,11 @@ export async function backupPglite(dataDir: string, file: string): Promise<{ fil
     try {
       const dump = await db.dumpDataDir("gzip");
       const bytes = Buffer.from(await dump.arrayBuffer());
-      fs.mkdirSync(path.dirname(path.resolve(file)), { recursive: true });
+      fs.mkdirSync(path.dirname(path.resolve(file)), { recursive: true, mode: 0o700 });
       // Write to a temporary name first so a crash never leaves a half-written backup under the real name.
-      fs.writeFileSync(`${file}.partial`, bytes);
+      // The dump holds every account: its owner's alone, whatever the umask.
+      fs.writeFileSync(`${file}.partial`, bytes, { mode: 0o600 });
+      fs.chmodSync(`${file}.partial`, 0o600);
       fs.renameSync(`${file}.partial`, file);
       return { file, bytes: bytes.length };
     } finally {

@@ -35,11 +35,3 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     res.status(status).json(body);
   };
 }
-
-/** API bodies are JSON: anything else with a body is refused with 415 before it reaches a handler. */
-export const requireJsonBody: RequestHandler = (req, _res, next) => {
-  const hasBody = Number(req.headers["content-length"] ?? 0) > 0 || req.headers["transfer-encoding"] !== undefined;
-  if (!hasBody || !["POST", "PUT", "PATCH"].includes(req.method)) return next();
-  if (req.is("application/json") || req.is("multipart/form-data")) return next();
-  throw new HttpError(415, ERROR_CODES.unsupportedMedia, "Send the request body as application/json.");
-};

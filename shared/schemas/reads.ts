@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "./text";
 
 /** Limits of the public read API (issue-agreed ranges; a flat-green Stimp of 4–16 ft covers real greens). */
 export const READ_LIMITS = {
@@ -58,7 +59,7 @@ export const saveReadSchema = z
   .object({
     read: readRequestSchema,
     greenId: z.string().uuid().optional(),
-    label: z.string().trim().max(80).optional(),
+    label: plainText(80).optional(),
   })
   .strict();
 export type SaveReadInput = z.infer<typeof saveReadSchema>;
