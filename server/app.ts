@@ -55,7 +55,8 @@ export function createApp(deps: AppDeps): Express {
 
   // Every /api write that carries cookies comes from our own pages (403 otherwise), auth routes included.
   app.use("/api", sameOriginWrites(config.trustedOrigins ?? [new URL(config.baseUrl).origin]));
-  const mail = mailLimiters(config.rateLimits.mailPerRecipient, config.rateLimits.mailPerSender);
+  const { mailPerRecipient, mailPerAccount, mailPerClientAddress } = config.rateLimits;
+  const mail = mailLimiters({ perRecipient: mailPerRecipient, perAccount: mailPerAccount, perClientAddress: mailPerClientAddress });
 
   // better-auth: its body is parsed here first (JSON only, 100 kB, hostile text refused, user fields checked),
   // better-auth reads the parsed body, and its errors are rewritten to our shape.
@@ -64,7 +65,7 @@ export function createApp(deps: AppDeps): Express {
   const limitedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email", "/api/auth/request-password-reset", "/api/auth/reset-password"];
   app.use(limitedAuthPaths, authLimiter);
   const mailingAuthPaths = ["/api/auth/sign-up/email", "/api/auth/send-verification-email", "/api/auth/request-password-reset"];
-  app.post(mailingAuthPaths, mail.bySender, mail.byRecipient);
+  app.post(mailingAuthPaths, mail.byClientAddress, mail.byRecipient);
   const authHandler = toNodeHandler(async (request: Request) => reshapeAuthError(await auth.handler(request)));
   app.all("/api/auth/{*any}", authHandler as RequestHandler);
   app.use("/api/auth", errorHandler(logger));

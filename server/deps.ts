@@ -35,8 +35,10 @@ export type RateLimits = {
   reads: RateLimitConfig;
   /** E-mail (verification, password reset, invitation, assignment notice) to one recipient address. */
   mailPerRecipient: RateLimitConfig;
-  /** E-mail sent at the request of one account (invitations, assignment notices) or one client address (signed out). */
-  mailPerSender: RateLimitConfig;
+  /** E-mail sent at the request of one signed-in account (invitations, assignment notices). */
+  mailPerAccount: RateLimitConfig;
+  /** E-mail asked for by one client address while signed out (sign-up verification, resend, password reset). */
+  mailPerClientAddress: RateLimitConfig;
 };
 
 /** Every rate limit in one place (README, "Security"). */
@@ -44,7 +46,8 @@ export const DEFAULT_RATE_LIMITS: RateLimits = {
   auth: { windowMs: 60_000, limit: 30 },
   reads: { windowMs: 60_000, limit: 600 },
   mailPerRecipient: { windowMs: 60 * 60_000, limit: 5 },
-  mailPerSender: { windowMs: 60 * 60_000, limit: 30 },
+  mailPerAccount: { windowMs: 60 * 60_000, limit: 50 },
+  mailPerClientAddress: { windowMs: 60 * 60_000, limit: 30 },
 };
 
 

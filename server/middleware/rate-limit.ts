@@ -37,15 +37,19 @@ const recipient: LimitKey = (req) => {
   return typeof email === "string" && email.trim() ? `to:${email.trim().toLowerCase()}` : undefined;
 };
 
-/** Who asks for the e-mail: the signed-in account, else the client address. */
-const sender: LimitKey = (req) => (req.user ? `user:${req.user.id}` : clientAddress(req));
+/** The signed-in account asking for the e-mail (signed-out requests are not counted by it). */
+const account: LimitKey = (req) => (req.user ? `user:${req.user.id}` : undefined);
 
-export type MailLimiters = { byRecipient: RequestHandler; bySender: RequestHandler };
+export type MailLimiters = { byRecipient: RequestHandler; byAccount: RequestHandler; byClientAddress: RequestHandler };
 
 /**
- * One pair of limiters for every route that sends e-mail, so a recipient's count is shared by verification,
+ * One set of limiters for every route that sends e-mail, so a recipient's count is shared by verification,
  * password-reset and invitation mail alike.
  */
-export function mailLimiters(perRecipient: RateLimitConfig, perSender: RateLimitConfig): MailLimiters {
-  return { byRecipient: limiter(perRecipient, "e-mail", recipient), bySender: limiter(perSender, "e-mail", sender) };
+export function mailLimiters(limits: { perRecipient: RateLimitConfig; perAccount: RateLimitConfig; perClientAddress: RateLimitConfig }): MailLimiters {
+  return {
+    byRecipient: limiter(limits.perRecipient, "e-mail", recipient),
+    byAccount: limiter(limits.perAccount, "e-mail", account),
+    byClientAddress: limiter(limits.perClientAddress, "e-mail", clientAddress),
+  };
 }

@@ -9,7 +9,8 @@ const running = await start({
     auth: { windowMs: 60_000, limit: 100_000 },
     reads: { windowMs: 60_000, limit: 100_000 },
     mailPerRecipient: { windowMs: 60_000, limit: 100_000 },
-    mailPerSender: { windowMs: 60_000, limit: 100_000 },
+    mailPerAccount: { windowMs: 60_000, limit: 100_000 },
+    mailPerClientAddress: { windowMs: 60_000, limit: 100_000 },
   },
 });
 process.stdout.write(JSON.stringify({ url: running.url }) + "\n");

@@ -13,7 +13,8 @@ export const GENEROUS_RATE_LIMITS = {
   auth: { windowMs: 60_000, limit: 10_000 },
   reads: { windowMs: 60_000, limit: 100_000 },
   mailPerRecipient: { windowMs: 60_000, limit: 10_000 },
-  mailPerSender: { windowMs: 60_000, limit: 10_000 },
+  mailPerAccount: { windowMs: 60_000, limit: 10_000 },
+  mailPerClientAddress: { windowMs: 60_000, limit: 10_000 },
 };
 
 export type TestServer = Running & { dataDir: string; stop: () => Promise<void> };

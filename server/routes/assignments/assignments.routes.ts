@@ -8,7 +8,7 @@ import { addLadderPutt, createAssignments, getAssignment, listMyAssignments, und
 export function assignmentRoutes(deps: RouterDeps) {
   const db = deps.database.db;
   const router = Router();
-  router.post("/ladders/:id/assignments", requireRole("coach", "admin"), validateBody(assignInputSchema), deps.mail.bySender, createAssignments(deps));
+  router.post("/ladders/:id/assignments", requireRole("coach", "admin"), validateBody(assignInputSchema), deps.mail.byAccount, createAssignments(deps));
   router.get("/assignments", requireUser, listMyAssignments(db));
   router.get("/assignments/:id", requireUser, getAssignment(db));
   router.post("/assignments/:id/putts", requireUser, validateBody(ladderPuttInputSchema), addLadderPutt(db));

@@ -10,7 +10,7 @@ const coach = requireRole("coach", "admin");
 export function invitationRoutes(deps: RouterDeps) {
   const db = deps.database.db;
   const router = Router();
-  router.post("/squads/:id/invitations", coach, validateBody(invitationInputSchema), deps.mail.bySender, deps.mail.byRecipient, createInvitation(deps));
+  router.post("/squads/:id/invitations", coach, validateBody(invitationInputSchema), deps.mail.byAccount, deps.mail.byRecipient, createInvitation(deps));
   router.get("/squads/:id/invitations", coach, listInvitations(db));
   router.delete("/invitations/:id", coach, revokeInvitation(db));
   // Public on purpose: the token itself is the secret, and the join page needs it before sign-in.
