@@ -51,6 +51,7 @@ function authSecret(env: Env): string {
 export async function start(options: StartOptions): Promise<Running> {
   const { env } = options;
   usePrivateUmask();
+  const dataDirOnDisk = !env.DATABASE_URL && !(options.pgliteDir ?? "").startsWith("memory://");
   const logger = createLogger(env.LOG_LEVEL, options.logDestination);
   const releases: Array<() => Promise<void>> = [];
   try {
@@ -65,7 +66,7 @@ export async function start(options: StartOptions): Promise<Running> {
     releases.unshift(() => database.close());
     await migrate(database);
     // Files written before this version (or by a CLI under a looser umask) are made private too.
-    if (!env.DATABASE_URL && !(options.pgliteDir ?? "").startsWith("memory://")) makePrivate(env.DATA_DIR);
+    if (dataDirOnDisk) makePrivate(env.DATA_DIR);
 
     let smtpFake: SmtpFake | undefined;
     if (!env.SMTP_URL) {
@@ -119,6 +120,8 @@ export async function start(options: StartOptions): Promise<Running> {
           server.closeIdleConnections();
         });
         for (const release of releases) await release();
+        // PGlite sets some of its files' modes itself (0644), past the umask: tighten once more on the way out.
+        if (dataDirOnDisk) makePrivate(env.DATA_DIR);
       })());
 
     logger.info({ url: baseUrl, db: database.kind }, "Borrowline is listening");

@@ -2,6 +2,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { PGlite } from "@electric-sql/pglite";
+import { makePrivate } from "../lib/private-files";
 import { lockDataDir } from "./lock";
 
 export function pgliteDir(dataDir: string): string {
@@ -26,6 +27,8 @@ export async function backupPglite(dataDir: string, file: string): Promise<{ fil
       return { file, bytes: bytes.length };
     } finally {
       await db.close();
+      // PGlite sets some of its files' modes itself (0644), past the umask.
+      makePrivate(dataDir);
     }
   } finally {
     await release();
@@ -52,6 +55,7 @@ export async function restorePglite(dataDir: string, file: string, now = new Dat
       await db.query("select 1");
     } finally {
       await db.close();
+      makePrivate(dataDir);
     }
     return { keptAside };
   } finally {

@@ -48,6 +48,12 @@ export class HttpClient {
   delete<T = any>(url: string) {
     return this.request<T>("DELETE", url);
   }
+  /** A second client holding a copy of this one's cookies (a stolen cookie, in revocation tests). */
+  copy(): HttpClient {
+    const other = new HttpClient(this.baseUrl);
+    for (const [k, v] of this.cookies) other.cookies.set(k, v);
+    return other;
+  }
   hasCookies(): boolean {
     return this.cookies.size > 0;
   }
