@@ -258,6 +258,8 @@ function ofP1(extra = ""): () => string {
 }
 
 const rows: Row[] = [
+  // The local mailbox (no SMTP_URL): every e-mail sent, reset and invitation links included — an admin's alone.
+  { route: "GET /api/dev/mail", target: "all sent mail", expect: { anon: 401, p1: 403, p2: 403, c1: 403, c2: 403, admin: 200 }, reveals: "s1Name", revealsTo: ["admin"] },
   // Public: the read calculator and the health check need no account.
   { route: "GET /api/health", target: "none", expect: PUBLIC },
   { route: "POST /api/reads/solve", target: "none", body: () => sideHill, expect: PUBLIC },
