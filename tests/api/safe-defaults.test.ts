@@ -301,12 +301,20 @@ test("no better-auth route lets a player set accountType, role, emailVerified or
   for (const path of routes) {
     const client = new HttpClient(server.url);
     expect((await client.post("/api/auth/sign-in/email", { email, password: TEST_PASSWORD })).status).toBe(200);
-    const body = { ...FORBIDDEN_FIELDS, name: "Changed", userId: before!.id, data: FORBIDDEN_FIELDS, email, password: TEST_PASSWORD };
-    const res = await client.post(`/api/auth${path}`, body);
-    expect(res.status, path).toBeLessThan(500);
-    const now = await storedUser(email);
-    for (const field of [...Object.keys(FORBIDDEN_FIELDS), "name"] as (keyof typeof now)[]) {
-      expect(now?.[field], `${path} changed ${String(field)}`).toEqual(before?.[field]);
+    // Each alone and with a name, all together, and beside what sign-in-like routes need.
+    const bodies = [
+      ...Object.entries(FORBIDDEN_FIELDS).flatMap(([k, v]) => [{ [k]: v }, { [k]: v, name: "Changed" }]),
+      FORBIDDEN_FIELDS,
+      { ...FORBIDDEN_FIELDS, name: "Changed" },
+      { ...FORBIDDEN_FIELDS, name: "Changed", userId: before!.id, data: FORBIDDEN_FIELDS, email, password: TEST_PASSWORD },
+    ];
+    for (const [i, body] of bodies.entries()) {
+      const res = await client.post(`/api/auth${path}`, body);
+      expect(res.status, `${path} #${i}`).toBeLessThan(500);
+      const now = await storedUser(email);
+      for (const field of Object.keys(FORBIDDEN_FIELDS) as (keyof typeof now)[]) {
+        expect(now?.[field], `${path} #${i} changed ${String(field)}`).toEqual(before?.[field]);
+      }
     }
   }
 }, 120_000);
