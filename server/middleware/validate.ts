@@ -6,10 +6,9 @@ import { badRequest } from "../lib/http-error";
 export function zodFields(error: z.ZodError, root = "body"): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
-    // A field nobody may send (strict objects) is named itself, not its parent.
+    // A field nobody may send (strict objects) is named itself, as well as its parent (the body, as before).
     if (issue.code === "unrecognized_keys") {
       for (const k of issue.keys) fields[[...issue.path, k].join(".")] ??= "Not a field that can be set here";
-      continue;
     }
     const key = issue.path.length > 0 ? issue.path.join(".") : root;
     fields[key] ??= issue.message;
