@@ -1,6 +1,5 @@
 // A player's make probability for a read (Monte Carlo over their start-line and pace dispersion), and the pace
 // that makes the most putts while keeping long second putts rare: "your best pace".
-import { maxCaptureSpeedMps } from "./capture";
 import { HOLE_RADIUS_M } from "./constants";
 import { standardNormals, type UniformRandom } from "./normal-deviates";
 import { newPlanarRollOut, planarRollField, rollPlanarInto, type PlanarRollField } from "./planar-roll";
@@ -252,9 +251,9 @@ function simulatePace(sim: Sim, read: SimRead, rollPastM: number, normals: Float
   for (let i = 0; i < samples; i++) {
     const line = read.startLineRad + sigmaA * normals[2 * i]!;
     const speed = read.launchSpeedMps * Math.exp(halfSigmaP * normals[2 * i + 1]!);
-    rollPlanarInto(field, speed, line, 0, D, out, rh);
+    rollPlanarInto(field, speed, line, 0, D, out, rh, rh);
     const b = out.passDistanceM;
-    const holed = b < rh && out.passSpeedMps < maxCaptureSpeedMps(b, rh);
+    const holed = out.holed;
     if (i < keep) {
       t.finishes.push(holed ? [0, D] : [out.restX, out.restY]);
       t.finishHoled.push(holed);
@@ -341,8 +340,8 @@ export function simulatePuttOutcomes(input: MakeProbabilityInput): { readonly ok
   for (let i = 0; i < input.samples; i++) {
     const line = read.read.startLineRad + sigmaA * normals[2 * i]!;
     const speed = read.read.launchSpeedMps * Math.exp((dispersion.pace / 2) * normals[2 * i + 1]!);
-    rollPlanarInto(field, speed, line, 0, D, out, rh);
-    const holed = out.passDistanceM < rh && out.passSpeedMps < maxCaptureSpeedMps(out.passDistanceM, rh);
+    rollPlanarInto(field, speed, line, 0, D, out, rh, rh);
+    const holed = out.holed;
     putts.push(
       holed
         ? { holed, restM: [0, D], missSide: null, missLengthM: null }
