@@ -39,7 +39,8 @@ export interface MakeProbabilityInput extends ReadInput {
 
 /** The nominal read at one pace: start line (°, + = right), aim offset (m) and launch and entry speeds (m/s). */
 export interface PaceRead {
-  readonly aimOffsetM: number;
+  /** Null beyond a 60° start line (see Read.aimGiven). */
+  readonly aimOffsetM: number | null;
   readonly startLineDeg: number;
   readonly launchSpeedMps: number;
   readonly entrySpeedMps: number;

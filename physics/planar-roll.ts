@@ -153,6 +153,19 @@ export class PlanarPath {
     this.length = this.S * (this.fs1 - w * (this.invN + (2 * u2) / (n + 2) + (u2 * u2) / (n + 4)));
   }
 
+  /**
+   * The w at which the heading's x component turns from negative to positive (null if it never does): the quadratic
+   * (1 − u²)·d̂x + 2u·p̂x = 0 for u in (0, u0), when the launch heads to −x and the fall line to +x.
+   */
+  wWhereHeadingXIsZero(): number | null {
+    const dx = this.dx;
+    const pxx = this.px;
+    if (!(dx > 0)) return null;
+    const u = (pxx + Math.hypot(pxx, dx)) / dx;
+    if (!(u > 0 && u < this.u0)) return null;
+    return Math.exp(this.n * (Math.log(u) - this.lnU0));
+  }
+
   /** S·(1/n): the remaining length is at least this times w. */
   minRemainingPerW(): number {
     return this.S * this.invN;

@@ -67,19 +67,6 @@ export function stimpFromTwoWays(upFt: number, downFt: number): number {
 }
 
 /**
- * "Plays like" distance, m: the flat putt at this Stimp that needs the same launch speed, v²/(2·a_r)
- * (constant-deceleration closed form, derived). Only valid for the constant-resistance model.
- * @example playsLikeM(2, 10) // ≈ 3.646 m
- */
-export function playsLikeM(launchSpeedMps: number, stimpFt: number, model: RollModel = DEFAULT_ROLL_MODEL): number {
-  requireFinite("launchSpeedMps", launchSpeedMps);
-  if (model.resistanceSpeedFactor !== null) {
-    throw new RangeError("playsLikeM's closed form needs constant rolling resistance; integrate a flat roll instead");
-  }
-  return (launchSpeedMps * launchSpeedMps) / (2 * rollingDecelFromStimp(stimpFt, model));
-}
-
-/**
  * A planar green resolved into the model's accelerations, all in the putt frame (ball at origin, hole on +y).
  * `fallLine` is the unit vector d̂ = (sin φ, cos φ) the green falls toward.
  */

@@ -62,7 +62,8 @@ export type PaceResult = {
   makeProbabilityStandardError: number;
   /** A miss that leaves more than 1 m to the hole centre. */
   secondPuttOver1mProbability: number;
-  read: { aimOffsetM: number; startLineDeg: number; launchSpeedMps: number; entrySpeedMps: number };
+  /** aimOffsetM is null beyond a 60° start line (the start line is the answer then). */
+  read: { aimOffsetM: number | null; startLineDeg: number; launchSpeedMps: number; entrySpeedMps: number };
 };
 
 export type MakeProbabilityResponse = {
