@@ -69,6 +69,11 @@ export {
 export { standardNormals, type UniformRandom } from "./normal-deviates";
 export {
   DEFAULT_BEST_PACE_GRID_M,
+  DEFAULT_GREEN_LATERAL_M,
+  DEFAULT_READ_ERROR_SLOPE_PCT,
+  greenLateralSigmaM,
+  readSensitivity,
+  type ReadSensitivity,
   MAX_MONTE_CARLO_SAMPLES,
   bestPace,
   makeProbability,

@@ -4,6 +4,9 @@ import jStat from "jstat";
 import { seededUniform } from "../shared/seeded-random";
 import { bestPace, makeProbability, maxCaptureSpeedMps, HOLE_RADIUS_M, type MakeProbabilityInput } from "./index";
 
+/** No read error and a perfect surface: the stroke dispersion alone (for checks against closed forms). */
+const PERFECT = { readSlopePct: 0, greenLateralM: 0 } as const;
+
 const sideHill = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 };
 const club = { angleDeg: 1.2, pace: 0.12 };
 const run = (over: Partial<MakeProbabilityInput> = {}, seed = 7) => {
@@ -15,7 +18,7 @@ const run = (over: Partial<MakeProbabilityInput> = {}, seed = 7) => {
 const uniform = (min: number, max: number) => fc.integer({ min: 0, max: 1_000_000 }).map((k) => min + ((max - min) * k) / 1_000_000);
 
 test("with no dispersion a holed read is made every time (derived)", () => {
-  const r = run({ dispersion: { angleDeg: 0, pace: 0 }, samples: 500 });
+  const r = run({ dispersion: { angleDeg: 0, pace: 0, ...PERFECT }, samples: 500 });
   expect(r.makeProbability).toBe(1);
   expect(r.secondPuttOverProbability).toBe(0);
   expect(r.finishHoled.every(Boolean)).toBe(true);
@@ -23,16 +26,16 @@ test("with no dispersion a holed read is made every time (derived)", () => {
 
 test("with no dispersion a read too firm to drop is never made (Holmes 1991: v_c(0) ≈ 1.636 m/s)", () => {
   // 3 m past on a side hill at Stimp 10 enters at √(2·a_r·3) ≈ 1.81 m/s (derived) > 1.636: a lip-out every time.
-  const r = run({ dispersion: { angleDeg: 0, pace: 0 }, samples: 500, pace: { rollPastM: 3 } });
+  const r = run({ dispersion: { angleDeg: 0, pace: 0, ...PERFECT }, samples: 500, pace: { rollPastM: 3 } });
   expect(r.makeProbability).toBe(0);
   expect(r.misses.lipOutProbability).toBe(1);
   expect(r.secondPuttOverProbability).toBe(1);
 });
 
 test("make probability falls as the start-line dispersion grows, and as the pace dispersion grows (same seed)", () => {
-  const byAngle = [0.25, 0.5, 1, 2, 4].map((angleDeg) => run({ dispersion: { angleDeg, pace: 0.08 } }).makeProbability);
+  const byAngle = [0.25, 0.5, 1, 2, 4].map((angleDeg) => run({ dispersion: { angleDeg, pace: 0.08, ...PERFECT } }).makeProbability);
   for (let i = 1; i < byAngle.length; i++) expect(byAngle[i]!).toBeLessThan(byAngle[i - 1]!);
-  const byPace = [0.02, 0.1, 0.2, 0.4].map((pace) => run({ dispersion: { angleDeg: 0.3, pace }, pace: { rollPastM: 0.3 } }).makeProbability);
+  const byPace = [0.02, 0.1, 0.2, 0.4].map((pace) => run({ dispersion: { angleDeg: 0.3, pace, ...PERFECT }, pace: { rollPastM: 0.3 } }).makeProbability);
   for (let i = 1; i < byPace.length; i++) expect(byPace[i]!).toBeLessThan(byPace[i - 1]!);
 });
 
@@ -54,7 +57,7 @@ test("flat straight putt with start-line error only matches the closed form 2Φ(
     fallLineDeg: 0,
     stimpFt,
     pace: { rollPastM },
-    dispersion: { angleDeg: sigmaDeg, pace: 0 },
+    dispersion: { angleDeg: sigmaDeg, pace: 0, ...PERFECT },
     samples: 20000,
     random: seededUniform(3),
   });
@@ -98,7 +101,7 @@ describe("a wider hole never lowers the make probability (common random numbers:
         }),
         ({ rollPastM, angleDeg, pace, r1, grow, seed, ...green }) => {
           const at = (holeRadiusM: number) =>
-            makeProbability({ ...green, pace: { rollPastM }, dispersion: { angleDeg, pace }, samples: 300, random: seededUniform(seed), holeRadiusM });
+            makeProbability({ ...green, pace: { rollPastM }, dispersion: { angleDeg, pace, ...PERFECT }, samples: 300, random: seededUniform(seed), holeRadiusM });
           const a = at(r1);
           const b = at(r1 + grow);
           if (!a.ok || !b.ok) return a.ok === b.ok;

@@ -11,9 +11,13 @@ import type { RollInput } from "./simulate-roll";
 const W_SAMPLES = 16;
 /** Samples every 10° of heading ψ to the fall line (the end of a roll on a slope turns fast over a short length). */
 const PSI_SAMPLES = 18;
-const W_TOL = 1e-13;
+/** Brent's tolerance in ln w (a relative 1e-11 of the remaining roll). */
+const LN_W_TOL = 1e-11;
+const LN_W_TOL_MONTE_CARLO = 1e-7;
+const NEVER = (): boolean => false;
 /** The last coarse sample in w, just before rest. */
 const W_LAST = 1e-12;
+const LN_W_LAST = Math.log(W_LAST);
 
 /**
  * A planar green prepared for closed-form rolls: accelerations (m/s²), k = a_r/a_g, n = 2k − 2 and the fall line.
@@ -28,6 +32,7 @@ export interface PlanarRollField {
   readonly straight: boolean;
   /** Coarse samples uniform in w (descending, the last W_LAST) and their r = w^(1/n), shared by every roll. */
   readonly sampleW: Float64Array;
+  readonly sampleLnW: Float64Array;
   readonly sampleR: Float64Array;
   /** tan(ψ_j/2) and its logarithm for ψ_j = 10°, 20°, … 170° (ascending). */
   readonly psiU: Float64Array;
@@ -40,6 +45,19 @@ export interface PlanarRollField {
  * @example planarRollField(resolveGreen({ slopePct: 2, fallLineDeg: 90, stimpFt: 10 })).k // ≈ 3.92
  */
 export function planarRollField(green: Green): PlanarRollField {
+  const key = `${green.gravityDecelMps2}|${green.rollingDecelMps2}|${green.fallLine[0]}|${green.fallLine[1]}|${green.model.resistanceSpeedFactor === null}`;
+  const hit = fieldCache.get(key);
+  if (hit !== undefined) return hit;
+  const field = buildField(green);
+  if (fieldCache.size >= 256) fieldCache.clear();
+  fieldCache.set(key, field);
+  return field;
+}
+
+/** Prepared greens by their accelerations and fall line (a read, a chart or a Monte Carlo reuses a few). */
+const fieldCache = new Map<string, PlanarRollField>();
+
+function buildField(green: Green): PlanarRollField {
   if (green.model.resistanceSpeedFactor !== null) throw new RangeError("planarRollField: the closed form needs constant rolling resistance");
   if (!stopsInPractice(green)) throw new RangeError("planarRollField: the ball cannot stop on this green (check stopsInPractice first)");
   const ag = green.gravityDecelMps2;
@@ -61,7 +79,8 @@ export function planarRollField(green: Green): PlanarRollField {
     psiU[j - 1] = Math.tan((j * Math.PI) / PSI_SAMPLES / 2);
     psiLnU[j - 1] = Math.log(psiU[j - 1]!);
   }
-  return { gravityDecelMps2: ag, rollingDecelMps2: ar, k, n, fallLine: green.fallLine, straight, sampleW, sampleR, psiU, psiLnU };
+  const sampleLnW = sampleW.map(Math.log);
+  return { gravityDecelMps2: ag, rollingDecelMps2: ar, k, n, fallLine: green.fallLine, straight, sampleW, sampleLnW, sampleR, psiU, psiLnU };
 }
 
 /**
@@ -74,6 +93,20 @@ export function planarRollField(green: Green): PlanarRollField {
  * Only for rolls that are not straight (a slope, and a start line off the fall line).
  */
 export class PlanarPath {
+  /** The hole (for the root functions below) and the radius² of its edge. */
+  holeX = 0;
+  holeY = 0;
+  rim2 = 0;
+  /** (p − h)·v̂ at ln w: negative while approaching the hole, zero at a closest pass. */
+  readonly gLn = (lnW: number): number => {
+    this.atLn(lnW);
+    return (this.x - this.holeX) * this.hx + (this.y - this.holeY) * this.hy;
+  };
+  /** |p − h|² − r_h² at ln w: crosses zero where the centre crosses the hole's edge. */
+  readonly eLn = (lnW: number): number => {
+    this.atLn(lnW);
+    return (this.x - this.holeX) * (this.x - this.holeX) + (this.y - this.holeY) * (this.y - this.holeY) - this.rim2;
+  };
   x = 0;
   y = 0;
   hx = 0;
@@ -101,11 +134,12 @@ export class PlanarPath {
 
   /** Prepare for a launch at `v` (m/s) along the unit direction (ex, ey); false when the roll is straight. */
   reset(field: PlanarRollField, v: number, ex: number, ey: number): boolean {
-    const [dx, dy] = field.fallLine;
+    const dx = field.fallLine[0];
+    const dy = field.fallLine[1];
     const c0 = ex * dx + ey * dy;
     let px = ex - c0 * dx;
     let py = ey - c0 * dy;
-    const sn = Math.hypot(px, py);
+    const sn = Math.sqrt(px * px + py * py);
     if (field.straight || sn < 1e-12) return false;
     px /= sn;
     py /= sn;
@@ -171,39 +205,22 @@ export class PlanarPath {
     return this.S * this.invN;
   }
 
+  /** Remaining length (m) to rest from the sample (w, r), without evaluating the rest of the state. */
+  remainingAt(w: number, r: number): number {
+    const u = this.u0 * r;
+    const u2 = u * u;
+    const n = this.n;
+    return this.S * w * (this.invN + (2 * u2) / (n + 2) + (u2 * u2) / (n + 4));
+  }
+
+  /** Evaluate at ln w (two exponentials, cheaper than a fractional power). */
+  atLn(lnW: number): void {
+    this.set(Math.exp(lnW), Math.exp(lnW * this.invN));
+  }
+
   /** Evaluate at w (computing r). */
   at(w: number): void {
     this.set(w, w > 0 ? Math.pow(w, this.invN) : 0);
-  }
-
-  /**
-   * Visit the coarse samples of this roll in order of travel (w descending from launch, excluded, to W_LAST): the
-   * uniform-in-w samples merged with the heading samples every 10° below the launch heading. Calls `visit(w, r)`.
-   */
-  forEachSample(field: PlanarRollField, visit: (w: number, r: number) => void): void {
-    const sw = field.sampleW;
-    const sr = field.sampleR;
-    const pu = field.psiU;
-    const pl = field.psiLnU;
-    let j = pu.length - 1;
-    while (j >= 0 && pu[j]! >= this.u0 * 0.999999) j--;
-    let i = 0;
-    const n = this.n;
-    let wj = j >= 0 ? Math.exp(n * (pl[j]! - this.lnU0)) : -1;
-    while (i < sw.length || j >= 0) {
-      if (j >= 0 && wj < W_LAST) {
-        j = -1;
-        continue;
-      }
-      if (j >= 0 && (i >= sw.length || wj > sw[i]!)) {
-        visit(wj, pu[j]! / this.u0);
-        j--;
-        wj = j >= 0 ? Math.exp(n * (pl[j]! - this.lnU0)) : -1;
-      } else {
-        visit(sw[i]!, sr[i]!);
-        i++;
-      }
-    }
   }
 }
 
@@ -292,12 +309,9 @@ export function rollPlanarInto(
     rollStraight(field, v, ex, ey, holeX, holeY, out, holeRadiusM);
     return;
   }
-  const gOf = (): number => (path.x - holeX) * path.hx + (path.y - holeY) * path.hy;
-  const g = (w: number): number => {
-    path.at(w);
-    return gOf();
-  };
-  const dist = (): number => Math.sqrt((path.x - holeX) * (path.x - holeX) + (path.y - holeY) * (path.y - holeY));
+  path.holeX = holeX;
+  path.holeY = holeY;
+  path.rim2 = holeRadiusM * holeRadiusM;
 
   // Rest point (w = 0): the ball finishes heading down the fall line.
   path.set(0, 0);
@@ -307,88 +321,94 @@ export function rollPlanarInto(
   const restInside = out.passDistanceM < holeRadiusM;
 
   // Local minima of the distance to the hole: (p − h)·v̂ from − to + in the direction of travel (w decreasing),
-  // refined only where the segment can come within `passWithinM` of the hole (no point of a segment is nearer
-  // than the nearer end's distance less half the segment's length). The last sample outside the hole's edge is
-  // kept to bracket the rim crossing.
+  // bracketed on the merged samples (uniform and geometric in w, and every 10° of heading below the launch heading)
+  // and refined by Brent's method in ln w. A sample is skipped unevaluated while the ball cannot yet be within
+  // `passWithinM` of the hole there (its distance at the last evaluated sample less the exact length rolled since,
+  // from the closed-form remaining length); the last skipped sample is evaluated first when sampling resumes, so it
+  // starts a clean bracket. The last sample outside the hole's edge is kept to bracket the rim crossing.
   path.set(1, 1);
-  let wPrev = 1;
-  let rPrev = 1;
-  let gPrev = gOf();
-  let dPrev = dist();
-  let lenPrev = path.length;
-  let wOut = dPrev >= holeRadiusM ? 1 : Number.NaN;
-  let passW = Number.NaN;
-  let wOutAtPass = Number.NaN;
-  // Samples that cannot bring the ball within `passWithinM` are skipped unevaluated (the ball is at least its
-  // distance less the length rolled away from the hole, and the remaining length is at least S·w/n): `skipAbove`.
-  const total = path.totalLength;
-  const minRemainingPerW = path.minRemainingPerW();
-  let skipAbove = skipBound(total - lenPrev, dPrev, passWithinM, minRemainingPerW);
-  let skippedW = Number.NaN;
-  let skippedR = Number.NaN;
-  const visit = (w: number, r: number): void => {
-    if (w > skipAbove) {
-      skippedW = w;
+  let lnWPrev = 0;
+  let gPrev = (path.x - holeX) * path.hx + (path.y - holeY) * path.hy;
+  let dPrev = Math.sqrt((path.x - holeX) * (path.x - holeX) + (path.y - holeY) * (path.y - holeY));
+  let remPrev = path.totalLength;
+  let lnWOut = dPrev >= holeRadiusM ? 0 : Number.NaN;
+  let passLnW = Number.NaN;
+  let lnWOutAtPass = Number.NaN;
+  const finite = passWithinM !== Number.POSITIVE_INFINITY;
+  // The Monte Carlo (a finite `passWithinM`) needs the pass to micrometres only: 1e-7 in ln w is under a micrometre.
+  const tol = finite ? LN_W_TOL_MONTE_CARLO : LN_W_TOL;
+  const sw = field.sampleW;
+  const lnSw = field.sampleLnW;
+  const sr = field.sampleR;
+  const pu = field.psiU;
+  const pl = field.psiLnU;
+  const n = field.n;
+  const u0 = path.u0;
+  const lnU0 = path.lnU0;
+  let j = pu.length - 1;
+  while (j >= 0 && pu[j]! >= u0 * 0.999999) j--;
+  let lnWj = j >= 0 ? n * (pl[j]! - lnU0) : Number.NEGATIVE_INFINITY;
+  if (lnWj < LN_W_LAST) j = -1;
+  let i = 0;
+  let skippedLnW = Number.NaN;
+  let skippedR = 0;
+  while (i < sw.length || j >= 0) {
+    let lnW: number;
+    let w: number;
+    let r: number;
+    if (j >= 0 && (i >= sw.length || lnWj > lnSw[i]!)) {
+      lnW = lnWj;
+      w = Math.exp(lnW);
+      r = pu[j]! / u0;
+      j--;
+      lnWj = j >= 0 ? n * (pl[j]! - lnU0) : Number.NEGATIVE_INFINITY;
+      if (lnWj < LN_W_LAST) j = -1;
+    } else {
+      lnW = lnSw[i]!;
+      w = sw[i]!;
+      r = sr[i]!;
+      i++;
+    }
+    if (finite && dPrev - (remPrev - path.remainingAt(w, r)) > passWithinM) {
+      skippedLnW = lnW;
       skippedR = r;
-      return;
+      continue;
     }
-    if (Number.isFinite(skippedW)) {
-      // Resume from the last skipped sample: it is still too far for a pass, so it starts a clean bracket.
-      const sw = skippedW;
-      skippedW = Number.NaN;
-      step(sw, skippedR);
-    }
-    step(w, r);
-  };
-  const step = (w: number, r: number): void => {
-    path.set(w, r);
-    const gw = gOf();
-    const dw = dist();
-    const lenW = path.length;
-    if (gPrev < 0 && gw >= 0 && Math.min(dPrev, dw) - 0.5 * (lenW - lenPrev) < passWithinM) {
-      const root = gw === 0 ? w : brentRoot(g, w, wPrev, gw, gPrev, () => false, W_TOL, 80).x;
-      g(root);
-      const d = dist();
-      if (d < out.passDistanceM) {
-        setPass(out, d, path.x, path.y, holeX, holeY, path.hx, path.hy, path.speed);
-        passW = root;
-        wOutAtPass = wOut;
+    for (let k = Number.isNaN(skippedLnW) ? 1 : 0; k < 2; k++) {
+      const lw = k === 0 ? skippedLnW : lnW;
+      path.set(k === 0 ? Math.exp(lw) : w, k === 0 ? skippedR : r);
+      const gw = (path.x - holeX) * path.hx + (path.y - holeY) * path.hy;
+      const dw = Math.sqrt((path.x - holeX) * (path.x - holeX) + (path.y - holeY) * (path.y - holeY));
+      const remW = path.totalLength - path.length;
+      if (gPrev < 0 && gw >= 0 && Math.min(dPrev, dw) - 0.5 * (remPrev - remW) < passWithinM) {
+        const root = gw === 0 ? lw : brentRoot(path.gLn, lw, lnWPrev, gw, gPrev, NEVER, tol, 80).x;
+        path.gLn(root);
+        const d = Math.sqrt((path.x - holeX) * (path.x - holeX) + (path.y - holeY) * (path.y - holeY));
+        if (d < out.passDistanceM) {
+          setPass(out, d, path.x, path.y, holeX, holeY, path.hx, path.hy, path.speed);
+          passLnW = root;
+          lnWOutAtPass = lnWOut;
+        }
       }
+      if (dw >= holeRadiusM) lnWOut = lw;
+      lnWPrev = lw;
+      gPrev = gw;
+      dPrev = dw;
+      remPrev = remW;
     }
-    if (dw >= holeRadiusM) wOut = w;
-    wPrev = w;
-    rPrev = r;
-    gPrev = gw;
-    dPrev = dw;
-    lenPrev = lenW;
-    skipAbove = skipBound(total - lenW, dw, passWithinM, minRemainingPerW);
-  };
-  path.forEachSample(field, visit);
-  void rPrev;
-  // A pass within the hole's radius: find where the centre crossed the edge, e(w) = |p − h|² − r_h² from + to −.
-  if (out.passDistanceM < holeRadiusM && !out.passAtRest && Number.isFinite(passW) && Number.isFinite(wOutAtPass)) {
-    const r2 = holeRadiusM * holeRadiusM;
-    const e = (w: number): number => {
-      path.at(w);
-      return (path.x - holeX) * (path.x - holeX) + (path.y - holeY) * (path.y - holeY) - r2;
-    };
-    const ePass = out.passDistanceM * out.passDistanceM - r2;
-    const eOut = e(wOutAtPass);
-    const root = eOut === 0 ? wOutAtPass : brentRoot(e, passW, wOutAtPass, ePass, eOut, () => false, W_TOL, 80).x;
-    path.at(root);
+    skippedLnW = Number.NaN;
+    // Farther from the hole than the whole remaining roll (plus the margin): no later pass can count.
+    if (finite && dPrev - remPrev > passWithinM) break;
+  }
+  // A pass within the hole's radius: find where the centre crossed the edge, e = |p − h|² − r_h² from + to −.
+  if (out.passDistanceM < holeRadiusM && !out.passAtRest && Number.isFinite(passLnW) && Number.isFinite(lnWOutAtPass)) {
+    const ePass = out.passDistanceM * out.passDistanceM - path.rim2;
+    const eOut = path.eLn(lnWOutAtPass);
+    const root = eOut === 0 ? lnWOutAtPass : brentRoot(path.eLn, passLnW, lnWOutAtPass, ePass, eOut, NEVER, tol, 80).x;
+    path.atLn(root);
     setRim(out, path.x, path.y, holeX, holeY, path.hx, path.hy, path.speed);
   }
   out.holed = judge(out, holeRadiusM, restInside);
-}
-
-/**
- * The largest w worth evaluating: a sample at w' is at least d − (remaining − S·w'/n) from the hole, so it cannot be
- * within `within` while w' > (remaining − (d − within))/(S/n). ∞ (evaluate everything) when `within` is ∞.
- */
-function skipBound(remainingM: number, distanceM: number, within: number, minRemainingPerW: number): number {
-  if (within === Number.POSITIVE_INFINITY) return Number.POSITIVE_INFINITY;
-  const reach = remainingM - (distanceM - within);
-  return reach <= 0 ? -1 : reach / minRemainingPerW;
 }
 
 /** Holmes's criterion at the rim; a ball that comes to rest over the hole drops. */
