@@ -6,6 +6,8 @@ export const MAKE_PROBABILITY_LIMITS = {
   samples: { min: 100, max: 20_000, default: 10_000 },
   angleDeg: { min: 0, max: 15 },
   pace: { min: 0, max: 1 },
+  readSlopePct: { min: 0, max: 3 },
+  greenLateralM: { min: 0, max: 0.2 },
   seed: { min: 0, max: 2 ** 31 - 1 },
   secondPuttRiskMax: { min: 0, max: 1, default: 0.1 },
 } as const;
@@ -19,12 +21,16 @@ const bounded = (name: string, { min, max }: { min: number; max: number }, unit:
 
 /**
  * A dispersion, one σ each: `angleDeg` the start line (degrees), `pace` the σ of ln(actual ÷ intended roll length)
- * (0.10 ≈ the whole roll 10 % long or short).
+ * (0.10 ≈ the whole roll 10 % long or short); beyond the stroke, `readSlopePct` the read error (slope misjudged, %)
+ * and `greenLateralM` the green's sideways deviation after 1 m (m, growing as √L). The last two default to the
+ * model's (physics DEFAULT_READ_ERROR_SLOPE_PCT, DEFAULT_GREEN_LATERAL_M); all four 0 is a perfect putt.
  */
 export const dispersionSchema = z
   .object({
     angleDeg: bounded("angleDeg", MAKE_PROBABILITY_LIMITS.angleDeg, "°"),
     pace: bounded("pace", MAKE_PROBABILITY_LIMITS.pace, " (fraction of the roll length)"),
+    readSlopePct: bounded("readSlopePct", MAKE_PROBABILITY_LIMITS.readSlopePct, " %").optional(),
+    greenLateralM: bounded("greenLateralM", MAKE_PROBABILITY_LIMITS.greenLateralM, " m").optional(),
   })
   .strict();
 export type Dispersion = z.infer<typeof dispersionSchema>;
@@ -91,7 +97,7 @@ export type MakeProbabilityResponse = {
   defaultPace: PaceResult;
   /** The scan behind bestPace (fewer samples per pace): for a chart of make and risk against roll-past. */
   paceCurve: { rollPastM: number; makeProbability: number; secondPuttOver1mProbability: number }[];
-  dispersion: Dispersion & { source: "request" | "my-putts"; putts: number | null; usedPrior: boolean | null };
+  dispersion: Required<Dispersion> & { source: "request" | "my-putts"; putts: number | null; usedPrior: boolean | null };
   seed: number;
   samples: number;
   secondPuttRiskMax: number;

@@ -1,7 +1,14 @@
 import crypto from "node:crypto";
 import type { RequestHandler } from "express";
 import { desc, eq } from "drizzle-orm";
-import { bestPace, estimateDispersion, type DispersionEstimate, type PaceOutcome } from "../../../physics";
+import {
+  DEFAULT_GREEN_LATERAL_M,
+  DEFAULT_READ_ERROR_SLOPE_PCT,
+  bestPace,
+  estimateDispersion,
+  type DispersionEstimate,
+  type PaceOutcome,
+} from "../../../physics";
 import { seededUniform } from "../../../shared/seeded-random";
 import {
   dispersionQuerySchema,
@@ -91,15 +98,30 @@ export function postMakeProbability(db: Db): RequestHandler {
     const input = body(req, makeProbabilityRequestSchema);
     let dispersion: MakeProbabilityResponse["dispersion"];
     if (input.dispersion) {
-      dispersion = { ...input.dispersion, source: "request", putts: null, usedPrior: null };
+      dispersion = {
+        readSlopePct: DEFAULT_READ_ERROR_SLOPE_PCT,
+        greenLateralM: DEFAULT_GREEN_LATERAL_M,
+        ...input.dispersion,
+        source: "request",
+        putts: null,
+        usedPrior: null,
+      };
     } else {
       const e = await dispersionOf(db, me.id);
-      dispersion = { angleDeg: e.angleDeg.estimate, pace: e.pace.estimate, source: "my-putts", putts: e.usedPutts, usedPrior: e.usedPrior };
+      dispersion = {
+        angleDeg: e.angleDeg.estimate,
+        pace: e.pace.estimate,
+        readSlopePct: DEFAULT_READ_ERROR_SLOPE_PCT,
+        greenLateralM: DEFAULT_GREEN_LATERAL_M,
+        source: "my-putts",
+        putts: e.usedPutts,
+        usedPrior: e.usedPrior,
+      };
     }
     const seed = input.seed ?? crypto.randomInt(0, 2 ** 31 - 1);
     const result = bestPace({
       ...input.read,
-      dispersion: { angleDeg: dispersion.angleDeg, pace: dispersion.pace },
+      dispersion: { angleDeg: dispersion.angleDeg, pace: dispersion.pace, readSlopePct: dispersion.readSlopePct, greenLateralM: dispersion.greenLateralM },
       samples: input.samples,
       random: seededUniform(seed),
       secondPuttRiskMax: input.secondPuttRiskMax,

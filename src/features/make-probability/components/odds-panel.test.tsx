@@ -76,7 +76,7 @@ test("the best pace sits beside the read's own, and its button hands that roll-p
 
 test("with few putts logged the panel says it leans on typical club-golfer values", async () => {
   stubApi(
-    () => json(200, fakeOdds({ dispersion: { angleDeg: 1.2, pace: 0.12, source: "my-putts", putts: 0, usedPrior: true } })),
+    () => json(200, fakeOdds({ dispersion: { angleDeg: 1.2, pace: 0.12, source: "my-putts", putts: 0, usedPrior: true, readSlopePct: 0.5, greenLateralM: 0.02 } })),
     fakeDispersion({ putts: 0, usedPrior: true }),
   );
   renderPanel();
