@@ -44,7 +44,7 @@ test("the Stimpmeter exit speed is 6 ft/s (USGA Stimpmeter booklet, secondary)",
   expect(STIMP_EXIT_SPEED_MPS).toBeCloseTo(STIMPMETER.exitSpeedMps.value, 2);
 });
 
-test("rolling deceleration from the Stimp matches a_r = v0²/(2S) (derived, references.md)", () => {
+test("rolling deceleration from the Stimp matches a_r = v0²/(2S) (derived, docs/sources.md)", () => {
   for (const p of ROLLING_DECEL_MPS2.points) {
     expect(Math.abs(rollingDecelFromStimp(p.stimpFt) - p.decelMps2)).toBeLessThan(ROLLING_DECEL_MPS2.toleranceMps2);
   }
@@ -105,7 +105,7 @@ test("Brede's correction is exact for constant deceleration: up and down rolls o
   }
 });
 
-test("cannot-stop thresholds: ~7.9 % at Stimp 10, 6.5 % at 12, 5.6 % at 14 in this model (derived, references.md)", () => {
+test("cannot-stop thresholds: ~7.9 % at Stimp 10, 6.5 % at 12, 5.6 % at 14 in this model (derived, docs/sources.md)", () => {
   for (const p of CANNOT_STOP_THRESHOLDS.points) {
     const threshold = maxStoppableSlopePct(p.stimpFt);
     expect(Math.abs(threshold - p.slopePct)).toBeLessThan(CANNOT_STOP_THRESHOLDS.tolerancePct);

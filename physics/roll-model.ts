@@ -35,7 +35,7 @@ export const DEFAULT_ROLL_MODEL: RollModel = Object.freeze({
 
 /**
  * Rolling-resistance deceleration from a Stimp reading, m/s²: a_r = v0²/(2·S) with S in metres (constant
- * deceleration; the Stimpmeter ball leaves the bar at v0 and rolls S). Derived; see references.md.
+ * deceleration; the Stimpmeter ball leaves the bar at v0 and rolls S). Derived; docs/sources.md, "Rolling on a slope".
  * @example rollingDecelFromStimp(10) // ≈ 0.5486 m/s²
  */
 export function rollingDecelFromStimp(stimpFt: number, model: RollModel = DEFAULT_ROLL_MODEL): number {

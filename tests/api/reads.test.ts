@@ -75,7 +75,7 @@ test.each([
 });
 
 test("POST /api/reads/solve answers 422 when the ball cannot stop on that slope", async () => {
-  // Stoppable only while (5/7)·g·sinθ < a_r: about 7.9 % at Stimp 10 in this model (references.md, derived).
+  // Stoppable only while (5/7)·g·sinθ < a_r: about 7.9 % at Stimp 10 in this model (docs/sources.md, derived).
   const res = await anon.post("/api/reads/solve", { ...sideHill, slopePct: 8, stimpFt: 10 });
   expect(res.status).toBe(422);
   expect(res.body.error.message).toMatch(/cannot stop/i);
