@@ -98,6 +98,21 @@ export type MakeProbabilityResponse = {
   /** The scan behind bestPace (fewer samples per pace): for a chart of make and risk against roll-past. */
   paceCurve: { rollPastM: number; makeProbability: number; secondPuttOver1mProbability: number }[];
   dispersion: Required<Dispersion> & { source: "request" | "my-putts"; putts: number | null; usedPrior: boolean | null };
+  /**
+   * The player's own logged make rate at about this length (0.8–1.25 × the distance), with its Wilson 95 % interval,
+   * and whether these odds fall outside it; null without a signed-in player's log. `why` says why odds and log may
+   * differ (the odds are for this read's slope and pace; the log has no slopes).
+   */
+  logged: {
+    fromM: number;
+    toM: number;
+    attempts: number;
+    made: number;
+    rate: number | null;
+    ci95: [number, number] | null;
+    oddsOutside: boolean;
+    why: string;
+  } | null;
   seed: number;
   samples: number;
   secondPuttRiskMax: number;

@@ -192,3 +192,20 @@ test("POST /api/reads/make-probability answers 422 when the ball cannot stop", a
   expect(res.status).toBe(422);
   expect(res.body.error.fields).toHaveProperty("read.slopePct");
 });
+
+test("POST /api/reads/make-probability reports my logged rate at about this length and says why the odds differ when they fall outside it", async () => {
+  const a = await signedUpClient(server);
+  const none = await a.client.post("/api/reads/make-probability", { read: sideHill, samples: 500, seed: 1 });
+  expect(none.body.logged).toMatchObject({ attempts: 0, rate: null, ci95: null, oddsOutside: false });
+  // 40 putts from 3 m, all holed: a logged rate the odds of a 2 % side-hill 3 m putt cannot match.
+  const db = server.database.db;
+  const [session] = await db.insert(practiceSessions).values({ playerId: a.id, date: "2026-04-02", stimpFt: 10 }).returning({ id: practiceSessions.id });
+  await db.insert(putts).values(Array.from({ length: 40 }, () => ({ sessionId: session!.id, playerId: a.id, distanceM: 3, holed: true })));
+  const res = await a.client.post("/api/reads/make-probability", { read: sideHill, samples: 2000, seed: 1 });
+  expect(res.body.logged).toMatchObject({ attempts: 40, made: 40, rate: 1 });
+  // Wilson 95 % for 40/40 starts near 0.91 (Wilson 1927, derived): the odds lie below it, and the answer says why.
+  expect(res.body.logged.ci95[0]).toBeGreaterThan(0.9);
+  expect(res.body.makeProbability).toBeLessThan(res.body.logged.ci95[0]);
+  expect(res.body.logged.oddsOutside).toBe(true);
+  expect(res.body.logged.why).toMatch(/slope/);
+});

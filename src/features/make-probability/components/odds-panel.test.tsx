@@ -99,3 +99,18 @@ test("signed out: one line inviting the golfer to sign in, and no simulation is 
   await new Promise((r) => setTimeout(r, 20));
   expect(calls).toEqual([]);
 });
+
+test("odds outside the player's own logged rate come with the reason, never silently", async () => {
+  stubApi(() =>
+    json(
+      200,
+      fakeOdds({
+        logged: { fromM: 2.4, toM: 3.75, attempts: 40, made: 36, rate: 0.9, ci95: [0.77, 0.96], oddsOutside: true, why: "These odds are for this putt: its slope." },
+      }),
+    ),
+  );
+  renderPanel();
+  const note = await screen.findByTestId("odds-vs-log");
+  expect(note).toHaveTextContent("Your log: 90 % holed");
+  expect(note).toHaveTextContent("Why these odds differ: These odds are for this putt: its slope.");
+});

@@ -27,6 +27,7 @@ export function fakeOdds(overrides: Partial<MakeProbabilityResponse> = {}): Make
   return {
     makeProbability: 0.3412,
     makeProbabilityStandardError: 0.0047,
+    logged: null,
     secondPuttOver1mProbability: 0.081,
     finishes,
     finishHoled,
