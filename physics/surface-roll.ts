@@ -1,5 +1,5 @@
 // The roll and the read on a green that is not a plane: the ball on a height map's interpolated surface.
-import { captureAtRim, captureOutcome, type Capture, type RimCrossing } from "./capture";
+import { captureAtRim, type Capture, type RimCrossing } from "./capture";
 import { HOLE_RADIUS_M } from "./constants";
 import type { HeightSurface } from "./height-surface";
 import { integrateWithEvents, type OdeEvent } from "./integrate";
