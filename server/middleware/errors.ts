@@ -18,7 +18,9 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     const e = err as BodyParserError;
     if (err instanceof HttpError) {
       status = err.status;
-      body = { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+      body = {
+        error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}), ...(err.details ? { details: err.details } : {}) },
+      };
     } else if (e?.type === "entity.parse.failed") {
       status = 400;
       body = { error: { code: ERROR_CODES.badRequest, message: "The request body is not valid JSON.", fields: { body: "malformed JSON" } } };

@@ -185,7 +185,7 @@ beforeAll(async () => {
       p1.client.post("/api/training/attempts", {
         level: "club",
         putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
-        guess: { aimOffsetM: -0.15, playsLikeM: 3.5 },
+        guess: { aimOffsetM: -0.15, flatPuttLengthM: 3.5 },
       }),
     )
   ).id;
@@ -594,7 +594,7 @@ const rows: Row[] = [
     body: () => ({
       level: "club",
       putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
-      guess: { aimOffsetM: -0.1, playsLikeM: 3.4 },
+      guess: { aimOffsetM: -0.1, flatPuttLengthM: 3.4 },
     }),
     expect: SIGNED_IN(201),
   },
