@@ -11,6 +11,7 @@ import { lockDataDir } from "./db/lock";
 import { migrate } from "./db/migrate";
 import { seedDemo } from "./db/seed";
 import type { Env } from "./env";
+import { ERROR_CODES, type ApiErrorBody } from "../shared/errors";
 import { createLogger } from "./lib/logger";
 import { createMailer } from "./lib/mailer";
 import { startSmtpFake, type SmtpFake } from "./lib/smtp-fake";
@@ -25,7 +26,16 @@ export type StartOptions = {
   frontend?: AppConfig["frontend"];
   /** Where log lines go (default stdout); tests read them to check nothing secret is logged. */
   logDestination?: { write: (line: string) => void };
+  /** Called once the port is open and before the app is ready (tests send requests to a starting server). */
+  onListening?: (url: string) => Promise<void>;
 };
+
+/** The answer to any request before the app is attached: try again in a second. */
+function notReady(res: http.ServerResponse): void {
+  const body: ApiErrorBody = { error: { code: ERROR_CODES.unavailable, message: "Borrowline is starting. Try again in a moment." } };
+  res.writeHead(503, { "content-type": "application/json; charset=utf-8", "retry-after": "1", "cache-control": "no-store", connection: "close" });
+  res.end(JSON.stringify(body));
+}
 
 export type Running = {
   app: Express;
@@ -51,14 +61,25 @@ export async function start(options: StartOptions): Promise<Running> {
   const logger = createLogger(env.LOG_LEVEL, options.logDestination);
   const releases: Array<() => Promise<void>> = [];
   try {
-    let database: Database;
-    if (env.DATABASE_URL) {
-      database = await openPostgres(env.DATABASE_URL);
-    } else {
-      const dir = options.pgliteDir ?? path.join(env.DATA_DIR, "pglite");
-      if (!dir.startsWith("memory://")) releases.push(await lockDataDir(env.DATA_DIR));
-      database = await openPglite(dir, options.pgliteLoad);
-    }
+    const pgliteDir = options.pgliteDir ?? path.join(env.DATA_DIR, "pglite");
+    if (!env.DATABASE_URL && !pgliteDir.startsWith("memory://")) releases.push(await lockDataDir(env.DATA_DIR));
+
+    // Bind early (the public origin must be known when only an ephemeral port was asked for), but answer every
+    // request with 503 + Retry-After until the app is attached: a request during start-up never hangs.
+    let app: Express | undefined;
+    const server = http.createServer((req, res) => {
+      if (app) return app(req, res);
+      notReady(res);
+    });
+    await new Promise<void>((resolve, reject) => {
+      server.once("error", reject);
+      server.listen(env.PORT, env.HOST, () => resolve());
+    });
+    releases.unshift(() => new Promise<void>((resolve) => server.close(() => resolve())));
+    const port = (server.address() as { port: number }).port;
+    await options.onListening?.(`http://127.0.0.1:${port}`);
+
+    const database: Database = env.DATABASE_URL ? await openPostgres(env.DATABASE_URL) : await openPglite(pgliteDir, options.pgliteLoad);
     releases.unshift(() => database.close());
     await migrate(database);
 
@@ -70,13 +91,6 @@ export async function start(options: StartOptions): Promise<Running> {
     }
     const mailer = createMailer(env.SMTP_URL ?? smtpFake!.url, env.MAIL_FROM, logger);
 
-    // Bind first so the public origin is known when only an ephemeral port was asked for.
-    const server = http.createServer();
-    await new Promise<void>((resolve, reject) => {
-      server.once("error", reject);
-      server.listen(env.PORT, env.HOST, () => resolve());
-    });
-    const port = (server.address() as { port: number }).port;
     const baseUrl = env.BASE_URL ?? `http://localhost:${port}`;
     const trustedOrigins = env.BASE_URL
       ? [new URL(env.BASE_URL).origin]
@@ -85,7 +99,7 @@ export async function start(options: StartOptions): Promise<Running> {
     const auth = createAuth({ db: database.db, secret: authSecret(env), baseUrl, trustedOrigins, mailer, logger });
     if (env.SEED === "1") await seedDemo(database.db, logger);
 
-    const app = createApp({
+    app = createApp({
       database,
       auth,
       logger,
@@ -100,16 +114,14 @@ export async function start(options: StartOptions): Promise<Running> {
         frontend: options.frontend,
       },
     });
-    server.on("request", app);
 
     let closing: Promise<void> | undefined;
     const close = () =>
       (closing ??= (async () => {
         // Stop accepting, let in-flight requests finish, then close the database.
-        await new Promise<void>((resolve) => {
-          server.close(() => resolve());
-          server.closeIdleConnections();
-        });
+        const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+        server.closeIdleConnections();
+        await closed;
         for (const release of releases) await release();
       })());
 
