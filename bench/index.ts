@@ -17,6 +17,6 @@ if (!only || only === "make-probability") {
 }
 
 if (!only || only === "stats") {
-  console.log("\n== stats: make-rate query on 50 000 putts (PGlite)");
+  console.log("\n== stats: make rates, trend and compare on 500 000 stored putts (PGlite), with and without a date range");
   printStatsBench(await runStatsBench());
 }

@@ -6,13 +6,15 @@ import { pinoHttp } from "pino-http";
 import { toNodeHandler } from "better-auth/node";
 import type { AppDeps } from "./deps";
 import { apiNotFound, errorHandler, requireJsonBody } from "./middleware/errors";
-import { limiter } from "./middleware/rate-limit";
+import { limiter, withStore } from "./middleware/rate-limit";
 import { loadSession } from "./middleware/session";
 import { apiRouters } from "./routes";
 
 const JSON_LIMIT = "100kb";
 
-export function createApp(deps: AppDeps): Express {
+export function createApp(appDeps: AppDeps): Express {
+  // Every limiter made from config.rateLimits gets the shared store (PostgreSQL) when there is one.
+  const deps: AppDeps = { ...appDeps, config: { ...appDeps.config, rateLimits: withStore(appDeps.config.rateLimits, appDeps.rateLimitStore) } };
   const { auth, logger, config } = deps;
   const app = express();
   app.disable("x-powered-by");

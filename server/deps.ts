@@ -5,7 +5,7 @@ import type { Database } from "./db/client";
 import type { Logger } from "./lib/logger";
 import type { Mailer } from "./lib/mailer";
 import type { SmtpFake } from "./lib/smtp-fake";
-import type { RateLimitConfig } from "./middleware/rate-limit";
+import type { RateLimitConfig, RateLimitStoreFactory } from "./middleware/rate-limit";
 
 export type AppConfig = {
   baseUrl: string;
@@ -14,7 +14,7 @@ export type AppConfig = {
   /** Vite's dev server injects inline scripts: CSP is off in development only. */
   devCsp: boolean;
   trustProxy: boolean;
-  rateLimits: { auth: RateLimitConfig; reads: RateLimitConfig };
+  rateLimits: { auth: RateLimitConfig; reads: RateLimitConfig; imports?: RateLimitConfig };
   /** Serves the client: built files in production, Vite middleware in development. */
   frontend?: (app: Express) => void;
 };
@@ -26,10 +26,14 @@ export type AppDeps = {
   mailer: Mailer;
   smtpFake?: SmtpFake;
   config: AppConfig;
+  /** Rate-limit counts shared through PostgreSQL (DATABASE_URL); absent: in memory (one process, PGlite). */
+  rateLimitStore?: RateLimitStoreFactory;
 };
 
 export const DEFAULT_RATE_LIMITS: AppConfig["rateLimits"] = {
   auth: { windowMs: 60_000, limit: 30 },
   reads: { windowMs: 60_000, limit: 600 },
+  /** CSV imports per signed-in user. */
+  imports: { windowMs: 60_000, limit: 6 },
 };
 

@@ -8,8 +8,10 @@ import { createAuth } from "./auth";
 import { createApp, DEFAULT_RATE_LIMITS, type AppConfig } from "./app";
 import { openPglite, openPostgres, type Database } from "./db/client";
 import { lockDataDir } from "./db/lock";
+import { analyzeStale, scheduleMaintenance } from "./db/maintenance";
 import { migrate } from "./db/migrate";
 import { seedDemo } from "./db/seed";
+import { discardUnfinishedImports } from "./routes/csv/csv.handlers";
 import type { Env } from "./env";
 import { ERROR_CODES, type ApiErrorBody } from "../shared/errors";
 import { createLogger } from "./lib/logger";
@@ -79,9 +81,14 @@ export async function start(options: StartOptions): Promise<Running> {
     const port = (server.address() as { port: number }).port;
     await options.onListening?.(`http://127.0.0.1:${port}`);
 
-    const database: Database = env.DATABASE_URL ? await openPostgres(env.DATABASE_URL) : await openPglite(pgliteDir, options.pgliteLoad);
+    const database: Database = env.DATABASE_URL ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS) : await openPglite(pgliteDir, options.pgliteLoad);
     releases.unshift(() => database.close());
     await migrate(database);
+    const discarded = await discardUnfinishedImports(database.db);
+    if (discarded > 0) logger.warn({ sessions: discarded }, "removed the sessions of a CSV import that never finished");
+    // Planner statistics: PGlite has no autovacuum, so the server keeps them fresh itself (db/maintenance.ts).
+    await analyzeStale(database.db, logger);
+    if (database.kind === "pglite") releases.unshift(scheduleMaintenance(database.db, logger));
 
     let smtpFake: SmtpFake | undefined;
     if (!env.SMTP_URL) {

@@ -25,8 +25,9 @@ export async function openPglite(dataDir: string, load?: Blob): Promise<Database
   return { db, kind: "pglite", pglite: client, close: () => client.close() };
 }
 
-export async function openPostgres(url: string): Promise<Database> {
-  const pool = new pg.Pool({ connectionString: url, max: 10 });
+/** statementTimeoutMs: PostgreSQL cancels longer statements (SQLSTATE 57014), so one slow query cannot hold a connection. */
+export async function openPostgres(url: string, statementTimeoutMs = 0): Promise<Database> {
+  const pool = new pg.Pool({ connectionString: url, max: 10, ...(statementTimeoutMs > 0 ? { statement_timeout: statementTimeoutMs } : {}) });
   const db = drizzlePg(pool, { schema }) as unknown as Db;
   return { db, kind: "postgres", close: () => pool.end() };
 }

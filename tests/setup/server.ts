@@ -59,7 +59,7 @@ export async function startTestServer(options: Partial<Omit<StartOptions, "env">
     env,
     pgliteDir: options.pgliteDir ?? "memory://",
     pgliteLoad: options.pgliteDir === undefined && !pgDb ? templateBlob() : undefined,
-    rateLimits: options.rateLimits ?? { auth: { windowMs: 60_000, limit: 10_000 }, reads: { windowMs: 60_000, limit: 100_000 } },
+    rateLimits: options.rateLimits ?? { auth: { windowMs: 60_000, limit: 10_000 }, reads: { windowMs: 60_000, limit: 100_000 }, imports: { windowMs: 60_000, limit: 10_000 } },
     frontend: options.frontend,
     onListening: options.onListening,
     logDestination: options.logDestination,
