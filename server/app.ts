@@ -1,6 +1,7 @@
 export { DEFAULT_RATE_LIMITS, type AppConfig, type AppDeps } from "./deps";
 // createApp(deps) builds the Express app without listening, so tests can mount it.
 import express, { type Express, type RequestHandler } from "express";
+import compression from "compression";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import { toNodeHandler } from "better-auth/node";
@@ -40,6 +41,8 @@ export function createApp(appDeps: AppDeps): Express {
           },
     }),
   );
+  // gzip/brotli for what is made per request (JSON, index.html); built assets come pre-compressed (frontend.ts).
+  app.use(compression());
   app.use(
     pinoHttp({
       logger,
