@@ -15,6 +15,7 @@ import { discardUnfinishedImports } from "./routes/csv/csv.handlers";
 import type { Env } from "./env";
 import { ERROR_CODES, type ApiErrorBody } from "../shared/errors";
 import { createLogger } from "./lib/logger";
+import { postgresRateLimits } from "./lib/rate-limit-store";
 import { createMailer } from "./lib/mailer";
 import { startSmtpFake, type SmtpFake } from "./lib/smtp-fake";
 
@@ -106,12 +107,17 @@ export async function start(options: StartOptions): Promise<Running> {
     const auth = createAuth({ db: database.db, secret: authSecret(env), baseUrl, trustedOrigins, mailer, logger });
     if (env.SEED === "1") await seedDemo(database.db, logger);
 
-    app = createApp({
+    // With DATABASE_URL every server on the database shares the rate-limit counts (PostgreSQL store).
+    const sharedLimits = env.DATABASE_URL ? postgresRateLimits(env.DATABASE_URL) : undefined;
+    if (sharedLimits) releases.unshift(sharedLimits.close);
+
+    const ready = createApp({
       database,
       auth,
       logger,
       mailer,
       smtpFake,
+      rateLimitStore: sharedLimits?.store,
       config: {
         baseUrl,
         dev: Boolean(smtpFake) || env.NODE_ENV !== "production",
@@ -121,6 +127,8 @@ export async function start(options: StartOptions): Promise<Running> {
         frontend: options.frontend,
       },
     });
+    await sharedLimits?.ready();
+    app = ready;
 
     let closing: Promise<void> | undefined;
     const close = () =>
@@ -133,7 +141,7 @@ export async function start(options: StartOptions): Promise<Running> {
       })());
 
     logger.info({ url: baseUrl, db: database.kind }, "Borrowline is listening");
-    return { app, server, url: `http://127.0.0.1:${port}`, database, smtpFake, auth, close };
+    return { app: ready, server, url: `http://127.0.0.1:${port}`, database, smtpFake, auth, close };
   } catch (err) {
     for (const release of releases) await release().catch(() => {});
     throw err;

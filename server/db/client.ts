@@ -14,6 +14,8 @@ export type Database = {
   db: Db;
   kind: DbKind;
   close: () => Promise<void>;
+  /** Only for PostgreSQL: the connection string (migrations take an advisory lock on a connection of their own). */
+  url?: string;
   /** Only for PGlite: the underlying instance (backups use it). */
   pglite?: PGlite;
 };
@@ -29,5 +31,5 @@ export async function openPglite(dataDir: string, load?: Blob): Promise<Database
 export async function openPostgres(url: string, statementTimeoutMs = 0): Promise<Database> {
   const pool = new pg.Pool({ connectionString: url, max: 10, ...(statementTimeoutMs > 0 ? { statement_timeout: statementTimeoutMs } : {}) });
   const db = drizzlePg(pool, { schema }) as unknown as Db;
-  return { db, kind: "postgres", close: () => pool.end() };
+  return { db, kind: "postgres", url, close: () => pool.end() };
 }

@@ -22,7 +22,7 @@ function templateBlob(): Blob | undefined {
 }
 
 /** On a PostgreSQL server each test server gets a database of its own, so files can run in parallel. */
-async function freshPostgresDatabase(adminUrl: string): Promise<{ url: string; drop: () => Promise<void> }> {
+export async function freshPostgresDatabase(adminUrl: string): Promise<{ url: string; drop: () => Promise<void> }> {
   const name = `borrowline_test_${process.pid}_${Math.random().toString(36).slice(2, 10)}`;
   const admin = new pg.Client({ connectionString: adminUrl });
   await admin.connect();
