@@ -13,20 +13,27 @@ export function postgresRateLimits(databaseUrl: string): { store: RateLimitStore
   const stores: PgStore[] = [];
   // A small pool per limiter: each makes one short query per request it counts.
   const config = { connectionString: databaseUrl, max: 2 };
+  // The package's constructor starts its schema migrations and returns no promise. One constructed store runs them;
+  // the limiters' stores are made without the constructor (same class, same fields), so ready() can wait for the
+  // one run to finish instead of racing several.
+  const migrating = new PostgresStore(config, "borrowline-migrations");
+  void migrating;
   return {
     store: (name) => {
-      const store = new PostgresStore(config, name) as PgStore;
+      const store = Object.assign(Object.create(PostgresStore.prototype) as PgStore, { config, prefix: name });
       stores.push(store);
       return store;
     },
-    /** The store runs its migrations in its constructor without a promise to wait on: wait until its function exists. */
+    /** Waits until the store's function exists and no migration run (advisory lock) is still going. */
     ready: async () => {
-      if (stores.length === 0) return;
       const client = new pg.Client({ connectionString: databaseUrl });
       await client.connect();
       try {
         for (let i = 0; i < 600; i++) {
-          const res = await client.query<{ ok: boolean }>("select to_regprocedure('rate_limit.agg_increment(text, text, double precision, timestamptz)') is not null as ok");
+          const res = await client.query<{ ok: boolean }>(
+            `select to_regprocedure('rate_limit.agg_increment(text, text, double precision, timestamptz)') is not null
+               and not exists (select 1 from pg_locks where locktype = 'advisory' and database = (select oid from pg_database where datname = current_database())) as ok`,
+          );
           if (res.rows[0]?.ok) return;
           await new Promise((r) => setTimeout(r, 50));
         }
