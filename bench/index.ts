@@ -1,5 +1,6 @@
 // npm run bench: every benchmark in one run, each as figures and ratios against a reference
 // measured in the same run. Timing goals are reported here, never asserted in tests.
+import { printMemoryBench, runMemoryBench } from "./memory";
 import { printMakeProbabilityBench, runMakeProbabilityBench } from "./make-probability";
 import { printPhysicsBench, runPhysicsBench } from "./physics";
 import { printStatsBench, runStatsBench } from "./stats";
@@ -19,4 +20,9 @@ if (!only || only === "make-probability") {
 if (!only || only === "stats") {
   console.log("\n== stats: make rates, trend and compare on 500 000 stored putts (PGlite), with and without a date range");
   printStatsBench(await runStatsBench());
+}
+
+if (!only || only === "memory") {
+  console.log("\n== memory: server RSS right after start on an empty database (PGlite buffer pool ours vs default)");
+  printMemoryBench(runMemoryBench());
 }

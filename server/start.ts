@@ -82,7 +82,7 @@ export async function start(options: StartOptions): Promise<Running> {
     const port = (server.address() as { port: number }).port;
     await options.onListening?.(`http://127.0.0.1:${port}`);
 
-    const database: Database = env.DATABASE_URL ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS) : await openPglite(pgliteDir, options.pgliteLoad);
+    const database: Database = env.DATABASE_URL ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS) : await openPglite(pgliteDir, options.pgliteLoad, env.PGLITE_SHARED_BUFFERS);
     releases.unshift(() => database.close());
     await migrate(database);
     const discarded = await discardUnfinishedImports(database.db);
