@@ -1,5 +1,6 @@
 // npm run bench: every benchmark in one run, each as figures and ratios against a reference
 // measured in the same run. Timing goals are reported here, never asserted in tests.
+import { printConcurrencyBench, runConcurrencyBench } from "./concurrency";
 import { printMemoryBench, runMemoryBench } from "./memory";
 import { printMakeProbabilityBench, runMakeProbabilityBench } from "./make-probability";
 import { printPhysicsBench, runPhysicsBench } from "./physics";
@@ -20,6 +21,11 @@ if (!only || only === "make-probability") {
 if (!only || only === "stats") {
   console.log("\n== stats: make rates, trend and compare on 500 000 stored putts (PGlite), with and without a date range");
   printStatsBench(await runStatsBench());
+}
+
+if (!only || only === "concurrency") {
+  console.log("\n== concurrency: /api/health and a putt post while a 50 000-row import and make-rate reads on 500 000 putts run");
+  printConcurrencyBench(await runConcurrencyBench());
 }
 
 if (!only || only === "memory") {
