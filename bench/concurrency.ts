@@ -76,6 +76,9 @@ export async function runConcurrencyBench({ putts = Number(process.env.STATS_PUT
   });
   try {
     const { url, database } = running;
+    // The seeding below holds the event loop for many seconds: a kept-alive connection must outlive it, or the
+    // client's next request races the server closing it (ECONNRESET). Browsers keep connections alive too.
+    running.server.keepAliveTimeout = 120_000;
     await seedClub(database, putts);
     const keen = await signUp(url, "Keen Player");
     const importer = await signUp(url, "Importer");

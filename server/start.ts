@@ -69,9 +69,9 @@ export async function start(options: StartOptions): Promise<Running> {
 
     // Bind early (the public origin must be known when only an ephemeral port was asked for), but answer every
     // request with 503 + Retry-After until the app is attached: a request during start-up never hangs.
-    let app: Express | undefined;
+    const attached: { app?: Express } = {};
     const server = http.createServer((req, res) => {
-      if (app) return app(req, res);
+      if (attached.app) return attached.app(req, res);
       notReady(res);
     });
     await new Promise<void>((resolve, reject) => {
@@ -128,7 +128,7 @@ export async function start(options: StartOptions): Promise<Running> {
       },
     });
     await sharedLimits?.ready();
-    app = ready;
+    attached.app = ready;
 
     let closing: Promise<void> | undefined;
     const close = () =>
