@@ -1,4 +1,4 @@
-export { DEFAULT_RATE_LIMITS, type AppConfig, type AppDeps } from "./deps";
+export { DEFAULT_RATE_LIMITS, type AppConfig, type AppDeps, type RateLimits } from "./deps";
 // createApp(deps) builds the Express app without listening, so tests can mount it.
 import express, { type Express, type RequestHandler } from "express";
 import compression from "compression";
@@ -6,12 +6,19 @@ import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import { toNodeHandler } from "better-auth/node";
 import type { AppDeps } from "./deps";
-import { apiNotFound, errorHandler, requireJsonBody } from "./middleware/errors";
-import { limiter, withStore } from "./middleware/rate-limit";
+import { apiNotFound, errorHandler } from "./middleware/errors";
+import { authBodyGuard, reshapeAuthError, requireJsonBody, sameOriginWrites, type UploadRoute } from "./middleware/guards";
+import { limiter, mailLimiters, withStore } from "./middleware/rate-limit";
 import { loadSession } from "./middleware/session";
 import { apiRouters } from "./routes";
 
 const JSON_LIMIT = "100kb";
+
+/** The only routes that take multipart/form-data: the CSV uploads (paths below /api). */
+const UPLOAD_ROUTES: UploadRoute[] = [
+  { method: "POST", path: /^\/csv\/putts\/(preview|import)$/ },
+  { method: "PUT", path: /^\/greens\/[^/]+\/height-map$/ },
+];
 
 export function createApp(appDeps: AppDeps): Express {
   // Every limiter made from config.rateLimits gets the shared store (PostgreSQL) when there is one.
@@ -51,18 +58,28 @@ export function createApp(appDeps: AppDeps): Express {
     }),
   );
 
-  // Auth routes first: better-auth reads the raw body itself, so it sits before express.json().
+  // Every /api write that carries cookies comes from our own pages (403 otherwise), auth routes included.
+  app.use("/api", sameOriginWrites(config.trustedOrigins ?? [new URL(config.baseUrl).origin]));
+  const { mailPerRecipient, mailPerAccount, mailPerClientAddress } = config.rateLimits;
+  const mail = mailLimiters({ perRecipient: mailPerRecipient, perAccount: mailPerAccount, perClientAddress: mailPerClientAddress });
+
+  // better-auth: its body is parsed here first (JSON only, 100 kB, hostile text refused, user fields checked),
+  // better-auth reads the parsed body, and its errors are rewritten to our shape.
+  app.use("/api/auth", requireJsonBody(), express.json({ limit: JSON_LIMIT, strict: true }), authBodyGuard);
   const authLimiter = limiter(config.rateLimits.auth, "sign-in");
   const limitedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email", "/api/auth/request-password-reset", "/api/auth/reset-password"];
   app.use(limitedAuthPaths, authLimiter);
-  const authHandler = toNodeHandler(auth);
+  const mailingAuthPaths = ["/api/auth/sign-up/email", "/api/auth/send-verification-email", "/api/auth/request-password-reset"];
+  app.post(mailingAuthPaths, mail.byClientAddress, mail.byRecipient);
+  const authHandler = toNodeHandler(async (request: Request) => reshapeAuthError(await auth.handler(request)));
   app.all("/api/auth/{*any}", authHandler as RequestHandler);
+  app.use("/api/auth", errorHandler(logger));
 
   const api = express.Router();
-  api.use(requireJsonBody);
+  api.use(requireJsonBody(UPLOAD_ROUTES));
   api.use(express.json({ limit: JSON_LIMIT, strict: true }));
   api.use(loadSession(auth));
-  for (const router of apiRouters(deps)) api.use(router);
+  for (const router of apiRouters({ ...deps, mail })) api.use(router);
   api.use(apiNotFound);
   api.use(errorHandler(logger));
   app.use("/api", api);

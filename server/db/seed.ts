@@ -8,9 +8,8 @@ import type { Db } from "./client";
 import { account, greens, ladders, practiceSessions, putts, squadMembers, squads, stimpReadings, user } from "./schema";
 import { seedCoaching } from "./seed-coaching";
 import { DEMO_ADMIN, DEMO_COACH, DEMO_GREEN, DEMO_LADDERS, DEMO_PASSWORD, DEMO_PLAYERS, DEMO_SQUAD } from "./seed-data";
+import { DEMO_WEEKS, demoSessions, demoStimpFt } from "./seed-putts";
 
-const FT = 0.3048;
-const WEEKS = 6;
 
 /**
  * Creates a verified account directly (no sign-up e-mail), with better-auth's own password hashing,
@@ -56,7 +55,7 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
 
   const [green] = await db.insert(greens).values({ ownerId: coachId, name: DEMO_GREEN.name, locationNote: DEMO_GREEN.locationNote }).returning();
   await db.insert(stimpReadings).values([
-    { greenId: green!.id, measuredOn: isoDaysAgo(WEEKS * 7), stimpFt: 9.0, note: "After rain, slower" },
+    { greenId: green!.id, measuredOn: isoDaysAgo(DEMO_WEEKS * 7), stimpFt: demoStimpFt(0), note: "After rain, slower" },
     { greenId: green!.id, measuredOn: isoDaysAgo(7), stimpFt: DEMO_GREEN.stimpFt },
   ]);
 
@@ -64,46 +63,29 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
   await db.insert(squadMembers).values(playerIds.map((playerId) => ({ squadId: squad!.id, playerId })));
   await db.insert(ladders).values(DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l })));
 
-  const distancesFt = [3, 3, 4, 4, 5, 5, 6, 6, 8, 8, 10, 12, 15, 20, 25, 30];
   for (const [i, p] of DEMO_PLAYERS.entries()) {
     const playerId = playerIds[i]!;
-    for (let week = 0; week < WEEKS; week++) {
-      for (const dayOffset of [1, 4]) {
-        const daysAgo = (WEEKS - 1 - week) * 7 + (6 - dayOffset) + i;
-        const [session] = await db
-          .insert(practiceSessions)
-          .values({
-            playerId,
-            date: isoDaysAgo(daysAgo),
-            greenId: green!.id,
-            stimpFt: week < 2 ? 9.0 : DEMO_GREEN.stimpFt,
-            conditions: week < 2 ? "Damp, slow after rain" : "Dry and true",
-            tags: week < 2 ? ["damp"] : ["dry"],
-          })
-          .returning();
-        const halfAt = p.halfAtFt + p.gainFtPerWeek * week;
-        const rows = [];
-        for (let k = 0; k < 24; k++) {
-          const ft = distancesFt[Math.floor(rand() * distancesFt.length)]!;
-          const made = rand() < 1 / (1 + Math.exp((ft - halfAt) / 2.4));
-          const long = ft >= 15;
-          // A lag's leave grows with its length (about ±40 % of it at first, tightening each week), so
-          // three-putt range (> 1 m) is a real share of the long putts and falls as the juniors improve.
-          const lagSpread = ft * FT * (0.4 - 0.03 * week);
-          const pastM = long ? (rand() - 0.35) * lagSpread : 0.1 + rand() * 0.5 * (rand() < 0.3 ? -1 : 1);
-          rows.push({
-            sessionId: session!.id,
-            playerId,
-            distanceM: ft * FT,
-            holed: made,
-            missSide: made ? null : rand() < 0.55 ? "right" : "left",
-            missLengthM: made ? null : Math.round(pastM * 100) / 100,
-            breakType: ["uphill", "downhill", "left-to-right", "right-to-left", "straight"][Math.floor(rand() * 5)]!,
-            createdAt: new Date(Date.parse(`${isoDaysAgo(daysAgo)}T09:00:00Z`) + k * 60_000),
-          });
-        }
-        await db.insert(putts).values(rows);
-      }
+    for (const s of demoSessions(p, rand)) {
+      const daysAgo = (DEMO_WEEKS - 1 - s.week) * 7 + (6 - s.dayOffset) + i;
+      const [session] = await db
+        .insert(practiceSessions)
+        .values({
+          playerId,
+          date: isoDaysAgo(daysAgo),
+          greenId: green!.id,
+          stimpFt: s.stimpFt,
+          conditions: s.week < 2 ? "Damp, slow after rain" : "Dry and true",
+          tags: s.week < 2 ? ["damp"] : ["dry"],
+        })
+        .returning();
+      await db.insert(putts).values(
+        s.putts.map((putt, k) => ({
+          sessionId: session!.id,
+          playerId,
+          ...putt,
+          createdAt: new Date(Date.parse(`${isoDaysAgo(daysAgo)}T09:00:00Z`) + k * 60_000),
+        })),
+      );
     }
   }
   await seedCoaching(db, { coachId, squadId: squad!.id, playerIds });

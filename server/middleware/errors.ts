@@ -26,7 +26,9 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     const e = err as BodyParserError;
     if (err instanceof HttpError) {
       status = err.status;
-      body = { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+      body = {
+        error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}), ...(err.details ? { details: err.details } : {}) },
+      };
     } else if (isStatementTimeout(err)) {
       // The statement ran past DB_STATEMENT_TIMEOUT_MS and was cancelled: the database is free again; try later.
       status = 503;
@@ -48,11 +50,3 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     res.status(status).json(body);
   };
 }
-
-/** API bodies are JSON: anything else with a body is refused with 415 before it reaches a handler. */
-export const requireJsonBody: RequestHandler = (req, _res, next) => {
-  const hasBody = Number(req.headers["content-length"] ?? 0) > 0 || req.headers["transfer-encoding"] !== undefined;
-  if (!hasBody || !["POST", "PUT", "PATCH"].includes(req.method)) return next();
-  if (req.is("application/json") || req.is("multipart/form-data")) return next();
-  throw new HttpError(415, ERROR_CODES.unsupportedMedia, "Send the request body as application/json.");
-};

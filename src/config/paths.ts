@@ -49,7 +49,7 @@ export const paths = {
   coach: { path: "/coach", href: () => "/coach" },
   coachPlayer: { path: "/coach/players/:playerId", href: (playerId: string) => `/coach/players/${encodeURIComponent(playerId)}` },
 
-  // development only
+  // the local inbox when no SMTP_URL is set (admins only)
   mailbox: { path: "/dev/mailbox", href: () => "/dev/mailbox" },
 } as const;
 

@@ -8,8 +8,15 @@ import { start } from "../../server/start";
 
 const running = await start({
   env: readEnv({ ...process.env, NODE_ENV: "production", HOST: "127.0.0.1", PORT: process.env.PORT ?? "0", SEED: "0", LOG_LEVEL: "error" }),
-  // AUTH_LIMIT: a low sign-in limit for the test that shows it holds across servers.
-  rateLimits: { auth: { windowMs: 60_000, limit: Number(process.env.AUTH_LIMIT ?? 100_000) }, reads: { windowMs: 60_000, limit: 100_000 }, imports: { windowMs: 60_000, limit: 100_000 } },
+  rateLimits: {
+    // AUTH_LIMIT: a low sign-in limit for the test that shows it holds across servers.
+    auth: { windowMs: 60_000, limit: Number(process.env.AUTH_LIMIT ?? 100_000) },
+    reads: { windowMs: 60_000, limit: 100_000 },
+    mailPerRecipient: { windowMs: 60_000, limit: 100_000 },
+    mailPerAccount: { windowMs: 60_000, limit: 100_000 },
+    mailPerClientAddress: { windowMs: 60_000, limit: 100_000 },
+    imports: { windowMs: 60_000, limit: 100_000 },
+  },
 });
 const hostPid = Number(fs.readlinkSync("/proc/self"));
 process.stdout.write(JSON.stringify({ url: running.url, pid: process.pid, hostPid }) + "\n");

@@ -5,6 +5,7 @@ import { userIdSchema } from "../../../shared/schemas/squads";
 import type { Db } from "../../db/client";
 import { ladderAssignments, squadMembers, squads, user } from "../../db/schema";
 import { notFound } from "../../lib/http-error";
+import { inSquadsOf } from "../../lib/player-access";
 import { currentUser } from "../../middleware/session";
 import { parseOrThrow } from "../../middleware/validate";
 import { assignmentRows, assignmentViews, summaryOf, withoutPutts } from "../assignments/assignment-view";
@@ -63,7 +64,8 @@ export function getCoachedPlayer(db: Db): RequestHandler {
 export function listSquadAssignments(db: Db): RequestHandler {
   return async (req, res) => {
     const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
-    const rows = await assignmentRows(db, eq(ladderAssignments.squadId, squad.id));
+    // Players who have left the squad (and every other squad of its coach) are no longer shown.
+    const rows = await assignmentRows(db, and(eq(ladderAssignments.squadId, squad.id), inSquadsOf(squad.coachId, ladderAssignments.playerId)));
     const summaries = (await assignmentViews(db, rows)).map(summaryOf).reverse();
     res.json({ squad: { id: squad.id, name: squad.name }, assignments: summaries });
   };

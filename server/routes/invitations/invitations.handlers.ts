@@ -73,6 +73,7 @@ export function createInvitation({ database, mailer, config, logger }: AppDeps):
     if (member) throw conflict(`${email} is already in ${squad.name}.`);
 
     const token = crypto.randomBytes(32).toString("base64url");
+    const link = `${config.baseUrl}/join/${token}`;
     const expiresAt = new Date(Date.now() + INVITATION_DAYS * 24 * 3600 * 1000);
     const [row] = await db
       .insert(invitations)
@@ -84,7 +85,7 @@ export function createInvitation({ database, mailer, config, logger }: AppDeps):
       `${coach?.name ?? "Your coach"} invites you to join the squad "${squad.name}" on Borrowline, to run the putting ladders ` +
       `they set and share your progress with them. The invitation is for ${email} and can be used once, until ${expiresAt.toISOString().slice(0, 10)}.`;
     try {
-      await mailer.send(linkMail(email, `Join ${squad.name} on Borrowline`, intro, "Join the squad", `${config.baseUrl}/join/${token}`));
+      await mailer.send(linkMail(email, `Join ${squad.name} on Borrowline`, intro, "Join the squad", link));
     } catch (err) {
       await db.delete(invitations).where(eq(invitations.id, row!.id));
       logger.error({ err, to: email }, "invitation e-mail could not be sent");
@@ -101,7 +102,8 @@ export function createInvitation({ database, mailer, config, logger }: AppDeps):
           ne(invitations.id, row!.id),
         ),
       );
-    res.status(201).json({ invitation: invitationView(row!) });
+    // The inviting coach gets the link too, to pass on by hand (no mailbox needed for the demo).
+    res.status(201).json({ invitation: invitationView(row!), link });
   };
 }
 
@@ -164,7 +166,7 @@ export function previewInvitation(db: Db): RequestHandler {
 
 /**
  * The signed-in player joins the squad. The account's e-mail must be the invited one (compared without
- * case); coach and admin accounts cannot join squads. Used, withdrawn or expired links answer 409.
+ * case) and confirmed; coach and admin accounts cannot join squads. Used, withdrawn or expired links answer 409.
  */
 export function acceptInvitation(db: Db): RequestHandler {
   return async (req, res) => {
@@ -176,6 +178,9 @@ export function acceptInvitation(db: Db): RequestHandler {
     if (me.email.toLowerCase() !== invitation.email.toLowerCase()) {
       throw forbidden(`This invitation was sent to ${invitation.email}. Sign in with that e-mail address to accept it.`);
     }
+    // Read from the database, not the session's cached copy: the e-mail must really be confirmed.
+    const [account] = await db.select({ emailVerified: user.emailVerified }).from(user).where(eq(user.id, me.id));
+    if (!account?.emailVerified) throw forbidden("Confirm your e-mail address first (open the link we sent you), then accept the invitation.");
     const joinedAt = await db.transaction(async (tx) => {
       // The status guard makes the token single-use even when two accepts race.
       const used = await tx
