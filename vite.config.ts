@@ -1,11 +1,22 @@
 import { defineConfig } from "vite";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
+import { compression, defineAlgorithm } from "vite-plugin-compression2";
 
 // The Express server runs Vite in middleware mode during development, so no proxy
 // is configured here and `server.hmr` keeps its default.
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  // Brotli and gzip copies of every text asset beside it, served by express-static-gzip (server/frontend.ts).
+  plugins: [
+    react(),
+    tailwindcss(),
+    compression({
+      include: /\.(js|mjs|css|html|json|svg|txt|map)$/,
+      algorithms: [defineAlgorithm("brotliCompress"), defineAlgorithm("gzip", { level: 9 })],
+      threshold: 1024,
+      deleteOriginalAssets: false,
+    }),
+  ],
   build: {
     outDir: "dist",
     emptyOutDir: true,
@@ -22,7 +33,9 @@ export default defineConfig({
             { name: "charts", test: /[\\/]node_modules[\\/](recharts|d3-[^\\/]+|victory-vendor|decimal\.js-light)[\\/]/, priority: 20 },
             // Highest priority: a group also takes its modules' dependencies, so if "three" (which imports React)
             // outranked this one, React would land in the three chunk and the entry would have to load it.
-            { name: "react", test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router)[\\/]/, priority: 40 },
+            // use-sync-external-store (a React shim that zustand, used by @react-three/fiber, and react-redux, used by
+            // recharts, both import) belongs here too: in the three chunk it made the charts chunk import three.js.
+            { name: "react", test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router|use-sync-external-store)[\\/]/, priority: 40 },
           ],
         },
       },

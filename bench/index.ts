@@ -1,5 +1,7 @@
 // npm run bench: every benchmark in one run, each as figures and ratios against a reference
 // measured in the same run. Timing goals are reported here, never asserted in tests.
+import { printConcurrencyBench, runConcurrencyBench } from "./concurrency";
+import { printMemoryBench, runMemoryBench } from "./memory";
 import { printMakeProbabilityBench, runMakeProbabilityBench } from "./make-probability";
 import { printPhysicsBench, runPhysicsBench } from "./physics";
 import { printStatsBench, runStatsBench } from "./stats";
@@ -17,6 +19,16 @@ if (!only || only === "make-probability") {
 }
 
 if (!only || only === "stats") {
-  console.log("\n== stats: make-rate query on 50 000 putts (PGlite)");
+  console.log("\n== stats: make rates, trend and compare on 500 000 stored putts (PGlite), with and without a date range");
   printStatsBench(await runStatsBench());
+}
+
+if (!only || only === "concurrency") {
+  console.log("\n== concurrency: /api/health and a putt post while a 50 000-row import and make-rate reads on 500 000 putts run");
+  printConcurrencyBench(await runConcurrencyBench());
+}
+
+if (!only || only === "memory") {
+  console.log("\n== memory: server RSS right after start on an empty database (PGlite buffer pool ours vs default)");
+  printMemoryBench(runMemoryBench());
 }

@@ -1,13 +1,14 @@
 export { DEFAULT_RATE_LIMITS, type AppConfig, type AppDeps, type RateLimits } from "./deps";
 // createApp(deps) builds the Express app without listening, so tests can mount it.
 import express, { type Express, type RequestHandler } from "express";
+import compression from "compression";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import { toNodeHandler } from "better-auth/node";
 import type { AppDeps } from "./deps";
 import { apiNotFound, errorHandler } from "./middleware/errors";
 import { authBodyGuard, reshapeAuthError, requireJsonBody, sameOriginWrites, type UploadRoute } from "./middleware/guards";
-import { limiter, mailLimiters } from "./middleware/rate-limit";
+import { limiter, mailLimiters, withStore } from "./middleware/rate-limit";
 import { loadSession } from "./middleware/session";
 import { apiRouters } from "./routes";
 
@@ -19,7 +20,9 @@ const UPLOAD_ROUTES: UploadRoute[] = [
   { method: "PUT", path: /^\/greens\/[^/]+\/height-map$/ },
 ];
 
-export function createApp(deps: AppDeps): Express {
+export function createApp(appDeps: AppDeps): Express {
+  // Every limiter made from config.rateLimits gets the shared store (PostgreSQL) when there is one.
+  const deps: AppDeps = { ...appDeps, config: { ...appDeps.config, rateLimits: withStore(appDeps.config.rateLimits, appDeps.rateLimitStore) } };
   const { auth, logger, config } = deps;
   const app = express();
   app.disable("x-powered-by");
@@ -45,6 +48,8 @@ export function createApp(deps: AppDeps): Express {
           },
     }),
   );
+  // gzip/brotli for what is made per request (JSON, index.html); built assets come pre-compressed (frontend.ts).
+  app.use(compression());
   app.use(
     pinoHttp({
       logger,

@@ -5,7 +5,7 @@ import type { Database } from "./db/client";
 import type { Logger } from "./lib/logger";
 import type { Mailer } from "./lib/mailer";
 import type { SmtpFake } from "./lib/smtp-fake";
-import type { MailLimiters, RateLimitConfig } from "./middleware/rate-limit";
+import type { MailLimiters, RateLimitConfig, RateLimitStoreFactory } from "./middleware/rate-limit";
 
 export type AppConfig = {
   baseUrl: string;
@@ -26,6 +26,8 @@ export type AppDeps = {
   mailer: Mailer;
   smtpFake?: SmtpFake;
   config: AppConfig;
+  /** Rate-limit counts shared through PostgreSQL (DATABASE_URL); absent: in memory (one process, PGlite). */
+  rateLimitStore?: RateLimitStoreFactory;
 };
 
 export type RateLimits = {
@@ -39,6 +41,8 @@ export type RateLimits = {
   mailPerAccount: RateLimitConfig;
   /** E-mail asked for by one client address while signed out (sign-up verification, resend, password reset). */
   mailPerClientAddress: RateLimitConfig;
+  /** CSV imports per signed-in user (absent: DEFAULT_RATE_LIMITS.imports). */
+  imports?: RateLimitConfig;
 };
 
 /** Every rate limit in one place (README, "Security"). */
@@ -48,6 +52,7 @@ export const DEFAULT_RATE_LIMITS: RateLimits = {
   mailPerRecipient: { windowMs: 60 * 60_000, limit: 5 },
   mailPerAccount: { windowMs: 60 * 60_000, limit: 50 },
   mailPerClientAddress: { windowMs: 60 * 60_000, limit: 30 },
+  imports: { windowMs: 60_000, limit: 6 },
 };
 
 

@@ -1,7 +1,8 @@
 import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-import express, { type Express } from "express";
+import type { Express } from "express";
+import expressStaticGzip from "express-static-gzip";
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 
@@ -12,8 +13,17 @@ export function serveBuiltClient(distDir = path.join(root, "dist")) {
     throw new Error(`The client is not built (${indexHtml} is missing). Run "npm run build" first.`);
   }
   return (app: Express) => {
-    app.use("/assets", express.static(path.join(distDir, "assets"), { immutable: true, maxAge: "1y", fallthrough: false }));
-    app.use(express.static(distDir, { index: false }));
+    // Hashed assets: the build's own brotli/gzip copies (vite-plugin-compression2), cached for a year, immutable.
+    app.use(
+      "/assets",
+      expressStaticGzip(path.join(distDir, "assets"), {
+        enableBrotli: true,
+        orderPreference: ["br", "gzip"],
+        index: false,
+        serveStatic: { immutable: true, maxAge: "1y", fallthrough: false },
+      }),
+    );
+    app.use(expressStaticGzip(distDir, { enableBrotli: true, orderPreference: ["br", "gzip"], index: false, serveStatic: { index: false } }));
     app.get("/{*any}", (_req, res) => {
       res.setHeader("Cache-Control", "no-cache");
       res.sendFile(indexHtml);

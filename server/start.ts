@@ -8,10 +8,14 @@ import { createAuth } from "./auth";
 import { createApp, DEFAULT_RATE_LIMITS, type AppConfig } from "./app";
 import { openPglite, openPostgres, type Database } from "./db/client";
 import { lockDataDir } from "./db/lock";
+import { analyzeStale, scheduleMaintenance } from "./db/maintenance";
 import { migrate } from "./db/migrate";
 import { seedDemo } from "./db/seed";
+import { discardUnfinishedImports } from "./routes/csv/csv.handlers";
 import type { Env } from "./env";
+import { ERROR_CODES, type ApiErrorBody } from "../shared/errors";
 import { createLogger } from "./lib/logger";
+import { postgresRateLimits } from "./lib/rate-limit-store";
 import { createMailer } from "./lib/mailer";
 import { makePrivate, usePrivateUmask } from "./lib/private-files";
 import { startSmtpFake, type SmtpFake } from "./lib/smtp-fake";
@@ -27,7 +31,16 @@ export type StartOptions = {
   frontend?: AppConfig["frontend"];
   /** Where log lines go (default stdout); tests read them to check nothing secret is logged. */
   logDestination?: { write: (line: string) => void };
+  /** Called once the port is open and before the app is ready (tests send requests to a starting server). */
+  onListening?: (url: string) => Promise<void>;
 };
+
+/** The answer to any request before the app is attached: try again in a second. */
+function notReady(res: http.ServerResponse): void {
+  const body: ApiErrorBody = { error: { code: ERROR_CODES.unavailable, message: "Borrowline is starting. Try again in a moment." } };
+  res.writeHead(503, { "content-type": "application/json; charset=utf-8", "retry-after": "1", "cache-control": "no-store", connection: "close" });
+  res.end(JSON.stringify(body));
+}
 
 export type Running = {
   app: Express;
@@ -55,18 +68,34 @@ export async function start(options: StartOptions): Promise<Running> {
   const logger = createLogger(env.LOG_LEVEL, options.logDestination);
   const releases: Array<() => Promise<void>> = [];
   try {
-    let database: Database;
-    if (env.DATABASE_URL) {
-      database = await openPostgres(env.DATABASE_URL);
-    } else {
-      const dir = options.pgliteDir ?? path.join(env.DATA_DIR, "pglite");
-      if (!dir.startsWith("memory://")) releases.push(await lockDataDir(env.DATA_DIR));
-      database = await openPglite(dir, options.pgliteLoad);
-    }
+    const pgliteDir = options.pgliteDir ?? path.join(env.DATA_DIR, "pglite");
+    if (!env.DATABASE_URL && !pgliteDir.startsWith("memory://")) releases.push(await lockDataDir(env.DATA_DIR));
+
+    // Bind early (the public origin must be known when only an ephemeral port was asked for), but answer every
+    // request with 503 + Retry-After until the app is attached: a request during start-up never hangs.
+    const attached: { app?: Express } = {};
+    const server = http.createServer((req, res) => {
+      if (attached.app) return attached.app(req, res);
+      notReady(res);
+    });
+    await new Promise<void>((resolve, reject) => {
+      server.once("error", reject);
+      server.listen(env.PORT, env.HOST, () => resolve());
+    });
+    releases.unshift(() => new Promise<void>((resolve) => server.close(() => resolve())));
+    const port = (server.address() as { port: number }).port;
+    await options.onListening?.(`http://127.0.0.1:${port}`);
+
+    const database: Database = env.DATABASE_URL ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS) : await openPglite(pgliteDir, options.pgliteLoad, env.PGLITE_SHARED_BUFFERS);
     releases.unshift(() => database.close());
     await migrate(database);
     // Files written before this version (or by a CLI under a looser umask) are made private too.
     if (dataDirOnDisk) makePrivate(env.DATA_DIR);
+    const discarded = await discardUnfinishedImports(database.db);
+    if (discarded > 0) logger.warn({ sessions: discarded }, "removed the sessions of a CSV import that never finished");
+    // Planner statistics: PGlite has no autovacuum, so the server keeps them fresh itself (db/maintenance.ts).
+    await analyzeStale(database.db, logger);
+    if (database.kind === "pglite") releases.unshift(scheduleMaintenance(database.db, logger));
 
     let smtpFake: SmtpFake | undefined;
     if (!env.SMTP_URL) {
@@ -79,13 +108,6 @@ export async function start(options: StartOptions): Promise<Running> {
     }
     const mailer = createMailer(env.SMTP_URL ?? smtpFake!.url, env.MAIL_FROM, logger);
 
-    // Bind first so the public origin is known when only an ephemeral port was asked for.
-    const server = http.createServer();
-    await new Promise<void>((resolve, reject) => {
-      server.once("error", reject);
-      server.listen(env.PORT, env.HOST, () => resolve());
-    });
-    const port = (server.address() as { port: number }).port;
     const baseUrl = env.BASE_URL ?? `http://localhost:${port}`;
     const trustedOrigins = env.BASE_URL
       ? [new URL(env.BASE_URL).origin]
@@ -94,12 +116,17 @@ export async function start(options: StartOptions): Promise<Running> {
     const auth = createAuth({ db: database.db, secret: authSecret(env), baseUrl, trustedOrigins, mailer, logger });
     if (env.SEED === "1") await seedDemo(database.db, logger);
 
-    const app = createApp({
+    // With DATABASE_URL every server on the database shares the rate-limit counts (PostgreSQL store).
+    const sharedLimits = env.DATABASE_URL ? postgresRateLimits(env.DATABASE_URL) : undefined;
+    if (sharedLimits) releases.unshift(sharedLimits.close);
+
+    const ready = createApp({
       database,
       auth,
       logger,
       mailer,
       smtpFake,
+      rateLimitStore: sharedLimits?.store,
       config: {
         baseUrl,
         devCsp: env.NODE_ENV === "development",
@@ -109,23 +136,23 @@ export async function start(options: StartOptions): Promise<Running> {
         frontend: options.frontend,
       },
     });
-    server.on("request", app);
+    await sharedLimits?.ready();
+    attached.app = ready;
 
     let closing: Promise<void> | undefined;
     const close = () =>
       (closing ??= (async () => {
         // Stop accepting, let in-flight requests finish, then close the database.
-        await new Promise<void>((resolve) => {
-          server.close(() => resolve());
-          server.closeIdleConnections();
-        });
+        const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+        server.closeIdleConnections();
+        await closed;
         for (const release of releases) await release();
         // PGlite sets some of its files' modes itself (0644), past the umask: tighten once more on the way out.
         if (dataDirOnDisk) makePrivate(env.DATA_DIR);
       })());
 
     logger.info({ url: baseUrl, db: database.kind }, "Borrowline is listening");
-    return { app, server, url: `http://127.0.0.1:${port}`, database, smtpFake, auth, close };
+    return { app: ready, server, url: `http://127.0.0.1:${port}`, database, smtpFake, auth, close };
   } catch (err) {
     for (const release of releases) await release().catch(() => {});
     throw err;

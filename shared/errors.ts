@@ -20,6 +20,8 @@ export const ERROR_CODES = {
   unsupportedMedia: "unsupported_media_type",
   unprocessable: "unprocessable",
   tooManyRequests: "too_many_requests",
+  unavailable: "unavailable",
+  timeout: "timeout",
   internal: "internal",
 } as const;
 

@@ -14,19 +14,33 @@ export type Database = {
   db: Db;
   kind: DbKind;
   close: () => Promise<void>;
+  /** Only for PostgreSQL: the connection string (migrations take an advisory lock on a connection of their own). */
+  url?: string;
   /** Only for PGlite: the underlying instance (backups use it). */
   pglite?: PGlite;
 };
 
+/**
+ * PGlite's own start parameters (its defaults: single-user mode, no parallel workers), plus a smaller buffer pool:
+ * its default shared_buffers of 128 MB is most of the server's memory on a small database. Pages not in the pool
+ * are read back through the operating system's file cache. PGLITE_SHARED_BUFFERS changes it.
+ */
+function pgliteStartParams(sharedBuffers: string): string[] {
+  const defaults = ["--single", "-F", "-O", "-j", "-c", "search_path=public", "-c", "exit_on_error=false", "-c", "log_checkpoints=false"];
+  const noParallel = ["max_worker_processes", "max_parallel_workers", "max_parallel_workers_per_gather", "max_parallel_maintenance_workers"].flatMap((k) => ["-c", `${k}=0`]);
+  return [...defaults, ...noParallel, "-c", "io_method=sync", "-c", `shared_buffers=${sharedBuffers}`];
+}
+
 /** dataDir: a folder, or "memory://" for an in-memory database (tests); `load`: a data-directory dump to start from. */
-export async function openPglite(dataDir: string, load?: Blob): Promise<Database> {
-  const client = await PGlite.create(dataDir, load ? { loadDataDir: load } : {});
+export async function openPglite(dataDir: string, load?: Blob, sharedBuffers = "32MB"): Promise<Database> {
+  const client = await PGlite.create(dataDir, { ...(load ? { loadDataDir: load } : {}), startParams: pgliteStartParams(sharedBuffers) });
   const db = drizzlePglite(client, { schema }) as unknown as Db;
   return { db, kind: "pglite", pglite: client, close: () => client.close() };
 }
 
-export async function openPostgres(url: string): Promise<Database> {
-  const pool = new pg.Pool({ connectionString: url, max: 10 });
+/** statementTimeoutMs: PostgreSQL cancels longer statements (SQLSTATE 57014), so one slow query cannot hold a connection. */
+export async function openPostgres(url: string, statementTimeoutMs = 0): Promise<Database> {
+  const pool = new pg.Pool({ connectionString: url, max: 10, ...(statementTimeoutMs > 0 ? { statement_timeout: statementTimeoutMs } : {}) });
   const db = drizzlePg(pool, { schema }) as unknown as Db;
-  return { db, kind: "postgres", close: () => pool.end() };
+  return { db, kind: "postgres", url, close: () => pool.end() };
 }

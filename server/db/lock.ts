@@ -1,9 +1,13 @@
 // PGlite does not lock its data directory: two servers on one DATA_DIR would silently diverge.
-// We take a lock of our own: proper-lockfile (an mkdir lock kept fresh while we run), plus the owner's
-// pid beside it, so a restart right after a crash (SIGKILL, power loss) need not wait for the lock to go stale.
+// We take a lock of our own: an OS-level lock (fs-native-extensions: an open-file-description lock on Linux,
+// flock on macOS) on DATA_DIR/.borrowline.lock, held through an open file for as long as the process lives.
+// The kernel judges the owner: the lock lasts while the process is alive — even with its event loop blocked for
+// minutes — and is gone the instant it dies (SIGKILL, power loss), so a restart with the same PID (PID 1 in a
+// container) starts at once. No timer, no pid guessing. The owner's pid is written into the file only for the
+// message a refused process prints.
 import fs from "node:fs";
 import path from "node:path";
-import lockfile from "proper-lockfile";
+import { tryLock, unlock } from "fs-native-extensions";
 
 export class DataDirLockedError extends Error {
   constructor(dataDir: string, pid?: number) {
@@ -15,37 +19,35 @@ export class DataDirLockedError extends Error {
   }
 }
 
-function isAlive(pid: number): boolean {
-  try {
-    process.kill(pid, 0);
-    return true;
-  } catch (err) {
-    return (err as NodeJS.ErrnoException).code === "EPERM";
-  }
+export function lockFile(dataDir: string): string {
+  return path.join(dataDir, ".borrowline.lock");
 }
 
 export async function lockDataDir(dataDir: string): Promise<() => Promise<void>> {
   fs.mkdirSync(dataDir, { recursive: true });
-  const lockPath = path.join(dataDir, ".borrowline.lock");
-  const pidFile = path.join(dataDir, ".borrowline.pid");
-  const take = () => lockfile.lock(dataDir, { lockfilePath: lockPath, stale: 10_000, update: 2_000, realpath: false });
-  let release: () => Promise<void>;
+  const file = lockFile(dataDir);
+  // "a+" creates the file without truncating it: a refused process must not wipe the owner's pid.
+  const fd = fs.openSync(file, "a+", 0o600);
+  let locked: boolean;
   try {
-    release = await take();
+    locked = tryLock(fd);
   } catch (err) {
-    if ((err as NodeJS.ErrnoException).code !== "ELOCKED") throw err;
-    const owner = Number(fs.existsSync(pidFile) ? fs.readFileSync(pidFile, "utf8") : NaN);
-    if (Number.isInteger(owner) && owner !== process.pid && !isAlive(owner)) {
-      // The previous owner died without releasing the lock: it is ours to take over.
-      fs.rmSync(lockPath, { recursive: true, force: true });
-      release = await take();
-    } else {
-      throw new DataDirLockedError(dataDir, Number.isInteger(owner) ? owner : undefined);
-    }
+    fs.closeSync(fd);
+    throw err;
   }
-  fs.writeFileSync(pidFile, String(process.pid));
+  if (!locked) {
+    const owner = Number.parseInt(fs.readFileSync(file, "utf8"), 10);
+    fs.closeSync(fd);
+    throw new DataDirLockedError(dataDir, Number.isInteger(owner) ? owner : undefined);
+  }
+  fs.ftruncateSync(fd, 0);
+  fs.writeSync(fd, String(process.pid), 0);
+  let released = false;
   return async () => {
-    fs.rmSync(pidFile, { force: true });
-    await release();
+    if (released) return;
+    released = true;
+    fs.ftruncateSync(fd, 0);
+    unlock(fd);
+    fs.closeSync(fd);
   };
 }

@@ -10,6 +10,14 @@ export const apiNotFound: RequestHandler = (req, res) => {
 
 type BodyParserError = Error & { type?: string; status?: number; expose?: boolean };
 
+/** PostgreSQL's "canceling statement due to statement timeout" (SQLSTATE 57014), bare or wrapped by Drizzle. */
+export function isStatementTimeout(err: unknown): boolean {
+  for (let e = err as { code?: unknown; cause?: unknown } | undefined, depth = 0; e && depth < 4; e = e.cause as typeof e, depth++) {
+    if (e.code === "57014") return true;
+  }
+  return false;
+}
+
 /** Maps every thrown error to the JSON error shape, once. No stack traces leave the server. */
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (err: unknown, req, res, _next) => {
@@ -21,6 +29,11 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       body = {
         error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}), ...(err.details ? { details: err.details } : {}) },
       };
+    } else if (isStatementTimeout(err)) {
+      // The statement ran past DB_STATEMENT_TIMEOUT_MS and was cancelled: the database is free again; try later.
+      status = 503;
+      res.setHeader("Retry-After", "5");
+      body = { error: { code: ERROR_CODES.timeout, message: "The database took too long to answer. Try again in a moment." } };
     } else if (e?.type === "entity.parse.failed") {
       status = 400;
       body = { error: { code: ERROR_CODES.badRequest, message: "The request body is not valid JSON.", fields: { body: "malformed JSON" } } };
@@ -32,7 +45,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       const code = status === 415 ? ERROR_CODES.unsupportedMedia : ERROR_CODES.badRequest;
       body = { error: { code, message: e.expose && e.message ? e.message : "The request could not be read." } };
     }
-    if (status >= 500) logger.error({ err, path: req.path }, "unhandled error");
+    if (status >= 500) logger.error({ err, path: req.path }, status === 503 ? "statement timeout" : "unhandled error");
     if (res.headersSent) return;
     res.status(status).json(body);
   };

@@ -1,8 +1,18 @@
 import type { Request, RequestHandler } from "express";
-import { ipKeyGenerator, rateLimit, type Options } from "express-rate-limit";
+import { ipKeyGenerator, rateLimit, type Options, type Store } from "express-rate-limit";
 import { ERROR_CODES, type ApiErrorBody } from "../../shared/errors";
 
-export type RateLimitConfig = { windowMs: number; limit: number };
+/** Makes the store of one limiter (its name keeps its counts apart); none = express-rate-limit's memory store. */
+export type RateLimitStoreFactory = (name: string) => Store;
+export type RateLimitConfig = {
+  windowMs: number;
+  limit: number;
+  /**
+   * Where the counts live. createApp sets it on every configured limit: PostgreSQL (shared by every server on
+   * the database) when DATABASE_URL is set, otherwise the in-memory store of this one process.
+   */
+  store?: RateLimitStoreFactory;
+};
 
 /**
  * What a limit counts by: the client address (default), or a key taken from the request (an account id, a
@@ -13,14 +23,16 @@ export type LimitKey = (req: Request) => string | undefined;
 /** The client address, with IPv6 addresses grouped by /56 as express-rate-limit advises. */
 export const clientAddress: LimitKey = (req) => `ip:${ipKeyGenerator(req.ip ?? "unknown")}`;
 
-/** express-rate-limit with our error body; draft-8 RateLimit headers plus Retry-After. */
-export function limiter({ windowMs, limit }: RateLimitConfig, what: string, key?: LimitKey) {
+/** express-rate-limit with our error body; draft-8 RateLimit headers plus Retry-After. Every limiter is made here. */
+export function limiter({ windowMs, limit, store }: RateLimitConfig, what: string, key?: LimitKey) {
   const options: Partial<Options> = {
     windowMs,
     limit,
     ...(key ? { keyGenerator: (req) => key(req) ?? "", skip: (req) => key(req) === undefined } : {}),
     standardHeaders: "draft-8",
     legacyHeaders: false,
+    // The store's name keeps each limit's counts and window apart in the shared database.
+    ...(store ? { store: store(`${what}-${windowMs}-${limit}`) } : {}),
     handler: (_req, res, _next, opts) => {
       const body: ApiErrorBody = {
         error: { code: ERROR_CODES.tooManyRequests, message: `Too many ${what} requests. Try again in a moment.` },
@@ -52,4 +64,10 @@ export function mailLimiters(limits: { perRecipient: RateLimitConfig; perAccount
     byAccount: limiter(limits.perAccount, "e-mail", account),
     byClientAddress: limiter(limits.perClientAddress, "e-mail", clientAddress),
   };
+}
+
+/** The same limits with `store` set on each (createApp uses it, so every route's limiter shares the store). */
+export function withStore<T extends { [name: string]: RateLimitConfig | undefined }>(limits: T, store: RateLimitStoreFactory | undefined): T {
+  if (!store) return limits;
+  return Object.fromEntries(Object.entries(limits).map(([k, v]) => [k, v && { ...v, store }])) as T;
 }

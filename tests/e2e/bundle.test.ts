@@ -64,3 +64,125 @@ test("recharts stays out of the first page too", () => {
   const first = [...staticClosure("index.html")];
   expect(first.filter((k) => /recharts|charts/i.test(manifest[k]!.name ?? "") || read(k).includes("recharts-wrapper"))).toEqual([]);
 });
+
+// ---- per route: three.js only on the 3D pages; what is sent, compressed, in a real browser ----------------------
+
+/** Every chunk a route can load: its static closure plus the lazy modules it imports itself (not other routes). */
+function routeClosure(key: string): Set<string> {
+  const seen = new Set<string>();
+  const stack = [key];
+  while (stack.length) {
+    const k = stack.pop()!;
+    if (seen.has(k)) continue;
+    seen.add(k);
+    for (const i of [...(manifest[k]?.imports ?? []), ...(manifest[k]?.dynamicImports ?? []).filter((d) => !d.startsWith("src/app/routes/"))]) stack.push(i);
+  }
+  return seen;
+}
+
+const THREE_D_ROUTES = ["src/app/routes/rehearse.tsx", "src/app/routes/train.tsx", "src/app/routes/green-map.tsx"];
+
+test("per route (Vite manifest): only the 3D pages can load three.js, and the charts chunk does not import it", () => {
+  const routes = Object.keys(manifest).filter((k) => k.startsWith("src/app/routes/"));
+  expect(routes.length).toBeGreaterThan(20);
+  for (const route of routes) {
+    const withThree = [...routeClosure(route)].filter(hasThree);
+    if (THREE_D_ROUTES.includes(route)) expect(withThree.length, route).toBeGreaterThan(0);
+    else expect(withThree, route).toEqual([]);
+  }
+  const charts = Object.keys(manifest).find((k) => manifest[k]!.name === "charts" && !k.startsWith("src/"));
+  expect(charts).toBeDefined();
+  expect([...staticClosure(charts!)].filter(hasThree)).toEqual([]);
+});
+
+test("built assets are served brotli-compressed and immutable; the page and the API are compressed too", async () => {
+  const { startAppServer } = await import("./harness");
+  const server = await startAppServer();
+  try {
+    const entry = manifest["index.html"]!.file;
+    const asset = await fetch(`${server.url}/${entry}`, { headers: { "accept-encoding": "br, gzip" } });
+    expect(asset.headers.get("content-encoding")).toBe("br");
+    expect(asset.headers.get("cache-control")).toMatch(/immutable/);
+    expect(asset.headers.get("content-type")).toMatch(/javascript/);
+    const html = await fetch(`${server.url}/read`, { headers: { "accept-encoding": "gzip" } });
+    expect(html.headers.get("content-encoding")).toBe("gzip");
+    expect(await html.text()).toContain("<!doctype html");
+    const plain = await fetch(`${server.url}/${entry}`, { headers: { "accept-encoding": "identity" } });
+    expect(plain.headers.get("content-encoding")).toBeNull();
+    expect((await plain.text()).length).toBeGreaterThan(1000);
+  } finally {
+    await server.stop();
+  }
+}, 60_000);
+
+test("in Chromium: JavaScript sent for / and /read ≤ 200 KiB, /stats (signed in) ≤ 300 KiB, and none of them loads three.js", async () => {
+  const { openBrowser, startAppServer } = await import("./harness");
+  const server = await startAppServer();
+  const browser = await openBrowser();
+  try {
+    const { page, context } = browser;
+    const cdp = await context.newCDPSession(page);
+    await cdp.send("Network.enable");
+    await cdp.send("Network.setCacheDisabled", { cacheDisabled: true });
+    const urls = new Map<string, string>();
+    let bytes = 0;
+    let jsBytes = 0;
+    const headerBytes = new Map<string, number>();
+    cdp.on("Network.responseReceived", (e: { requestId: string; response: { url: string; encodedDataLength: number } }) => {
+      urls.set(e.requestId, e.response.url);
+      headerBytes.set(e.requestId, e.response.encodedDataLength);
+    });
+    const each: string[] = [];
+    cdp.on("Network.loadingFinished", (e: { requestId: string; encodedDataLength: number }) => {
+      bytes += e.encodedDataLength;
+      // JavaScript counted as the issue measured it: the bodies as sent (compressed), without the response headers.
+      if (/\.m?js$/.test(urls.get(e.requestId) ?? "")) jsBytes += e.encodedDataLength - (headerBytes.get(e.requestId) ?? 0);
+      if (process.env.BUNDLE_DETAIL) each.push(`${(e.encodedDataLength / 1024).toFixed(1)} ${urls.get(e.requestId)}`);
+    });
+    const visit = async (route: string) => {
+      urls.clear();
+      bytes = 0;
+      jsBytes = 0;
+      await page.goto(server.url + route, { waitUntil: "networkidle" });
+      return { bytes, jsBytes, urls: [...urls.values()] };
+    };
+    // JavaScript as sent (compressed bodies) is what the goal counts; every byte (headers, fonts, CSS, API) is printed beside it.
+    const sent: Record<string, number> = {};
+    const total: Record<string, number> = {};
+    for (const route of ["/", "/read"]) {
+      const r = await visit(route);
+      sent[route] = r.jsBytes;
+      total[route] = r.bytes;
+      expect(r.urls.filter((u) => /three/i.test(u)), route).toEqual([]);
+    }
+    // Signed in (the cookie set by the page's own fetch), then /stats with its charts.
+    await page.evaluate(async () => {
+      const res = await fetch("/api/auth/sign-up/email", {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify({ name: "Bundle Player", email: `bundle-${Date.now()}@example.test`, password: "bundle-test-password-1", accountType: "player" }),
+      });
+      if (!res.ok) throw new Error(`sign-up ${res.status}`);
+      // A few putts, so the page draws its charts.
+      const json = { "content-type": "application/json" };
+      const session = await fetch("/api/sessions", { method: "POST", headers: json, body: JSON.stringify({ date: "2026-11-30" }) });
+      const { id } = (await session.json()) as { id: string };
+      for (let i = 0; i < 12; i++) {
+        await fetch(`/api/sessions/${id}/putts`, { method: "POST", headers: json, body: JSON.stringify({ distanceM: 1 + (i % 6), holed: i % 2 === 0 }) });
+      }
+    });
+    const stats = await visit("/stats");
+    sent["/stats"] = stats.jsBytes;
+    total["/stats"] = stats.bytes;
+    expect(stats.urls.some((u) => /charts-/.test(u))).toBe(true);
+    expect(stats.urls.filter((u) => /three/i.test(u))).toEqual([]);
+    if (process.env.BUNDLE_DETAIL) console.log(each.join("\n"));
+    console.log(`sent, KiB (JavaScript / everything): ${Object.keys(sent).map((k) => `${k} ${(sent[k]! / 1024).toFixed(0)} / ${(total[k]! / 1024).toFixed(0)}`).join(", ")}`);
+    expect(sent["/"]).toBeLessThanOrEqual(200 * 1024);
+    expect(sent["/read"]).toBeLessThanOrEqual(200 * 1024);
+    expect(sent["/stats"]).toBeLessThanOrEqual(300 * 1024);
+  } finally {
+    await browser.close();
+    await server.stop();
+  }
+}, 120_000);

@@ -6,6 +6,7 @@ import os from "node:os";
 import path from "node:path";
 import type { TestProject } from "vitest/node";
 import { openPglite } from "../../server/db/client";
+import { analyzeStale } from "../../server/db/maintenance";
 import { migrate, migrationsFolder } from "../../server/db/migrate";
 
 declare module "vitest" {
@@ -16,7 +17,7 @@ declare module "vitest" {
 
 export default async function setup(project: TestProject) {
   const folder = migrationsFolder();
-  const hash = crypto.createHash("sha256");
+  const hash = crypto.createHash("sha256").update("analysed");
   for (const f of fs.readdirSync(folder, { recursive: true }).map(String).sort()) {
     const full = path.join(folder, f);
     if (fs.statSync(full).isFile()) hash.update(f).update(fs.readFileSync(full));
@@ -25,6 +26,8 @@ export default async function setup(project: TestProject) {
   if (!fs.existsSync(file)) {
     const database = await openPglite("memory://");
     await migrate(database);
+    // As the server does after migrations, so a test server's start finds nothing stale.
+    await analyzeStale(database.db);
     const dump = await database.pglite!.dumpDataDir("none");
     fs.writeFileSync(`${file}.${process.pid}`, Buffer.from(await dump.arrayBuffer()));
     fs.renameSync(`${file}.${process.pid}`, file);

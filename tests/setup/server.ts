@@ -15,6 +15,7 @@ export const GENEROUS_RATE_LIMITS = {
   mailPerRecipient: { windowMs: 60_000, limit: 10_000 },
   mailPerAccount: { windowMs: 60_000, limit: 10_000 },
   mailPerClientAddress: { windowMs: 60_000, limit: 10_000 },
+  imports: { windowMs: 60_000, limit: 10_000 },
 };
 
 export type TestServer = Running & { dataDir: string; stop: () => Promise<void> };
@@ -31,7 +32,7 @@ function templateBlob(): Blob | undefined {
 }
 
 /** On a PostgreSQL server each test server gets a database of its own, so files can run in parallel. */
-async function freshPostgresDatabase(adminUrl: string): Promise<{ url: string; drop: () => Promise<void> }> {
+export async function freshPostgresDatabase(adminUrl: string): Promise<{ url: string; drop: () => Promise<void> }> {
   const name = `borrowline_test_${process.pid}_${Math.random().toString(36).slice(2, 10)}`;
   const admin = new pg.Client({ connectionString: adminUrl });
   await admin.connect();
@@ -70,6 +71,7 @@ export async function startTestServer(options: Partial<Omit<StartOptions, "env">
     pgliteLoad: options.pgliteDir === undefined && !pgDb ? templateBlob() : undefined,
     rateLimits: { ...GENEROUS_RATE_LIMITS, ...options.rateLimits },
     frontend: options.frontend,
+    onListening: options.onListening,
     logDestination: options.logDestination,
   });
   return {

@@ -1,0 +1,118 @@
+// Start-up and ownership of the data directory: a starting server answers (503 + Retry-After) instead of letting a
+// request hang; the data-directory lock follows the owner's life, not a timer.
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import readline from "node:readline";
+import { afterAll, expect, test } from "vitest";
+import { DataDirLockedError } from "../../server/db/lock";
+import { readEnv } from "../../server/env";
+import { start } from "../../server/start";
+import { startTestServer } from "../setup/server";
+
+const root = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-lifecycle-"));
+const children: ChildProcess[] = [];
+afterAll(() => {
+  for (const c of children) if (c.exitCode === null && c.signalCode === null) c.kill("SIGKILL");
+  fs.rmSync(root, { recursive: true, force: true });
+});
+const onPglite = !process.env.DATABASE_URL;
+// A PID namespace needs root (or user namespaces); CI runs as root.
+const canUnshare = onPglite && spawnSync("unshare", ["--pid", "--fork", "true"]).status === 0;
+
+type Child = { child: ChildProcess; url: string; pid: number; hostPid: number; lines: readline.Interface; exited: Promise<number | null> };
+
+async function spawnServer(dataDir: string, prefix: string[] = []): Promise<Child> {
+  const command = [...prefix, process.execPath, "--import", "tsx", "tests/setup/child-server.ts"];
+  const child = spawn(command[0]!, command.slice(1), {
+    // A clean environment: vitest's own variables (BASE_URL="/", …) are not the server's.
+    env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir, BETTER_AUTH_SECRET: "lifecycle-secret-lifecycle-secret-0001" },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  children.push(child);
+  let stderr = "";
+  child.stderr!.on("data", (d: Buffer) => (stderr += d.toString()));
+  const exited = new Promise<number | null>((resolve) => child.once("exit", (code) => resolve(code)));
+  const lines = readline.createInterface({ input: child.stdout! });
+  const line = await new Promise<string>((resolve, reject) => {
+    lines.once("line", resolve);
+    void exited.then((code) => reject(new Error(`server exited early (${code}): ${stderr}`)));
+  });
+  return { child, lines, exited, ...(JSON.parse(line) as { url: string; pid: number; hostPid: number }) };
+}
+
+test("GET /api/health and GET / while the server is starting answer 503 with Retry-After and the error body", async () => {
+  const early: { status: number; retryAfter: string | null; body: unknown }[] = [];
+  const server = await startTestServer({
+    onListening: async (url) => {
+      for (const p of ["/api/health", "/"]) {
+        const res = await fetch(url + p);
+        early.push({ status: res.status, retryAfter: res.headers.get("retry-after"), body: await res.json() });
+      }
+    },
+  });
+  try {
+    expect(early).toHaveLength(2);
+    for (const r of early) {
+      expect(r.status).toBe(503);
+      expect(Number(r.retryAfter)).toBeGreaterThan(0);
+      expect(r.body).toMatchObject({ error: { code: "unavailable" } });
+    }
+    expect((await fetch(server.url + "/api/health")).status).toBe(200);
+  } finally {
+    await server.stop();
+  }
+});
+
+test.skipIf(!canUnshare)("a server restarted after SIGKILL with the same PID (1, as in a container) starts at once", async () => {
+  const dataDir = path.join(root, "pid1");
+  const first = await spawnServer(dataDir, ["unshare", "--pid", "--fork"]);
+  expect(first.pid).toBe(1);
+  expect((await fetch(first.url + "/api/health")).status).toBe(200);
+  process.kill(first.hostPid, "SIGKILL");
+  await first.exited;
+
+  // The same PID again, right away: the dead owner's lock is gone with it.
+  const second = await spawnServer(dataDir, ["unshare", "--pid", "--fork"]);
+  expect(second.pid).toBe(1);
+  expect((await fetch(second.url + "/api/health")).status).toBe(200);
+  process.kill(second.hostPid, "SIGKILL");
+  await second.exited;
+}, 90_000);
+
+test.skipIf(!onPglite)(
+  "a second server and a backup are refused while the owner's event loop is blocked for 15 s",
+  async () => {
+    const dataDir = path.join(root, "blocked");
+    const owner = await spawnServer(dataDir);
+    const blocking = new Promise<void>((resolve) => owner.lines.on("line", (l) => l === "blocking" && resolve()));
+    owner.child.kill("SIGUSR2");
+    await blocking;
+    // Past the 10 s after which the old mkdir lock counted as stale (its refresh timer cannot run meanwhile).
+    await new Promise((r) => setTimeout(r, 11_000));
+
+    const second = start({ env: readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" }) });
+    const backup = new Promise<{ status: number | null; stderr: string }>((resolve) => {
+      const b = spawn(process.execPath, ["--import", "tsx", "server/cli/backup.ts", path.join(root, "b.tar.gz")], {
+        env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir },
+        stdio: ["ignore", "ignore", "pipe"],
+      });
+      let stderr = "";
+      b.stderr.on("data", (d: Buffer) => (stderr += d.toString()));
+      b.once("exit", (status) => resolve({ status, stderr }));
+    });
+    await expect(second).rejects.toBeInstanceOf(DataDirLockedError);
+    const b = await backup;
+    expect(b.status).not.toBe(0);
+    expect(b.stderr).toMatch(new RegExp(`already using the data directory`));
+    expect(b.stderr).toContain(`pid ${owner.hostPid}`);
+    expect(fs.existsSync(path.join(root, "b.tar.gz"))).toBe(false);
+
+    // The owner comes back from its stall still the owner, and serves.
+    expect((await fetch(owner.url + "/api/health")).status).toBe(200);
+    owner.child.kill("SIGTERM");
+    expect(await owner.exited).toBe(0);
+  },
+  90_000,
+);
