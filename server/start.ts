@@ -6,7 +6,7 @@ import path from "node:path";
 import type { Express } from "express";
 import { createAuth } from "./auth";
 import { createApp, DEFAULT_RATE_LIMITS, type AppConfig } from "./app";
-import { openPglite, openPostgres, type Database } from "./db/client";
+import { createPgliteDir, openPglite, openPostgres, pgliteDirIsNew, type Database } from "./db/client";
 import { lockDataDir } from "./db/lock";
 import { analyzeStale, scheduleMaintenance } from "./db/maintenance";
 import { migrate } from "./db/migrate";
@@ -86,6 +86,8 @@ export async function start(options: StartOptions): Promise<Running> {
     const port = (server.address() as { port: number }).port;
     await options.onListening?.(`http://127.0.0.1:${port}`);
 
+    // A first-ever start builds the new database in a short-lived child process (its memory is returned when it ends).
+    if (dataDirOnDisk && !options.pgliteLoad && pgliteDirIsNew(pgliteDir)) await createPgliteDir(pgliteDir, env.PGLITE_SHARED_BUFFERS);
     const database: Database = env.DATABASE_URL ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS) : await openPglite(pgliteDir, options.pgliteLoad, env.PGLITE_SHARED_BUFFERS);
     releases.unshift(() => database.close());
     await migrate(database);

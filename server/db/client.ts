@@ -1,4 +1,8 @@
 // One database handle for the app: PGlite on disk (default) or a PostgreSQL server (DATABASE_URL).
+import { spawn } from "node:child_process";
+import fs from "node:fs";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
 import { PGlite } from "@electric-sql/pglite";
 import { drizzle as drizzlePglite } from "drizzle-orm/pglite";
 import { drizzle as drizzlePg } from "drizzle-orm/node-postgres";
@@ -43,4 +47,40 @@ export async function openPostgres(url: string, statementTimeoutMs = 0): Promise
   const pool = new pg.Pool({ connectionString: url, max: 10, ...(statementTimeoutMs > 0 ? { statement_timeout: statementTimeoutMs } : {}) });
   const db = drizzlePg(pool, { schema }) as unknown as Db;
   return { db, kind: "postgres", url, close: () => pool.end() };
+}
+
+/** True when dir holds no PGlite database yet (a first-ever start). */
+export function pgliteDirIsNew(dir: string): boolean {
+  return !fs.existsSync(path.join(dir, "PG_VERSION"));
+}
+
+/**
+ * Builds and migrates a brand-new PGlite data directory in a short-lived child process (db/pglite-create.ts), so the
+ * memory PGlite takes to build a new database is returned to the system when the child ends. The child builds into
+ * `<dir>.new`, which is renamed to `dir` only after it exited cleanly (PGlite closed, files flushed): a crash half-way
+ * leaves no half-built `dir`, and the next start builds again. The caller holds the data-directory lock.
+ */
+export async function createPgliteDir(dir: string, sharedBuffers = "32MB"): Promise<void> {
+  const building = `${dir}.new`;
+  fs.rmSync(building, { recursive: true, force: true });
+  const source = import.meta.url.endsWith(".ts");
+  const entry = fileURLToPath(new URL(source ? "./pglite-create.ts" : "./pglite-create.js", import.meta.url));
+  const args = [...(source ? ["--import", "tsx"] : []), entry, building, sharedBuffers];
+  await new Promise<void>((resolve, reject) => {
+    const child = spawn(process.execPath, args, { stdio: ["ignore", "ignore", "pipe"] });
+    let stderr = "";
+    child.stderr.setEncoding("utf8").on("data", (s: string) => (stderr += s));
+    child.once("error", reject);
+    child.once("exit", (code, signal) =>
+      code === 0 ? resolve() : reject(new Error(`building the new database in ${building} failed (${signal ?? `exit ${code}`}): ${stderr.trim()}`)),
+    );
+  });
+  if (fs.existsSync(dir)) fs.rmdirSync(dir); // only an empty folder (left by an older start) is replaced; anything else stops here
+  fs.renameSync(building, dir);
+  const parent = fs.openSync(path.dirname(dir), "r");
+  try {
+    fs.fsyncSync(parent); // the rename itself is durable
+  } finally {
+    fs.closeSync(parent);
+  }
 }
