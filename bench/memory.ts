@@ -1,5 +1,7 @@
 // Server memory right after start on an empty database (RSS), with PGlite's buffer pool at our setting (32 MB) and at
 // its default (128 MB), both measured in this run: the first start ever (PGlite creates the database) and a restart.
+// The server is measured as it ships: bundled by esbuild with the flags of `npm run build:server` (tsx would add its
+// own compiler's memory), into dist-bench/ beside the bundled pglite-create.js a first start runs.
 // Run: npx tsx bench/memory.ts
 import { execFileSync } from "node:child_process";
 import fs from "node:fs";
@@ -10,8 +12,16 @@ import { pathToFileURL } from "node:url";
 type Start = { rssMB: number; externalMB: number };
 export type MemoryBenchResult = { sharedBuffers: string; first: Start; restart: Start }[];
 
+function bundle(): void {
+  execFileSync(
+    path.join("node_modules", ".bin", "esbuild"),
+    ["bench/memory-server.ts", "server/db/pglite-create.ts", "--bundle", "--platform=node", "--format=esm", "--packages=external", "--outdir=dist-bench", "--out-extension:.js=.js", "--entry-names=[name]", "--log-level=warning"],
+    { stdio: "inherit" },
+  );
+}
+
 function startOnce(dataDir: string, sharedBuffers: string): Start {
-  const out = execFileSync(process.execPath, ["--import", "tsx", "bench/memory-server.ts"], {
+  const out = execFileSync(process.execPath, ["dist-bench/memory-server.js"], {
     env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir, PGLITE_SHARED_BUFFERS: sharedBuffers },
     encoding: "utf8",
   });
@@ -19,6 +29,7 @@ function startOnce(dataDir: string, sharedBuffers: string): Start {
 }
 
 export function runMemoryBench(): MemoryBenchResult {
+  bundle();
   return ["32MB", "128MB"].map((sharedBuffers) => {
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-memory-"));
     try {
