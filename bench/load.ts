@@ -26,7 +26,14 @@ async function startServer(): Promise<{ url: string; stop: () => Promise<void> }
   });
   const line = await new Promise<string>((resolve, reject) => {
     const rl = readline.createInterface({ input: child.stdout! });
-    rl.once("line", resolve);
+    // The server's own log lines (the no-SMTP warning) come first: wait for the line that carries its url.
+    rl.on("line", (l) => {
+      try {
+        if (typeof (JSON.parse(l) as { url?: unknown }).url === "string") resolve(l);
+      } catch {
+        /* not JSON: a log line */
+      }
+    });
     child.once("exit", (code) => reject(new Error(`server exited with ${code}`)));
   });
   const { url } = JSON.parse(line) as { url: string };
