@@ -6,6 +6,7 @@ import { pinoHttp } from "pino-http";
 import { toNodeHandler } from "better-auth/node";
 import type { AppDeps } from "./deps";
 import { apiNotFound, errorHandler, requireJsonBody } from "./middleware/errors";
+import { forbidden } from "./lib/http-error";
 import { limiter } from "./middleware/rate-limit";
 import { loadSession } from "./middleware/session";
 import { apiRouters } from "./routes";
@@ -50,6 +51,8 @@ export function createApp(deps: AppDeps): Express {
   const authLimiter = limiter(config.rateLimits.auth, "sign-in");
   const limitedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email", "/api/auth/request-password-reset", "/api/auth/reset-password"];
   app.use(limitedAuthPaths, authLimiter);
+  // Admin changes go through /api/admin (audited, with the self-protection rules), never straight to the plugin.
+  app.post("/api/auth/admin/{*any}", (_req, _res, next) => next(forbidden("Use the admin screens (/api/admin) for this; every admin action is recorded there.")));
   const authHandler = toNodeHandler(auth);
   app.all("/api/auth/{*any}", authHandler as RequestHandler);
 
