@@ -21,6 +21,8 @@ export async function createAccount(
   who: { name: string; email: string },
   role: "player" | "coach" | "admin",
   password = DEMO_PASSWORD,
+  /** When the account was made (the seed backdates its people to before their first session); default now. */
+  createdAt?: Date,
 ): Promise<string> {
   const id = crypto.randomUUID();
   await db.insert(user).values({
@@ -30,6 +32,7 @@ export async function createAccount(
     emailVerified: true,
     role,
     accountType: role === "coach" ? "coach" : "player",
+    ...(createdAt ? { createdAt, updatedAt: createdAt } : {}),
   });
   await db.insert(account).values({ id: crypto.randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
   return id;
@@ -49,10 +52,14 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
   const math = create(all!, { randomSeed: "larkspur-heath" });
   const rand = () => math.random();
 
-  await createAccount(db, DEMO_ADMIN, "admin");
-  const coachId = await createAccount(db, DEMO_COACH, "coach");
+  // Sign-up dates tell the story: the admin set the club up, the coach joined, then each junior signed up
+  // and joined the squad a few days before their first logged session (player i's first is 40 + i days ago).
+  const at = (daysAgo: number, hourUtc: number) => new Date(Date.parse(`${isoDaysAgo(daysAgo)}T00:00:00Z`) + hourUtc * 3_600_000);
+  const firstSessionDaysAgo = (i: number) => (WEEKS - 1) * 7 + 5 + i;
+  await createAccount(db, DEMO_ADMIN, "admin", DEMO_PASSWORD, at(WEEKS * 7 + 30, 10));
+  const coachId = await createAccount(db, DEMO_COACH, "coach", DEMO_PASSWORD, at(WEEKS * 7 + 21, 17));
   const playerIds: string[] = [];
-  for (const p of DEMO_PLAYERS) playerIds.push(await createAccount(db, p, "player"));
+  for (const [i, p] of DEMO_PLAYERS.entries()) playerIds.push(await createAccount(db, p, "player", DEMO_PASSWORD, at(firstSessionDaysAgo(i) + 4 + i, 18)));
 
   const [green] = await db.insert(greens).values({ ownerId: coachId, name: DEMO_GREEN.name, locationNote: DEMO_GREEN.locationNote }).returning();
   await db.insert(stimpReadings).values([
@@ -60,9 +67,9 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
     { greenId: green!.id, measuredOn: isoDaysAgo(7), stimpFt: DEMO_GREEN.stimpFt },
   ]);
 
-  const [squad] = await db.insert(squads).values({ coachId, ...DEMO_SQUAD }).returning();
-  await db.insert(squadMembers).values(playerIds.map((playerId) => ({ squadId: squad!.id, playerId })));
-  await db.insert(ladders).values(DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l })));
+  const [squad] = await db.insert(squads).values({ coachId, ...DEMO_SQUAD, createdAt: at(WEEKS * 7 + 20, 9) }).returning();
+  await db.insert(squadMembers).values(playerIds.map((playerId, i) => ({ squadId: squad!.id, playerId, joinedAt: at(firstSessionDaysAgo(i) + 2, 19) })));
+  await db.insert(ladders).values(DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l, createdAt: at(WEEKS * 7 + 19, 20), updatedAt: at(WEEKS * 7 + 19, 20) })));
 
   const distancesFt = [3, 3, 4, 4, 5, 5, 6, 6, 8, 8, 10, 12, 15, 20, 25, 30];
   for (const [i, p] of DEMO_PLAYERS.entries()) {
