@@ -14,6 +14,7 @@ import { ConfirmAction } from "./confirm-action";
 import { InviteForm } from "./invite-form";
 import { QueryState } from "./query-state";
 import { SquadForm } from "./squad-form";
+import { SquadOverviewSection } from "./squad-overview";
 import { Badge, type BadgeTone } from "./status-badge";
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
@@ -169,6 +170,9 @@ function SquadDetails({ squad }: { squad: Squad }) {
           </div>
         </Card>
       ) : null}
+      <div className="mb-6">
+        <SquadOverviewSection squadId={squad.id} squadName={squad.name} />
+      </div>
       <div className="grid gap-6 lg:grid-cols-2">
         <MembersSection squad={squad} />
         <InvitationsSection squad={squad} />
