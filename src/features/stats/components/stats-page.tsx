@@ -146,7 +146,7 @@ export function StatsBody({ player }: { player?: { id: string; name: string } })
       </Card>
 
       <Section id="by-distance" title="Make rate by distance">
-        <MakeRatesSection params={view.stats} units={units} empty={empty} />
+        <MakeRatesSection params={view.stats} units={units} empty={empty} {...(player ? { rateLabel: `${player.name}’s make rate` } : {})} />
       </Section>
 
       <Section id="misses" title="Where the strokes go" intro="Strokes gained or lost against the tour from each distance, and which way the misses finish.">
