@@ -141,6 +141,11 @@ test("POST /api/invitations/:id/resend e-mails a new link; the old link is withd
   expect((await player.post(`/api/invitations/${newToken}/accept`)).status).toBe(200);
   const [verified] = await server.database.db.select({ v: user.emailVerified }).from(user).where(eq(user.email, email));
   expect(verified!.v).toBe(true);
+  // At once, not after the session cookie's cached copy (a minute) runs out: no "confirm your e-mail" notice.
+  const me = (await player.get("/api/me")).body.user;
+  expect(me.emailVerified).toBe(true);
+  // A brand-new account: the home page greets it as new from createdAt.
+  expect(Date.now() - Date.parse(me.createdAt)).toBeLessThan(60_000);
   // Accepted: nothing left to resend.
   const rows = await server.database.db.select().from(invitations).where(eq(invitations.email, email));
   const accepted = rows.find((r) => r.status === "accepted")!;
