@@ -7,12 +7,12 @@ import { printStatsBench, runStatsBench } from "./stats";
 const only = process.argv[2];
 
 if (!only || only === "physics") {
-  console.log("== physics: inverse read and break chart vs mathjs solveODE + bisection");
+  console.log("== physics: inverse read (closed form) and break chart vs mathjs solveODE RK45 + 2-D Newton shooting");
   printPhysicsBench(runPhysicsBench());
 }
 
 if (!only || only === "make-probability") {
-  console.log("\n== make probability: 10 000 simulated putts (closed-form rolls) vs odex per roll");
+  console.log("\n== make probability: 10 000 simulated putts (closed-form rolls) vs a plain RK45 roll per putt");
   printMakeProbabilityBench(runMakeProbabilityBench());
 }
 

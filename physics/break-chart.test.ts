@@ -4,7 +4,7 @@ import { breakChart, breakVsPace } from "./index";
 test("breakVsPace: the aim offset shrinks monotonically from dying to firm (slower balls break more)", () => {
   const r = breakVsPace({ distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 });
   if (!r.ok) throw new Error("must stop");
-  const offsets = r.rows.map((row) => Math.abs(row.aimOffsetM));
+  const offsets = r.rows.map((row) => Math.abs(row.aimOffsetM!));
   for (let i = 1; i < offsets.length; i++) expect(offsets[i]!).toBeLessThan(offsets[i - 1]!);
   expect(r.rows[0]!.rollPastM).toBe(0);
 });
@@ -18,8 +18,8 @@ test("breakChart: a 72-cell grid mirrors left and right and has no break up and 
       const cell = row[j]!;
       const mirror = row[(fallLineDegs.length - j) % fallLineDegs.length]!;
       if (!cell.ok || !mirror.ok) throw new Error("2 % at Stimp 10 must stop");
-      expect(cell.aimOffsetM).toBeCloseTo(-mirror.aimOffsetM, 9);
-      if (cell.fallLineDeg % 180 === 0) expect(cell.aimOffsetM).toBe(0);
+      expect(cell.aimOffsetM!).toBeCloseTo(-mirror.aimOffsetM!, 9);
+      if (cell.fallLineDeg % 180 === 0) expect(cell.aimOffsetM!).toBe(0);
     }
   }
   expect(chart.diagnostics.integrations).toBeGreaterThan(72);

@@ -1,7 +1,7 @@
 // Sweeps of the read: aim against pace, and a chart of aims over distances × fall-line directions.
 import { DEFAULT_ROLL_PAST_M } from "./constants";
 import { stopsInPractice, describeModel, resolveGreen, type GreenInput, type ModelSummary } from "./roll-model";
-import { cannotStop, type CannotStop, type Pace } from "./read-types";
+import { cannotStop, type AimGiven, type CannotStop, type Pace } from "./read-types";
 import { solveRead } from "./solve-read";
 
 /** Default roll-past sweep for {@link breakVsPace}, m: dying (0) to firm (1.5). */
@@ -10,7 +10,9 @@ export const DEFAULT_ROLL_PAST_SWEEP_M: readonly number[] = [0, 0.1, 0.2, 0.3, 0
 /** One pace of a {@link breakVsPace} sweep. */
 export interface PaceRow {
   readonly rollPastM: number;
-  readonly aimOffsetM: number;
+  /** Null beyond a 60° start line (see Read.aimGiven). */
+  readonly aimOffsetM: number | null;
+  readonly aimGiven: AimGiven;
   readonly startLineDeg: number;
   readonly launchSpeedMps: number;
   readonly entrySpeedMps: number;
@@ -24,7 +26,7 @@ export interface PaceSweepInput extends GreenInput {
 
 /**
  * Aim offset and launch speed for a sweep of roll-past paces on one putt: a dying ball needs more borrow (slower
- * balls break more: published abstract, Korean Journal of Applied Biomechanics; see references.md).
+ * balls break more: docs/sources.md, "Break").
  * @example breakVsPace({ distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 }) // rows from dying to firm
  */
 export function breakVsPace(
@@ -36,8 +38,8 @@ export function breakVsPace(
   for (const rollPastM of input.rollPastsM ?? DEFAULT_ROLL_PAST_SWEEP_M) {
     const r = solveRead({ ...input, pace: { rollPastM } });
     if (!r.ok) return r;
-    const { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps } = r.read;
-    rows.push({ rollPastM, aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps });
+    const { aimOffsetM, aimGiven, startLineDeg, launchSpeedMps, entrySpeedMps } = r.read;
+    rows.push({ rollPastM, aimOffsetM, aimGiven, startLineDeg, launchSpeedMps, entrySpeedMps });
   }
   return { ok: true, rows, model: describeModel(green) };
 }
@@ -48,7 +50,9 @@ export type ChartCell =
       readonly ok: true;
       readonly distanceM: number;
       readonly fallLineDeg: number;
-      readonly aimOffsetM: number;
+      /** Null beyond a 60° start line: the cell then gives the start line only (`aimGiven: "start-line"`). */
+      readonly aimOffsetM: number | null;
+      readonly aimGiven: AimGiven;
       readonly startLineDeg: number;
       readonly launchSpeedMps: number;
       readonly entrySpeedMps: number;
@@ -88,10 +92,10 @@ export function breakChart(input: BreakChartInput): BreakChart {
       if (!stoppable) return { ok: false, distanceM, fallLineDeg, reason: "cannot-stop" };
       const r = solveRead({ ...input, distanceM, fallLineDeg, pace });
       if (!r.ok) return { ok: false, distanceM, fallLineDeg, reason: r.reason };
-      integrations += r.read.diagnostics.integrations;
+      integrations += r.read.diagnostics.iterations;
       evaluations += r.read.diagnostics.evaluations;
-      const { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps } = r.read;
-      return { ok: true, distanceM, fallLineDeg, aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps };
+      const { aimOffsetM, aimGiven, startLineDeg, launchSpeedMps, entrySpeedMps } = r.read;
+      return { ok: true, distanceM, fallLineDeg, aimOffsetM, aimGiven, startLineDeg, launchSpeedMps, entrySpeedMps };
     }),
   );
   return {

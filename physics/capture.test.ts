@@ -1,8 +1,8 @@
 import { expect, test } from "vitest";
 import { EFFECTIVE_HOLE_WIDTH, HOLMES_1991 } from "../tests/fixtures/physics-references";
-import { ballDropTimeS, captureOutcome, effectiveHoleWidthM, maxCaptureSpeedMps, simulateRoll } from "./index";
+import { ballDropTimeS, captureOutcome, effectiveHoleWidthM, maxCaptureSpeedMps, rollClosedForm, rollingDecelFromStimp, simulateRoll } from "./index";
 
-test("capture speeds match Holmes's values: 1.636 m/s centred, 1.52 at 20 mm, 1.10 at 40 mm, 0.62 at 50 mm (Holmes 1991)", () => {
+test("capture speeds of Holmes's criterion: 1.636 m/s centred, 1.52 at 20 mm, 1.10 at 40 mm, 0.62 at 50 mm (derived from Holmes 1991; docs/sources.md)", () => {
   for (const p of HOLMES_1991.points) {
     expect(Math.abs(maxCaptureSpeedMps(p.offsetM) - p.speedMps)).toBeLessThan(HOLMES_1991.toleranceMps);
   }
@@ -37,4 +37,30 @@ test("a flat 3 m putt rolled dead centre at a gentle pace drops; the same line f
   expect(firm.roll.capture.outcome).toBe("lip-out");
   expect(wide.roll.capture.outcome).toBe("miss");
   expect(wide.roll.closestApproach.offsetM).toBeGreaterThan(0.054);
+});
+
+test("capture is judged where the ball's centre crosses the hole's edge, not at the centre (docs/sources.md, Capture at the hole)", () => {
+  // A straight flat putt at Stimp 10 reaching the centre at 1.62 m/s crossed the edge at √(1.62² + 2·a_r·r_h) ≈
+  // 1.638 m/s (derived), above v_c(0) = 1.636 m/s: a lip-out, though the centre speed is under v_c(0).
+  const ar = rollingDecelFromStimp(10);
+  const D = 3;
+  const centre = 1.62;
+  const v = Math.sqrt(centre * centre + 2 * ar * D);
+  const input = { distanceM: D, slopePct: 0, fallLineDeg: 0, stimpFt: 10, launchSpeedMps: v, startLineDeg: 0 };
+  const ode = simulateRoll(input);
+  const fast = rollClosedForm(input);
+  if (!ode.ok || !fast.ok) throw new Error("must stop");
+  const rimSpeed = Math.sqrt(centre * centre + 2 * ar * 0.054);
+  expect(rimSpeed).toBeGreaterThan(maxCaptureSpeedMps(0));
+  expect(ode.roll.closestApproach.speedMps).toBeLessThan(maxCaptureSpeedMps(0));
+  expect(ode.roll.rim!.speedMps).toBeCloseTo(rimSpeed, 4);
+  expect(fast.roll.rim!.speedMps).toBeCloseTo(rimSpeed, 6);
+  expect(ode.roll.capture.outcome).toBe("lip-out");
+  expect(fast.roll.capture.outcome).toBe("lip-out");
+  // 3 cm/s slower it drops in both.
+  const slower = { ...input, launchSpeedMps: Math.sqrt((centre - 0.03) ** 2 + 2 * ar * D) };
+  const a = simulateRoll(slower);
+  const b = rollClosedForm(slower);
+  expect(a.ok && a.roll.capture.holed).toBe(true);
+  expect(b.ok && b.roll.capture.holed).toBe(true);
 });

@@ -1,4 +1,5 @@
-// Capture at the hole: Holmes's centre-of-ball criterion.
+// Capture at the hole: Holmes's centre-of-ball criterion, applied where the ball's centre crosses the hole's edge.
+// The model, its source and what it leaves out are in docs/sources.md ("Capture at the hole").
 import { BALL_RADIUS_M, GRAVITY_MPS2, HOLE_RADIUS_M } from "./constants";
 
 /**
@@ -57,4 +58,35 @@ export function captureOutcome(offsetM: number, speedMps: number, holeRadiusM: n
     maxCaptureSpeedMps: vc,
     marginMps: vc - speedMps,
   };
+}
+
+/** Where and how fast the ball's centre crossed the hole's edge: offset of its line of travel from the centre (m). */
+export interface RimCrossing {
+  readonly offsetM: number;
+  readonly speedMps: number;
+}
+
+/**
+ * Capture judged at the rim: a ball whose closest pass comes within the hole's radius is holed if, where its centre
+ * crossed the edge, its speed was below v_c(b) for the offset b of its line of travel there (Holmes 1991's criterion,
+ * applied at the edge rather than at the centre: the ball decelerates across the hole, so the edge speed is the
+ * higher and stricter one). A ball that comes to rest over the hole drops. Rim bounce and the flagstick are ignored.
+ * @example captureAtRim(0.01, { offsetM: 0.012, speedMps: 1.2 }, 0, false).holed // true
+ */
+export function captureAtRim(
+  passDistanceM: number,
+  rim: RimCrossing | null,
+  passSpeedMps: number,
+  restsOverHole: boolean,
+  holeRadiusM: number = HOLE_RADIUS_M,
+): Capture {
+  if (!(passDistanceM < holeRadiusM)) {
+    return restsOverHole
+      ? { outcome: "holed", holed: true, maxCaptureSpeedMps: maxCaptureSpeedMps(passDistanceM, holeRadiusM), marginMps: 0 }
+      : { outcome: "miss", holed: false, maxCaptureSpeedMps: 0, marginMps: -passSpeedMps };
+  }
+  if (rim === null) return captureOutcome(passDistanceM, passSpeedMps, holeRadiusM);
+  const vc = maxCaptureSpeedMps(rim.offsetM, holeRadiusM);
+  const holed = rim.speedMps < vc || restsOverHole;
+  return { outcome: holed ? "holed" : "lip-out", holed, maxCaptureSpeedMps: vc, marginMps: vc - rim.speedMps };
 }

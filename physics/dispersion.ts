@@ -3,6 +3,7 @@
 import { erf } from "mathjs";
 import { ballDropTimeS } from "./capture";
 import { HOLE_RADIUS_M } from "./constants";
+import { DEFAULT_GREEN_LATERAL_M, DEFAULT_READ_ERROR_SLOPE_PCT, greenLateralSigmaM, readSensitivity } from "./make-probability";
 import { rollingDecelFromStimp } from "./roll-model";
 
 /**
@@ -77,6 +78,12 @@ export interface DispersionEstimate {
 /** Options of {@link estimateDispersion}. */
 export interface EstimateOptions {
   readonly prior?: DispersionPrior;
+  /**
+   * The misses beyond the stroke that the make probability adds (see PuttDispersion): read error (σ, % of slope) and
+   * the green's sideways deviation after 1 m (m). Defaults as makeProbability's, so the fitted σ are the stroke's own.
+   */
+  readonly readSlopePct?: number;
+  readonly greenLateralM?: number;
   /** Stimp for putts whose session has none, ft (default 10). */
   readonly defaultStimpFt?: number;
 }
@@ -110,7 +117,7 @@ export function estimateDispersion(putts: readonly LoggedPutt[], options: Estima
   const prior = options.prior ?? CLUB_GOLFER_PRIOR;
   const defaultStimp = options.defaultStimpFt ?? 10;
   const used = putts.filter((p) => Number.isFinite(p.distanceM) && p.distanceM >= 0.1 && p.distanceM <= 60);
-  const data = prepareData(used, defaultStimp);
+  const data = prepareData(used, defaultStimp, options.readSlopePct ?? DEFAULT_READ_ERROR_SLOPE_PCT, options.greenLateralM ?? DEFAULT_GREEN_LATERAL_M);
   const minD = used.reduce((m, p) => Math.min(m, p.distanceM), Number.POSITIVE_INFINITY);
 
   const la0 = Math.log(prior.angleDeg.median);
@@ -164,6 +171,9 @@ interface Box {
 interface Group {
   readonly D: number;
   readonly ar: number;
+  /** The start-line σ (degrees) and ln-length σ the read error and the green add at this distance and Stimp. */
+  readonly extraAngleDeg: number;
+  readonly extraPace: number;
   holed: number;
   missedSided: number;
   missedUnsided: number;
@@ -173,6 +183,8 @@ interface Group {
 interface Miss {
   readonly D: number;
   readonly L: number;
+  readonly extraAngleDeg: number;
+  readonly extraPace: number;
   readonly capDeg: number;
   readonly sided: boolean;
 }
@@ -193,24 +205,44 @@ function captureHalfWidth(D: number, L: number, ar: number): number {
 
 const capAngleDeg = (D: number, bc: number) => (Math.asin(Math.min(1, bc / D)) * 180) / Math.PI;
 
-function prepareData(putts: readonly LoggedPutt[], defaultStimp: number): Data {
+/**
+ * The extra spread a flat straight putt of length D gets from the read error and the green (derived from the same
+ * model as makeProbability): start line ±σ_r·∂θ/∂(cross slope) and σ_g(D)/D, ln length ±2σ_r·∂ln v/∂(slope along).
+ */
+function extraSpread(D: number, stimpFt: number, readSlopePct: number, greenLateralM: number, cache: Map<string, { angleDeg: number; pace: number }>) {
+  const key = `${D}|${stimpFt}`;
+  const hit = cache.get(key);
+  if (hit) return hit;
+  const sens = readSlopePct > 0 ? readSensitivity({ distanceM: D, slopePct: 0, fallLineDeg: 0, stimpFt, pace: { rollPastM: 0.45 } }) : null;
+  const readAngle = sens ? readSlopePct * Math.abs(sens.lineX) : 0;
+  const greenAngle = greenLateralSigmaM(D, greenLateralM) / D;
+  const angleDeg = (Math.sqrt(readAngle * readAngle + greenAngle * greenAngle) * 180) / Math.PI;
+  const pace = sens ? 2 * readSlopePct * Math.abs(sens.lnSpeedY) : 0;
+  const out = { angleDeg, pace };
+  cache.set(key, out);
+  return out;
+}
+
+function prepareData(putts: readonly LoggedPutt[], defaultStimp: number, readSlopePct: number, greenLateralM: number): Data {
   const groups = new Map<string, Group>();
   const misses: Miss[] = [];
+  const cache = new Map<string, { angleDeg: number; pace: number }>();
   for (const p of putts) {
     const stimp = p.stimpFt != null && Number.isFinite(p.stimpFt) && p.stimpFt > 0 ? p.stimpFt : defaultStimp;
     const ar = rollingDecelFromStimp(stimp);
     const D = p.distanceM;
     const m = p.missLengthM;
     const sided = p.missSide === "left" || p.missSide === "right";
+    const extra = extraSpread(Math.round(D * 1000) / 1000, stimp, readSlopePct, greenLateralM, cache);
     if (!p.holed && m != null && Number.isFinite(m) && D + m > 0.01 * D) {
       const L = D + m;
-      misses.push({ D, L, capDeg: capAngleDeg(D, captureHalfWidth(D, L, ar)), sided });
+      misses.push({ D, L, capDeg: capAngleDeg(D, captureHalfWidth(D, L, ar)), sided, extraAngleDeg: extra.angleDeg, extraPace: extra.pace });
       continue;
     }
     const key = `${Math.round(D * 1000)}:${Math.round(stimp * 100)}`;
     let g = groups.get(key);
     if (!g) {
-      g = { D: Math.round(D * 1000) / 1000, ar, holed: 0, missedSided: 0, missedUnsided: 0 };
+      g = { D: Math.round(D * 1000) / 1000, ar, extraAngleDeg: extra.angleDeg, extraPace: extra.pace, holed: 0, missedSided: 0, missedUnsided: 0 };
       groups.set(key, g);
     }
     if (p.holed) g.holed++;
@@ -278,13 +310,14 @@ function posteriorOnGrid(data: Data, prior: DispersionPrior, box: Box): { w: Flo
   for (const m of data.misses) {
     const lnL = Math.log(m.L);
     for (let j = 0; j < NP; j++) {
+      const s = Math.sqrt(sp[j]! * sp[j]! + m.extraPace * m.extraPace);
       for (let l = 0; l < NR; l++) {
-        const z = (lnL - Math.log(m.D + rp[l]!)) / sp[j]!;
-        paceTerm[j * NR + l]! += -0.5 * z * z - lp[j]! - lnL;
+        const z = (lnL - Math.log(m.D + rp[l]!)) / s;
+        paceTerm[j * NR + l]! += -0.5 * z * z - Math.log(s) - lnL;
       }
     }
     for (let i = 0; i < NA; i++) {
-      const tail = normalCdf(-m.capDeg / sa[i]!) * (m.sided ? 1 : 2);
+      const tail = normalCdf(-m.capDeg / Math.sqrt(sa[i]! * sa[i]! + m.extraAngleDeg * m.extraAngleDeg)) * (m.sided ? 1 : 2);
       angleTerm[i]! += tail > 1e-300 ? Math.log(tail) : LOG_FLOOR;
     }
   }
@@ -298,13 +331,16 @@ function posteriorOnGrid(data: Data, prior: DispersionPrior, box: Box): { w: Flo
     const x0 = nodes.x[0]!;
     const h = nodes.x[1]! - x0;
     const angle = new Float64Array(NA * nn);
-    for (let i = 0; i < NA; i++) for (let q = 0; q < nn; q++) angle[i * nn + q] = 2 * normalCdf(nodes.capDeg[q]! / sa[i]!) - 1;
+    for (let i = 0; i < NA; i++) {
+      const sEff = Math.sqrt(sa[i]! * sa[i]! + g.extraAngleDeg * g.extraAngleDeg);
+      for (let q = 0; q < nn; q++) angle[i * nn + q] = 2 * normalCdf(nodes.capDeg[q]! / sEff) - 1;
+    }
     const weight = new Float64Array(nn);
     for (let j = 0; j < NP; j++) {
       for (let l = 0; l < NR; l++) {
         // ln L ~ N(ln(D + P), σ_p²): only nodes within 8σ of its mean carry weight.
         const mu = Math.log(g.D + rp[l]!);
-        const s = sp[j]!;
+        const s = Math.sqrt(sp[j]! * sp[j]! + g.extraPace * g.extraPace);
         const qLo = Math.max(0, Math.floor((mu - 8 * s - x0) / h));
         const qHi = Math.min(nn - 1, Math.ceil((mu + 8 * s - x0) / h));
         for (let q = qLo; q <= qHi; q++) {

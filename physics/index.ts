@@ -19,7 +19,6 @@ export {
   describeModel,
   gravityDecelFromSlope,
   maxStoppableSlopePct,
-  playsLikeM,
   resolveGreen,
   rollingDecelFromStimp,
   stimpFromTwoWays,
@@ -28,10 +27,23 @@ export {
   type ModelSummary,
   type RollModel,
 } from "./roll-model";
-export { ballDropTimeS, captureOutcome, effectiveHoleWidthM, maxCaptureSpeedMps, type Capture } from "./capture";
+export { ballDropTimeS, captureAtRim, captureOutcome, effectiveHoleWidthM, maxCaptureSpeedMps, type Capture, type RimCrossing } from "./capture";
 export { solveRead } from "./solve-read";
 export { solveReadDirect } from "./solve-read-direct";
-export type { BreakDirection, CannotStop, Pace, Read, ReadDiagnostics, ReadInput, ReadResult } from "./read-types";
+export {
+  MAX_AIM_OFFSET_START_LINE_DEG,
+  aimOf,
+  flatPuttLengthM,
+  type AimAnswer,
+  type AimGiven,
+  type BreakDirection,
+  type CannotStop,
+  type Pace,
+  type Read,
+  type ReadDiagnostics,
+  type ReadInput,
+  type ReadResult,
+} from "./read-types";
 export { simulateRoll, type HolePass, type Roll, type RollInput, type RollResult } from "./simulate-roll";
 export {
   DEFAULT_ROLL_PAST_SWEEP_M,
@@ -45,6 +57,7 @@ export {
 } from "./break-chart";
 export { rollRhs, STATE } from "./roll";
 export {
+  PlanarPath,
   newPlanarRollOut,
   planarRollField,
   rollClosedForm,
@@ -56,6 +69,11 @@ export {
 export { standardNormals, type UniformRandom } from "./normal-deviates";
 export {
   DEFAULT_BEST_PACE_GRID_M,
+  DEFAULT_GREEN_LATERAL_M,
+  DEFAULT_READ_ERROR_SLOPE_PCT,
+  greenLateralSigmaM,
+  readSensitivity,
+  type ReadSensitivity,
   MAX_MONTE_CARLO_SAMPLES,
   bestPace,
   makeProbability,

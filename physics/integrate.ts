@@ -13,6 +13,12 @@ export interface OdeEvent {
   readonly value: (t: number, y: readonly number[]) => number;
   readonly direction: 1 | -1;
   readonly terminal: boolean;
+  /**
+   * How many interior points of a step (given the states at its ends) to check the sign at as well (default none:
+   * the step's ends only). For an event whose value can cross and come back inside one step, such as entering and
+   * leaving a small circle.
+   */
+  readonly scan?: (yOld: readonly number[], yNew: readonly number[]) => number;
 }
 
 /** A located event: which one (index into the events array), when, and the state there. */
@@ -79,6 +85,7 @@ export function integrateWithEvents(
   const hits: EventHit[] = [];
   const samples = { t: [t0], y: [y0.slice()] };
   let prev = events.map((e) => e.value(t0, y0));
+  let prevY: readonly number[] = y0.slice();
   // Mutated from odex's callback; kept in an object so TypeScript does not narrow it away.
   const run: { terminalEvent: number | null; stopT: number; stopY: number[]; failure: string | null } = {
     terminalEvent: null,
@@ -105,7 +112,32 @@ export function integrateWithEvents(
       const ev = events[i]!;
       let a = tOld;
       let fa = ev.direction * prev[i]!;
-      const fb = ev.direction * now[i]!;
+      let fb = ev.direction * now[i]!;
+      let b = t;
+      const scan = ev.scan === undefined ? 0 : Math.min(4096, Math.max(0, Math.ceil(ev.scan(prevY, y))));
+      if (scan > 0) {
+        // The first − → + change on the interior points (the end value included), if any.
+        let fPrev = fa;
+        let tPrev = tOld;
+        let hit = false;
+        for (let k = 1; k <= scan + 1; k++) {
+          const tk = k === scan + 1 ? t : tOld + ((t - tOld) * k) / (scan + 1);
+          const fk = k === scan + 1 ? ev.direction * now[i]! : ev.direction * ev.value(tk, stateAt(dense, tk));
+          if (fPrev < 0 && fk >= 0) {
+            a = tPrev;
+            fa = fPrev;
+            b = tk;
+            fb = fk;
+            hit = true;
+            break;
+          }
+          fPrev = fk;
+          tPrev = tk;
+        }
+        if (!hit) continue;
+        found.push(locate(ev, dense, a, fa, b, fb, i));
+        continue;
+      }
       if (!(fb >= 0)) continue;
       if (fa === 0) {
         // The step began exactly on the zero (e.g. at launch): look inside the step for the opposite sign.
@@ -117,7 +149,7 @@ export function integrateWithEvents(
         if (!(inner < 0)) continue;
         fa = inner;
       } else if (!(fa < 0)) continue;
-      found.push(locate(ev, dense, a, fa, t, fb, i));
+      found.push(locate(ev, dense, a, fa, b, fb, i));
     }
     found.sort((p, q) => p.t - q.t);
     for (const hit of found) {
@@ -140,6 +172,7 @@ export function integrateWithEvents(
       samples.y.push(run.terminalEvent === null ? y.slice() : run.stopY.slice());
     }
     prev = now;
+    prevY = y.slice();
     return run.terminalEvent === null;
   };
 

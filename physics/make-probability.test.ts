@@ -2,7 +2,10 @@ import { describe, expect, test } from "vitest";
 import fc from "fast-check";
 import jStat from "jstat";
 import { seededUniform } from "../shared/seeded-random";
-import { bestPace, makeProbability, maxCaptureSpeedMps, HOLE_RADIUS_M, type MakeProbabilityInput } from "./index";
+import { CLUB_GOLFER_PRIOR, bestPace, makeProbability, maxCaptureSpeedMps, solveRead, HOLE_RADIUS_M, type MakeProbabilityInput } from "./index";
+
+/** No read error and a perfect surface: the stroke dispersion alone (for checks against closed forms). */
+const PERFECT = { readSlopePct: 0, greenLateralM: 0 } as const;
 
 const sideHill = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 };
 const club = { angleDeg: 1.2, pace: 0.12 };
@@ -15,7 +18,7 @@ const run = (over: Partial<MakeProbabilityInput> = {}, seed = 7) => {
 const uniform = (min: number, max: number) => fc.integer({ min: 0, max: 1_000_000 }).map((k) => min + ((max - min) * k) / 1_000_000);
 
 test("with no dispersion a holed read is made every time (derived)", () => {
-  const r = run({ dispersion: { angleDeg: 0, pace: 0 }, samples: 500 });
+  const r = run({ dispersion: { angleDeg: 0, pace: 0, ...PERFECT }, samples: 500 });
   expect(r.makeProbability).toBe(1);
   expect(r.secondPuttOverProbability).toBe(0);
   expect(r.finishHoled.every(Boolean)).toBe(true);
@@ -23,16 +26,16 @@ test("with no dispersion a holed read is made every time (derived)", () => {
 
 test("with no dispersion a read too firm to drop is never made (Holmes 1991: v_c(0) ≈ 1.636 m/s)", () => {
   // 3 m past on a side hill at Stimp 10 enters at √(2·a_r·3) ≈ 1.81 m/s (derived) > 1.636: a lip-out every time.
-  const r = run({ dispersion: { angleDeg: 0, pace: 0 }, samples: 500, pace: { rollPastM: 3 } });
+  const r = run({ dispersion: { angleDeg: 0, pace: 0, ...PERFECT }, samples: 500, pace: { rollPastM: 3 } });
   expect(r.makeProbability).toBe(0);
   expect(r.misses.lipOutProbability).toBe(1);
   expect(r.secondPuttOverProbability).toBe(1);
 });
 
 test("make probability falls as the start-line dispersion grows, and as the pace dispersion grows (same seed)", () => {
-  const byAngle = [0.25, 0.5, 1, 2, 4].map((angleDeg) => run({ dispersion: { angleDeg, pace: 0.08 } }).makeProbability);
+  const byAngle = [0.25, 0.5, 1, 2, 4].map((angleDeg) => run({ dispersion: { angleDeg, pace: 0.08, ...PERFECT } }).makeProbability);
   for (let i = 1; i < byAngle.length; i++) expect(byAngle[i]!).toBeLessThan(byAngle[i - 1]!);
-  const byPace = [0.02, 0.1, 0.2, 0.4].map((pace) => run({ dispersion: { angleDeg: 0.3, pace }, pace: { rollPastM: 0.3 } }).makeProbability);
+  const byPace = [0.02, 0.1, 0.2, 0.4].map((pace) => run({ dispersion: { angleDeg: 0.3, pace, ...PERFECT }, pace: { rollPastM: 0.3 } }).makeProbability);
   for (let i = 1; i < byPace.length; i++) expect(byPace[i]!).toBeLessThan(byPace[i - 1]!);
 });
 
@@ -54,7 +57,7 @@ test("flat straight putt with start-line error only matches the closed form 2Φ(
     fallLineDeg: 0,
     stimpFt,
     pace: { rollPastM },
-    dispersion: { angleDeg: sigmaDeg, pace: 0 },
+    dispersion: { angleDeg: sigmaDeg, pace: 0, ...PERFECT },
     samples: 20000,
     random: seededUniform(3),
   });
@@ -98,7 +101,7 @@ describe("a wider hole never lowers the make probability (common random numbers:
         }),
         ({ rollPastM, angleDeg, pace, r1, grow, seed, ...green }) => {
           const at = (holeRadiusM: number) =>
-            makeProbability({ ...green, pace: { rollPastM }, dispersion: { angleDeg, pace }, samples: 300, random: seededUniform(seed), holeRadiusM });
+            makeProbability({ ...green, pace: { rollPastM }, dispersion: { angleDeg, pace, ...PERFECT }, samples: 300, random: seededUniform(seed), holeRadiusM });
           const a = at(r1);
           const b = at(r1 + grow);
           if (!a.ok || !b.ok) return a.ok === b.ok;
@@ -138,4 +141,64 @@ test("best pace with an impossible risk limit returns the safest pace, flagged",
 test("make probability on a cannot-stop green is the cannot-stop value", () => {
   const r = makeProbability({ ...sideHill, slopePct: 8, dispersion: club, samples: 10, random: seededUniform(1) });
   expect(r.ok).toBe(false);
+});
+
+test("with zero dispersion (stroke, read and green) every solved read is made: the issue 13 repro and a property", () => {
+  const zero = { angleDeg: 0, pace: 0, ...PERFECT };
+  // D 6 m, 1.5 %, fall line 135°, Stimp 11, roll-past 0.1 m: its closest pass was missed by the closed form.
+  const repro = makeProbability({ distanceM: 6, slopePct: 1.5, fallLineDeg: 135, stimpFt: 11, pace: { rollPastM: 0.1 }, dispersion: zero, samples: 50, random: seededUniform(1) });
+  if (!repro.ok) throw new Error("must stop");
+  expect(repro.result.makeProbability).toBe(1);
+  fc.assert(
+    fc.property(
+      fc.record({
+        distanceM: uniform(0.5, 20),
+        slopePct: uniform(0, 6),
+        fallLineDeg: uniform(0, 360),
+        stimpFt: uniform(8, 13),
+        rollPastM: uniform(0, 1.2),
+      }),
+      ({ rollPastM, ...green }) => {
+        const r = makeProbability({ ...green, pace: { rollPastM }, dispersion: zero, samples: 4, random: seededUniform(3) });
+        // A read whose entry is too fast for the hole is no make even when perfect; every other read is holed.
+        if (!r.ok) return true;
+        const read = solveRead({ ...green, pace: { rollPastM } });
+        if (!read.ok || !read.read.capture.holed) return true;
+        return r.result.makeProbability === 1;
+      },
+    ),
+    { numRuns: 300, seed: 1313 },
+  );
+});
+
+test("club-golfer prior on a flat green: below the tour at 3, 6, 10 and 20 ft and inside the published amateur rates", () => {
+  // Tour one-putt rates: Broadie, "Every Shot Counts", 2014 [secondary]: 3 ft 0.96, 5 ft 0.77, 8 ft 0.50 (6 ft by
+  // linear interpolation ≈ 0.68), 10 ft 0.40, 20 ft 0.15. Amateur rates (docs/sources.md, "Make rates"): MyGolfSpy
+  // 2025 [secondary] 0–3 ft 88–98 %, 6–9 ft 30–49 %, 9–12 ft 17–34 %; Golf Monthly 2024 [secondary] 3–5 ft 47–69 %.
+  // 6 ft lies between the 3–5 ft and 6–9 ft bands (30–69 %); for 20 ft no amateur band is published in our sources:
+  // below the 9–12 ft amateur rate and above 3 % [from memory].
+  const cases = [
+    { ft: 3, tour: 0.96, lo: 0.88, hi: 0.98 },
+    { ft: 6, tour: 0.68, lo: 0.3, hi: 0.69 },
+    { ft: 10, tour: 0.4, lo: 0.17, hi: 0.34 },
+    { ft: 20, tour: 0.15, lo: 0.03, hi: 0.34 },
+  ];
+  for (const c of cases) {
+    const r = makeProbability({
+      distanceM: c.ft * 0.3048,
+      slopePct: 0,
+      fallLineDeg: 0,
+      stimpFt: 10,
+      pace: { rollPastM: CLUB_GOLFER_PRIOR.rollPastM.mean },
+      dispersion: { angleDeg: CLUB_GOLFER_PRIOR.angleDeg.median, pace: CLUB_GOLFER_PRIOR.pace.median },
+      samples: 20000,
+      random: seededUniform(2026),
+    });
+    if (!r.ok) throw new Error("must stop");
+    const p = r.result.makeProbability;
+    console.log(`${c.ft} ft: club golfer ${(100 * p).toFixed(1)} % (tour ${100 * c.tour} %, amateur ${100 * c.lo}–${100 * c.hi} %)`);
+    expect(p, `${c.ft} ft`).toBeLessThan(c.tour);
+    expect(p, `${c.ft} ft`).toBeGreaterThanOrEqual(c.lo);
+    expect(p, `${c.ft} ft`).toBeLessThanOrEqual(c.hi);
+  }
 });

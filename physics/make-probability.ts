@@ -1,6 +1,5 @@
 // A player's make probability for a read (Monte Carlo over their start-line and pace dispersion), and the pace
 // that makes the most putts while keeping long second putts rare: "your best pace".
-import { maxCaptureSpeedMps } from "./capture";
 import { HOLE_RADIUS_M } from "./constants";
 import { standardNormals, type UniformRandom } from "./normal-deviates";
 import { newPlanarRollOut, planarRollField, rollPlanarInto, type PlanarRollField } from "./planar-roll";
@@ -21,6 +20,41 @@ import { solveRead } from "./solve-read";
 export interface PuttDispersion {
   readonly angleDeg: number;
   readonly pace: number;
+  /**
+   * The read error: σ of the player's misjudgement of the slope, percent of grade, independently along and across
+   * the putt (the player then solves the read of the green they think they see). Default
+   * {@link DEFAULT_READ_ERROR_SLOPE_PCT}; 0 for a perfect read.
+   */
+  readonly readSlopePct?: number;
+  /**
+   * The green's imperfection: σ of the random sideways deviation, m, of a roll 1 m long; it grows as √(L/1 m) with
+   * the length L rolled to the hole (independent small deflections). Default {@link DEFAULT_GREEN_LATERAL_M};
+   * 0 for a perfect surface.
+   */
+  readonly greenLateralM?: number;
+}
+
+/**
+ * Default read error: σ 0.5 % of slope in each direction [from memory / common practice: golfers reading by eye are
+ * commonly said to misjudge a green's grade by around half a percent; no published survey]. Set, with
+ * {@link DEFAULT_GREEN_LATERAL_M}, so that the club-golfer prior's flat-green make rates sit below the tour's and
+ * inside the published amateur rates (docs/sources.md, "Make probability").
+ * @example DEFAULT_READ_ERROR_SLOPE_PCT // 0.5
+ */
+export const DEFAULT_READ_ERROR_SLOPE_PCT = 0.5;
+
+/**
+ * Default green imperfection: σ 20 mm sideways after 1 m, growing as √L (independent small deflections along the
+ * way: 28 mm at 2 m, 35 mm at 3 m, 49 mm at 6 m) [from memory: the putting-machine experiments attributed to
+ * D. Pelz, in which perfect putts of about 3.5 m on real greens holed only about half the time; this value holds
+ * about four in five of them: docs/sources.md, "Make probability"].
+ * @example DEFAULT_GREEN_LATERAL_M // 0.02
+ */
+export const DEFAULT_GREEN_LATERAL_M = 0.02;
+
+/** σ of the green's sideways deviation (m) after rolling `lengthM` (m): greenLateralM·√(L/1 m). */
+export function greenLateralSigmaM(lengthM: number, greenLateralM: number = DEFAULT_GREEN_LATERAL_M): number {
+  return greenLateralM * Math.sqrt(Math.max(0, lengthM));
 }
 
 /** Inputs of {@link makeProbability}: a read (distance, green, pace), the dispersion and the sampling. */
@@ -39,8 +73,17 @@ export interface MakeProbabilityInput extends ReadInput {
 }
 
 /** The nominal read at one pace: start line (°, + = right), aim offset (m) and launch and entry speeds (m/s). */
+/** How a read's start line (rad) and ln launch speed change per 1 % of slope misjudged across (x) and along (y). */
+export interface ReadSensitivity {
+  readonly lineX: number;
+  readonly lineY: number;
+  readonly lnSpeedX: number;
+  readonly lnSpeedY: number;
+}
+
 export interface PaceRead {
-  readonly aimOffsetM: number;
+  /** Null beyond a 60° start line (see Read.aimGiven). */
+  readonly aimOffsetM: number | null;
   readonly startLineDeg: number;
   readonly launchSpeedMps: number;
   readonly entrySpeedMps: number;
@@ -86,6 +129,9 @@ export interface MakeProbability extends PaceOutcome {
 /** `{ ok: true, result }` or the cannot-stop value of the green. */
 export type MakeProbabilityResult = { readonly ok: true; readonly result: MakeProbability } | CannotStop;
 
+/** Standard normal deviates per simulated putt: start line, pace, green, read error across and along. */
+const NORMALS_PER_PUTT = 5;
+
 /** Hard cap on samples per call (the API allows 20 000); a product limit, not physics. @example MAX_MONTE_CARLO_SAMPLES // 200000 */
 export const MAX_MONTE_CARLO_SAMPLES = 200_000;
 
@@ -101,11 +147,11 @@ export const MAX_MONTE_CARLO_SAMPLES = 200_000;
 export function makeProbability(input: MakeProbabilityInput): MakeProbabilityResult {
   const setup = prepare(input);
   if (!setup.ok) return setup;
-  const normals = standardNormals(input.random, 2 * input.samples);
-  const read = solvedRead(input);
+  const normals = standardNormals(input.random, NORMALS_PER_PUTT * input.samples);
+  const read = solvedRead(input, setup.readError);
   if (!read.ok) return read;
   const tally = simulatePace(setup.sim, read.read, read.rollPastM, normals, input.samples, setup.keep);
-  return { ok: true, result: describe(setup.sim, tally, input.samples, input.dispersion) };
+  return { ok: true, result: describe(setup.sim, tally, input.samples) };
 }
 
 /** Inputs of {@link bestPace}: those of makeProbability plus the second-putt risk limit and the paces to try. */
@@ -114,7 +160,7 @@ export interface BestPaceInput extends MakeProbabilityInput {
   readonly secondPuttRiskMax?: number;
   /** Roll-past values to try, m (default 0.05 … 1.50 in 0.05 m steps). */
   readonly rollPastGridM?: readonly number[];
-  /** Samples per pace while scanning (default min(samples, 4000)); the two reported paces use all `samples`. */
+  /** Samples per pace while scanning (default min(samples, 1000), on common random numbers); the two reported paces use all `samples`. */
   readonly scanSamples?: number;
 }
 
@@ -147,15 +193,15 @@ export function bestPace(input: BestPaceInput): BestPaceResult {
   if (!(riskMax >= 0 && riskMax <= 1)) throw new RangeError(`secondPuttRiskMax must be in [0, 1] (got ${riskMax})`);
   const grid = input.rollPastGridM ?? DEFAULT_BEST_PACE_GRID_M;
   if (grid.length === 0 || grid.some((p) => !(p >= 0) || !Number.isFinite(p))) throw new RangeError("rollPastGridM must be finite values ≥ 0");
-  const scanSamples = Math.min(input.samples, input.scanSamples ?? 4000);
-  const normals = standardNormals(input.random, 2 * input.samples);
-  const requestedRead = solvedRead(input);
+  const scanSamples = Math.min(input.samples, input.scanSamples ?? 1000);
+  const normals = standardNormals(input.random, NORMALS_PER_PUTT * input.samples);
+  const requestedRead = solvedRead(input, setup.readError);
   if (!requestedRead.ok) return requestedRead;
-  const requested = describe(setup.sim, simulatePace(setup.sim, requestedRead.read, requestedRead.rollPastM, normals, input.samples, setup.keep), input.samples, input.dispersion);
+  const requested = describe(setup.sim, simulatePace(setup.sim, requestedRead.read, requestedRead.rollPastM, normals, input.samples, setup.keep), input.samples);
 
   const curve: { outcome: PaceOutcome; read: SimRead }[] = [];
   for (const rollPastM of grid) {
-    const r = solvedRead({ ...input, pace: { rollPastM } });
+    const r = solvedRead({ ...input, pace: { rollPastM } }, setup.readError);
     if (!r.ok) return r;
     curve.push({ outcome: outcomeOf(simulatePace(setup.sim, r.read, rollPastM, normals, scanSamples, 0), scanSamples), read: r.read });
   }
@@ -179,18 +225,23 @@ export function bestPace(input: BestPaceInput): BestPaceResult {
 interface Sim {
   readonly field: PlanarRollField;
   readonly distanceM: number;
-  readonly dispersion: PuttDispersion;
+  readonly dispersion: Required<PuttDispersion>;
   readonly holeRadiusM: number;
   readonly secondPuttM: number;
 }
 
 interface SimRead extends PaceRead {
   readonly startLineRad: number;
+  readonly sensitivity: ReadSensitivity;
 }
 
-function prepare(input: MakeProbabilityInput): ({ ok: true; field: PlanarRollField; sim: Sim; keep: number }) | CannotStop {
+function prepare(input: MakeProbabilityInput): ({ ok: true; field: PlanarRollField; sim: Sim; keep: number; readError: boolean }) | CannotStop {
   validateReadInput(input);
   const { angleDeg, pace } = input.dispersion;
+  const readSlopePct = input.dispersion.readSlopePct ?? DEFAULT_READ_ERROR_SLOPE_PCT;
+  const greenLateralM = input.dispersion.greenLateralM ?? DEFAULT_GREEN_LATERAL_M;
+  if (!(readSlopePct >= 0) || !Number.isFinite(readSlopePct)) throw new RangeError(`dispersion.readSlopePct must be finite and ≥ 0 (got ${readSlopePct})`);
+  if (!(greenLateralM >= 0) || !Number.isFinite(greenLateralM)) throw new RangeError(`dispersion.greenLateralM must be finite and ≥ 0 (got ${greenLateralM})`);
   if (!(angleDeg >= 0) || !Number.isFinite(angleDeg)) throw new RangeError(`dispersion.angleDeg must be finite and ≥ 0 (got ${angleDeg})`);
   if (!(pace >= 0) || !Number.isFinite(pace)) throw new RangeError(`dispersion.pace must be finite and ≥ 0 (got ${pace})`);
   if (!Number.isInteger(input.samples) || input.samples < 1 || input.samples > MAX_MONTE_CARLO_SAMPLES) {
@@ -205,14 +256,45 @@ function prepare(input: MakeProbabilityInput): ({ ok: true; field: PlanarRollFie
   if (green.model.resistanceSpeedFactor !== null) throw new RangeError("makeProbability needs the constant-resistance model (closed-form rolls)");
   const field = planarRollField(green);
   const keep = Math.min(input.samples, Math.max(0, Math.floor(input.finishesKept ?? 100)));
-  return { ok: true, field, keep, sim: { field, distanceM: input.distanceM, dispersion: input.dispersion, holeRadiusM, secondPuttM } };
+  const dispersion = { angleDeg, pace, readSlopePct, greenLateralM };
+  return { ok: true, field, keep, readError: readSlopePct > 0, sim: { field, distanceM: input.distanceM, dispersion, holeRadiusM, secondPuttM } };
 }
 
-function solvedRead(input: ReadInput): ({ ok: true; read: SimRead; rollPastM: number }) | CannotStop {
+function solvedRead(input: ReadInput, withReadError: boolean): ({ ok: true; read: SimRead; rollPastM: number }) | CannotStop {
   const r = solveRead(input);
   if (!r.ok) return r;
   const { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps, rollPastM } = r.read;
-  return { ok: true, rollPastM, read: { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps, startLineRad: (startLineDeg * Math.PI) / 180 } };
+  const sensitivity = withReadError ? readSensitivity(input) : { lineX: 0, lineY: 0, lnSpeedX: 0, lnSpeedY: 0 };
+  return { ok: true, rollPastM, read: { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps, startLineRad: (startLineDeg * Math.PI) / 180, sensitivity } };
+}
+
+const SENSITIVITY_STEP_PCT = 0.05;
+
+/**
+ * The read's start line and launch speed as functions of the slope the player believes in, linearised: central
+ * differences of solveRead over ±0.05 % of grade across and along the putt (one-sided, or 0, where a neighbour cannot
+ * stop). The slope vector in the putt frame is slopePct·(sin φ, cos φ), φ the fall line.
+ */
+export function readSensitivity(input: ReadInput): ReadSensitivity {
+  const phi = (input.fallLineDeg * Math.PI) / 180;
+  const sx = input.slopePct * Math.sin(phi);
+  const sy = input.slopePct * Math.cos(phi);
+  const h = SENSITIVITY_STEP_PCT;
+  const at = (x: number, y: number) => {
+    const r = solveRead({ ...input, slopePct: Math.hypot(x, y), fallLineDeg: (Math.atan2(x, y) * 180) / Math.PI });
+    return r.ok ? { line: (r.read.startLineDeg * Math.PI) / 180, lnV: Math.log(r.read.launchSpeedMps) } : null;
+  };
+  const mid = at(sx, sy);
+  const diff = (plus: ReturnType<typeof at>, minus: ReturnType<typeof at>) => {
+    if (plus && minus) return { line: (plus.line - minus.line) / (2 * h), lnV: (plus.lnV - minus.lnV) / (2 * h) };
+    const one = plus ?? minus;
+    if (!one || !mid) return { line: 0, lnV: 0 };
+    const sign = plus ? 1 : -1;
+    return { line: (sign * (one.line - mid.line)) / h, lnV: (sign * (one.lnV - mid.lnV)) / h };
+  };
+  const dx = diff(at(sx + h, sy), at(sx - h, sy));
+  const dy = diff(at(sx, sy + h), at(sx, sy - h));
+  return { lineX: dx.line, lineY: dy.line, lnSpeedX: dx.lnV, lnSpeedY: dy.lnV };
 }
 
 interface Tally {
@@ -234,6 +316,9 @@ function simulatePace(sim: Sim, read: SimRead, rollPastM: number, normals: Float
   const { field, distanceM: D, holeRadiusM: rh, secondPuttM } = sim;
   const sigmaA = (sim.dispersion.angleDeg * Math.PI) / 180;
   const halfSigmaP = sim.dispersion.pace / 2;
+  const sigmaG = greenLateralSigmaM(D, sim.dispersion.greenLateralM) / D;
+  const sr = sim.dispersion.readSlopePct;
+  const sens = read.sensitivity;
   const out = newPlanarRollOut();
   const t: Tally = {
     rollPastM,
@@ -250,11 +335,10 @@ function simulatePace(sim: Sim, read: SimRead, rollPastM: number, normals: Float
     finishHoled: [],
   };
   for (let i = 0; i < samples; i++) {
-    const line = read.startLineRad + sigmaA * normals[2 * i]!;
-    const speed = read.launchSpeedMps * Math.exp(halfSigmaP * normals[2 * i + 1]!);
-    rollPlanarInto(field, speed, line, 0, D, out, rh);
+    const { line, speed } = perturb(read, normals, i, sigmaA, halfSigmaP, sigmaG, sr, sens);
+    rollPlanarInto(field, speed, line, 0, D, out, rh, rh);
     const b = out.passDistanceM;
-    const holed = b < rh && out.passSpeedMps < maxCaptureSpeedMps(b, rh);
+    const holed = out.holed;
     if (i < keep) {
       t.finishes.push(holed ? [0, D] : [out.restX, out.restY]);
       t.finishHoled.push(holed);
@@ -274,6 +358,30 @@ function simulatePace(sim: Sim, read: SimRead, rollPastM: number, normals: Float
   return t;
 }
 
+/**
+ * One simulated putt's start line and launch speed: the read's, plus the stroke (N(0, σ_a²) on the line, e^(ε/2) on
+ * the speed), the green (its sideways deviation at the hole as an angle) and the read error (the slope misjudged by
+ * N(0, σ_r²) across and along, through the read's sensitivity).
+ */
+function perturb(
+  read: SimRead,
+  normals: Float64Array,
+  i: number,
+  sigmaA: number,
+  halfSigmaP: number,
+  sigmaG: number,
+  sr: number,
+  sens: ReadSensitivity,
+): { line: number; speed: number } {
+  const k = NORMALS_PER_PUTT * i;
+  const ex = sr * normals[k + 3]!;
+  const ey = sr * normals[k + 4]!;
+  return {
+    line: read.startLineRad + sigmaA * normals[k]! + sigmaG * normals[k + 2]! + sens.lineX * ex + sens.lineY * ey,
+    speed: read.launchSpeedMps * Math.exp(halfSigmaP * normals[k + 1]! + sens.lnSpeedX * ex + sens.lnSpeedY * ey),
+  };
+}
+
 function outcomeOf(t: Tally, samples: number): PaceOutcome {
   const p = t.holed / samples;
   const { aimOffsetM, startLineDeg, launchSpeedMps, entrySpeedMps } = t.read;
@@ -286,7 +394,7 @@ function outcomeOf(t: Tally, samples: number): PaceOutcome {
   };
 }
 
-function describe(sim: Sim, t: Tally, samples: number, dispersion: PuttDispersion): MakeProbability {
+function describe(sim: Sim, t: Tally, samples: number): MakeProbability {
   const leaves = t.leaves.subarray(0, t.misses).slice().sort();
   const quantile = (q: number) => (leaves.length === 0 ? 0 : leaves[Math.min(leaves.length - 1, Math.floor(q * leaves.length))]!);
   let sum = 0;
@@ -307,7 +415,7 @@ function describe(sim: Sim, t: Tally, samples: number, dispersion: PuttDispersio
       p90LeaveM: quantile(0.9),
     },
     samples,
-    dispersion,
+    dispersion: sim.dispersion,
     holeRadiusM: sim.holeRadiusM,
     secondPuttM: sim.secondPuttM,
   };
@@ -331,18 +439,18 @@ export interface SimulatedPutt {
 export function simulatePuttOutcomes(input: MakeProbabilityInput): { readonly ok: true; readonly putts: SimulatedPutt[] } | CannotStop {
   const setup = prepare(input);
   if (!setup.ok) return setup;
-  const normals = standardNormals(input.random, 2 * input.samples);
-  const read = solvedRead(input);
+  const normals = standardNormals(input.random, NORMALS_PER_PUTT * input.samples);
+  const read = solvedRead(input, setup.readError);
   if (!read.ok) return read;
   const { field, distanceM: D, holeRadiusM: rh, dispersion } = setup.sim;
   const sigmaA = (dispersion.angleDeg * Math.PI) / 180;
+  const sigmaG = greenLateralSigmaM(D, dispersion.greenLateralM) / D;
   const out = newPlanarRollOut();
   const putts: SimulatedPutt[] = [];
   for (let i = 0; i < input.samples; i++) {
-    const line = read.read.startLineRad + sigmaA * normals[2 * i]!;
-    const speed = read.read.launchSpeedMps * Math.exp((dispersion.pace / 2) * normals[2 * i + 1]!);
-    rollPlanarInto(field, speed, line, 0, D, out, rh);
-    const holed = out.passDistanceM < rh && out.passSpeedMps < maxCaptureSpeedMps(out.passDistanceM, rh);
+    const { line, speed } = perturb(read.read, normals, i, sigmaA, dispersion.pace / 2, sigmaG, dispersion.readSlopePct, read.read.sensitivity);
+    rollPlanarInto(field, speed, line, 0, D, out, rh, rh);
+    const holed = out.holed;
     putts.push(
       holed
         ? { holed, restM: [0, D], missSide: null, missLengthM: null }

@@ -20,7 +20,7 @@ export type BreakDirection = "left-to-right" | "right-to-left" | "none";
 
 /** The work a solver did, beside its result. */
 export interface ReadDiagnostics {
-  readonly method: "straight-closed-form" | "homogeneous-1d" | "direct-2d";
+  readonly method: "closed-form" | "direct-2d" | "surface";
   readonly iterations: number;
   readonly integrations: number;
   readonly steps: number;
@@ -28,17 +28,68 @@ export interface ReadDiagnostics {
 }
 
 /**
- * A solved read. Angles in degrees, signed + = golfer's right; lengths in m; speeds in m/s. `aimOffsetM` is
- * D·tan(start line); it is only meaningful while |startLineDeg| < 90 (near the cannot-stop threshold a dying putt
- * can need a start line up the slope, sideways or behind: use the start line then).
+ * Widest start line (degrees either side of the line to the hole) for which the answer gives an aim offset beside
+ * the hole. Beyond it D·tan(start line) grows without bound (infinite at 90°, behind the ball past it), so the answer
+ * is the start line and a plain statement. A product choice. @example MAX_AIM_OFFSET_START_LINE_DEG // 60
  */
-export interface Read {
+export const MAX_AIM_OFFSET_START_LINE_DEG = 60;
+
+/** How the aim is given: an offset beside the hole, or (for a very wide line) only the start line. */
+export type AimGiven = "offset" | "start-line";
+
+/** The aim fields of a read or chart cell. */
+export interface AimAnswer {
+  /** D·tan(start line), m, + = right of the hole; null when the start line is wider than 60° (see `aimGiven`). */
+  readonly aimOffsetM: number | null;
+  readonly aimGiven: AimGiven;
+  /** The aim in plain words when only the start line is given; null otherwise. */
+  readonly aimNote: string | null;
+}
+
+/**
+ * The aim for a start line at distance D: an offset beside the hole up to 60°, beyond it the start line alone.
+ * @example aimOf(91, 3).aimGiven // "start-line"
+ */
+export function aimOf(startLineDeg: number, distanceM: number): AimAnswer {
+  if (Math.abs(startLineDeg) <= MAX_AIM_OFFSET_START_LINE_DEG) {
+    return { aimOffsetM: distanceM * Math.tan((startLineDeg * Math.PI) / 180), aimGiven: "offset", aimNote: null };
+  }
+  const side = startLineDeg < 0 ? "left" : "right";
+  const where = Math.abs(startLineDeg) < 90 ? "far" : Math.abs(startLineDeg) === 90 ? "square" : "back";
+  const words =
+    where === "far"
+      ? "so wide that a spot beside the hole means little"
+      : where === "square"
+        ? "square to the line to the hole"
+        : "further back than square to that line";
+  return {
+    aimOffsetM: null,
+    aimGiven: "start-line",
+    aimNote: `Start the ball ${Math.abs(startLineDeg).toFixed(0)}° ${side} of the line to the hole: ${words}. Judge it by the start direction.`,
+  };
+}
+
+/**
+ * Flat-putt length, m: the length of a putt on a flat green at the same Stimp that needs the same launch speed with
+ * the same roll-past, v²/(2·a_r) − P (constant-deceleration closed form, derived). A flat putt gives its own length;
+ * uphill longer, downhill shorter. @example flatPuttLengthM(Math.sqrt(2 * 0.5486 * 3.45), 0.5486, 0.45) // 3
+ */
+export function flatPuttLengthM(launchSpeedMps: number, rollingDecelMps2: number, rollPastM: number): number {
+  return (launchSpeedMps * launchSpeedMps) / (2 * rollingDecelMps2) - rollPastM;
+}
+
+/**
+ * A solved read. Angles in degrees, signed + = golfer's right; lengths in m; speeds in m/s. The aim is an offset
+ * beside the hole (D·tan(start line)) while the start line is within 60° of the line to the hole, and the start line
+ * with a plain statement beyond (near the cannot-stop threshold a dying putt can need a line sideways or behind).
+ */
+export interface Read extends AimAnswer {
   readonly launchSpeedMps: number;
   readonly startLineDeg: number;
-  readonly aimOffsetM: number;
   readonly entrySpeedMps: number;
   readonly rollPastM: number;
-  readonly playsLikeM: number;
+  /** Length of the flat putt (same Stimp) needing the same launch speed with the same roll-past, m. */
+  readonly flatPuttLengthM: number;
   readonly breaks: BreakDirection;
   readonly capture: Capture;
   /** [x, y] points in m from the ball to its rest point (hole covered), in the putt frame. */

@@ -17,7 +17,8 @@ import {
   canStop,
   gravityDecelFromSlope,
   maxStoppableSlopePct,
-  playsLikeM,
+  flatPuttLengthM,
+  solveRead,
   resolveGreen,
   rollingDecelFromStimp,
   simulateRoll,
@@ -43,7 +44,7 @@ test("the Stimpmeter exit speed is 6 ft/s (USGA Stimpmeter booklet, secondary)",
   expect(STIMP_EXIT_SPEED_MPS).toBeCloseTo(STIMPMETER.exitSpeedMps.value, 2);
 });
 
-test("rolling deceleration from the Stimp matches a_r = v0²/(2S) (derived, references.md)", () => {
+test("rolling deceleration from the Stimp matches a_r = v0²/(2S) (derived, docs/sources.md)", () => {
   for (const p of ROLLING_DECEL_MPS2.points) {
     expect(Math.abs(rollingDecelFromStimp(p.stimpFt) - p.decelMps2)).toBeLessThan(ROLLING_DECEL_MPS2.toleranceMps2);
   }
@@ -104,7 +105,7 @@ test("Brede's correction is exact for constant deceleration: up and down rolls o
   }
 });
 
-test("cannot-stop thresholds: ~7.9 % at Stimp 10, 6.5 % at 12, 5.6 % at 14 in this model (derived, references.md)", () => {
+test("cannot-stop thresholds: ~7.9 % at Stimp 10, 6.5 % at 12, 5.6 % at 14 in this model (derived, docs/sources.md)", () => {
   for (const p of CANNOT_STOP_THRESHOLDS.points) {
     const threshold = maxStoppableSlopePct(p.stimpFt);
     expect(Math.abs(threshold - p.slopePct)).toBeLessThan(CANNOT_STOP_THRESHOLDS.tolerancePct);
@@ -114,9 +115,23 @@ test("cannot-stop thresholds: ~7.9 % at Stimp 10, 6.5 % at 12, 5.6 % at 14 in th
   expect(canStop(resolveGreen({ slopePct: 8, fallLineDeg: 0, stimpFt: 10 }))).toBe(false);
 });
 
-test("plays-like distance of a flat putt is the distance itself (derived v²/(2a_r))", () => {
-  const v = Math.sqrt(2 * rollingDecelFromStimp(10) * 3);
-  expect(playsLikeM(v, 10)).toBeCloseTo(3, 12);
+test("flat-putt length: a flat putt equals its own length; straight uphill longer, downhill shorter (derived)", () => {
+  // Straight putts along the fall line in closed form (docs/sources.md, Rolling on a slope): v = √(2·a_eff·(D + P)),
+  // a_eff = a_r ± a_g; the flat putt with the same v and the same P is L = v²/(2·a_r) − P = (D + P)·a_eff/a_r − P.
+  const ar = rollingDecelFromStimp(10);
+  const ag = gravityDecelFromSlope(2);
+  for (const [D, P] of [[3, 0.45], [1.2, 0], [8, 1.5]] as const) {
+    const flat = solveRead({ distanceM: D, slopePct: 0, fallLineDeg: 0, stimpFt: 10, pace: { rollPastM: P } });
+    const up = solveRead({ distanceM: D, slopePct: 2, fallLineDeg: 180, stimpFt: 10, pace: { rollPastM: P } });
+    const down = solveRead({ distanceM: D, slopePct: 2, fallLineDeg: 0, stimpFt: 10, pace: { rollPastM: P } });
+    if (!flat.ok || !up.ok || !down.ok) throw new Error("must stop");
+    expect(flat.read.flatPuttLengthM).toBeCloseTo(D, 9);
+    expect(up.read.flatPuttLengthM).toBeCloseTo(((D + P) * (ar + ag)) / ar - P, 9);
+    expect(down.read.flatPuttLengthM).toBeCloseTo(((D + P) * (ar - ag)) / ar - P, 9);
+    expect(up.read.flatPuttLengthM).toBeGreaterThan(D);
+    expect(down.read.flatPuttLengthM).toBeLessThan(D);
+  }
+  expect(flatPuttLengthM(Math.sqrt(2 * ar * 3.45), ar, 0.45)).toBeCloseTo(3, 12);
 });
 
 test("bad inputs are refused with a RangeError", () => {

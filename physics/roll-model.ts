@@ -35,7 +35,7 @@ export const DEFAULT_ROLL_MODEL: RollModel = Object.freeze({
 
 /**
  * Rolling-resistance deceleration from a Stimp reading, m/s²: a_r = v0²/(2·S) with S in metres (constant
- * deceleration; the Stimpmeter ball leaves the bar at v0 and rolls S). Derived; see references.md.
+ * deceleration; the Stimpmeter ball leaves the bar at v0 and rolls S). Derived; docs/sources.md, "Rolling on a slope".
  * @example rollingDecelFromStimp(10) // ≈ 0.5486 m/s²
  */
 export function rollingDecelFromStimp(stimpFt: number, model: RollModel = DEFAULT_ROLL_MODEL): number {
@@ -64,19 +64,6 @@ export function stimpFromTwoWays(upFt: number, downFt: number): number {
   requirePositive("upFt", upFt);
   requirePositive("downFt", downFt);
   return (2 * upFt * downFt) / (upFt + downFt);
-}
-
-/**
- * "Plays like" distance, m: the flat putt at this Stimp that needs the same launch speed, v²/(2·a_r)
- * (constant-deceleration closed form, derived). Only valid for the constant-resistance model.
- * @example playsLikeM(2, 10) // ≈ 3.646 m
- */
-export function playsLikeM(launchSpeedMps: number, stimpFt: number, model: RollModel = DEFAULT_ROLL_MODEL): number {
-  requireFinite("launchSpeedMps", launchSpeedMps);
-  if (model.resistanceSpeedFactor !== null) {
-    throw new RangeError("playsLikeM's closed form needs constant rolling resistance; integrate a flat roll instead");
-  }
-  return (launchSpeedMps * launchSpeedMps) / (2 * rollingDecelFromStimp(stimpFt, model));
 }
 
 /**

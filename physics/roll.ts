@@ -10,7 +10,7 @@ import { rollingDecelAt, type Green } from "./roll-model";
 export const STATE = { x: 0, y: 1, vx: 2, vy: 3, t: 4, s: 5 } as const;
 
 /** Speed below which the last few micrometres are finished in closed form, as a fraction of launch speed. */
-export const STOP_SPEED_FRACTION = 1e-3;
+export const STOP_SPEED_FRACTION = 1e-4;
 
 /**
  * Right-hand side of the equation of motion dv/dt = a_g·d̂ − a_r(|v|)·v̂ (point-mass rolling sphere on a plane;
@@ -46,6 +46,8 @@ export interface RollState {
 export interface RollOptions {
   /** Report local minima of the distance to this point (d/dt|p − h|² crossing from − to +). */
   readonly target?: readonly [number, number];
+  /** With `target`: report where the ball's centre enters the circle of this radius around it (the hole's edge). */
+  readonly rimRadiusM?: number;
   /** Report crossings of the line x = 0 towards this side (+1: to x > 0, −1: to x < 0). */
   readonly crossToward?: 1 | -1;
   /** Dense points recorded inside each integrator step (for drawing the path). */
@@ -59,6 +61,8 @@ export interface RollTrace {
   readonly rest: RollState;
   readonly approaches: RollState[];
   readonly crossings: RollState[];
+  /** Entries into the circle of `rimRadiusM` around the target, in order. */
+  readonly rimEntries: RollState[];
   readonly samples: RollState[];
   readonly stats: IntegrationStats;
 }
@@ -89,7 +93,19 @@ export function rollToRest(
   const events: OdeEvent[] = [{ value: (_t, y) => Math.hypot(y[2]!, y[3]!) - vStop, direction: -1, terminal: true }];
   const target = options.target;
   if (target !== undefined) {
-    events.push({ value: (_t, y) => (y[0]! - target[0]) * y[2]! + (y[1]! - target[1]) * y[3]!, direction: 1, terminal: false });
+    events.push({ value: (_t, y) => (y[0]! - target[0]) * y[2]! + (y[1]! - target[1]) * y[3]!, direction: 1, terminal: false, scan: () => 16 });
+  }
+  const rim = options.rimRadiusM;
+  const idxRim = target !== undefined && rim !== undefined ? events.length : -1;
+  if (target !== undefined && rim !== undefined) {
+    events.push({ value: (_t, y) => (y[0]! - target[0]) ** 2 + (y[1]! - target[1]) ** 2 - rim * rim, direction: -1, terminal: false,
+      // A step's points lie within half its length of one of its ends: scan only steps that can reach the circle.
+      scan: (a, b) => {
+        const ds = b[5]! - a[5]!;
+        const d = Math.min(Math.hypot(a[0]! - target[0], a[1]! - target[1]), Math.hypot(b[0]! - target[0], b[1]! - target[1]));
+        return d - ds / 2 > rim ? 0 : ds / (rim / 8);
+      },
+    });
   }
   const side = options.crossToward;
   if (side !== undefined) events.push({ value: (_t, y) => side * y[0]!, direction: 1, terminal: false });
@@ -110,15 +126,18 @@ export function rollToRest(
   }
   const approaches: RollState[] = [];
   const crossings: RollState[] = [];
+  const rimEntries: RollState[] = [];
   const idxTarget = target !== undefined ? 1 : -1;
   for (const hit of run.hits) {
     if (hit.event === idxTarget) approaches.push(toState(hit.y));
+    else if (hit.event === idxRim) rimEntries.push(toState(hit.y));
     else if (hit.event > 0) crossings.push(toState(hit.y));
   }
   return {
     rest: finishInClosedForm(green, run.y),
     approaches,
     crossings,
+    rimEntries,
     samples: run.samples.y.map(toState),
     stats: run.stats,
   };

@@ -1,5 +1,6 @@
 // Forward roll: launch speed and start line on a green → path, rest point, pass at the hole, capture outcome.
-import { captureOutcome, type Capture } from "./capture";
+import { captureAtRim, captureOutcome, type Capture, type RimCrossing } from "./capture";
+import { HOLE_RADIUS_M } from "./constants";
 import { rollToRest, type RollState } from "./roll";
 import { stopsInPractice, describeModel, resolveGreen, requireFinite, type GreenInput, type ModelSummary } from "./roll-model";
 import { cannotStop, toPath, type CannotStop } from "./read-types";
@@ -31,6 +32,8 @@ export interface Roll {
   readonly rollTimeS: number;
   readonly closestApproach: HolePass;
   readonly capture: Capture;
+  /** Where the ball's centre crossed the hole's edge before its closest pass (null if it never did). */
+  readonly rim: RimCrossing | null;
   readonly samples: { readonly timeS: number[]; readonly speedMps: number[]; readonly xM: number[]; readonly yM: number[] };
   readonly model: ModelSummary;
   readonly diagnostics: { readonly steps: number; readonly evaluations: number; readonly eventIterations: number };
@@ -41,8 +44,8 @@ export type RollResult = { readonly ok: true; readonly roll: Roll } | CannotStop
 
 /**
  * Roll a true-rolling ball from (0, 0) towards a hole at (0, D) and report its path to rest, its closest approach
- * to the hole centre (event d/dt|p − h|² = 0 from − to +, located on odex's dense output) and Holmes's capture
- * outcome there (Am. J. Phys. 59(2), 1991). The hole is treated as covered for the path.
+ * to the hole centre (event d/dt|p − h|² = 0 from − to +, located on odex's dense output) and the capture
+ * outcome at the hole's edge before it (Holmes 1991's criterion at the rim; docs/sources.md). The hole is treated as covered for the path.
  * @example simulateRoll({ distanceM: 3, slopePct: 0, fallLineDeg: 0, stimpFt: 10, launchSpeedMps: 1.8288, startLineDeg: 0 }) // rests 3.048 m out
  */
 export function simulateRoll(input: RollInput): RollResult {
@@ -56,12 +59,21 @@ export function simulateRoll(input: RollInput): RollResult {
   const hole: [number, number] = [0, input.distanceM];
   if (input.launchSpeedMps === 0) return { ok: true, roll: restingBall(hole, model) };
   const s = (input.startLineDeg * Math.PI) / 180;
-  const trace = rollToRest(green, input.launchSpeedMps, [Math.sin(s), Math.cos(s)], { target: hole, samplesPerStep: 9 });
+  const trace = rollToRest(green, input.launchSpeedMps, [Math.sin(s), Math.cos(s)], { target: hole, rimRadiusM: HOLE_RADIUS_M, samplesPerStep: 9 });
   const dist = (p: RollState) => Math.hypot(p.xM - hole[0], p.yM - hole[1]);
   let closest = trace.rest;
   for (const p of trace.approaches) if (dist(p) < dist(closest)) closest = p;
   const atRest = closest === trace.rest;
   const pass = holePass(closest, hole, atRest ? trace.samples[trace.samples.length - 2] : undefined);
+  let rim: RimCrossing | null = null;
+  if (pass.distanceM < HOLE_RADIUS_M && !atRest) {
+    for (const e of trace.rimEntries) {
+      if (e.timeS > closest.timeS) break;
+      const sp = Math.hypot(e.vxMps, e.vyMps);
+      rim = { offsetM: Math.abs((e.vyMps * (e.xM - hole[0]) - e.vxMps * (e.yM - hole[1])) / sp), speedMps: sp };
+    }
+  }
+  const restsOverHole = Math.hypot(trace.rest.xM - hole[0], trace.rest.yM - hole[1]) < HOLE_RADIUS_M;
   const samples = { timeS: [] as number[], speedMps: [] as number[], xM: [] as number[], yM: [] as number[] };
   for (const p of [...trace.samples, trace.rest]) {
     samples.timeS.push(p.timeS);
@@ -77,7 +89,8 @@ export function simulateRoll(input: RollInput): RollResult {
       rollLengthM: trace.rest.alongPathM,
       rollTimeS: trace.rest.timeS,
       closestApproach: pass,
-      capture: captureOutcome(pass.offsetM, pass.speedMps),
+      capture: captureAtRim(pass.distanceM, rim, pass.speedMps, restsOverHole),
+      rim,
       samples,
       model,
       diagnostics: { steps: trace.stats.steps, evaluations: trace.stats.evaluations, eventIterations: trace.stats.eventIterations },
@@ -118,6 +131,7 @@ function restingBall(hole: readonly [number, number], model: ModelSummary): Roll
     rollTimeS: 0,
     closestApproach: { distanceM: d, offsetM: d, speedMps: 0, alongPathM: 0, timeS: 0, pointM: [0, 0], atRest: true },
     capture: captureOutcome(d, 0),
+    rim: null,
     samples: { timeS: [0], speedMps: [0], xM: [0], yM: [0] },
     model,
     diagnostics: { steps: 0, evaluations: 0, eventIterations: 0 },

@@ -1,9 +1,10 @@
 // The inverse read solved directly on two unknowns (launch speed, start line): slower than the homogeneous
 // 1-D method but valid for any rolling model, and an independent check of it.
-import { captureOutcome } from "./capture";
+import { captureAtRim, type RimCrossing } from "./capture";
+import { HOLE_RADIUS_M } from "./constants";
 import { rollToRest, type RollState, type RollTrace } from "./roll";
 import { stopsInPractice, describeModel, rollingDecelAt, resolveGreen } from "./roll-model";
-import { cannotStop, toPath, validateReadInput, type Read, type ReadInput, type ReadResult } from "./read-types";
+import { aimOf, cannotStop, flatPuttLengthM, toPath, validateReadInput, type Read, type ReadInput, type ReadResult } from "./read-types";
 
 const MAX_ITERATIONS = 40;
 const MISS_TOL_M = 1e-4;
@@ -35,7 +36,7 @@ export function solveReadDirect(input: ReadInput): ReadResult {
   const stats = { iterations: 0, integrations: 0, steps: 0, evaluations: 0 };
 
   const evaluate = (speed: number, line: number) => {
-    const trace = rollToRest(green, speed, [Math.sin(line), Math.cos(line)], { target: hole, samplesPerStep: 7 });
+    const trace = rollToRest(green, speed, [Math.sin(line), Math.cos(line)], { target: hole, rimRadiusM: HOLE_RADIUS_M, samplesPerStep: 7 });
     stats.integrations++;
     stats.steps += trace.stats.steps;
     stats.evaluations += trace.stats.evaluations;
@@ -119,15 +120,22 @@ function finishDirect(
   const green = resolveGreen(input);
   const entry = Math.hypot(r.closest.vxMps, r.closest.vyMps);
   const sinPhi = Math.sin((input.fallLineDeg * Math.PI) / 180);
+  const rollPastM = r.trace.rest.alongPathM - r.closest.alongPathM;
+  let rim: RimCrossing | null = null;
+  for (const e of r.trace.rimEntries) {
+    if (e.timeS > r.closest.timeS) break;
+    const es = Math.hypot(e.vxMps, e.vyMps);
+    rim = { offsetM: Math.abs((e.vyMps * e.xM - e.vxMps * (e.yM - input.distanceM)) / es), speedMps: es };
+  }
   const read: Read = {
     launchSpeedMps: v,
     startLineDeg: (s * 180) / Math.PI,
-    aimOffsetM: input.distanceM * Math.tan(s),
+    ...aimOf((s * 180) / Math.PI, input.distanceM),
     entrySpeedMps: entry,
-    rollPastM: r.trace.rest.alongPathM - r.closest.alongPathM,
-    playsLikeM: (v * v) / (2 * green.rollingDecelMps2),
+    rollPastM,
+    flatPuttLengthM: flatPuttLengthM(v, green.rollingDecelMps2, rollPastM),
     breaks: Math.abs(sinPhi) < 1e-9 || green.gravityDecelMps2 === 0 ? "none" : sinPhi > 0 ? "left-to-right" : "right-to-left",
-    capture: captureOutcome(r.miss, entry),
+    capture: captureAtRim(Math.abs(r.miss), rim, entry, rollPastM < HOLE_RADIUS_M),
     path: toPath(r.trace.samples, r.trace.rest, 1, 1),
     restM: [r.trace.rest.xM, r.trace.rest.yM],
     model: describeModel(green),

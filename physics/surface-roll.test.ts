@@ -81,7 +81,7 @@ describe("a planar height map is the planar model (derived: the same equation of
     const flat = solveRead({ distanceM: p.distanceM, slopePct: p.slopePct, fallLineDeg: p.fallLineDeg, stimpFt: 10, pace });
     const onMap = solveReadOnSurface({ surface, stimpFt: 10, ballM: ball, holeM: hole, pace });
     if (!flat.ok || !onMap.ok) throw new Error("both must solve");
-    expect(Math.abs(onMap.read.aimOffsetM - flat.read.aimOffsetM)).toBeLessThan(ONE_MM);
+    expect(Math.abs(onMap.read.aimOffsetM! - flat.read.aimOffsetM!)).toBeLessThan(ONE_MM);
     expect(Math.abs(onMap.read.startLineDeg - flat.read.startLineDeg)).toBeLessThan(ONE_MM / p.distanceM * (180 / Math.PI));
     expect(Math.abs(onMap.read.launchSpeedMps - flat.read.launchSpeedMps)).toBeLessThan(1e-3);
     expect(Math.abs(onMap.read.rollPastM - flat.read.rollPastM)).toBeLessThan(ONE_MM);
@@ -97,14 +97,14 @@ test("a symmetric saddle gives mirror reads (derived: h(−x, y) = h(x, y))", ()
   const right = solveReadOnSurface({ surface, stimpFt: 10, ballM: [1.2, -2.5], holeM: [0.4, 1.5] });
   if (!left.ok || !right.ok) throw new Error("both must solve");
   expect(Math.abs(left.read.startLineDeg + right.read.startLineDeg)).toBeLessThan(1e-4);
-  expect(Math.abs(left.read.aimOffsetM + right.read.aimOffsetM)).toBeLessThan(ONE_MM);
+  expect(Math.abs(left.read.aimOffsetM! + right.read.aimOffsetM!)).toBeLessThan(ONE_MM);
   expect(Math.abs(left.read.launchSpeedMps - right.read.launchSpeedMps)).toBeLessThan(1e-4);
   expect(Math.abs(left.read.restM[0] + right.read.restM[0])).toBeLessThan(ONE_MM);
   expect(Math.abs(left.read.restM[1] - right.read.restM[1])).toBeLessThan(ONE_MM);
   // Along the symmetry line the read is straight.
   const middle = solveReadOnSurface({ surface, stimpFt: 10, ballM: [0, -2.5], holeM: [0, 1.5] });
   if (!middle.ok) throw new Error("must solve");
-  expect(Math.abs(middle.read.aimOffsetM)).toBeLessThan(ONE_MM);
+  expect(Math.abs(middle.read.aimOffsetM!)).toBeLessThan(ONE_MM);
 });
 
 describe("a bowl (h = c·r², derived energy bounds)", () => {

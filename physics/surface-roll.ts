@@ -1,10 +1,11 @@
 // The roll and the read on a green that is not a plane: the ball on a height map's interpolated surface.
-import { captureOutcome, type Capture } from "./capture";
+import { captureAtRim, type Capture, type RimCrossing } from "./capture";
+import { HOLE_RADIUS_M } from "./constants";
 import type { HeightSurface } from "./height-surface";
 import { integrateWithEvents, type OdeEvent } from "./integrate";
-import type { BreakDirection, Pace } from "./read-types";
+import { aimOf, cannotStop, flatPuttLengthM, type AimGiven, type BreakDirection, type Pace } from "./read-types";
 import { brentRoot } from "./root-find";
-import { DEFAULT_ROLL_MODEL, describeModel, maxStoppableSlopePct, resolveGreen, rollingDecelFromStimp, type ModelSummary, type RollModel } from "./roll-model";
+import { DEFAULT_ROLL_MODEL, describeModel, maxStoppableSlopePct, resolveGreen, stopsInPractice, rollingDecelFromStimp, type ModelSummary, type RollModel } from "./roll-model";
 import { solveRead } from "./solve-read";
 
 /** Inputs of a roll on a surface: ball and hole in the green's frame (m), launch speed (m/s), start line (°, + = right of the line to the hole). */
@@ -34,6 +35,8 @@ export interface SurfaceRoll {
     readonly atRest: boolean;
   };
   readonly capture: Capture;
+  /** Where the ball's centre crossed the hole's edge before its closest pass (null if it never did). */
+  readonly rim: RimCrossing | null;
   /** Samples along the path: time (s), speed (m/s), position (m) and height (m). */
   readonly samples: { readonly timeS: number[]; readonly speedMps: number[]; readonly xM: number[]; readonly yM: number[]; readonly heightM: number[] };
   /** Times the ball stopped where the slope was too steep to hold it and rolled on from rest. */
@@ -111,6 +114,17 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
     { value: (_t, y) => Math.hypot(y[2]!, y[3]!) - STOP_SPEED_FRACTION * vRef, direction: -1, terminal: true },
     { value: (_t, y) => Math.min(y[0]! - b.minX, b.maxX - y[0]!, y[1]! - b.minY, b.maxY - y[1]!), direction: -1, terminal: true },
     { value: (_t, y) => (y[0]! - holeM[0]) * y[2]! + (y[1]! - holeM[1]) * y[3]!, direction: 1, terminal: false },
+    {
+      // The ball's centre entering the hole's edge (scanned inside the steps that can reach it).
+      value: (_t, y) => (y[0]! - holeM[0]) ** 2 + (y[1]! - holeM[1]) ** 2 - HOLE_RADIUS_M ** 2,
+      direction: -1,
+      terminal: false,
+      scan: (a, c) => {
+        const ds = c[5]! - a[5]!;
+        const d = Math.min(Math.hypot(a[0]! - holeM[0], a[1]! - holeM[1]), Math.hypot(c[0]! - holeM[0], c[1]! - holeM[1]));
+        return d - ds / 2 > HOLE_RADIUS_M ? 0 : ds / (HOLE_RADIUS_M / 8);
+      },
+    },
   ];
   const lengthScale = Math.max((vRef * vRef) / (2 * ar), 1e-3);
   const a = 1e-9;
@@ -126,6 +140,7 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
     samples.heightM.push(surface.heightAt(y[0]!, y[1]!));
   };
   const approaches: number[][] = [];
+  const rimEntries: number[][] = [];
   let state = [ballM[0], ballM[1], input.launchSpeedMps * dir[0], input.launchSpeedMps * dir[1], 0, 0];
   record(state);
   let steps = 0;
@@ -148,7 +163,10 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
       steps += run.stats.steps;
       evaluations += run.stats.evaluations;
       for (let k = 1; k < run.samples.y.length; k++) record(run.samples.y[k]!);
-      for (const hit of run.hits) if (hit.event === 2) approaches.push(hit.y);
+      for (const hit of run.hits) {
+        if (hit.event === 2) approaches.push(hit.y);
+        else if (hit.event === 3) rimEntries.push(hit.y);
+      }
       if (run.terminalEvent === 1) {
         return noRest("off-map", run.y, "The ball rolls off the height map before it stops; extend the map or roll it more gently.");
       }
@@ -187,6 +205,14 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
   const side = sp > 0 ? (vy * dx - vx * dy) / sp : dx;
   const d = dist(closest);
   const speed = atRest ? 0 : Math.hypot(closest[2]!, closest[3]!);
+  let rim: RimCrossing | null = null;
+  if (d < HOLE_RADIUS_M && !atRest) {
+    for (const e of rimEntries) {
+      if (e[4]! > closest[4]!) break;
+      const es = Math.hypot(e[2]!, e[3]!);
+      rim = { offsetM: Math.abs((e[3]! * (e[0]! - holeM[0]) - e[2]! * (e[1]! - holeM[1])) / es), speedMps: es };
+    }
+  }
   return {
     ok: true,
     roll: {
@@ -196,7 +222,8 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
       rollLengthM: rest[5]!,
       rollTimeS: rest[4]!,
       closestApproach: { distanceM: d, offsetM: side >= 0 ? d : -d, speedMps: speed, alongPathM: closest[5]!, pointM: [closest[0]!, closest[1]!], atRest },
-      capture: captureOutcome(side >= 0 ? d : -d, speed),
+      capture: captureAtRim(d, rim, speed, dist(rest) < HOLE_RADIUS_M),
+      rim,
       samples,
       restarts,
       diagnostics: { steps, evaluations },
@@ -242,10 +269,13 @@ export interface SurfaceReadInput {
 export interface SurfaceRead {
   readonly launchSpeedMps: number;
   readonly startLineDeg: number;
-  readonly aimOffsetM: number;
+  readonly aimOffsetM: number | null;
+  readonly aimGiven: AimGiven;
+  readonly aimNote: string | null;
   readonly entrySpeedMps: number;
   readonly rollPastM: number;
-  readonly playsLikeM: number;
+  /** Length of the flat putt (same Stimp) needing the same launch speed with the same roll-past, m. */
+  readonly flatPuttLengthM: number;
   readonly breaks: BreakDirection;
   readonly capture: Capture;
   /** [x, y] in the green's frame from the ball to rest (hole covered). */
@@ -266,6 +296,9 @@ export interface NoSurfaceRead {
   readonly ok: false;
   readonly reason: "no-read" | "off-map" | "cannot-stop";
   readonly message: string;
+  /** For "cannot-stop": the steepest slope a ball can stop on at this Stimp (%) and the slope found (%). */
+  readonly maxStoppableSlopePct?: number;
+  readonly slopePct?: number;
 }
 
 /** `{ ok: true, read }`, or why no read exists. */
@@ -307,6 +340,16 @@ export function solveReadOnSurface(input: SurfaceReadInput): SurfaceReadResult {
     surface.gradientAt(ballM[0] + ((holeM[0] - ballM[0]) * k) / 8, ballM[1] + ((holeM[1] - ballM[1]) * k) / 8, grad);
     gx += grad[0] / 9;
     gy += grad[1] / 9;
+  }
+  // Too steep to stop where the putt finishes (at the hole) or on the mean slope along the line: the planar read's
+  // cannot-stop answer, with the same message and numbers.
+  surface.gradientAt(holeM[0], holeM[1], grad);
+  const holeSlopePct = 100 * Math.hypot(grad[0], grad[1]);
+  const steepest = Math.max(holeSlopePct, 100 * Math.hypot(gx, gy));
+  const steepGreen = resolveGreen({ slopePct: steepest, fallLineDeg: 0, stimpFt: input.stimpFt, model });
+  if (!stopsInPractice(steepGreen)) {
+    const planarAnswer = cannotStop(describeModel(steepGreen));
+    return { ok: false, reason: "cannot-stop", message: planarAnswer.message, maxStoppableSlopePct: planarAnswer.model.maxStoppableSlopePct, slopePct: steepest };
   }
   const slopePct = Math.min(100 * Math.hypot(gx, gy), 0.9 * maxStoppableSlopePct(input.stimpFt, model));
   const fallLineDeg = ((Math.atan2(-(gx * ex[0] + gy * ex[1]), -(gx * ey[0] + gy * ey[1])) * 180) / Math.PI + 360) % 360;
@@ -424,7 +467,12 @@ export function solveReadOnSurface(input: SurfaceReadInput): SurfaceReadResult {
 const v0Guess = (v: number) => (v > 0 ? v : 1);
 
 function cannotStopRead(maxSlope: number): NoSurfaceRead {
-  return { ok: false, reason: "cannot-stop", message: `The slope between ball and hole is too steep to read (steepest stoppable: ${maxSlope.toFixed(1)} %).` };
+  return {
+    ok: false,
+    reason: "cannot-stop",
+    message: `A ball cannot stop on the slope between ball and hole: the steepest stoppable slope at this Stimp is ${maxSlope.toFixed(1)} %.`,
+    maxStoppableSlopePct: maxSlope,
+  };
 }
 
 function finishSurfaceRead(
@@ -450,12 +498,12 @@ function finishSurfaceRead(
     read: {
       launchSpeedMps: v,
       startLineDeg,
-      aimOffsetM: D * Math.tan(s),
+      ...aimOf(startLineDeg, D),
       entrySpeedMps: c.speedMps,
       rollPastM: roll.rollLengthM - c.alongPathM,
-      playsLikeM: (v * v) / (2 * green.rollingDecelMps2),
+      flatPuttLengthM: flatPuttLengthM(v, green.rollingDecelMps2, roll.rollLengthM - c.alongPathM),
       breaks: Math.abs(startLineDeg) < 1e-6 ? "none" : startLineDeg < 0 ? "left-to-right" : "right-to-left",
-      capture: captureOutcome(0, c.speedMps),
+      capture: roll.capture,
       path: roll.path,
       puttFramePath: roll.path.map(toPutt),
       restM: roll.restM,

@@ -1,17 +1,24 @@
-export { DEFAULT_RATE_LIMITS, type AppConfig, type AppDeps } from "./deps";
+export { DEFAULT_RATE_LIMITS, type AppConfig, type AppDeps, type RateLimits } from "./deps";
 // createApp(deps) builds the Express app without listening, so tests can mount it.
 import express, { type Express, type RequestHandler } from "express";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import { toNodeHandler } from "better-auth/node";
 import type { AppDeps } from "./deps";
-import { apiNotFound, errorHandler, requireJsonBody } from "./middleware/errors";
+import { apiNotFound, errorHandler } from "./middleware/errors";
+import { authBodyGuard, reshapeAuthError, requireJsonBody, sameOriginWrites, type UploadRoute } from "./middleware/guards";
+import { limiter, mailLimiters } from "./middleware/rate-limit";
 import { forbidden } from "./lib/http-error";
-import { limiter } from "./middleware/rate-limit";
 import { loadSession } from "./middleware/session";
 import { apiRouters } from "./routes";
 
 const JSON_LIMIT = "100kb";
+
+/** The only routes that take multipart/form-data: the CSV uploads (paths below /api). */
+const UPLOAD_ROUTES: UploadRoute[] = [
+  { method: "POST", path: /^\/csv\/putts\/(preview|import)$/ },
+  { method: "PUT", path: /^\/greens\/[^/]+\/height-map$/ },
+];
 
 export function createApp(deps: AppDeps): Express {
   const { auth, logger, config } = deps;
@@ -47,20 +54,30 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
-  // Auth routes first: better-auth reads the raw body itself, so it sits before express.json().
+  // Every /api write that carries cookies comes from our own pages (403 otherwise), auth routes included.
+  app.use("/api", sameOriginWrites(config.trustedOrigins ?? [new URL(config.baseUrl).origin]));
+  const { mailPerRecipient, mailPerAccount, mailPerClientAddress } = config.rateLimits;
+  const mail = mailLimiters({ perRecipient: mailPerRecipient, perAccount: mailPerAccount, perClientAddress: mailPerClientAddress });
+
+  // better-auth: its body is parsed here first (JSON only, 100 kB, hostile text refused, user fields checked),
+  // better-auth reads the parsed body, and its errors are rewritten to our shape.
+  app.use("/api/auth", requireJsonBody(), express.json({ limit: JSON_LIMIT, strict: true }), authBodyGuard);
   const authLimiter = limiter(config.rateLimits.auth, "sign-in");
   const limitedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email", "/api/auth/request-password-reset", "/api/auth/reset-password"];
   app.use(limitedAuthPaths, authLimiter);
+  const mailingAuthPaths = ["/api/auth/sign-up/email", "/api/auth/send-verification-email", "/api/auth/request-password-reset"];
+  app.post(mailingAuthPaths, mail.byClientAddress, mail.byRecipient);
   // Admin changes go through /api/admin (audited, with the self-protection rules), never straight to the plugin.
   app.post("/api/auth/admin/{*any}", (_req, _res, next) => next(forbidden("Use the admin screens (/api/admin) for this; every admin action is recorded there.")));
-  const authHandler = toNodeHandler(auth);
+  const authHandler = toNodeHandler(async (request: Request) => reshapeAuthError(await auth.handler(request)));
   app.all("/api/auth/{*any}", authHandler as RequestHandler);
+  app.use("/api/auth", errorHandler(logger));
 
   const api = express.Router();
-  api.use(requireJsonBody);
+  api.use(requireJsonBody(UPLOAD_ROUTES));
   api.use(express.json({ limit: JSON_LIMIT, strict: true }));
   api.use(loadSession(auth));
-  for (const router of apiRouters(deps)) api.use(router);
+  for (const router of apiRouters({ ...deps, mail })) api.use(router);
   api.use(apiNotFound);
   api.use(errorHandler(logger));
   app.use("/api", api);

@@ -9,6 +9,9 @@ import * as schema from "./db/schema";
 import { linkMail, type Mailer } from "./lib/mailer";
 import type { Logger } from "./lib/logger";
 
+/** How long the signed session copy in a cookie is trusted before the database is asked again. */
+export const SESSION_CACHE_SECONDS = 5;
+
 export type AuthConfig = {
   db: Db;
   secret: string;
@@ -48,9 +51,10 @@ export function createAuth({ db, secret, baseUrl, trustedOrigins, mailer, logger
       defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
     },
     session: {
-      // A signed copy of the session in a cookie spares the database a session lookup on every request
-      // (putt logging on a phone is the hot path). A revoked session or a changed role is seen within a minute.
-      cookieCache: { enabled: true, maxAge: 60 },
+      // A signed copy of the session in a cookie spares the database a session lookup on most requests (putt
+      // logging on a phone is the hot path). It is trusted for 5 s only: a revoked session, a ban or a changed
+      // role reaches every route within 5 s.
+      cookieCache: { enabled: true, maxAge: SESSION_CACHE_SECONDS },
     },
     emailAndPassword: {
       enabled: true,
@@ -96,9 +100,15 @@ export function createAuth({ db, secret, baseUrl, trustedOrigins, mailer, logger
         },
         update: {
           before: async (data, ctx) => {
-            // A user editing their own record never changes their role or account type.
+            // A user editing their own record never changes their role or account type; through update-user
+            // not their verification or ban either (the auth body guard refuses those fields first).
             if (ctx?.path?.startsWith("/admin/")) return;
-            const { role: _role, accountType: _type, ...rest } = data;
+            const { role: _role, accountType: _type, ...kept } = data;
+            let rest: Record<string, unknown> = kept;
+            if (ctx?.path === "/update-user") {
+              const { emailVerified: _v, banned: _b, banReason: _r, banExpires: _e, ...safe } = kept as Record<string, unknown>;
+              rest = safe;
+            }
             return { data: rest };
           },
         },

@@ -5,16 +5,16 @@ import type { Database } from "./db/client";
 import type { Logger } from "./lib/logger";
 import type { Mailer } from "./lib/mailer";
 import type { SmtpFake } from "./lib/smtp-fake";
-import type { RateLimitConfig } from "./middleware/rate-limit";
+import type { MailLimiters, RateLimitConfig } from "./middleware/rate-limit";
 
 export type AppConfig = {
   baseUrl: string;
-  /** The local mailbox route exists (no real SMTP server configured). */
-  dev: boolean;
   /** Vite's dev server injects inline scripts: CSP is off in development only. */
   devCsp: boolean;
   trustProxy: boolean;
-  rateLimits: { auth: RateLimitConfig; reads: RateLimitConfig };
+  /** Origins whose pages may make signed-in changes (BASE_URL's, or localhost and 127.0.0.1 on the port). */
+  trustedOrigins?: string[];
+  rateLimits: RateLimits;
   /** Serves the client: built files in production, Vite middleware in development. */
   frontend?: (app: Express) => void;
 };
@@ -28,8 +28,28 @@ export type AppDeps = {
   config: AppConfig;
 };
 
-export const DEFAULT_RATE_LIMITS: AppConfig["rateLimits"] = {
-  auth: { windowMs: 60_000, limit: 30 },
-  reads: { windowMs: 60_000, limit: 600 },
+export type RateLimits = {
+  /** Sign-in, sign-up and password-reset attempts per client address. */
+  auth: RateLimitConfig;
+  /** Physics-heavy reads per client address. */
+  reads: RateLimitConfig;
+  /** E-mail (verification, password reset, invitation, assignment notice) to one recipient address. */
+  mailPerRecipient: RateLimitConfig;
+  /** E-mail sent at the request of one signed-in account (invitations, assignment notices). */
+  mailPerAccount: RateLimitConfig;
+  /** E-mail asked for by one client address while signed out (sign-up verification, resend, password reset). */
+  mailPerClientAddress: RateLimitConfig;
 };
 
+/** Every rate limit in one place (README, "Security"). */
+export const DEFAULT_RATE_LIMITS: RateLimits = {
+  auth: { windowMs: 60_000, limit: 30 },
+  reads: { windowMs: 60_000, limit: 600 },
+  mailPerRecipient: { windowMs: 60 * 60_000, limit: 5 },
+  mailPerAccount: { windowMs: 60 * 60_000, limit: 50 },
+  mailPerClientAddress: { windowMs: 60 * 60_000, limit: 30 },
+};
+
+
+/** What routers get: the app's deps plus the e-mail limiters every mailing route shares. */
+export type RouterDeps = AppDeps & { mail: MailLimiters };

@@ -13,6 +13,7 @@ import { seedDemo } from "./db/seed";
 import type { Env } from "./env";
 import { createLogger } from "./lib/logger";
 import { createMailer } from "./lib/mailer";
+import { makePrivate, usePrivateUmask } from "./lib/private-files";
 import { startSmtpFake, type SmtpFake } from "./lib/smtp-fake";
 
 export type StartOptions = {
@@ -21,7 +22,8 @@ export type StartOptions = {
   pgliteDir?: string;
   /** A PGlite data-directory dump to start from (tests: a migrated template). */
   pgliteLoad?: Blob;
-  rateLimits?: AppConfig["rateLimits"];
+  /** Overrides of DEFAULT_RATE_LIMITS (tests, benchmarks). */
+  rateLimits?: Partial<AppConfig["rateLimits"]>;
   frontend?: AppConfig["frontend"];
   /** Where log lines go (default stdout); tests read them to check nothing secret is logged. */
   logDestination?: { write: (line: string) => void };
@@ -41,13 +43,15 @@ function authSecret(env: Env): string {
   if (env.BETTER_AUTH_SECRET) return env.BETTER_AUTH_SECRET;
   // Keep one secret per data directory so sessions survive restarts without configuration.
   const file = path.join(env.DATA_DIR, ".auth-secret");
-  fs.mkdirSync(env.DATA_DIR, { recursive: true });
+  fs.mkdirSync(env.DATA_DIR, { recursive: true, mode: 0o700 });
   if (!fs.existsSync(file)) fs.writeFileSync(file, crypto.randomBytes(32).toString("hex"), { mode: 0o600 });
   return fs.readFileSync(file, "utf8").trim();
 }
 
 export async function start(options: StartOptions): Promise<Running> {
   const { env } = options;
+  usePrivateUmask();
+  const dataDirOnDisk = !env.DATABASE_URL && !(options.pgliteDir ?? "").startsWith("memory://");
   const logger = createLogger(env.LOG_LEVEL, options.logDestination);
   const releases: Array<() => Promise<void>> = [];
   try {
@@ -61,12 +65,17 @@ export async function start(options: StartOptions): Promise<Running> {
     }
     releases.unshift(() => database.close());
     await migrate(database);
+    // Files written before this version (or by a CLI under a looser umask) are made private too.
+    if (dataDirOnDisk) makePrivate(env.DATA_DIR);
 
     let smtpFake: SmtpFake | undefined;
     if (!env.SMTP_URL) {
       smtpFake = await startSmtpFake();
       releases.unshift(() => smtpFake!.close());
-      logger.info({ smtp: smtpFake.url }, "no SMTP_URL set: e-mail goes to the built-in local mailbox (/dev/mailbox)");
+      logger.warn(
+        { smtp: smtpFake.url },
+        "No SMTP_URL set: e-mail is NOT delivered; it is held in the local inbox, which only a signed-in admin can read at /dev/mailbox",
+      );
     }
     const mailer = createMailer(env.SMTP_URL ?? smtpFake!.url, env.MAIL_FROM, logger);
 
@@ -93,10 +102,10 @@ export async function start(options: StartOptions): Promise<Running> {
       smtpFake,
       config: {
         baseUrl,
-        dev: Boolean(smtpFake) || env.NODE_ENV !== "production",
         devCsp: env.NODE_ENV === "development",
         trustProxy: env.TRUST_PROXY === "1",
-        rateLimits: options.rateLimits ?? DEFAULT_RATE_LIMITS,
+        trustedOrigins,
+        rateLimits: { ...DEFAULT_RATE_LIMITS, ...options.rateLimits },
         frontend: options.frontend,
       },
     });
@@ -111,6 +120,8 @@ export async function start(options: StartOptions): Promise<Running> {
           server.closeIdleConnections();
         });
         for (const release of releases) await release();
+        // PGlite sets some of its files' modes itself (0644), past the umask: tighten once more on the way out.
+        if (dataDirOnDisk) makePrivate(env.DATA_DIR);
       })());
 
     logger.info({ url: baseUrl, db: database.kind }, "Borrowline is listening");

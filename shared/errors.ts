@@ -5,6 +5,8 @@ export type ApiErrorBody = {
     message: string;
     /** Field path (dot-separated) → why it was refused. */
     fields?: Record<string, string>;
+    /** Machine-readable facts beside the message, e.g. `{ reason: "cannot-stop", maxStoppableSlopePct: 7.86 }`. */
+    details?: Record<string, number | string>;
   };
 };
 

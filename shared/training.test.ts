@@ -6,7 +6,7 @@ import {
   TRAINING_LEVELS,
   TRAINING_LEVEL_IDS,
   evaluateAttempt,
-  launchSpeedForPlaysLike,
+  launchSpeedForFlatPutt,
   puttFitsLevel,
   readScore,
   startLineFromAimDeg,
@@ -107,17 +107,26 @@ test("the start line through an aim offset at the hole's distance", () => {
 });
 
 test("a flat putt's launch speed: a Stimp-exit ball (1.8288 m/s) rolls the Stimp reading on the flat", () => {
-  // Definition of the Stimpmeter reading (USGA Stimpmeter Instruction Booklet): 6 ft/s leaves the bar and rolls S.
-  expect(launchSpeedForPlaysLike(10 * 0.3048, 10)).toBeCloseTo(1.8288, 6);
+  // Definition of the Stimpmeter reading (docs/sources.md, Stimpmeter): 6 ft/s leaves the bar and rolls S. A flat
+  // putt of length S − 0.45 m played 0.45 m past needs exactly that speed.
+  expect(launchSpeedForFlatPutt(10 * 0.3048 - 0.45, 10)).toBeCloseTo(1.8288, 6);
+  expect(launchSpeedForFlatPutt(10 * 0.3048, 10, 0)).toBeCloseTo(1.8288, 6);
+});
+
+test("on a flat green the true flat-putt length is the putt's own length (derived)", () => {
+  const flat = evaluateAttempt({ ...sideHill, slopePct: 0 }, { aimOffsetM: 0, flatPuttLengthM: 3 });
+  if (!flat.ok) throw new Error("cannot stop");
+  expect(flat.truth.flatPuttLengthM).toBeCloseTo(3, 4);
+  expect(flat.yours.holed).toBe(true);
 });
 
 test("the true read of a putt scores 100 and drops", () => {
-  const first = evaluateAttempt(sideHill, { aimOffsetM: 0, playsLikeM: 3.45 });
+  const first = evaluateAttempt(sideHill, { aimOffsetM: 0, flatPuttLengthM: 3 });
   if (!first.ok) throw new Error("cannot stop");
   const truth = first.truth;
   // Falls to the right: the true aim is left of the hole.
   expect(truth.aimOffsetM).toBeLessThan(0);
-  const exact = evaluateAttempt(sideHill, { aimOffsetM: truth.aimOffsetM, playsLikeM: truth.playsLikeM });
+  const exact = evaluateAttempt(sideHill, { aimOffsetM: truth.aimOffsetM, flatPuttLengthM: truth.flatPuttLengthM });
   if (!exact.ok) throw new Error("cannot stop");
   expect(exact.score).toBe(100);
   expect(exact.yours.holed).toBe(true);
@@ -126,7 +135,7 @@ test("the true read of a putt scores 100 and drops", () => {
 });
 
 test("aiming straight at a side-hill putt misses low (to the right) and scores under 50", () => {
-  const r = evaluateAttempt(sideHill, { aimOffsetM: 0, playsLikeM: 3.45 });
+  const r = evaluateAttempt(sideHill, { aimOffsetM: 0, flatPuttLengthM: 3 });
   if (!r.ok) throw new Error("cannot stop");
   expect(r.yours.holed).toBe(false);
   expect(r.yours.finishSideM).toBeGreaterThan(0);
@@ -141,16 +150,16 @@ test("a roll-past guess stands for the stroke that rolls that far past on the tr
   expect(r.yours.launchSpeedMps).toBeCloseTo(r.truth.launchSpeedMps, 9);
 });
 
-test("a downhill putt plays shorter than its length, an uphill one longer", () => {
-  const down = evaluateAttempt({ ...sideHill, fallLineDeg: 0 }, { aimOffsetM: 0, playsLikeM: 3 });
-  const up = evaluateAttempt({ ...sideHill, fallLineDeg: 180 }, { aimOffsetM: 0, playsLikeM: 3 });
+test("a downhill putt needs a shorter flat putt than its length, an uphill one a longer", () => {
+  const down = evaluateAttempt({ ...sideHill, fallLineDeg: 0 }, { aimOffsetM: 0, flatPuttLengthM: 3 });
+  const up = evaluateAttempt({ ...sideHill, fallLineDeg: 180 }, { aimOffsetM: 0, flatPuttLengthM: 3 });
   if (!down.ok || !up.ok) throw new Error("cannot stop");
-  expect(down.truth.playsLikeM).toBeLessThan(3);
-  expect(up.truth.playsLikeM).toBeGreaterThan(3.45);
+  expect(down.truth.flatPuttLengthM).toBeLessThan(3);
+  expect(up.truth.flatPuttLengthM).toBeGreaterThan(3);
 });
 
 test("a green the ball cannot stop on is a value, not a throw", () => {
-  const r = evaluateAttempt({ ...sideHill, slopePct: 8, stimpFt: 13 }, { aimOffsetM: 0, playsLikeM: 3 });
+  const r = evaluateAttempt({ ...sideHill, slopePct: 8, stimpFt: 13 }, { aimOffsetM: 0, flatPuttLengthM: 3 });
   expect(r).toMatchObject({ ok: false, reason: "cannot-stop" });
 });
 
@@ -159,7 +168,7 @@ test("every level's steepest slope still stops a ball at its fastest Stimp", () 
     const l = TRAINING_LEVELS[id];
     const r = evaluateAttempt(
       { distanceM: l.distanceM[1], slopePct: l.slopePct[1], fallLineDeg: 0, stimpFt: l.stimpFt[1] },
-      { aimOffsetM: 0, playsLikeM: 1 },
+      { aimOffsetM: 0, flatPuttLengthM: 1 },
     );
     expect(r.ok).toBe(true);
   }

@@ -4,13 +4,14 @@
  * takes a score from the client).
  *
  * A player's read is an aim (the aim offset at the hole's distance, + = right of the hole) and a pace, given
- * as "plays like": the length of a flat putt their stroke would suit. Plays-like is the pace currency because
- * it does not depend on the slope, so judging how much the slope adds or takes away is part of the read. (A
- * roll-past guess is accepted too: it stands for the stroke that rolls that far past on the true line.)
+ * as a flat-putt length: the length of a flat putt (same Stimp, same 0.45 m past) their stroke would suit. The
+ * flat-putt length is the pace currency because it does not depend on the slope, so judging how much the slope
+ * adds or takes away is part of the read. (A roll-past guess is accepted too: it stands for the stroke that rolls
+ * that far past on the true line.)
  *
  * The true read is the physics model's read at the target pace of 0.45 m past (common practice).
  */
-import { playsLikeM as flatPuttLengthM, rollingDecelFromStimp, simulateRoll, solveRead, type BreakDirection } from "../physics";
+import { flatPuttLengthM as flatLength, rollingDecelFromStimp, simulateRoll, solveRead, type BreakDirection } from "../physics";
 import { metresToHoleWidths } from "./units";
 
 export const TRAINING_LEVEL_IDS = ["gentle", "club", "testing"] as const;
@@ -57,12 +58,12 @@ export const PACE_HALF_SCORE_FRACTION = 0.2;
 export const HOLED_MIN_SCORE = 80;
 
 export type TrainingPutt = { distanceM: number; slopePct: number; fallLineDeg: number; stimpFt: number };
-export type TrainingGuess = { aimOffsetM: number; playsLikeM: number } | { aimOffsetM: number; rollPastM: number };
+export type TrainingGuess = { aimOffsetM: number; flatPuttLengthM: number } | { aimOffsetM: number; rollPastM: number };
 
 export type ScoreInput = {
   /** Player's aim offset minus the true aim offset, m (signed; only the size counts). */
   aimErrorM: number;
-  /** Player's plays-like minus the true plays-like, m (signed; only the size counts). */
+  /** Player's flat-putt length minus the true one, m (signed; only the size counts). */
   paceErrorM: number;
   distanceM: number;
   /** Whether the player's own ball, rolled forward, drops. */
@@ -89,9 +90,12 @@ export function startLineFromAimDeg(aimOffsetM: number, distanceM: number): numb
   return (Math.atan2(aimOffsetM, distanceM) * 180) / Math.PI;
 }
 
-/** Launch speed (m/s) of a flat putt of this length at this Stimp: v = √(2·a_r·L) (constant deceleration). */
-export function launchSpeedForPlaysLike(playsLikeM: number, stimpFt: number): number {
-  return Math.sqrt(2 * rollingDecelFromStimp(stimpFt) * Math.max(0, playsLikeM));
+/**
+ * Launch speed (m/s) of a flat putt of this length at this Stimp played to finish `rollPastM` past (default the
+ * target 0.45 m): v = √(2·a_r·(L + P)) (constant deceleration, derived).
+ */
+export function launchSpeedForFlatPutt(flatPuttLengthM: number, stimpFt: number, rollPastM: number = TARGET_ROLL_PAST_M): number {
+  return Math.sqrt(2 * rollingDecelFromStimp(stimpFt) * Math.max(0, flatPuttLengthM + rollPastM));
 }
 
 export type TrueRead = {
@@ -99,7 +103,7 @@ export type TrueRead = {
   startLineDeg: number;
   launchSpeedMps: number;
   rollPastM: number;
-  playsLikeM: number;
+  flatPuttLengthM: number;
   entrySpeedMps: number;
   breaks: BreakDirection;
   path: [number, number][];
@@ -109,7 +113,7 @@ export type PlayerRoll = {
   aimOffsetM: number;
   startLineDeg: number;
   launchSpeedMps: number;
-  playsLikeM: number;
+  flatPuttLengthM: number;
   holed: boolean;
   outcome: "holed" | "lip-out" | "miss";
   /** Where the ball would stop with the hole covered, [x, y] m in the putt frame. */
@@ -140,16 +144,16 @@ export type Evaluation =
 /**
  * Evaluate one read: solve the true read at {@link TARGET_ROLL_PAST_M}, roll the player's ball forward from
  * their start line and launch speed (simulateRoll), and score it with {@link readScore}.
- * Aim error = player's aim offset − true aim offset; pace error = player's plays-like − true plays-like.
- * @example evaluateAttempt({ distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 }, { aimOffsetM: -0.2, playsLikeM: 3.4 })
+ * Aim error = player's aim offset − true aim offset; pace error = player's flat-putt length − the true one.
+ * @example evaluateAttempt({ distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 }, { aimOffsetM: -0.2, flatPuttLengthM: 3.4 })
  */
 export function evaluateAttempt(putt: TrainingPutt, guess: TrainingGuess): Evaluation {
   const solved = solveRead({ ...putt, pace: { rollPastM: TARGET_ROLL_PAST_M } });
   if (!solved.ok) return { ok: false, reason: "cannot-stop", message: solved.message };
   const t = solved.read;
   let launchSpeedMps: number;
-  if ("playsLikeM" in guess) {
-    launchSpeedMps = launchSpeedForPlaysLike(guess.playsLikeM, putt.stimpFt);
+  if ("flatPuttLengthM" in guess) {
+    launchSpeedMps = launchSpeedForFlatPutt(guess.flatPuttLengthM, putt.stimpFt);
   } else {
     const atPace = solveRead({ ...putt, pace: { rollPastM: guess.rollPastM } });
     if (!atPace.ok) return { ok: false, reason: "cannot-stop", message: atPace.message };
@@ -159,9 +163,12 @@ export function evaluateAttempt(putt: TrainingPutt, guess: TrainingGuess): Evalu
   const rolled = simulateRoll({ ...putt, launchSpeedMps, startLineDeg });
   if (!rolled.ok) return { ok: false, reason: "cannot-stop", message: rolled.message };
   const r = rolled.roll;
-  const playsLikeM = flatPuttLengthM(launchSpeedMps, putt.stimpFt);
-  const aimErrorM = guess.aimOffsetM - t.aimOffsetM;
-  const paceErrorM = playsLikeM - t.playsLikeM;
+  const flatPuttLengthM = flatLength(launchSpeedMps, rollingDecelFromStimp(putt.stimpFt), TARGET_ROLL_PAST_M);
+  // Training levels keep start lines modest, so the true aim is always an offset (D·tan of the start line).
+  const trueAimM = t.aimOffsetM ?? putt.distanceM * Math.tan((t.startLineDeg * Math.PI) / 180);
+  const aimErrorM = guess.aimOffsetM - trueAimM;
+  const trueFlatM = flatLength(t.launchSpeedMps, rollingDecelFromStimp(putt.stimpFt), TARGET_ROLL_PAST_M);
+  const paceErrorM = flatPuttLengthM - trueFlatM;
   const score = readScore({ aimErrorM, paceErrorM, distanceM: putt.distanceM, holed: r.capture.holed });
   return {
     ok: true,
@@ -170,11 +177,11 @@ export function evaluateAttempt(putt: TrainingPutt, guess: TrainingGuess): Evalu
     paceErrorM,
     aimErrorHoleWidths: metresToHoleWidths(Math.abs(aimErrorM)),
     truth: {
-      aimOffsetM: t.aimOffsetM,
+      aimOffsetM: trueAimM,
       startLineDeg: t.startLineDeg,
       launchSpeedMps: t.launchSpeedMps,
       rollPastM: t.rollPastM,
-      playsLikeM: t.playsLikeM,
+      flatPuttLengthM: trueFlatM,
       entrySpeedMps: t.entrySpeedMps,
       breaks: t.breaks,
       path: t.path,
@@ -183,7 +190,7 @@ export function evaluateAttempt(putt: TrainingPutt, guess: TrainingGuess): Evalu
       aimOffsetM: guess.aimOffsetM,
       startLineDeg,
       launchSpeedMps,
-      playsLikeM,
+      flatPuttLengthM,
       holed: r.capture.holed,
       outcome: r.capture.outcome,
       restM: r.restM,

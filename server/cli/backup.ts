@@ -2,6 +2,9 @@
 import { spawnSync } from "node:child_process";
 import { readEnv } from "../env";
 import { backupPglite } from "../db/backup";
+import { usePrivateUmask } from "../lib/private-files";
+
+usePrivateUmask();
 
 const env = readEnv();
 const stamp = new Date().toISOString().replace(/[:.]/g, "-");

@@ -6,6 +6,9 @@ import { readEnv } from "../env";
 import { start } from "../start";
 import { user } from "../db/schema";
 import { createAccount } from "../db/seed";
+import { usePrivateUmask } from "../lib/private-files";
+
+usePrivateUmask();
 
 const [emailArg, ...nameParts] = process.argv.slice(2);
 const email = z.email().safeParse(emailArg);

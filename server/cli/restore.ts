@@ -1,6 +1,9 @@
 // npm run restore -- <file>: brings a backup back into DATA_DIR (stop the server first). The current database is kept aside.
 import { readEnv } from "../env";
 import { restorePglite } from "../db/backup";
+import { usePrivateUmask } from "../lib/private-files";
+
+usePrivateUmask();
 
 const env = readEnv();
 const file = process.argv[2];

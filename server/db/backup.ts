@@ -2,6 +2,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { PGlite } from "@electric-sql/pglite";
+import { makePrivate } from "../lib/private-files";
 import { lockDataDir } from "./lock";
 
 export function pgliteDir(dataDir: string): string {
@@ -17,13 +18,17 @@ export async function backupPglite(dataDir: string, file: string): Promise<{ fil
     try {
       const dump = await db.dumpDataDir("gzip");
       const bytes = Buffer.from(await dump.arrayBuffer());
-      fs.mkdirSync(path.dirname(path.resolve(file)), { recursive: true });
+      fs.mkdirSync(path.dirname(path.resolve(file)), { recursive: true, mode: 0o700 });
       // Write to a temporary name first so a crash never leaves a half-written backup under the real name.
-      fs.writeFileSync(`${file}.partial`, bytes);
+      // The dump holds every account: its owner's alone, whatever the umask.
+      fs.writeFileSync(`${file}.partial`, bytes, { mode: 0o600 });
+      fs.chmodSync(`${file}.partial`, 0o600);
       fs.renameSync(`${file}.partial`, file);
       return { file, bytes: bytes.length };
     } finally {
       await db.close();
+      // PGlite sets some of its files' modes itself (0644), past the umask.
+      makePrivate(dataDir);
     }
   } finally {
     await release();
@@ -50,6 +55,7 @@ export async function restorePglite(dataDir: string, file: string, now = new Dat
       await db.query("select 1");
     } finally {
       await db.close();
+      makePrivate(dataDir);
     }
     return { keptAside };
   } finally {

@@ -5,12 +5,17 @@ export const DEMO_PASSWORD = "larkspur-demo";
 
 export const DEMO_ADMIN = { name: "Borrowline Admin", email: "admin@borrowline.example" };
 export const DEMO_COACH = { name: "Dana Whitcombe", email: "dana@larkspur.example" };
-/** skill: the distance (ft) at which this junior holes half their putts in week 1, and per-week gain. */
+/**
+ * Each junior's stroke, as the physics model's dispersion (start-line σ in degrees, pace σ as a fraction of the roll
+ * length) in week 1 and in the last week, improving steadily between; and the pace they putt to (roll-past, m).
+ * Their putts are rolled by the model (server/db/seed-putts.ts), read error and green included, so the make rates
+ * are those of the model: about the amateur rates of docs/sources.md, improving over the weeks. Invented values.
+ */
 export const DEMO_PLAYERS = [
-  { name: "Ivo Marsh", email: "ivo@larkspur.example", halfAtFt: 5.0, gainFtPerWeek: 0.45 },
-  { name: "Leena Park", email: "leena@larkspur.example", halfAtFt: 6.0, gainFtPerWeek: 0.3 },
-  { name: "Sam Okoro", email: "sam@larkspur.example", halfAtFt: 4.5, gainFtPerWeek: 0.5 },
-  { name: "Ruth Calder", email: "ruth@larkspur.example", halfAtFt: 5.5, gainFtPerWeek: 0.35 },
+  { name: "Ivo Marsh", email: "ivo@larkspur.example", angleDeg: [2.0, 1.5], pace: [0.2, 0.14], rollPastM: 0.4 },
+  { name: "Leena Park", email: "leena@larkspur.example", angleDeg: [1.7, 1.4], pace: [0.17, 0.13], rollPastM: 0.45 },
+  { name: "Sam Okoro", email: "sam@larkspur.example", angleDeg: [2.2, 1.6], pace: [0.22, 0.15], rollPastM: 0.35 },
+  { name: "Ruth Calder", email: "ruth@larkspur.example", angleDeg: [1.9, 1.5], pace: [0.19, 0.14], rollPastM: 0.5 },
 ] as const;
 
 export const DEMO_GREEN = {

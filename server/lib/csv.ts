@@ -68,15 +68,29 @@ export function parseCsv(text: string): ParsedCsv {
   return { headers, rows, delimiter: parsed.meta.delimiter, problems };
 }
 
-/** Undoes our own export's formula guard: a leading ' before = + - @ tab or CR. */
+/** A line that a spreadsheet could read as a formula: it starts with = + - @, a tab or a carriage return (OWASP, "CSV Injection"). */
+const FORMULA_LINE = /^'*[=+\-@\t\r]/m;
+
+/**
+ * Neutralises formulas on every line of a text cell: each line that starts with = + - @ tab or CR gets a
+ * leading ' (and a line our guard already marked gets one more, so import undoes it exactly).
+ * papaparse's `escapeFormulae` (boolean or RegExp) only prefixes the start of the whole cell, so a
+ * second line such as "=1+1\n=2+2" would pass; this runs before papaparse, which still does all the quoting.
+ */
+export function guardFormulae(cell: string): string {
+  return FORMULA_LINE.test(cell) ? cell.replace(/^(?='*[=+\-@\t\r])/gm, "'") : cell;
+}
+
+/** Undoes our own export's formula guard on every line: one leading ' before ('* and) = + - @ tab or CR. */
 export function unguard(cell: string): string {
-  return /^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell;
+  return cell.replace(/^'(?='*[=+\-@\t\r])/gm, "");
 }
 
 /**
- * Writes CSV. Text cells starting with = + - @ tab or CR get a leading ' (OWASP, "CSV Injection");
- * numbers and booleans are written as they are, so -0.3 stays a number (papaparse's escapeFormulae).
+ * Writes CSV with papaparse. Text cells have formulas neutralised on every line (guardFormulae); numbers and
+ * booleans are written as they are, so -0.3 stays a number.
  */
 export function toCsv(fields: string[], data: (string | number | boolean | null)[][]): string {
-  return Papa.unparse({ fields, data }, { escapeFormulae: true, newline: "\r\n" });
+  const guarded = data.map((row) => row.map((cell) => (typeof cell === "string" ? guardFormulae(cell) : cell)));
+  return Papa.unparse({ fields: fields.map(guardFormulae), data: guarded }, { escapeFormulae: false, newline: "\r\n" });
 }

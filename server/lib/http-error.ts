@@ -7,6 +7,8 @@ export class HttpError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fields?: Record<string, string>,
+    /** Machine-readable facts beside the message (numbers a client can show), e.g. a cannot-stop slope limit. */
+    readonly details?: Record<string, number | string>,
   ) {
     super(message);
     this.name = "HttpError";
@@ -21,3 +23,16 @@ export const notFound = (what = "That") => new HttpError(404, ERROR_CODES.notFou
 export const conflict = (message: string) => new HttpError(409, ERROR_CODES.conflict, message);
 export const unprocessable = (message: string, fields?: Record<string, string>) =>
   new HttpError(422, ERROR_CODES.unprocessable, message, fields);
+
+/**
+ * The 422 of a ball that cannot stop, the same for the planar and the surface read: the physics message, the field
+ * to change, and `details.reason: "cannot-stop"` with the steepest stoppable slope (%) as a number.
+ */
+export const cannotStopError = (message: string, field: string, stimpFt: number, maxStoppableSlopePct: number) =>
+  new HttpError(
+    422,
+    ERROR_CODES.unprocessable,
+    message,
+    { [field]: `too steep to stop a ball at Stimp ${stimpFt} ft (steepest: ${maxStoppableSlopePct.toFixed(1)} %)` },
+    { reason: "cannot-stop", maxStoppableSlopePct: Number(maxStoppableSlopePct.toFixed(3)) },
+  );

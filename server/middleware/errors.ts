@@ -18,7 +18,9 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     const e = err as BodyParserError;
     if (err instanceof HttpError) {
       status = err.status;
-      body = { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+      body = {
+        error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}), ...(err.details ? { details: err.details } : {}) },
+      };
     } else if (e?.type === "entity.parse.failed") {
       status = 400;
       body = { error: { code: ERROR_CODES.badRequest, message: "The request body is not valid JSON.", fields: { body: "malformed JSON" } } };
@@ -35,11 +37,3 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     res.status(status).json(body);
   };
 }
-
-/** API bodies are JSON: anything else with a body is refused with 415 before it reaches a handler. */
-export const requireJsonBody: RequestHandler = (req, _res, next) => {
-  const hasBody = Number(req.headers["content-length"] ?? 0) > 0 || req.headers["transfer-encoding"] !== undefined;
-  if (!hasBody || !["POST", "PUT", "PATCH"].includes(req.method)) return next();
-  if (req.is("application/json") || req.is("multipart/form-data")) return next();
-  throw new HttpError(415, ERROR_CODES.unsupportedMedia, "Send the request body as application/json.");
-};

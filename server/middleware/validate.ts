@@ -6,6 +6,10 @@ import { badRequest } from "../lib/http-error";
 export function zodFields(error: z.ZodError, root = "body"): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
+    // A field nobody may send (strict objects) is named itself, as well as its parent (the body, as before).
+    if (issue.code === "unrecognized_keys") {
+      for (const k of issue.keys) fields[[...issue.path, k].join(".")] ??= "Not a field that can be set here";
+    }
     const key = issue.path.length > 0 ? issue.path.join(".") : root;
     fields[key] ??= issue.message;
   }

@@ -1,6 +1,6 @@
 // Every resource router, in one list. A new resource adds one line here.
 import type { Router } from "express";
-import type { AppDeps } from "../deps";
+import type { RouterDeps } from "../deps";
 import { assignmentRoutes } from "./assignments/assignments.routes";
 import { coachRoutes } from "./coach/coach.routes";
 import { csvRoutes } from "./csv/csv.routes";
@@ -22,7 +22,7 @@ import { sessionsRoutes } from "./sessions/sessions.routes";
 import { statsRoutes } from "./stats/stats.routes";
 import { trainingRoutes } from "./training/training.routes";
 
-export function apiRouters(deps: AppDeps): Router[] {
+export function apiRouters(deps: RouterDeps): Router[] {
   const routers = [healthRoutes(deps), meRoutes(deps), readsRoutes(deps)];
   routers.push(squadRoutes(deps));
   routers.push(invitationRoutes(deps));
@@ -40,6 +40,6 @@ export function apiRouters(deps: AppDeps): Router[] {
   routers.push(heightMapRoutes(deps));
   routers.push(notesRoutes(deps));
   routers.push(adminRoutes(deps));
-  if (deps.config.dev) routers.push(devRoutes(deps));
+  if (deps.smtpFake) routers.push(devRoutes(deps));
   return routers;
 }

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { plainText } from "./text";
+import { multilineText, plainText } from "./text";
 import { isoDateSchema } from "./common";
 
 /** Stimp readings accepted, ft: the USGA survey's slowest category is 4′6″; tournament greens reach 14+. */
@@ -21,7 +21,7 @@ const oneWayFt = (name: string) =>
     .max(ONE_WAY_LIMITS.maxFt, `${name} must be at most ${ONE_WAY_LIMITS.maxFt} ft`);
 
 const name = plainText(80, 1, "Give the green a name");
-const locationNote = plainText(500);
+const locationNote = multilineText(500);
 
 export const greenInputSchema = z.object({ name, locationNote: locationNote.nullish() }).strict();
 export type GreenInput = z.infer<typeof greenInputSchema>;

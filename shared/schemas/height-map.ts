@@ -4,7 +4,7 @@ import { paceSchema, DEFAULT_ROLL_PAST_M, READ_LIMITS } from "./reads";
 /**
  * Limits of a height map. A green is rarely over 50 m across; 40 000 nodes is 200 × 200 (0.25 m spacing over
  * 50 m). Slopes over 15 % between neighbouring nodes are survey errors on a putting green (hole locations sit on
- * 1–3 %, common practice; references.md).
+ * 1–3 %, common practice; docs/sources.md, "Rolling on a slope").
  */
 export const HEIGHT_MAP_LIMITS = {
   spacingM: { min: 0.05, max: 5 },

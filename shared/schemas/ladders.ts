@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { multilineText, plainText } from "./text";
 import { BREAK_TYPES } from "./putts";
 
 export const FAIL_RULES = ["repeat", "drop-one", "restart"] as const;
@@ -18,7 +19,7 @@ export const rungSchema = z
     balls: z.number().int().min(1).max(50),
     passRule: passRuleSchema,
     breakType: z.enum(BREAK_TYPES).optional(),
-    note: z.string().trim().max(200).optional(),
+    note: plainText(200).optional(),
   })
   .strict()
   .superRefine((rung, ctx) => {
@@ -31,8 +32,8 @@ export type Rung = z.infer<typeof rungSchema>;
 
 export const ladderInputSchema = z
   .object({
-    name: z.string().trim().min(1, "Give the ladder a name").max(80),
-    description: z.string().trim().max(500).optional(),
+    name: plainText(80, 1, "Give the ladder a name"),
+    description: multilineText(500).optional(),
     failRule: z.enum(FAIL_RULES),
     rungs: z.array(rungSchema).min(1, "A ladder needs at least one rung").max(20),
   })
@@ -51,4 +52,4 @@ export type Ladder = LadderInput & {
 };
 
 /** POST /api/ladders/:id/copy: an optional new name (default: the original's, with " (copy)" for one's own). */
-export const ladderCopySchema = z.object({ name: z.string().trim().min(1, "Give the ladder a name").max(80).optional() }).strict();
+export const ladderCopySchema = z.object({ name: plainText(80, 1, "Give the ladder a name").optional() }).strict();

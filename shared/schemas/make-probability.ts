@@ -6,6 +6,8 @@ export const MAKE_PROBABILITY_LIMITS = {
   samples: { min: 100, max: 20_000, default: 10_000 },
   angleDeg: { min: 0, max: 15 },
   pace: { min: 0, max: 1 },
+  readSlopePct: { min: 0, max: 3 },
+  greenLateralM: { min: 0, max: 0.2 },
   seed: { min: 0, max: 2 ** 31 - 1 },
   secondPuttRiskMax: { min: 0, max: 1, default: 0.1 },
 } as const;
@@ -19,12 +21,16 @@ const bounded = (name: string, { min, max }: { min: number; max: number }, unit:
 
 /**
  * A dispersion, one σ each: `angleDeg` the start line (degrees), `pace` the σ of ln(actual ÷ intended roll length)
- * (0.10 ≈ the whole roll 10 % long or short).
+ * (0.10 ≈ the whole roll 10 % long or short); beyond the stroke, `readSlopePct` the read error (slope misjudged, %)
+ * and `greenLateralM` the green's sideways deviation after 1 m (m, growing as √L). The last two default to the
+ * model's (physics DEFAULT_READ_ERROR_SLOPE_PCT, DEFAULT_GREEN_LATERAL_M); all four 0 is a perfect putt.
  */
 export const dispersionSchema = z
   .object({
     angleDeg: bounded("angleDeg", MAKE_PROBABILITY_LIMITS.angleDeg, "°"),
     pace: bounded("pace", MAKE_PROBABILITY_LIMITS.pace, " (fraction of the roll length)"),
+    readSlopePct: bounded("readSlopePct", MAKE_PROBABILITY_LIMITS.readSlopePct, " %").optional(),
+    greenLateralM: bounded("greenLateralM", MAKE_PROBABILITY_LIMITS.greenLateralM, " m").optional(),
   })
   .strict();
 export type Dispersion = z.infer<typeof dispersionSchema>;
@@ -62,7 +68,8 @@ export type PaceResult = {
   makeProbabilityStandardError: number;
   /** A miss that leaves more than 1 m to the hole centre. */
   secondPuttOver1mProbability: number;
-  read: { aimOffsetM: number; startLineDeg: number; launchSpeedMps: number; entrySpeedMps: number };
+  /** aimOffsetM is null beyond a 60° start line (the start line is the answer then). */
+  read: { aimOffsetM: number | null; startLineDeg: number; launchSpeedMps: number; entrySpeedMps: number };
 };
 
 export type MakeProbabilityResponse = {
@@ -90,7 +97,22 @@ export type MakeProbabilityResponse = {
   defaultPace: PaceResult;
   /** The scan behind bestPace (fewer samples per pace): for a chart of make and risk against roll-past. */
   paceCurve: { rollPastM: number; makeProbability: number; secondPuttOver1mProbability: number }[];
-  dispersion: Dispersion & { source: "request" | "my-putts"; putts: number | null; usedPrior: boolean | null };
+  dispersion: Required<Dispersion> & { source: "request" | "my-putts"; putts: number | null; usedPrior: boolean | null };
+  /**
+   * The player's own logged make rate at about this length (0.8–1.25 × the distance), with its Wilson 95 % interval,
+   * and whether these odds fall outside it; null without a signed-in player's log. `why` says why odds and log may
+   * differ (the odds are for this read's slope and pace; the log has no slopes).
+   */
+  logged: {
+    fromM: number;
+    toM: number;
+    attempts: number;
+    made: number;
+    rate: number | null;
+    ci95: [number, number] | null;
+    oddsOutside: boolean;
+    why: string;
+  } | null;
   seed: number;
   samples: number;
   secondPuttRiskMax: number;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "./text";
 import { idSchema } from "./common";
 import { dateRangeFields, fromNotAfterTo, pageFields, playerIdSchema } from "./sessions";
 
@@ -83,7 +84,7 @@ export type Putt = {
 
 export const CSV_DISTANCE_UNITS = ["m", "ft"] as const;
 export const CSV_SHORT_UNITS = ["m", "cm", "ft", "in"] as const;
-const column = z.string().min(1, "Name a column").max(200);
+const column = plainText(200, 1, "Name a column");
 
 /**
  * Which CSV column (by its header text) holds what. date, distance and holed are required; distanceUnit

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "./text";
 
 /** Limits of the public read API (issue-agreed ranges; a flat-green Stimp of 4–16 ft covers real greens). */
 export const READ_LIMITS = {
@@ -44,10 +45,15 @@ export const BREAK_DIRECTIONS = ["left-to-right", "right-to-left", "none"] as co
 export type ReadResponse = {
   launchSpeedMps: number;
   startLineDeg: number;
-  aimOffsetM: number;
+  /** D·tan(start line), m (+ = right); null when the start line is wider than 60° (`aimGiven: "start-line"`). */
+  aimOffsetM: number | null;
+  /** "offset": the aim is given beside the hole; "start-line": only the start line, with `aimNote` in words. */
+  aimGiven: "offset" | "start-line";
+  aimNote: string | null;
   entrySpeedMps: number;
   rollPastM: number;
-  playsLikeM: number;
+  /** Length of a flat putt (same Stimp) needing the same launch speed with the same roll-past, m. */
+  flatPuttLengthM: number;
   breaks: (typeof BREAK_DIRECTIONS)[number];
   capture: { holed: boolean; outcome: "holed" | "lip-out" | "miss"; maxCaptureSpeedMps: number; marginMps: number };
   path: [number, number][];
@@ -58,7 +64,7 @@ export const saveReadSchema = z
   .object({
     read: readRequestSchema,
     greenId: z.string().uuid().optional(),
-    label: z.string().trim().max(80).optional(),
+    label: plainText(80).optional(),
   })
   .strict();
 export type SaveReadInput = z.infer<typeof saveReadSchema>;

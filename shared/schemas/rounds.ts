@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { plainText } from "./text";
+import { multilineText, plainText } from "./text";
 import { isoDateSchema } from "./common";
 import { distanceMSchema } from "./putts";
 import { dateRangeFields, fromNotAfterTo, pageFields, playerIdSchema } from "./sessions";
@@ -43,7 +43,7 @@ export const roundInputSchema = z
   .object({
     date: isoDateSchema,
     course: plainText(120).nullish(),
-    notes: plainText(2000).nullish(),
+    notes: multilineText(2000).nullish(),
     holes: z.array(roundHoleInputSchema).max(18, "A round has at most 18 holes").default([]),
   })
   .strict()

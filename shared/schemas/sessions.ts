@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { plainText } from "./text";
+import { multilineText, plainText } from "./text";
 import { idSchema, isoDateSchema } from "./common";
 import { stimpFtSchema } from "./greens";
 
@@ -25,7 +25,7 @@ const sessionFields = {
   stimpFt: stimpFtSchema.nullish(),
   conditions: plainText(200).nullish(),
   tags: z.array(tag).max(10, "At most 10 tags"),
-  notes: plainText(2000).nullish(),
+  notes: multilineText(2000).nullish(),
 };
 
 export const sessionInputSchema = z

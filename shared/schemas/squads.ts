@@ -1,12 +1,13 @@
 import { z } from "zod";
+import { multilineText, plainText } from "./text";
 
 /** A user id as better-auth makes them (not a uuid). */
 export const userIdSchema = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/, "Not a user id");
 
 export const squadInputSchema = z
   .object({
-    name: z.string().trim().min(1, "Give the squad a name").max(80),
-    description: z.string().trim().max(500).optional(),
+    name: plainText(80, 1, "Give the squad a name"),
+    description: multilineText(500).optional(),
   })
   .strict();
 export type SquadInput = z.infer<typeof squadInputSchema>;
@@ -14,8 +15,8 @@ export type SquadInput = z.infer<typeof squadInputSchema>;
 /** PATCH: any of the fields; a null description clears it. */
 export const squadPatchSchema = z
   .object({
-    name: z.string().trim().min(1, "Give the squad a name").max(80).optional(),
-    description: z.string().trim().max(500).nullable().optional(),
+    name: plainText(80, 1, "Give the squad a name").optional(),
+    description: multilineText(500).nullable().optional(),
   })
   .strict()
   .refine((p) => p.name !== undefined || p.description !== undefined, { message: "Send name or description", path: ["body"] });

@@ -11,8 +11,8 @@ const num = (name: string, min: number, max: number, unit: string) =>
 
 /** Aim offsets a player can set on the green, m (+ = right of the hole). */
 export const AIM_OFFSET_LIMIT_M = 8;
-/** Plays-like distances a player can set, m. */
-export const PLAYS_LIKE_LIMITS = { min: 0.1, max: 40 } as const;
+/** Flat-putt lengths a player can set, m. */
+export const FLAT_PUTT_LIMITS = { min: 0.1, max: 40 } as const;
 
 export const trainingLevelSchema = z.enum(TRAINING_LEVEL_IDS, { message: `level must be one of ${TRAINING_LEVEL_IDS.join(", ")}` });
 
@@ -27,13 +27,13 @@ export const trainingPuttSchema = z
 
 const aimOffsetM = num("aimOffsetM", -AIM_OFFSET_LIMIT_M, AIM_OFFSET_LIMIT_M, "m");
 
-/** The player's read: an aim offset and a pace, as plays-like (the trainer's) or roll-past. */
+/** The player's read: an aim offset and a pace, as a flat-putt length (the trainer's) or roll-past. */
 export const trainingGuessSchema = z.union(
   [
-    z.object({ aimOffsetM, playsLikeM: num("playsLikeM", PLAYS_LIKE_LIMITS.min, PLAYS_LIKE_LIMITS.max, "m") }).strict(),
+    z.object({ aimOffsetM, flatPuttLengthM: num("flatPuttLengthM", FLAT_PUTT_LIMITS.min, FLAT_PUTT_LIMITS.max, "m") }).strict(),
     z.object({ aimOffsetM, rollPastM: num("rollPastM", READ_LIMITS.rollPastM.min, READ_LIMITS.rollPastM.max, "m") }).strict(),
   ],
-  { message: "guess needs aimOffsetM and one of playsLikeM or rollPastM" },
+  { message: "guess needs aimOffsetM and one of flatPuttLengthM or rollPastM" },
 );
 
 /** POST /api/training/attempts. Strict: a score (or anything else) sent by the client is refused. */
@@ -73,7 +73,7 @@ export type CreateAttemptResponse = TrainingAttempt & {
   yours: {
     startLineDeg: number;
     launchSpeedMps: number;
-    playsLikeM: number;
+    flatPuttLengthM: number;
     holed: boolean;
     outcome: "holed" | "lip-out" | "miss";
     restM: [number, number];

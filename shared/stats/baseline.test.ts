@@ -6,7 +6,7 @@ import { interpolateBaseline, TOUR_EXPECTED_PUTTS, TOUR_ONE_PUTT_RATE, tourExpec
 const ft = (x: number) => x * METRES_PER_FOOT;
 
 test("the one-putt table is Broadie's, Every Shot Counts 2014 [secondary]: 8 ft ≈ 50 %, 10 ft 40 %, 20 ft 15 %", () => {
-  // Values as quoted in docs/references.md (secondary, attributed to Broadie 2014).
+  // Values as listed in docs/sources.md, "Make rates" (secondary, attributed to Broadie 2014).
   expect(tourOnePuttRate(ft(8))).toBeCloseTo(0.5, 12);
   expect(tourOnePuttRate(ft(10))).toBeCloseTo(0.4, 12);
   expect(tourOnePuttRate(ft(20))).toBeCloseTo(0.15, 12);

@@ -2,7 +2,7 @@ import { METRES_PER_FOOT } from "../units";
 
 /**
  * The published tour baseline the make rates are compared with. Two series with their own sources and
- * firmness (see docs/references.md): the one-putt percentage by distance and the average putts to hole out.
+ * firmness (see docs/sources.md, "Make rates"): the one-putt percentage by distance and the average putts to hole out.
  */
 export type BaselinePoint = { distanceFt: number; value: number };
 export type BaselineSeries = { label: string; source: string; firmness: "published" | "secondary" | "memory"; points: BaselinePoint[] };

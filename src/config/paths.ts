@@ -54,7 +54,7 @@ export const paths = {
   adminCoaching: { path: "/admin/coaching", href: () => "/admin/coaching" },
   adminAudit: { path: "/admin/audit", href: () => "/admin/audit" },
 
-  // development only
+  // the local inbox when no SMTP_URL is set (admins only)
   mailbox: { path: "/dev/mailbox", href: () => "/dev/mailbox" },
 } as const;
 

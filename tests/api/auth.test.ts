@@ -47,10 +47,14 @@ test("POST /api/auth/update-user cannot raise one's own role to admin", async ()
   const { client, email } = await signedUpClient(server, "player");
   const res = await client.post("/api/auth/update-user", { role: "admin" });
   expect(res.status).toBe(400);
-  await client.post("/api/auth/update-user", { accountType: "coach", name: "Renamed" });
+  // A body with a field the user may not set is refused whole (400 naming it): nothing of it is stored.
+  const typed = await client.post("/api/auth/update-user", { accountType: "coach", name: "Renamed" });
+  expect(typed.status).toBe(400);
+  expect(typed.body.error.fields).toHaveProperty("accountType");
   const [row] = await server.database.db.select().from(user).where(eq(user.email, email));
   expect(row?.role).toBe("player");
-  expect(row?.name).toBe("Renamed");
+  expect(row?.accountType).toBe("player");
+  expect(row?.name).toBe("Test Golfer");
   expect((await client.get("/api/me")).body.user.role).toBe("player");
 });
 

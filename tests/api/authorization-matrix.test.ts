@@ -190,7 +190,7 @@ beforeAll(async () => {
       p1.client.post("/api/training/attempts", {
         level: "club",
         putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
-        guess: { aimOffsetM: -0.15, playsLikeM: 3.5 },
+        guess: { aimOffsetM: -0.15, flatPuttLengthM: 3.5 },
       }),
     )
   ).id;
@@ -267,6 +267,8 @@ function ofP1(extra = ""): () => string {
 }
 
 const rows: Row[] = [
+  // The local mailbox (no SMTP_URL): every e-mail sent, reset and invitation links included — an admin's alone.
+  { route: "GET /api/dev/mail", target: "all sent mail", expect: { anon: 401, p1: 403, p2: 403, c1: 403, c2: 403, admin: 200 }, reveals: "s1Name", revealsTo: ["admin"] },
   // Public: the read calculator and the health check need no account.
   { route: "GET /api/health", target: "none", expect: PUBLIC },
   { route: "POST /api/reads/solve", target: "none", body: () => sideHill, expect: PUBLIC },
@@ -677,7 +679,7 @@ const rows: Row[] = [
     body: () => ({
       level: "club",
       putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
-      guess: { aimOffsetM: -0.1, playsLikeM: 3.4 },
+      guess: { aimOffsetM: -0.1, flatPuttLengthM: 3.4 },
     }),
     expect: SIGNED_IN(201),
   },

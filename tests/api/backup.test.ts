@@ -1,4 +1,5 @@
-import { execFileSync } from "node:child_process";
+import { execFile, execFileSync } from "node:child_process";
+import { promisify } from "node:util";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -8,6 +9,7 @@ import { start } from "../../server/start";
 import { TEST_PASSWORD, uniqueEmail } from "../factories/users";
 import { HttpClient } from "../setup/http";
 
+const execFileAsync = promisify(execFile);
 const root = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-backup-"));
 afterAll(() => fs.rmSync(root, { recursive: true, force: true }));
 // A clean environment: vitest itself sets variables (BASE_URL="/", MODE…) that are not the server's.
@@ -61,9 +63,11 @@ test.skipIf(Boolean(process.env.DATABASE_URL))("backup refuses while a server ho
   try {
     let message = "";
     try {
-      execFileSync("npm", ["run", "--silent", "backup", "--", path.join(root, "x.tar.gz")], { env: envFor(dataDir), stdio: "pipe" });
+      // Asynchronously: a synchronous child would block this process's event loop, so the server here could not
+      // keep its lock fresh and a slow start of the CLI (> 10 s on a busy machine) would find the lock stale.
+      await execFileAsync("npm", ["run", "--silent", "backup", "--", path.join(root, "x.tar.gz")], { env: envFor(dataDir) });
     } catch (err) {
-      message = String((err as { stderr?: Buffer }).stderr);
+      message = String((err as { stderr?: string }).stderr);
     }
     expect(message).toMatch(/already using the data directory/);
   } finally {

@@ -1,5 +1,7 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
 import Papa from "papaparse";
+import { eq } from "drizzle-orm";
+import { greens } from "../../server/db/schema";
 import { METRES_PER_FOOT, METRES_PER_INCH } from "../../shared/units";
 import { signedUpClient } from "../factories/users";
 import { HttpClient } from "../setup/http";
@@ -193,6 +195,33 @@ test("GET /api/csv/sessions/export neutralises text cells and keeps numbers", as
   expect(header).toEqual(["date", "green", "stimp_ft", "conditions", "tags", "notes", "putts", "holed", "session_id"]);
   expect(row!.slice(0, 8)).toEqual(["2024-05-01", "", "9.5", "'-wet after rain", "'+drill; dry", "'@SUM(A1:A9)", "2", "1"]);
   expect(((await client.get("/api/csv/sessions/export?from=2024-06-01")).body as string).trim()).toBe("date,green,stimp_ft,conditions,tags,notes,putts,holed,session_id");
+});
+
+/** Every line of every cell: none may start with = + - @ tab or CR (OWASP, "CSV Injection"). */
+function formulaLines(csv: string): string[] {
+  const cells = Papa.parse<string[]>(csv, { skipEmptyLines: true }).data.flat();
+  return cells.flatMap((cell) => cell.split(/\r\n|\n|\r/).filter((line) => /^[=+\-@\t\r]/.test(line)));
+}
+
+test("CSV exports neutralise formulas on every line of a multi-line cell, (a legacy multi-line green name too)", async () => {
+  const { client } = await signedUpClient(server);
+  const notes = "first line\n=1+1\n+2\r\n@SUM(A1:A9)\n-3 short";
+  const s = await newSession(client, { date: "2024-05-01", notes });
+  await addPutts(client, s, [{ distanceM: 1, holed: true }]);
+  // A green named over several lines before names became single-line text (stored directly).
+  const green = (await client.post("/api/greens", { name: "Top" })).body.id as string;
+  await server.database.db.update(greens).set({ name: "=1+1\n=2+2\n'=3" }).where(eq(greens.id, green));
+  const s2 = await newSession(client, { date: "2024-05-02", greenId: green });
+  await addPutts(client, s2, [{ distanceM: 2, holed: false }]);
+
+  const sessionsCsv = (await client.get("/api/csv/sessions/export?from=2024-01-01")).body as string;
+  expect(formulaLines(sessionsCsv)).toEqual([]);
+  const row = Papa.parse<string[]>(sessionsCsv, { skipEmptyLines: true }).data.find((r) => r[0] === "2024-05-01")!;
+  expect(row[5]).toBe("first line\n'=1+1\n'+2\r\n'@SUM(A1:A9)\n'-3 short");
+
+  const puttsCsv = (await client.get("/api/csv/putts/export")).body as string;
+  expect(formulaLines(puttsCsv)).toEqual([]);
+  expect(puttsCsv).toContain("\"'=1+1\n'=2+2\n''=3\"");
 });
 
 test("CSV export of another player: 403 for a player, allowed for their squad's coach; signed out every CSV route is 401", async () => {

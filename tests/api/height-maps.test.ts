@@ -182,3 +182,18 @@ test("POST /api/greens/:id/reads/solve on the saddle, and its 400s and 404s", as
   expect(bad.status).toBe(400);
   expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(["ball", "stimpFt"]));
 });
+
+test("POST /api/greens/:id/reads/solve on a surface too steep to stop answers the planar read's cannot-stop 422 (issue 13)", async () => {
+  const a = await signedUpClient(server);
+  const id = await greenOf(a.id);
+  // An 8 % plane: steeper than the ≈ 7.86 % a ball can stop on at Stimp 10 (docs/sources.md, derived).
+  expect((await put(a.client, id, csvForm(planeCsv(0.08, 0, 21, 0.5), { spacingM: "0.5" }))).status).toBe(200);
+  const onMap = await a.client.post(`/api/greens/${id}/reads/solve`, { ball: [2, 2], hole: [2, 6], stimpFt: 10 });
+  const planar = await a.client.post("/api/reads/solve", { distanceM: 4, slopePct: 8, fallLineDeg: 90, stimpFt: 10 });
+  expect(planar.status).toBe(422);
+  expect(onMap.status).toBe(422);
+  expect(onMap.body.error.code).toBe(planar.body.error.code);
+  expect(onMap.body.error.message).toMatch(/cannot stop/i);
+  expect(onMap.body.error.details).toEqual(planar.body.error.details);
+  expect(onMap.body.error.details.maxStoppableSlopePct).toBeCloseTo(7.86, 1);
+});

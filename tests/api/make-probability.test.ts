@@ -136,11 +136,32 @@ test("POST /api/reads/make-probability with no dispersion uses mine, from my put
   expect(mine.body.dispersion.pace).toBe(est.body.pace.estimate);
 });
 
+const ZERO = { angleDeg: 0, pace: 0, readSlopePct: 0, greenLateralM: 0 };
+
 test("POST /api/reads/make-probability: no dispersion at all holes a holed read every time", async () => {
   const a = await signedUpClient(server);
-  const res = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: { angleDeg: 0, pace: 0 }, samples: 200, seed: 3 });
+  const res = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: ZERO, samples: 200, seed: 3 });
   expect(res.body.makeProbability).toBe(1);
   expect(res.body.secondPuttOver1mProbability).toBe(0);
+  expect(res.body.dispersion).toMatchObject(ZERO);
+});
+
+test("POST /api/reads/make-probability: the issue 13 repro (6 m, 1.5 %, 135°, Stimp 11, 0.1 m past) is holed every time with no dispersion", async () => {
+  const a = await signedUpClient(server);
+  const read = { distanceM: 6, slopePct: 1.5, fallLineDeg: 135, stimpFt: 11, pace: { rollPastM: 0.1 } };
+  const res = await a.client.post("/api/reads/make-probability", { read, dispersion: ZERO, samples: 200, seed: 3 });
+  expect(res.status).toBe(200);
+  expect(res.body.makeProbability).toBe(1);
+});
+
+test("POST /api/reads/make-probability: the read error and the green's imperfection cost makes (defaults applied and reported)", async () => {
+  const a = await signedUpClient(server);
+  const stroke = { angleDeg: 0.8, pace: 0.08 };
+  const withDefaults = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: stroke, samples: 4000, seed: 9 });
+  const perfect = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: { ...stroke, readSlopePct: 0, greenLateralM: 0 }, samples: 4000, seed: 9 });
+  expect(withDefaults.body.dispersion.readSlopePct).toBeGreaterThan(0);
+  expect(withDefaults.body.dispersion.greenLateralM).toBeGreaterThan(0);
+  expect(withDefaults.body.makeProbability).toBeLessThan(perfect.body.makeProbability);
 });
 
 test.each([
@@ -170,4 +191,21 @@ test("POST /api/reads/make-probability answers 422 when the ball cannot stop", a
   const res = await a.client.post("/api/reads/make-probability", { read: { ...sideHill, slopePct: 8 }, dispersion: { angleDeg: 1, pace: 0.1 }, samples: 200 });
   expect(res.status).toBe(422);
   expect(res.body.error.fields).toHaveProperty("read.slopePct");
+});
+
+test("POST /api/reads/make-probability reports my logged rate at about this length and says why the odds differ when they fall outside it", async () => {
+  const a = await signedUpClient(server);
+  const none = await a.client.post("/api/reads/make-probability", { read: sideHill, samples: 500, seed: 1 });
+  expect(none.body.logged).toMatchObject({ attempts: 0, rate: null, ci95: null, oddsOutside: false });
+  // 40 putts from 3 m, all holed: a logged rate the odds of a 2 % side-hill 3 m putt cannot match.
+  const db = server.database.db;
+  const [session] = await db.insert(practiceSessions).values({ playerId: a.id, date: "2026-04-02", stimpFt: 10 }).returning({ id: practiceSessions.id });
+  await db.insert(putts).values(Array.from({ length: 40 }, () => ({ sessionId: session!.id, playerId: a.id, distanceM: 3, holed: true })));
+  const res = await a.client.post("/api/reads/make-probability", { read: sideHill, samples: 2000, seed: 1 });
+  expect(res.body.logged).toMatchObject({ attempts: 40, made: 40, rate: 1 });
+  // Wilson 95 % for 40/40 starts near 0.91 (Wilson 1927, derived): the odds lie below it, and the answer says why.
+  expect(res.body.logged.ci95[0]).toBeGreaterThan(0.9);
+  expect(res.body.makeProbability).toBeLessThan(res.body.logged.ci95[0]);
+  expect(res.body.logged.oddsOutside).toBe(true);
+  expect(res.body.logged.why).toMatch(/slope/);
 });

@@ -30,7 +30,8 @@ test("POST /api/reads/solve answers a full read without an account", async () =>
   expect(holeWidths).toBeLessThan(6);
   expect(r.rollPastM).toBeCloseTo(0.45, 2);
   expect(r.capture.holed).toBe(true);
-  expect(r.playsLikeM).toBeGreaterThan(3);
+  expect(r.flatPuttLengthM).toBeGreaterThan(0);
+  expect(r.aimGiven).toBe("offset");
   expect(r.path.length).toBeGreaterThan(10);
   expect(r.path[0]).toEqual([0, 0]);
   expect(r.model).toMatchObject({ v0Mps: expect.any(Number), rollingDecelMps2: expect.any(Number) });
@@ -74,7 +75,7 @@ test.each([
 });
 
 test("POST /api/reads/solve answers 422 when the ball cannot stop on that slope", async () => {
-  // Stoppable only while (5/7)·g·sinθ < a_r: about 7.9 % at Stimp 10 in this model (references.md, derived).
+  // Stoppable only while (5/7)·g·sinθ < a_r: about 7.9 % at Stimp 10 in this model (docs/sources.md, derived).
   const res = await anon.post("/api/reads/solve", { ...sideHill, slopePct: 8, stimpFt: 10 });
   expect(res.status).toBe(422);
   expect(res.body.error.message).toMatch(/cannot stop/i);
@@ -130,4 +131,30 @@ test("the public read API is rate-limited with a 429, Retry-After and the error 
   } finally {
     await limited.stop();
   }
+});
+
+test("POST /api/reads/chart and /solve give the start line, not an offset, past a 60° start line (issue 13: was 1576 cm R)", async () => {
+  // 3 m, 7.7 % falling at 30°, Stimp 10, dying pace: the ball must start more than 90° left.
+  const res = await anon.post("/api/reads/chart", { slopePct: 7.7, stimpFt: 10, pace: { rollPastM: 0 }, distances: [3], fallLineDegs: [30] });
+  expect(res.status).toBe(200);
+  const cell = res.body.cells[0][0];
+  expect(Math.abs(cell.startLineDeg)).toBeGreaterThan(90);
+  expect(cell.aimGiven).toBe("start-line");
+  expect(cell.aimOffsetM).toBeNull();
+  const one = await anon.post("/api/reads/solve", { distanceM: 3, slopePct: 7.7, fallLineDeg: 30, stimpFt: 10, pace: { rollPastM: 0 } });
+  expect(one.status).toBe(200);
+  expect(one.body.aimGiven).toBe("start-line");
+  expect(one.body.aimOffsetM).toBeNull();
+  expect(one.body.aimNote).toMatch(/^Start the ball \d+° left of the line to the hole/);
+  const gentle = await anon.post("/api/reads/solve", sideHill);
+  expect(gentle.body.aimGiven).toBe("offset");
+  expect(gentle.body.aimNote).toBeNull();
+});
+
+test("POST /api/reads/solve: the cannot-stop 422 carries the steepest stoppable slope as a number", async () => {
+  const res = await anon.post("/api/reads/solve", { ...sideHill, slopePct: 8, stimpFt: 10 });
+  expect(res.status).toBe(422);
+  expect(res.body.error.details.reason).toBe("cannot-stop");
+  // (7/5)·a_r/g = sinθ at the limit: ≈ 7.86 % at Stimp 10 (docs/sources.md, derived).
+  expect(res.body.error.details.maxStoppableSlopePct).toBeCloseTo(7.86, 1);
 });

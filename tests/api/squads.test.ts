@@ -2,7 +2,7 @@ import crypto from "node:crypto";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { eq } from "drizzle-orm";
 import { invitations, squadMembers } from "../../server/db/schema";
-import { coachWithSquad, createSquad, invitationTokenFor, joinedPlayer } from "../factories/coaching";
+import { coachWithSquad, confirmEmail, createSquad, invitationTokenFor, joinedPlayer } from "../factories/coaching";
 import { TEST_PASSWORD, signedUpClient, uniqueEmail } from "../factories/users";
 import { HttpClient } from "../setup/http";
 import { startTestServer, type TestServer } from "../setup/server";
@@ -126,6 +126,16 @@ test("the invitation e-mail reaches the SMTP fake and a newly signed-up player a
   expect((await anon.post(`/api/invitations/${token}/accept`)).status).toBe(401);
   const signUp = await anon.post("/api/auth/sign-up/email", { name: "New Junior", email, password: TEST_PASSWORD, accountType: "player" });
   expect(signUp.status).toBe(200);
+  // Not before the e-mail is confirmed: whoever signs up with an address must show they receive its mail.
+  const unconfirmed = await anon.post(`/api/invitations/${token}/accept`);
+  expect(unconfirmed.status).toBe(403);
+  expect(unconfirmed.body.error.message).toMatch(/Confirm your e-mail/);
+  expect((await coach.client.get(`/api/squads/${squadId}`)).body.members).toEqual([]);
+  const verification = await server.smtpFake!.waitFor((m) => m.to.includes(email) && m.subject.startsWith("Confirm"));
+  const verifyUrl = verification.text.match(/https?:\/\/\S+verify-email\S+/)?.[0];
+  expect(verifyUrl).toBeDefined();
+  const verified = await anon.get(new URL(verifyUrl!).pathname + new URL(verifyUrl!).search);
+  expect(verified.status).toBeLessThan(400);
   const accepted = await anon.post(`/api/invitations/${token}/accept`);
   expect(accepted.status).toBe(200);
   expect(accepted.body).toMatchObject({ squad: { id: squadId, name: "Heath juniors", coach: { name: "Dana Coach" } } });
@@ -141,6 +151,7 @@ test("the invitation e-mail reaches the SMTP fake and a newly signed-up player a
 test("POST /api/invitations/:token/accept works once", async () => {
   const { coach, squadId } = await coachWithSquad(server, 0);
   const player = await signedUpClient(server, "player");
+  await confirmEmail(server, player.email);
   const { token } = await invite(coach.client, squadId, player.email);
   expect((await player.client.post(`/api/invitations/${token}/accept`)).status).toBe(200);
   const again = await player.client.post(`/api/invitations/${token}/accept`);
@@ -178,6 +189,7 @@ test("DELETE /api/invitations/:id revokes: the token then fails; an accepted one
   expect((await coach.client.get(`/api/squads/${squadId}`)).body.members).toEqual([]);
 
   const other = await signedUpClient(server, "player");
+  await confirmEmail(server, other.email);
   const second = await invite(coach.client, squadId, other.email);
   expect((await other.client.post(`/api/invitations/${second.token}/accept`)).status).toBe(200);
   const late = await coach.client.delete(`/api/invitations/${second.id}`);
@@ -187,8 +199,10 @@ test("DELETE /api/invitations/:id revokes: the token then fails; an accepted one
 test("POST /api/invitations/:token/accept refuses another e-mail address and a coach account, and the link stays usable", async () => {
   const { coach, squadId } = await coachWithSquad(server, 0);
   const invited = await signedUpClient(server, "player");
+  await confirmEmail(server, invited.email);
   const { token } = await invite(coach.client, squadId, invited.email);
   const stranger = await signedUpClient(server, "player");
+  await confirmEmail(server, stranger.email);
   const wrong = await stranger.client.post(`/api/invitations/${token}/accept`);
   expect(wrong.status).toBe(403);
   expect(wrong.body.error.message).toContain(invited.email);

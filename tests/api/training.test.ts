@@ -15,7 +15,7 @@ afterAll(async () => {
 });
 
 const putt = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 };
-const attempt = { level: "club", putt, guess: { aimOffsetM: -0.15, playsLikeM: 3.5 } };
+const attempt = { level: "club", putt, guess: { aimOffsetM: -0.15, flatPuttLengthM: 3.5 } };
 
 test("POST /api/training/attempts scores the read on the server and keeps it", async () => {
   const { client } = await signedUpClient(server);
@@ -35,8 +35,8 @@ test("POST /api/training/attempts scores the read on the server and keeps it", a
 test("POST /api/training/attempts: the true read scores 100", async () => {
   const { client } = await signedUpClient(server);
   const first = await client.post("/api/training/attempts", attempt);
-  const { aimOffsetM, playsLikeM } = first.body.truth;
-  const exact = await client.post("/api/training/attempts", { ...attempt, guess: { aimOffsetM, playsLikeM } });
+  const { aimOffsetM, flatPuttLengthM } = first.body.truth;
+  const exact = await client.post("/api/training/attempts", { ...attempt, guess: { aimOffsetM, flatPuttLengthM } });
   expect(exact.status).toBe(201);
   expect(exact.body.score).toBe(100);
   expect(exact.body.yours.holed).toBe(true);
@@ -63,8 +63,8 @@ test.each([
   ["putt.fallLineDeg", { putt: { ...putt, fallLineDeg: 400 } }],
   ["putt.extra", { putt: { ...putt, extra: 1 } }],
   ["guess", { guess: { aimOffsetM: 0 } }],
-  ["guess", { guess: { aimOffsetM: 9, playsLikeM: 3 } }],
-  ["guess", { guess: { aimOffsetM: 0, playsLikeM: 0 } }],
+  ["guess", { guess: { aimOffsetM: 9, flatPuttLengthM: 3 } }],
+  ["guess", { guess: { aimOffsetM: 0, flatPuttLengthM: 0 } }],
 ])("POST /api/training/attempts refuses bad %s with a 400 naming the field", async (field, change) => {
   const { client } = await signedUpClient(server);
   const res = await client.post("/api/training/attempts", { ...attempt, ...change });
@@ -78,7 +78,7 @@ test("GET /api/training/attempts lists mine only, newest first, up to the limit"
   const a = await signedUpClient(server);
   const b = await signedUpClient(server);
   for (const aimOffsetM of [-0.3, -0.2, -0.1]) {
-    expect((await a.client.post("/api/training/attempts", { ...attempt, guess: { aimOffsetM, playsLikeM: 3.4 } })).status).toBe(201);
+    expect((await a.client.post("/api/training/attempts", { ...attempt, guess: { aimOffsetM, flatPuttLengthM: 3.4 } })).status).toBe(201);
   }
   expect((await b.client.post("/api/training/attempts", attempt)).status).toBe(201);
 

@@ -80,7 +80,7 @@ test("a player uploads the saddle through the UI, taps the ball and the hole, an
     const aim = page.getByTestId("surface-aim");
     await aim.waitFor({ timeout: 20_000 });
     expect(await aim.textContent()).toMatch(/^Aim (\d+(\.\d)? in (left|right) of the hole|straight at the hole)$/);
-    expect(await page.getByTestId("surface-plays-like").textContent()).toMatch(/ft.* on the flat/);
+    expect(await page.getByTestId("surface-flat-putt").textContent()).toMatch(/as hard as a flat .*ft.* putt/);
     await page.getByTestId("surface-line").waitFor({ state: "attached" });
     expect(await page.getByLabel("Stimp (ft)").inputValue()).toBe("9.5");
 

@@ -26,7 +26,7 @@ test("a signed-out golfer reads a putt on a phone, and the same link in a fresh 
   const phone = await openBrowser(PHONE);
   let shared = "";
   let headline = "";
-  let playsLike = "";
+  let flatPutt = "";
   try {
     const { page } = phone;
     await page.goto(`${server.url}/read`);
@@ -52,8 +52,8 @@ test("a signed-out golfer reads a putt on a phone, and the same link in a fresh 
       .catch(() => {});
     headline = (await page.getByTestId("aim-headline").textContent()) ?? "";
     expect(headline).toMatch(/outside the right edge/);
-    playsLike = (await page.getByText(/^Plays like/).textContent()) ?? "";
-    expect(playsLike).toMatch(/Plays like an? \d+ ft( \d+ in)? putt on the flat/);
+    flatPutt = (await page.getByText(/^Hit it as hard as a flat/).textContent()) ?? "";
+    expect(flatPutt).toMatch(/^Hit it as hard as a flat \d+ ft( \d+ in)? putt$/);
     shared = page.url();
     await screenshot(page, "read-phone-20ft-uphill-left");
     expect(phone.errors.filter(unexpected)).toEqual([]);
@@ -70,7 +70,7 @@ test("a signed-out golfer reads a putt on a phone, and the same link in a fresh 
     expect(await page.getByRole("slider", { name: "Which way the green falls" }).getAttribute("aria-valuenow")).toBe("225");
     await page.getByText("Breaks right to left", { exact: true }).waitFor();
     expect(await page.getByTestId("aim-headline").textContent()).toBe(headline);
-    expect(await page.getByText(/^Plays like/).textContent()).toBe(playsLike);
+    expect(await page.getByText(/^Hit it as hard as a flat/).textContent()).toBe(flatPutt);
     expect(new URL(page.url()).search).toBe(new URL(shared).search);
     await screenshot(page, "read-desktop-shared-link");
     expect(desktop.errors.filter(unexpected)).toEqual([]);

@@ -191,12 +191,12 @@ test("a training round is scored: set the aim and the pace, reveal, and the scor
 
     await page.getByLabel("Aim offset (in)").fill("10");
     await page.getByLabel("Side of the hole").selectOption("left");
-    await page.getByLabel("Plays like (ft)").fill("12");
+    await page.getByLabel("Flat-putt length (ft)").fill("12");
     await page.getByRole("button", { name: "Reveal the line" }).click();
     const score = page.getByLabel(/^Score \d+ out of 100$/);
     await score.waitFor();
     const shown = Number(/Score (\d+)/.exec((await score.getAttribute("aria-label")) ?? "")![1]);
-    const expected = evaluateAttempt(roundPutt("club", 42, 0), { aimOffsetM: -0.254, playsLikeM: 12 * 0.3048 });
+    const expected = evaluateAttempt(roundPutt("club", 42, 0), { aimOffsetM: -0.254, flatPuttLengthM: 12 * 0.3048 });
     if (!expected.ok) throw new Error("cannot stop");
     expect(shown).toBe(expected.score);
     await page.getByText(/sign in to keep a history/i).waitFor();

@@ -1,5 +1,7 @@
 // Coaching set-ups through the real API: a coach with a squad, players who joined by their invitation e-mail.
+import { eq } from "drizzle-orm";
 import { expect } from "vitest";
+import { user } from "../../server/db/schema";
 import type { LadderInput } from "../../shared/schemas/ladders";
 import type { HttpClient } from "../setup/http";
 import type { TestServer } from "../setup/server";
@@ -21,9 +23,15 @@ export async function createSquad(coach: HttpClient, name = "Tuesday group"): Pr
   return res.body.id as string;
 }
 
-/** Invites a freshly signed-up player to the squad and accepts through the e-mailed token. */
+/** Marks the account's e-mail as confirmed, as following the verification link does (accepting an invitation needs it). */
+export async function confirmEmail(server: TestServer, email: string): Promise<void> {
+  await server.database.db.update(user).set({ emailVerified: true }).where(eq(user.email, email));
+}
+
+/** Invites a freshly signed-up player (e-mail confirmed) to the squad and accepts through the e-mailed token. */
 export async function joinedPlayer(server: TestServer, coach: HttpClient, squadId: string, name = "Squad Player"): Promise<Person> {
   const player = await signedUpClient(server, "player", name);
+  await confirmEmail(server, player.email);
   const invited = await coach.post(`/api/squads/${squadId}/invitations`, { email: player.email });
   expect(invited.status).toBe(201);
   const token = await invitationTokenFor(server, player.email);

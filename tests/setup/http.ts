@@ -8,6 +8,8 @@ export class HttpClient {
 
   async request<T = any>(method: string, url: string, body?: unknown, headers: Record<string, string> = {}): Promise<HttpResponse<T>> {
     const h: Record<string, string> = { origin: this.baseUrl, ...headers };
+    // An empty value leaves the header out (tests of requests without an Origin).
+    for (const [k, v] of Object.entries(h)) if (v === "") delete h[k];
     if (this.cookies.size > 0) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
     let payload: BodyInit | undefined;
     if (body !== undefined) {
@@ -45,6 +47,12 @@ export class HttpClient {
   }
   delete<T = any>(url: string) {
     return this.request<T>("DELETE", url);
+  }
+  /** A second client holding a copy of this one's cookies (a stolen cookie, in revocation tests). */
+  copy(): HttpClient {
+    const other = new HttpClient(this.baseUrl);
+    for (const [k, v] of this.cookies) other.cookies.set(k, v);
+    return other;
   }
   hasCookies(): boolean {
     return this.cookies.size > 0;

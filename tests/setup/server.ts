@@ -8,6 +8,15 @@ import { inject } from "vitest";
 import { readEnv } from "../../server/env";
 import { start, type Running, type StartOptions } from "../../server/start";
 
+/** Limits no ordinary test reaches; a test of a limit passes its own. */
+export const GENEROUS_RATE_LIMITS = {
+  auth: { windowMs: 60_000, limit: 10_000 },
+  reads: { windowMs: 60_000, limit: 100_000 },
+  mailPerRecipient: { windowMs: 60_000, limit: 10_000 },
+  mailPerAccount: { windowMs: 60_000, limit: 10_000 },
+  mailPerClientAddress: { windowMs: 60_000, limit: 10_000 },
+};
+
 export type TestServer = Running & { dataDir: string; stop: () => Promise<void> };
 
 /** The migrated database made once per run by tests/setup/global-unit.ts (absent outside vitest's unit project). */
@@ -59,7 +68,7 @@ export async function startTestServer(options: Partial<Omit<StartOptions, "env">
     env,
     pgliteDir: options.pgliteDir ?? "memory://",
     pgliteLoad: options.pgliteDir === undefined && !pgDb ? templateBlob() : undefined,
-    rateLimits: options.rateLimits ?? { auth: { windowMs: 60_000, limit: 10_000 }, reads: { windowMs: 60_000, limit: 100_000 } },
+    rateLimits: { ...GENEROUS_RATE_LIMITS, ...options.rateLimits },
     frontend: options.frontend,
     logDestination: options.logDestination,
   });

@@ -12,6 +12,7 @@ import { linkMail } from "../../lib/mailer";
 import { currentUser, type SessionUser } from "../../middleware/session";
 import { body, parseOrThrow } from "../../middleware/validate";
 import { findLadder } from "../ladders/ladders.handlers";
+import { inSquadsOf } from "../../lib/player-access";
 import { findOwnSquad, squadsOfPlayers } from "../squads/squad-access";
 import { assignmentRows, assignmentViews, statusOf, todayUtc, withoutPutts } from "./assignment-view";
 
@@ -110,11 +111,20 @@ export function listMyAssignments(db: Db): RequestHandler {
   };
 }
 
-/** Who may read an assignment: its player, the coach who assigned it or runs its squad, an admin. */
+/**
+ * Who may read an assignment: its player; the coach who assigned it or runs its squad, while the player is still
+ * in one of that coach's squads; an admin.
+ */
 function readableBy(db: Db, me: SessionUser): SQL | undefined {
   if (me.role === "admin") return undefined;
   const coached = db.select({ id: squads.id }).from(squads).where(eq(squads.coachId, me.id));
-  return or(eq(ladderAssignments.playerId, me.id), eq(ladderAssignments.assignedBy, me.id), inArray(ladderAssignments.squadId, coached));
+  return or(
+    eq(ladderAssignments.playerId, me.id),
+    and(
+      or(eq(ladderAssignments.assignedBy, me.id), inArray(ladderAssignments.squadId, coached)),
+      inSquadsOf(me.id, ladderAssignments.playerId),
+    ),
+  );
 }
 
 export function getAssignment(db: Db): RequestHandler {

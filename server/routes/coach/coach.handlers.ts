@@ -6,6 +6,7 @@ import type { Db } from "../../db/client";
 import { ladderAssignments, squadMembers, squads, user, userPreferences } from "../../db/schema";
 import { toCsv } from "../../lib/csv";
 import { notFound } from "../../lib/http-error";
+import { inSquadsOf } from "../../lib/player-access";
 import { currentUser } from "../../middleware/session";
 import { parseOrThrow, query } from "../../middleware/validate";
 import { assignmentRows, assignmentViews, summaryOf, withoutPutts } from "../assignments/assignment-view";
@@ -65,7 +66,8 @@ export function getCoachedPlayer(db: Db): RequestHandler {
 export function listSquadAssignments(db: Db): RequestHandler {
   return async (req, res) => {
     const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
-    const rows = await assignmentRows(db, eq(ladderAssignments.squadId, squad.id));
+    // Players who have left the squad (and every other squad of its coach) are no longer shown.
+    const rows = await assignmentRows(db, and(eq(ladderAssignments.squadId, squad.id), inSquadsOf(squad.coachId, ladderAssignments.playerId)));
     const summaries = (await assignmentViews(db, rows)).map(summaryOf).reverse();
     res.json({ squad: { id: squad.id, name: squad.name }, assignments: summaries });
   };

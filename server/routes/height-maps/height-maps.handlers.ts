@@ -1,6 +1,6 @@
 import type { RequestHandler } from "express";
 import { and, eq, sql, type SQL } from "drizzle-orm";
-import { solveReadOnSurface, surfaceFromGrid, type SurfaceRead } from "../../../physics";
+import { maxStoppableSlopePct, solveReadOnSurface, surfaceFromGrid, type SurfaceRead } from "../../../physics";
 import { gridFromSpotHeights, parseHeightGridCsv, parseSpotHeightsCsv, summarizeHeightMap, validateHeightMap, type Checked } from "../../../shared/height-map";
 import { idSchema } from "../../../shared/schemas/common";
 import {
@@ -14,7 +14,7 @@ import type { ReadResponse } from "../../../shared/schemas/reads";
 import type { Db } from "../../db/client";
 import { greens, squadMembers, squads } from "../../db/schema";
 import { csvText } from "../../lib/csv";
-import { badRequest, notFound, unprocessable } from "../../lib/http-error";
+import { badRequest, cannotStopError, notFound, unprocessable } from "../../lib/http-error";
 import { currentUser } from "../../middleware/session";
 import { body, parseOrThrow } from "../../middleware/validate";
 
@@ -116,15 +116,20 @@ export function solveOnSurface(db: Db): RequestHandler {
     if (Math.hypot(input.hole[0] - input.ball[0], input.hole[1] - input.ball[1]) < 0.3) fields.hole = "must be at least 0.3 m from the ball";
     if (Object.keys(fields).length > 0) throw badRequest("The ball and the hole must be on the height map.", fields);
     const result = solveReadOnSurface({ surface, stimpFt: input.stimpFt, ballM: input.ball, holeM: input.hole, pace: input.pace });
+    if (!result.ok && result.reason === "cannot-stop") {
+      throw cannotStopError(result.message, "stimpFt", input.stimpFt, result.maxStoppableSlopePct ?? maxStoppableSlopePct(input.stimpFt));
+    }
     if (!result.ok) throw unprocessable(result.message, { pace: result.reason });
     const r = result.read;
     const response: SurfaceReadResponse = {
       launchSpeedMps: r.launchSpeedMps,
       startLineDeg: r.startLineDeg,
       aimOffsetM: r.aimOffsetM,
+      aimGiven: r.aimGiven,
+      aimNote: r.aimNote,
       entrySpeedMps: r.entrySpeedMps,
       rollPastM: r.rollPastM,
-      playsLikeM: r.playsLikeM,
+      flatPuttLengthM: r.flatPuttLengthM,
       breaks: r.breaks,
       capture: { holed: r.capture.holed, outcome: r.capture.outcome, maxCaptureSpeedMps: r.capture.maxCaptureSpeedMps, marginMps: r.capture.marginMps },
       path: r.path,

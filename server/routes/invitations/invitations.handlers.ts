@@ -110,8 +110,9 @@ export function createInvitation(deps: AppDeps): RequestHandler {
       .where(and(eq(squadMembers.squadId, squad.id), sql`lower(${user.email}) = ${email}`));
     if (member) throw conflict(`${email} is already in ${squad.name}.`);
 
-    const { invitation } = await sendInvitation(deps, squad, email);
-    res.status(201).json({ invitation });
+    // The inviting coach gets the link too, to pass on by hand (no mailbox needed for the demo).
+    const sent = await sendInvitation(deps, squad, email);
+    res.status(201).json(sent);
   };
 }
 
@@ -197,7 +198,7 @@ export function previewInvitation(db: Db): RequestHandler {
 
 /**
  * The signed-in player joins the squad. The account's e-mail must be the invited one (compared without
- * case); coach and admin accounts cannot join squads. Used, withdrawn or expired links answer 409.
+ * case) and confirmed; coach and admin accounts cannot join squads. Used, withdrawn or expired links answer 409.
  */
 export function acceptInvitation(db: Db): RequestHandler {
   return async (req, res) => {
@@ -209,6 +210,9 @@ export function acceptInvitation(db: Db): RequestHandler {
     if (me.email.toLowerCase() !== invitation.email.toLowerCase()) {
       throw forbidden(`This invitation was sent to ${invitation.email}. Sign in with that e-mail address to accept it.`);
     }
+    // Read from the database, not the session's cached copy: the e-mail must really be confirmed.
+    const [account] = await db.select({ emailVerified: user.emailVerified }).from(user).where(eq(user.id, me.id));
+    if (!account?.emailVerified) throw forbidden("Confirm your e-mail address first (open the link we sent you), then accept the invitation.");
     const joinedAt = await db.transaction(async (tx) => {
       // The status guard makes the token single-use even when two accepts race.
       const used = await tx

@@ -1,16 +1,16 @@
 import { Router } from "express";
 import { invitationInputSchema } from "../../../shared/schemas/squads";
-import type { AppDeps } from "../../deps";
+import type { RouterDeps } from "../../deps";
 import { requireRole, requireUser } from "../../middleware/session";
 import { validateBody } from "../../middleware/validate";
 import { acceptInvitation, createInvitation, listInvitations, previewInvitation, resendInvitation, revokeInvitation } from "./invitations.handlers";
 
 const coach = requireRole("coach", "admin");
 
-export function invitationRoutes(deps: AppDeps) {
+export function invitationRoutes(deps: RouterDeps) {
   const db = deps.database.db;
   const router = Router();
-  router.post("/squads/:id/invitations", coach, validateBody(invitationInputSchema), createInvitation(deps));
+  router.post("/squads/:id/invitations", coach, validateBody(invitationInputSchema), deps.mail.byAccount, deps.mail.byRecipient, createInvitation(deps));
   router.get("/squads/:id/invitations", coach, listInvitations(db));
   router.delete("/invitations/:id", coach, revokeInvitation(db));
   router.post("/invitations/:id/resend", coach, resendInvitation(deps));

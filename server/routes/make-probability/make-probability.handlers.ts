@@ -1,7 +1,15 @@
 import crypto from "node:crypto";
 import type { RequestHandler } from "express";
-import { desc, eq } from "drizzle-orm";
-import { bestPace, estimateDispersion, type DispersionEstimate, type PaceOutcome } from "../../../physics";
+import { and, between, count, desc, eq, sql } from "drizzle-orm";
+import { wilsonInterval } from "../../../shared/stats/wilson";
+import {
+  DEFAULT_GREEN_LATERAL_M,
+  DEFAULT_READ_ERROR_SLOPE_PCT,
+  bestPace,
+  estimateDispersion,
+  type DispersionEstimate,
+  type PaceOutcome,
+} from "../../../physics";
 import { seededUniform } from "../../../shared/seeded-random";
 import {
   dispersionQuerySchema,
@@ -85,21 +93,65 @@ const paceResult = (o: PaceOutcome): PaceResult => ({
   read: o.read,
 });
 
+/**
+ * The player's logged make rate at about this length (0.8–1.25 × D), so the page never shows odds that contradict
+ * it without saying why.
+ */
+async function loggedNear(db: Db, playerId: string, distanceM: number, odds: number): Promise<MakeProbabilityResponse["logged"]> {
+  const fromM = 0.8 * distanceM;
+  const toM = 1.25 * distanceM;
+  const [row] = await db
+    .select({ attempts: count(), made: sql<number>`coalesce(sum(case when ${putts.holed} then 1 else 0 end), 0)::int` })
+    .from(putts)
+    .where(and(eq(putts.playerId, playerId), between(putts.distanceM, fromM, toM)));
+  const attempts = Number(row?.attempts ?? 0);
+  const made = Number(row?.made ?? 0);
+  const ci95 = wilsonInterval(made, attempts);
+  const oddsOutside = ci95 !== null && (odds < ci95[0] || odds > ci95[1]);
+  return {
+    fromM,
+    toM,
+    attempts,
+    made,
+    rate: attempts > 0 ? made / attempts : null,
+    ci95,
+    oddsOutside,
+    why:
+      "These odds are for this putt: its slope, its pace, and the misreads and bumps that come with them. Your logged rate " +
+      "mixes every putt of about this length you have logged, on whatever slopes they were, and a few dozen putts leave it uncertain.",
+  };
+}
+
 export function postMakeProbability(db: Db): RequestHandler {
   return async (req, res) => {
     const me = currentUser(req);
     const input = body(req, makeProbabilityRequestSchema);
     let dispersion: MakeProbabilityResponse["dispersion"];
     if (input.dispersion) {
-      dispersion = { ...input.dispersion, source: "request", putts: null, usedPrior: null };
+      dispersion = {
+        readSlopePct: DEFAULT_READ_ERROR_SLOPE_PCT,
+        greenLateralM: DEFAULT_GREEN_LATERAL_M,
+        ...input.dispersion,
+        source: "request",
+        putts: null,
+        usedPrior: null,
+      };
     } else {
       const e = await dispersionOf(db, me.id);
-      dispersion = { angleDeg: e.angleDeg.estimate, pace: e.pace.estimate, source: "my-putts", putts: e.usedPutts, usedPrior: e.usedPrior };
+      dispersion = {
+        angleDeg: e.angleDeg.estimate,
+        pace: e.pace.estimate,
+        readSlopePct: DEFAULT_READ_ERROR_SLOPE_PCT,
+        greenLateralM: DEFAULT_GREEN_LATERAL_M,
+        source: "my-putts",
+        putts: e.usedPutts,
+        usedPrior: e.usedPrior,
+      };
     }
     const seed = input.seed ?? crypto.randomInt(0, 2 ** 31 - 1);
     const result = bestPace({
       ...input.read,
-      dispersion: { angleDeg: dispersion.angleDeg, pace: dispersion.pace },
+      dispersion: { angleDeg: dispersion.angleDeg, pace: dispersion.pace, readSlopePct: dispersion.readSlopePct, greenLateralM: dispersion.greenLateralM },
       samples: input.samples,
       random: seededUniform(seed),
       secondPuttRiskMax: input.secondPuttRiskMax,
@@ -122,6 +174,7 @@ export function postMakeProbability(db: Db): RequestHandler {
       defaultPace: paceResult(requested),
       paceCurve: curve.map((c) => ({ rollPastM: c.rollPastM, makeProbability: c.makeProbability, secondPuttOver1mProbability: c.secondPuttOverProbability })),
       dispersion,
+      logged: await loggedNear(db, me.id, input.read.distanceM, requested.makeProbability),
       seed,
       samples: input.samples,
       secondPuttRiskMax,

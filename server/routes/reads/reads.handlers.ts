@@ -5,19 +5,21 @@ import { idSchema } from "../../../shared/schemas/common";
 import { chartRequestSchema, readRequestSchema, saveReadSchema, type ReadResponse } from "../../../shared/schemas/reads";
 import type { Db } from "../../db/client";
 import { greens, savedReads } from "../../db/schema";
-import { notFound, unprocessable } from "../../lib/http-error";
+import { cannotStopError, notFound } from "../../lib/http-error";
 import { currentUser } from "../../middleware/session";
 import { body, parseOrThrow } from "../../middleware/validate";
 
 export function toResponse(read: Read): ReadResponse {
-  const { launchSpeedMps, startLineDeg, aimOffsetM, entrySpeedMps, rollPastM, playsLikeM, breaks, capture, path, model } = read;
+  const { launchSpeedMps, startLineDeg, aimOffsetM, aimGiven, aimNote, entrySpeedMps, rollPastM, flatPuttLengthM, breaks, capture, path, model } = read;
   return {
     launchSpeedMps,
     startLineDeg,
     aimOffsetM,
+    aimGiven,
+    aimNote,
     entrySpeedMps,
     rollPastM,
-    playsLikeM,
+    flatPuttLengthM,
     breaks,
     capture: { holed: capture.holed, outcome: capture.outcome, maxCaptureSpeedMps: capture.maxCaptureSpeedMps, marginMps: capture.marginMps },
     path,
@@ -35,7 +37,7 @@ export function toResponse(read: Read): ReadResponse {
 export function solveOrThrow(input: ReturnType<typeof readRequestSchema.parse>): ReadResponse {
   const result = solveRead(input);
   if (!result.ok) {
-    throw unprocessable(result.message, { slopePct: `too steep to stop a ball at Stimp ${input.stimpFt} ft (steepest: ${result.model.maxStoppableSlopePct.toFixed(1)} %)` });
+    throw cannotStopError(result.message, "slopePct", input.stimpFt, result.model.maxStoppableSlopePct);
   }
   return toResponse(result.read);
 }

@@ -55,7 +55,7 @@ export function createAttempt(db: Db): RequestHandler {
       yours: {
         startLineDeg: y.startLineDeg,
         launchSpeedMps: y.launchSpeedMps,
-        playsLikeM: y.playsLikeM,
+        flatPuttLengthM: y.flatPuttLengthM,
         holed: y.holed,
         outcome: y.outcome,
         restM: y.restM,

@@ -6,17 +6,17 @@ import { useDevMailAvailable } from "../../features/dev-mail/api/get-dev-mail";
 import { SectionNav } from "./section-nav";
 import { TopBar } from "./top-bar";
 
-/** No real mail server is configured: the e-mails Borrowline sends wait in a local mailbox. */
+/** No real mail server is configured: the e-mails Borrowline sends wait in a local inbox (shown to admins only). */
 function DevMailLink() {
   const available = useDevMailAvailable();
   if (!available) return null;
   return (
     <p>
-      E-mail goes to the built-in{" "}
+      No mail server is set up: e-mail is not delivered but held in the{" "}
       <Link className="font-medium text-ink-700 underline underline-offset-4" to={paths.mailbox.href()}>
-        local mailbox
-      </Link>{" "}
-      (no mail server is set up).
+        local inbox
+      </Link>
+      .
     </p>
   );
 }

@@ -13,8 +13,12 @@ export function fallLineWords(fallLineDeg: number): string {
   return `${sideWords} and ${along > 0 ? "toward the hole (downhill)" : "toward you (uphill)"}`;
 }
 
-/** "39 cm left of the hole" / "straight at the hole". */
-export function aimWords(aimOffsetM: number, units: UnitSystem): string {
+/**
+ * "39 cm left of the hole" / "straight at the hole"; with no offset (a start line wider than 60°), the start line:
+ * "start it 75° left of the hole".
+ */
+export function aimWords(aimOffsetM: number | null, units: UnitSystem, startLineDeg = 0): string {
+  if (aimOffsetM === null) return `start it ${Math.abs(startLineDeg).toFixed(0)}° ${startLineDeg < 0 ? "left" : "right"} of the hole`;
   if (Math.abs(aimOffsetM) < 0.005) return "straight at the hole";
   return `${formatShort(aimOffsetM, units)} ${aimOffsetM < 0 ? "left" : "right"} of the hole`;
 }

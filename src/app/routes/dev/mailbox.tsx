@@ -4,11 +4,11 @@ import { Mailbox } from "../../../features/dev-mail/components/mailbox";
 export function MailboxRoute() {
   return (
     <>
-      <title>Dev mailbox · Borrowline</title>
+      <title>Local inbox · Borrowline</title>
       <PageHeader
-        eyebrow="Development"
-        title="Mailbox"
-        description="Every e-mail the server has sent while running in development: sign-up confirmations, password resets, squad invitations."
+        eyebrow="Administration"
+        title="Local inbox"
+        description="No mail server is set up (SMTP_URL), so the e-mail this server sends is held here and not delivered: sign-up confirmations, password resets, squad invitations. Only administrators can read it."
       />
       <Mailbox />
     </>

@@ -20,6 +20,8 @@ const roleChoices = [
 ] as const;
 
 export type SignUpFormProps = {
+  /** Where the e-mail confirmation link brings the person back to (an invitation's join page). */
+  callbackURL?: string;
   /** Prefills the e-mail (an invitation's address). */
   defaultEmail?: string;
   /** Fixes the account type and leaves out the choice (an invitation to a squad is for a player). */
@@ -28,7 +30,7 @@ export type SignUpFormProps = {
   onSignedUp?: () => Promise<void> | void;
 };
 
-export function SignUpForm({ defaultEmail = "", role, onSignedUp }: SignUpFormProps = {}) {
+export function SignUpForm({ defaultEmail = "", role, onSignedUp, callbackURL }: SignUpFormProps = {}) {
   const afterSignIn = useAfterSignIn();
   const queryClient = useQueryClient();
   const [formError, setFormError] = useState<string | null>(null);
@@ -46,7 +48,7 @@ export function SignUpForm({ defaultEmail = "", role, onSignedUp }: SignUpFormPr
     setFormError(null);
     try {
       // The server takes the chosen role as `accountType` (an extra user field); the client types do not know it.
-      const { data, error } = await authClient.signUp.email({ name, email, password, accountType: role } as SignUpInput);
+      const { data, error } = await authClient.signUp.email({ name, email, password, accountType: role, ...(callbackURL ? { callbackURL } : {}) } as SignUpInput);
       if (error) {
         const described = describeAuthError(error, "Could not create the account. Please try again.");
         if (described.field === "name" || described.field === "email" || described.field === "password" || (described.field as string) === "accountType") {

@@ -1,7 +1,14 @@
 // Turns a better-auth client error into a message for the person at the form, and says
 // which field it belongs to when it belongs to one.
 
-export type AuthErrorLike = { code?: string; message?: string; status?: number; statusText?: string } | null | undefined;
+/**
+ * What the better-auth client gives back: our server answers every error as {"error": {"code", "message"}}
+ * (better-auth's own codes in lower case), which the client spreads into the error beside status.
+ */
+export type AuthErrorLike =
+  | { code?: string; message?: string; status?: number; statusText?: string; error?: { code?: string; message?: string; fields?: Record<string, string> } }
+  | null
+  | undefined;
 export type AuthField = "name" | "email" | "password" | "newPassword" | "role";
 export type DescribedAuthError = { field?: AuthField; message: string };
 
@@ -19,13 +26,21 @@ const byCode: Record<string, DescribedAuthError> = {
   FIELD_NOT_ALLOWED: { message: "The server did not accept one of the details sent." },
 };
 
+const FIELDS: readonly AuthField[] = ["name", "email", "password", "newPassword"];
+
 export function describeAuthError(error: AuthErrorLike, fallback = "Something went wrong. Please try again."): DescribedAuthError {
   if (!error) return { message: fallback };
   if (error.status === 429) return { message: "Too many attempts. Wait a minute and try again." };
-  const known = error.code ? byCode[error.code] : undefined;
+  const inner = error.error && typeof error.error === "object" ? error.error : undefined;
+  const code = (inner?.code ?? error.code)?.toUpperCase();
+  const message = inner?.message ?? error.message;
+  const known = code ? byCode[code] : undefined;
   if (known) return known;
+  // A 400 from our guard names the field: show the reason beside it.
+  const named = Object.entries(inner?.fields ?? {}).find(([k]) => (FIELDS as readonly string[]).includes(k));
+  if (named) return { field: named[0] as AuthField, message: named[1] };
   if (error.status === 0 || error.status === undefined) {
-    return { message: error.message || "Could not reach Borrowline. Check your connection and try again." };
+    return { message: message || "Could not reach Borrowline. Check your connection and try again." };
   }
-  return { message: error.message || fallback };
+  return { message: message || fallback };
 }

@@ -3,6 +3,26 @@ import { Alert, Button } from "../../../components/ui";
 import { useCreateInvitations, type InviteOutcome } from "../api/create-invitations";
 import { parseEmails } from "../utils/parse-emails";
 
+/** Copies an invitation link, or shows it to copy by hand where the clipboard is not available. */
+function CopyLinkButton({ link, email }: { link: string; email: string }) {
+  const [state, setState] = useState<"idle" | "copied" | "failed">("idle");
+  if (state === "failed") {
+    return <input readOnly value={link} aria-label={`Invitation link for ${email}`} onFocus={(e) => e.currentTarget.select()} className="min-w-0 flex-1 rounded-lg border border-ink-900/15 bg-white px-2 py-1 text-sm" />;
+  }
+  const copy = () => {
+    if (typeof navigator === "undefined" || !navigator.clipboard) return setState("failed");
+    navigator.clipboard.writeText(link).then(
+      () => setState("copied"),
+      () => setState("failed"),
+    );
+  };
+  return (
+    <Button size="sm" variant="secondary" onClick={copy} aria-label={`Copy the invitation link for ${email}`}>
+      {state === "copied" ? "Link copied" : "Copy link"}
+    </Button>
+  );
+}
+
 /** One or several e-mail addresses; each gets its own link by e-mail. Shows what went out and what did not. */
 export function InviteForm({ squadId, squadName }: { squadId: string; squadName: string }) {
   const id = useId();
@@ -30,7 +50,7 @@ export function InviteForm({ squadId, squadName }: { squadId: string; squadName:
     setText(result.filter((o) => !o.ok).map((o) => o.email).join("\n"));
   };
 
-  const sent = outcomes?.filter((o) => o.ok) ?? [];
+  const sent = outcomes?.filter((o): o is Extract<InviteOutcome, { ok: true }> => o.ok) ?? [];
   const refused = outcomes?.filter((o): o is Extract<InviteOutcome, { ok: false }> => !o.ok) ?? [];
 
   return (
@@ -64,7 +84,15 @@ export function InviteForm({ squadId, squadName }: { squadId: string; squadName:
       </Button>
       {sent.length > 0 ? (
         <Alert tone="success" title={`Invitation${sent.length === 1 ? "" : "s"} sent`}>
-          {sent.map((o) => o.email).join(", ")}
+          <p>E-mailed to {sent.map((o) => o.email).join(", ")}. You can also pass each link on yourself: it works once, for that address only.</p>
+          <ul className="mt-2 flex flex-col gap-2">
+            {sent.map((o) => (
+              <li key={o.email} className="flex flex-wrap items-center gap-2">
+                <span className="font-medium break-all">{o.email}</span>
+                <CopyLinkButton link={o.link} email={o.email} />
+              </li>
+            ))}
+          </ul>
         </Alert>
       ) : null}
       {refused.length > 0 ? (

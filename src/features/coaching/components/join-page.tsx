@@ -79,8 +79,11 @@ function SignedOut({ token, preview, onSignedUp }: { token: string; preview: Inv
     return (
       <Card>
         <h2 className="text-xl font-semibold tracking-tight">Create your player account</h2>
-        <p className="mt-1 mb-6 text-ink-500">Use the invited e-mail so the invitation matches your account. You join {preview.squad.name} as soon as the account is made.</p>
-        <SignUpForm defaultEmail={preview.email} role="player" onSignedUp={onSignedUp} />
+        <p className="mt-1 mb-6 text-ink-500">
+          Use the invited e-mail so the invitation matches your account. Then confirm the address with the link we e-mail you: it brings you back here to join{" "}
+          {preview.squad.name}.
+        </p>
+        <SignUpForm defaultEmail={preview.email} role="player" onSignedUp={onSignedUp} callbackURL={paths.join.href(token)} />
         <Button variant="ghost" className="mt-3" onClick={() => setCreating(false)}>
           Back
         </Button>
@@ -140,7 +143,8 @@ export function JoinPage({ token }: { token: string }) {
   } else if (me.isPending) {
     body = <PageSpinner label="Checking your account" />;
   } else if (!user) {
-    body = <SignedOut token={token} preview={p} onSignedUp={() => accept.mutate(token)} />;
+    // After sign-up the page shows the signed-in state: the e-mail must be confirmed before joining.
+    body = <SignedOut token={token} preview={p} onSignedUp={() => undefined} />;
   } else if (user.role !== "player") {
     body = (
       <Alert tone="warning" title={`You are signed in as a ${user.role}`}>
@@ -168,6 +172,12 @@ export function JoinPage({ token }: { token: string }) {
         <p className="text-ink-600">
           Signed in as <strong>{user.email}</strong>.
         </p>
+        {!user.emailVerified ? (
+          <Alert tone="info" title="Confirm your e-mail first">
+            Open the link we sent to <strong className="break-all">{user.email}</strong>: it confirms the address and brings you back here. Joining needs a
+            confirmed e-mail, so that only the person who reads that inbox can use the invitation.
+          </Alert>
+        ) : null}
         <Button size="lg" loading={accept.isPending} loadingText="Joining…" onClick={() => accept.mutate(token)} className="sm:self-start">
           Join {p.squad.name}
         </Button>

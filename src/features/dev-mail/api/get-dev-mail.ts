@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api, ApiError } from "../../../lib/api-client";
 import { apiPaths } from "../../../config/paths";
+import { useMe } from "../../auth/api/get-me";
 import { devMailKeys } from "./keys";
 
 export type DevMailMessage = {
@@ -36,7 +37,7 @@ export function useDevMail() {
   return useQuery(devMailQueryOptions());
 }
 
-/** Whether this server has the development mailbox: true in a Vite dev build, else asks the server once. */
+/** Whether this server has a local inbox (no SMTP_URL) that the signed-in admin may read: asks the server once. */
 export async function probeDevMail(signal?: AbortSignal): Promise<boolean> {
   try {
     await api.get<unknown>(apiPaths.devMail, { signal });
@@ -47,14 +48,17 @@ export async function probeDevMail(signal?: AbortSignal): Promise<boolean> {
   }
 }
 
+/** Only an admin can read the local inbox (it holds every sign-in and invitation link), so only an admin asks. */
 export function useDevMailAvailable(): boolean {
+  const me = useMe();
+  const admin = me.data?.user.role === "admin";
   const probe = useQuery({
     queryKey: devMailKeys.probe(),
     queryFn: ({ signal }) => probeDevMail(signal),
-    enabled: !import.meta.env.DEV,
+    enabled: admin,
     staleTime: Infinity,
     retry: false,
     meta: { errorToast: false },
   });
-  return import.meta.env.DEV || probe.data === true;
+  return admin && probe.data === true;
 }

@@ -66,7 +66,15 @@ export function Mailbox() {
   if (mail.isPending) return <PageSpinner label="Loading the mailbox" />;
   if (mail.isError) {
     if (isApiError(mail.error) && mail.error.status === 404) {
-      return <Alert tone="info" title="No mailbox on this server">The development mailbox is only there when the server runs in development mode.</Alert>;
+      return <Alert tone="info" title="No mailbox on this server">This server sends its e-mail through a mail server (SMTP_URL is set), so there is no local inbox.</Alert>;
+    }
+    if (isApiError(mail.error) && (mail.error.status === 401 || mail.error.status === 403)) {
+      return (
+        <Alert tone="info" title="The local inbox is for administrators">
+          No mail server is set up, so the e-mail this server sends is held here instead of being delivered. It holds sign-in and invitation links, so only
+          an administrator can read it.
+        </Alert>
+      );
     }
     return (
       <Alert

@@ -41,7 +41,7 @@ const surfaceRead = {
   aimOffsetM: -0.41,
   entrySpeedMps: 0.7,
   rollPastM: 0.45,
-  playsLikeM: 7.6,
+  flatPuttLengthM: 7.15, aimGiven: "offset", aimNote: null,
   breaks: "right-to-left",
   capture: { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.6, marginMps: 0.9 },
   path: [
@@ -116,7 +116,7 @@ test("tapping the ball and then the hole asks for the read with both positions i
     pace: { rollPastM: 0.45 },
   });
   expect(await screen.findByTestId("surface-aim")).toHaveTextContent("Aim 41 cm left of the hole");
-  expect(screen.getByTestId("surface-plays-like")).toHaveTextContent("7.60 m on the flat");
+  expect(screen.getByTestId("surface-flat-putt")).toHaveTextContent("as hard as a flat 7.15 m putt");
   expect(screen.getByTestId("surface-line")).toBeInTheDocument();
   // Without WebGL the 3D view says so; the map above stands in for it.
   expect(screen.getByText(/cannot draw the 3D green/)).toBeInTheDocument();

@@ -151,7 +151,7 @@ function MapWorkspace({
   const settled = useDebouncedValue(request, 300);
   const read = useSurfaceRead(greenId, settled);
   const answer = request && read.data && !read.isError ? read.data : null;
-  const aim = answer && ball && hole ? aimPoint(ball, hole, answer.aimOffsetM) : null;
+  const aim = answer && ball && hole && answer.aimOffsetM !== null ? aimPoint(ball, hole, answer.aimOffsetM) : null;
 
   const place = (point: [number, number]) => {
     if (placing === "ball") {
@@ -164,7 +164,7 @@ function MapWorkspace({
 
   const readError = read.error;
   const fieldErrors = isApiError(readError) ? readError.fields : {};
-  const description = `${ball ? `Ball ${positionWords(ball)}` : "No ball placed yet"}; ${hole ? `hole ${positionWords(hole)}` : "no hole placed yet"}.${answer ? ` Aim ${formatShort(answer.aimOffsetM, units)} ${answer.aimOffsetM < 0 ? "left" : "right"} of the hole.` : ""}`;
+  const description = `${ball ? `Ball ${positionWords(ball)}` : "No ball placed yet"}; ${hole ? `hole ${positionWords(hole)}` : "no hole placed yet"}.${answer ? ` Aim ${aimWords(answer.aimOffsetM, units, answer.startLineDeg)}.` : ""}`;
 
   return (
     <div className="flex flex-col gap-6">
@@ -204,8 +204,8 @@ function MapWorkspace({
           />
           {answer ? (
             <p className="font-semibold text-ink-900 lg:hidden" aria-hidden="true">
-              Aim {aimWords(answer.aimOffsetM, units)}, finish {formatShort(answer.rollPastM, units)} past; plays like{" "}
-              {formatLength(answer.playsLikeM, units)}.
+              Aim {aimWords(answer.aimOffsetM, units, answer.startLineDeg)}, finish {formatShort(answer.rollPastM, units)} past; as hard as a
+              flat {formatLength(Math.max(0, answer.flatPuttLengthM), units)} putt.
             </p>
           ) : null}
           <p className="text-sm text-ink-600" data-testid="placement">

@@ -8,7 +8,7 @@ const BREAK_WORDS: Record<string, string> = {
   none: "No break to speak of",
 };
 
-/** The read on the real surface: aim, pace, plays like, in the words of the read page. */
+/** The read on the real surface: aim, pace, flat-putt length, in the words of the read page. */
 export function SurfaceReadAnswer({ read, units, updating }: { read: SurfaceReadResponse; units: UnitSystem; updating: boolean }) {
   const side = read.startLineDeg < 0 ? "left" : "right";
   return (
@@ -22,10 +22,10 @@ export function SurfaceReadAnswer({ read, units, updating }: { read: SurfaceRead
         ) : null}
       </div>
       <p className="text-2xl leading-tight font-semibold tracking-tight" data-testid="surface-aim">
-        Aim {aimWords(read.aimOffsetM, units)}
+        Aim {aimWords(read.aimOffsetM, units, read.startLineDeg)}
       </p>
       <p className="text-sm text-ink-600">
-        {holeWidthsWords(read.aimOffsetM)}; start line {Math.abs(read.startLineDeg).toFixed(1)}° {side} of the straight line.{" "}
+        {read.aimOffsetM === null ? "Judge it by the start direction" : holeWidthsWords(read.aimOffsetM)}; start line {Math.abs(read.startLineDeg).toFixed(1)}° {side} of the straight line.{" "}
         {BREAK_WORDS[read.breaks] ?? ""}.
       </p>
       <dl className="grid grid-cols-2 gap-3">
@@ -35,9 +35,9 @@ export function SurfaceReadAnswer({ read, units, updating }: { read: SurfaceRead
           <dd className="text-sm text-ink-600">reaches the hole at {read.entrySpeedMps.toFixed(2)} m/s</dd>
         </div>
         <div className="rounded-xl bg-white p-3 ring-1 ring-ink-900/5">
-          <dt className="text-sm text-ink-600">Plays like</dt>
-          <dd className="font-semibold" data-testid="surface-plays-like">
-            {formatLength(read.playsLikeM, units)} on the flat
+          <dt className="text-sm text-ink-600">Flat-putt length</dt>
+          <dd className="font-semibold" data-testid="surface-flat-putt">
+            as hard as a flat {formatLength(Math.max(0, read.flatPuttLengthM), units)} putt
           </dd>
           <dd className="text-sm text-ink-600">the putt is {formatLength(read.distanceM, units)}</dd>
         </div>

@@ -76,7 +76,7 @@ test("the best pace sits beside the read's own, and its button hands that roll-p
 
 test("with few putts logged the panel says it leans on typical club-golfer values", async () => {
   stubApi(
-    () => json(200, fakeOdds({ dispersion: { angleDeg: 1.2, pace: 0.12, source: "my-putts", putts: 0, usedPrior: true } })),
+    () => json(200, fakeOdds({ dispersion: { angleDeg: 1.2, pace: 0.12, source: "my-putts", putts: 0, usedPrior: true, readSlopePct: 0.5, greenLateralM: 0.02 } })),
     fakeDispersion({ putts: 0, usedPrior: true }),
   );
   renderPanel();
@@ -98,4 +98,19 @@ test("signed out: one line inviting the golfer to sign in, and no simulation is 
   expect(within(line).getByRole("link", { name: "Sign in" })).toHaveAttribute("href", "/sign-in?next=%2Fread");
   await new Promise((r) => setTimeout(r, 20));
   expect(calls).toEqual([]);
+});
+
+test("odds outside the player's own logged rate come with the reason, never silently", async () => {
+  stubApi(() =>
+    json(
+      200,
+      fakeOdds({
+        logged: { fromM: 2.4, toM: 3.75, attempts: 40, made: 36, rate: 0.9, ci95: [0.77, 0.96], oddsOutside: true, why: "These odds are for this putt: its slope." },
+      }),
+    ),
+  );
+  renderPanel();
+  const note = await screen.findByTestId("odds-vs-log");
+  expect(note).toHaveTextContent("Your log: 90 % holed");
+  expect(note).toHaveTextContent("Why these odds differ: These odds are for this putt: its slope.");
 });

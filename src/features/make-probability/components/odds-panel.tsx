@@ -198,6 +198,17 @@ function SignedInOdds({ read, liveRead = null, line, units, onApplyRollPast }: O
         </p>
       </div>
 
+      {data?.logged && data.logged.attempts > 0 && data.logged.rate !== null ? (
+        <p
+          className={data.logged.oddsOutside ? "rounded-xl bg-warn-50 px-3 py-2 text-sm text-ink-800" : "text-sm text-ink-700"}
+          data-testid="odds-vs-log"
+        >
+          Your log: {percentWords(data.logged.rate)} holed from {formatShort(data.logged.fromM, units)}–{formatShort(data.logged.toM, units)} (
+          {data.logged.attempts} putts).
+          {data.logged.oddsOutside ? ` Why these odds differ: ${data.logged.why}` : null}
+        </p>
+      ) : null}
+
       {used ? (
         <div className="border-t border-ink-900/10 pt-3 text-sm text-ink-700">
           <h3 className="font-semibold text-ink-900">The spread used</h3>
@@ -221,7 +232,7 @@ function SignedInOdds({ read, liveRead = null, line, units, onApplyRollPast }: O
                 : null}
           </p>
           <p className="mt-1 text-ink-500">
-            The “likely” ranges hold 95 % of what your putts allow. Your log has no slopes, so a misread counts as start-line error here.
+            The “likely” ranges hold 95 % of what your putts allow. The odds add a misread of the slope and the green’s bumps to your stroke.
           </p>
         </div>
       ) : null}

@@ -27,6 +27,7 @@ export function fakeOdds(overrides: Partial<MakeProbabilityResponse> = {}): Make
   return {
     makeProbability: 0.3412,
     makeProbabilityStandardError: 0.0047,
+    logged: null,
     secondPuttOver1mProbability: 0.081,
     finishes,
     finishHoled,
@@ -57,7 +58,7 @@ export function fakeOdds(overrides: Partial<MakeProbabilityResponse> = {}): Make
       read: paceRead,
     },
     paceCurve: [{ rollPastM: 0.35, makeProbability: 0.38, secondPuttOver1mProbability: 0.06 }],
-    dispersion: { angleDeg: 1.43, pace: 0.11, source: "my-putts", putts: 212, usedPrior: false },
+    dispersion: { angleDeg: 1.43, pace: 0.11, source: "my-putts", putts: 212, usedPrior: false, readSlopePct: 0.5, greenLateralM: 0.02 },
     seed: 20_240_801,
     samples: 10_000,
     secondPuttRiskMax: 0.1,

@@ -28,7 +28,7 @@ export function AnswerBar({ read, cannotStop, units, targetId }: AnswerBarProps)
           <p className="text-[15px] leading-snug font-semibold">{cannotStop ? "This ball would not stop" : aim?.headline}</p>
           {read && !cannotStop ? (
             <p className="truncate text-sm text-sand-200">
-              {formatShort(read.rollPastM, units)} past · plays like {formatLength(read.playsLikeM, units)}
+              {formatShort(read.rollPastM, units)} past · as a flat {formatLength(Math.max(0, read.flatPuttLengthM), units)} putt
             </p>
           ) : null}
         </div>

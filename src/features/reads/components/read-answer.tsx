@@ -19,7 +19,7 @@ export const CAUTION = "Assumes an even slope and a true roll; grain, wind and c
 /** The read, large enough to take in at a glance on a phone: where to start it, how firmly, and the line drawn. */
 export function ReadAnswer({ read, distanceM, fallLineDeg, units, state = "fresh" }: ReadAnswerProps) {
   const aim = aimWords(read.aimOffsetM, read.startLineDeg, units);
-  const pace = paceWords(read.rollPastM, read.playsLikeM, units);
+  const pace = paceWords(read.rollPastM, read.flatPuttLengthM, units);
   const capture = captureWords(read.entrySpeedMps, read.capture);
 
   return (
@@ -54,7 +54,7 @@ export function ReadAnswer({ read, distanceM, fallLineDeg, units, state = "fresh
       <div>
         <p className="text-sm font-medium text-ink-500">How firmly</p>
         <p className="mt-1 text-2xl leading-snug font-semibold text-ink-900">{pace.headline}</p>
-        <p className="mt-1 text-lg text-ink-700">{pace.playsLike}</p>
+        <p className="mt-1 text-lg text-ink-700">{pace.flatPutt}</p>
       </div>
 
       <dl className="grid grid-cols-1 gap-3 sm:grid-cols-2">
@@ -73,7 +73,7 @@ export function ReadAnswer({ read, distanceM, fallLineDeg, units, state = "fresh
         className="mx-auto max-w-xs"
         paths={[{ points: read.path, style: "chosen" }]}
         holeDistanceM={distanceM}
-        aimSpots={[{ xM: read.aimOffsetM }]}
+        aimSpots={read.aimOffsetM === null ? [] : [{ xM: read.aimOffsetM }]}
         fallLineDeg={fallLineDeg}
         units={units}
         title="The line from above"

@@ -16,7 +16,7 @@ const result = {
   aimOffsetM: -0.27,
   entrySpeedMps: 0.67,
   rollPastM: 0.45,
-  playsLikeM: 3.4,
+  flatPuttLengthM: 2.95, aimGiven: "offset", aimNote: null,
   breaks: "left-to-right",
   capture: { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.64, marginMps: 0.97 },
   model: { name: "m", v0Mps: 1.83, rollingDecelMps2: 0.55, gravityDecelMps2: 0.14, maxStoppableSlopePct: 7.86 },

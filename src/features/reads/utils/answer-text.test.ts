@@ -26,10 +26,21 @@ test("a very wide start line is given as an angle, not as a spot beside the hole
   expect(aimWords(-3, -65, "metric").headline).toBe("Start it 65° left of the hole");
 });
 
-test("pace reads as the distance past and the flat putt it plays like", () => {
+test("a start line past 60° (89°, 91°, 120°) is given as the start line and a plain statement, never an offset", () => {
+  for (const deg of [89, 91, 120]) {
+    const w = aimWords(null, -deg, "metric");
+    expect(w.headline).toBe(`Start it ${deg}° left of the hole`);
+    expect(w.detail).toMatch(/start direction/);
+    expect(w.headline + w.detail).not.toMatch(/cm|edge|centre/);
+  }
+  expect(aimWords(-1.7, -60, "metric").headline).toMatch(/outside the left edge/);
+});
+
+test("pace reads as the distance past and the flat putt needing the same stroke", () => {
   const p = paceWords(inchesToMetres(17), 3.3528, "imperial");
   expect(p.headline).toBe("Firm enough to finish 17 in past if it misses");
-  expect(p.playsLike).toBe("Plays like an 11 ft putt on the flat");
+  expect(p.flatPutt).toBe("Hit it as hard as a flat 11 ft putt");
+  expect(p.flatPutt).not.toMatch(/plays like/i);
   expect(paceWords(0, 3, "metric").headline).toMatch(/dying pace/);
 });
 

@@ -39,16 +39,19 @@ export function startLineWords(startLineDeg: number): string {
   return `Start line ${a.toFixed(1)}° ${side(startLineDeg)} of the straight line to the hole`;
 }
 
-export function aimWords(aimOffsetM: number, startLineDeg: number, units: UnitSystem): AimWords {
+export function aimWords(aimOffsetM: number | null, startLineDeg: number, units: UnitSystem): AimWords {
   const startLine = startLineWords(startLineDeg);
-  const abs = Math.abs(aimOffsetM);
-  if (Math.abs(startLineDeg) >= WIDE_START_LINE_DEG) {
+  if (aimOffsetM === null || Math.abs(startLineDeg) > WIDE_START_LINE_DEG) {
     return {
       headline: `Start it ${Math.abs(startLineDeg).toFixed(0)}° ${side(startLineDeg)} of the hole`,
-      detail: "A very wide line: judge it by the start direction, not a spot beside the hole.",
+      detail:
+        Math.abs(startLineDeg) >= 90
+          ? "Square to the hole or back up the slope: judge it by the start direction, not a spot beside the hole."
+          : "A very wide line: judge it by the start direction, not a spot beside the hole.",
       startLine,
     };
   }
+  const abs = Math.abs(aimOffsetM);
   if (abs < CENTRE_M) return { headline: "Aim at the centre of the hole", detail: "No borrow to play", startLine };
   const s = side(aimOffsetM);
   const fromCentre = `${holeWidths(aimOffsetM)} (${formatAim(aimOffsetM, units)}) ${s} of centre`;
@@ -56,13 +59,13 @@ export function aimWords(aimOffsetM: number, startLineDeg: number, units: UnitSy
   return { headline: `Start it ${formatAim(abs - HOLE_RADIUS_M, units)} outside the ${s} edge`, detail: fromCentre, startLine };
 }
 
-/** "Firm enough to finish 17 in past" and "Plays like a 11 ft 3 in putt on the flat". */
-export function paceWords(rollPastM: number, playsLikeM: number, units: UnitSystem): { headline: string; playsLike: string } {
+/** "Firm enough to finish 17 in past" and "Hit it as hard as a flat 11 ft 3 in putt". */
+export function paceWords(rollPastM: number, flatPuttLengthM: number, units: UnitSystem): { headline: string; flatPutt: string } {
   const past =
     rollPastM < 0.01 ? "Just reach the hole: a dying pace" : `Firm enough to finish ${formatShort(rollPastM, units)} past if it misses`;
   return {
     headline: past,
-    playsLike: `Plays like ${aOrAn(formatLength(playsLikeM, units))} ${formatLength(playsLikeM, units)} putt on the flat`,
+    flatPutt: `Hit it as hard as a flat ${formatLength(Math.max(0, flatPuttLengthM), units)} putt`,
   };
 }
 

@@ -17,7 +17,8 @@ export type ChartCellAnswer =
       ok: true;
       distanceM: number;
       fallLineDeg: number;
-      aimOffsetM: number;
+      aimOffsetM: number | null;
+      aimGiven?: "offset" | "start-line";
       startLineDeg: number;
       launchSpeedMps: number;
       entrySpeedMps: number;
@@ -37,6 +38,7 @@ const CENTRE_M = 0.01;
 /** A cell as the table prints it: "11 in L", "28 cm R", "centre", or "won't stop". */
 export function cellText(cell: ChartCellAnswer, units: UnitSystem): string {
   if (!cell.ok) return "won't stop";
+  if (cell.aimOffsetM === null) return `start ${Math.abs(Math.round(cell.startLineDeg))}° ${cell.startLineDeg < 0 ? "L" : "R"}`;
   if (Math.abs(cell.aimOffsetM) < CENTRE_M) return "centre";
   const v = toShortUnit(Math.abs(cell.aimOffsetM), units);
   const shown = v < 10 ? v.toFixed(1).replace(/\.0$/, "") : String(Math.round(v));
@@ -60,7 +62,8 @@ export function toChartTable(answer: BreakChartAnswer, units: UnitSystem): { col
     key: `r${i}`,
     heading: distanceHeading(distanceM, units),
     cells: (answer.cells[i] ?? []).map((cell, j): TableCell => {
-      const side = !cell.ok ? "none" : Math.abs(cell.aimOffsetM) < CENTRE_M ? "centre" : cell.aimOffsetM < 0 ? "left" : "right";
+      const aim = cell.ok ? cell.aimOffsetM : null;
+      const side = !cell.ok ? "none" : aim === null ? (cell.startLineDeg < 0 ? "left" : "right") : Math.abs(aim) < CENTRE_M ? "centre" : aim < 0 ? "left" : "right";
       return { key: `r${i}c${j}`, text: cellText(cell, units), ok: cell.ok, side };
     }),
   }));
@@ -85,7 +88,7 @@ export function toChartSeries(answer: BreakChartAnswer, units: UnitSystem, direc
     for (const deg of directions) {
       const j = columnOf.get(deg);
       const cell = j === undefined ? undefined : answer.cells[i]?.[j];
-      point[seriesKey(deg)] = cell?.ok ? Number(toShortUnit(cell.aimOffsetM, units).toFixed(2)) : null;
+      point[seriesKey(deg)] = cell?.ok && cell.aimOffsetM !== null ? Number(toShortUnit(cell.aimOffsetM, units).toFixed(2)) : null;
     }
     return point;
   });

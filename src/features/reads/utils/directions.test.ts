@@ -18,8 +18,8 @@ test("every named direction breaks and plays the way its name says", () => {
     } else {
       expect(r.read.breaks, named.label).toBe("none");
     }
-    if (name.includes("downhill")) expect(r.read.playsLikeM, named.label).toBeLessThan(3 + 0.45);
-    if (name.includes("uphill")) expect(r.read.playsLikeM, named.label).toBeGreaterThan(3 + 0.45);
+    if (name.includes("downhill")) expect(r.read.flatPuttLengthM, named.label).toBeLessThan(3);
+    if (name.includes("uphill")) expect(r.read.flatPuttLengthM, named.label).toBeGreaterThan(3);
   }
 });
 

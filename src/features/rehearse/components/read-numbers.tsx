@@ -24,11 +24,11 @@ export function ReadNumbers({ read, units }: { read: Read; units: UnitSystem }) 
     <dl aria-label="The read at this pace" className="grid grid-cols-2 gap-2">
       <Row
         term="Aim"
-        value={aimWords(read.aimOffsetM, units)}
-        detail={`${holeWidthsWords(read.aimOffsetM)}; start line ${Math.abs(read.startLineDeg).toFixed(1)}° ${Math.abs(read.startLineDeg) < 0.05 ? "" : side}; ${breakWords(read.breaks)}`}
+        value={aimWords(read.aimOffsetM, units, read.startLineDeg)}
+        detail={`${read.aimOffsetM === null ? "judge it by the start direction" : holeWidthsWords(read.aimOffsetM)}; start line ${Math.abs(read.startLineDeg).toFixed(1)}° ${Math.abs(read.startLineDeg) < 0.05 ? "" : side}; ${breakWords(read.breaks)}`}
       />
       <Row term="Roll-past" value={`${rollPastWords(read.rollPastM, units)} past`} detail="if it misses" />
-      <Row term="Plays like" value={formatLength(read.playsLikeM, units)} detail="a flat putt of this length" />
+      <Row term="Flat-putt length" value={formatLength(Math.max(0, read.flatPuttLengthM), units)} detail="hit it as hard as a flat putt this long" />
       <Row
         term="Entry speed"
         value={`${read.entrySpeedMps.toFixed(2)} m/s`}

@@ -88,38 +88,42 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
   const lines: SceneLine[] = [];
   const aims: SceneAim[] = [];
   if (current.ok) {
-    if (compare && dying.ok && firm.ok) {
-      const outside = dying.read.aimOffsetM < 0 ? "left" : "right";
+    const dyingAim = dying.ok ? dying.read.aimOffsetM : null;
+    const firmAim = firm.ok ? firm.read.aimOffsetM : null;
+    if (compare && dying.ok && firm.ok && dyingAim !== null && firmAim !== null) {
+      const outside = dyingAim < 0 ? "left" : "right";
       lines.push({ id: "dying", path: dying.read.path, style: "dying" }, { id: "firm", path: firm.read.path, style: "firm" });
       aims.push(
         {
           id: "dying",
-          xM: dying.read.aimOffsetM,
+          xM: dyingAim,
           style: "dying",
-          label: `Dying: ${formatShort(dying.read.aimOffsetM, units)} ${dying.read.aimOffsetM < 0 ? "left" : "right"}`,
+          label: `Dying: ${formatShort(dyingAim, units)} ${dyingAim < 0 ? "left" : "right"}`,
           labelSide: outside,
         },
         {
           id: "firm",
-          xM: firm.read.aimOffsetM,
+          xM: firmAim,
           style: "firm",
-          label: `Firm: ${formatShort(firm.read.aimOffsetM, units)} ${firm.read.aimOffsetM < 0 ? "left" : "right"}`,
+          label: `Firm: ${formatShort(firmAim, units)} ${firmAim < 0 ? "left" : "right"}`,
           labelSide: outside === "left" ? "right" : "left",
         },
       );
     }
     lines.push({ id: "chosen", path: current.read.path, style: "chosen" });
-    aims.push({
-      id: "chosen",
-      xM: current.read.aimOffsetM,
-      style: "chosen",
-      label: compare ? "Your pace" : `Aim: ${aimWords(current.read.aimOffsetM, units)}`,
-      labelSide: "up",
-    });
+    if (current.read.aimOffsetM !== null) {
+      aims.push({
+        id: "chosen",
+        xM: current.read.aimOffsetM,
+        style: "chosen",
+        label: compare ? "Your pace" : `Aim: ${aimWords(current.read.aimOffsetM, units)}`,
+        labelSide: "up",
+      });
+    }
   }
 
   const sceneLabel = current.ok
-    ? `A ${putt.distanceM.toFixed(1)} metre putt on a green that ${fallLineWords(putt.fallLineDeg)}; aim ${aimWords(current.read.aimOffsetM, units)}.`
+    ? `A ${putt.distanceM.toFixed(1)} metre putt on a green that ${fallLineWords(putt.fallLineDeg)}; aim ${aimWords(current.read.aimOffsetM, units, current.read.startLineDeg)}.`
     : "The putt on the green.";
 
   return (
@@ -167,7 +171,7 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
             />
             Compare the dying and the firm line
           </label>
-          {compare && dying.ok && firm.ok ? (
+          {compare && dying.ok && firm.ok && dying.read.aimOffsetM !== null && firm.read.aimOffsetM !== null ? (
             <p className="rounded-xl bg-ink-50 px-3 py-2 text-sm text-ink-800" aria-live="polite">
               Dying ({aimWords(dying.read.aimOffsetM, units)}) against firm ({aimWords(firm.read.aimOffsetM, units)}): a dying ball needs{" "}
               <strong>{formatShort(Math.abs(dying.read.aimOffsetM) - Math.abs(firm.read.aimOffsetM), units)}</strong> more borrow,{" "}

@@ -1,4 +1,4 @@
-// The player's read: an aim (slider, or an amount and a side) and a pace as "plays like" (slider or a number).
+// The player's read: an aim (slider, or an amount and a side) and a pace as a flat-putt length (slider or a number).
 import { useId, useState } from "react";
 import {
   formatLength,
@@ -20,8 +20,8 @@ export function aimRangeM(distanceM: number): number {
   return Math.min(8, Math.max(0.6, Math.ceil(0.55 * distanceM * 10) / 10));
 }
 
-/** Plays-like range for a putt, m. */
-export function playsLikeRangeM(distanceM: number): { min: number; max: number } {
+/** Flat-putt length range for a putt, m. */
+export function flatPuttRangeM(distanceM: number): { min: number; max: number } {
   return { min: Math.max(0.3, Math.floor(0.3 * distanceM * 10) / 10), max: Math.ceil((2 * distanceM + 0.5) * 10) / 10 };
 }
 
@@ -122,27 +122,27 @@ export function AimControl({
   );
 }
 
-export function PlaysLikeControl({
-  playsLikeM,
+export function FlatPuttControl({
+  flatPuttLengthM,
   distanceM,
   units,
   disabled,
   onChange,
 }: {
-  playsLikeM: number;
+  flatPuttLengthM: number;
   distanceM: number;
   units: UnitSystem;
   disabled?: boolean;
   onChange: (m: number) => void;
 }) {
   const id = useId();
-  const { min, max } = playsLikeRangeM(distanceM);
+  const { min, max } = flatPuttRangeM(distanceM);
   const fmt = (m: number) => String(Number(toLongUnit(m, units).toFixed(units === "metric" ? 2 : 1)));
-  const [draft, setDraft] = useState(fmt(playsLikeM));
-  const [seen, setSeen] = useState(playsLikeM);
-  if (seen !== playsLikeM) {
-    setSeen(playsLikeM);
-    setDraft(fmt(playsLikeM));
+  const [draft, setDraft] = useState(fmt(flatPuttLengthM));
+  const [seen, setSeen] = useState(flatPuttLengthM);
+  if (seen !== flatPuttLengthM) {
+    setSeen(flatPuttLengthM);
+    setDraft(fmt(flatPuttLengthM));
   }
   return (
     <fieldset className="flex flex-col gap-1.5" disabled={disabled}>
@@ -152,7 +152,7 @@ export function PlaysLikeControl({
           Pace: hit it like a flat putt of
         </label>
         <output htmlFor={`${id}-range`} className="font-semibold text-ink-900 tabular-nums">
-          {formatLength(playsLikeM, units)}
+          {formatLength(flatPuttLengthM, units)}
         </output>
       </div>
       <input
@@ -161,8 +161,8 @@ export function PlaysLikeControl({
         min={min}
         max={max}
         step={0.05}
-        value={playsLikeM}
-        aria-valuetext={`plays like ${formatLength(playsLikeM, units)}`}
+        value={flatPuttLengthM}
+        aria-valuetext={`as hard as a flat ${formatLength(flatPuttLengthM, units)} putt`}
         onChange={(e) => onChange(Number(e.target.value))}
         className="h-11 w-full cursor-pointer accent-ink-900"
       />
@@ -172,7 +172,7 @@ export function PlaysLikeControl({
       </div>
       <div className="flex flex-wrap items-center gap-2">
         <label htmlFor={`${id}-number`} className="text-sm text-ink-700">
-          Plays like ({longUnitLabel(units)})
+          Flat-putt length ({longUnitLabel(units)})
         </label>
         <input
           id={`${id}-number`}

@@ -26,8 +26,8 @@ function aimErrorWords(e: Ok, units: UnitSystem): string {
 
 function paceErrorWords(e: Ok, distanceM: number, units: UnitSystem): string {
   const share = Math.round((Math.abs(e.paceErrorM) / distanceM) * 100);
-  if (Math.abs(e.paceErrorM) < 0.02) return `Your pace was spot on: it plays like ${formatLength(e.truth.playsLikeM, units)}.`;
-  return `You played it like ${formatLength(e.yours.playsLikeM, units)}; it plays like ${formatLength(e.truth.playsLikeM, units)}, so you were ${lengthWords(e.paceErrorM, units)} ${e.paceErrorM > 0 ? "firmer" : "softer"} than needed (${share} % of the putt's length).`;
+  if (Math.abs(e.paceErrorM) < 0.02) return `Your pace was spot on: hit it as hard as a flat ${formatLength(e.truth.flatPuttLengthM, units)} putt.`;
+  return `You hit it as hard as a flat ${formatLength(e.yours.flatPuttLengthM, units)} putt; it needed a flat ${formatLength(e.truth.flatPuttLengthM, units)} putt, so you were ${lengthWords(e.paceErrorM, units)} ${e.paceErrorM > 0 ? "firmer" : "softer"} than needed (${share} % of the putt's length).`;
 }
 
 /** The score and what it is made of, in words. */
@@ -49,7 +49,7 @@ export function ResultPanel({ result, distanceM, units }: { result: Ok; distance
         <li>{paceErrorWords(result, distanceM, units)}</li>
         <li>
           The true read, for a pace that would finish {formatShort(TARGET_ROLL_PAST_M, units)} past: aim{" "}
-          {aimWords(result.truth.aimOffsetM, units)}, and it plays like {formatLength(result.truth.playsLikeM, units)}.
+          {aimWords(result.truth.aimOffsetM, units)}, hit as hard as a flat {formatLength(result.truth.flatPuttLengthM, units)} putt.
         </li>
       </ul>
     </section>

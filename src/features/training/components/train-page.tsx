@@ -15,7 +15,7 @@ import { useMe } from "../../auth/api/get-me";
 import { useCreateAttempt } from "../api/create-attempt";
 import { newSeed, roundPutt } from "../utils/putt-generator";
 import { HistorySection } from "./history-section";
-import { AimControl, PlaysLikeControl, aimRangeM } from "./read-controls";
+import { AimControl, FlatPuttControl, aimRangeM } from "./read-controls";
 import { ResultPanel } from "./result-panel";
 
 const DEFAULT_LEVEL: TrainingLevelId = "club";
@@ -120,7 +120,7 @@ type RoundProps = {
 function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: RoundProps) {
   const putt = useMemo(() => roundPutt(level, seed, n), [level, seed, n]);
   const [aimOffsetM, setAim] = useState(0);
-  const [playsLikeM, setPlaysLike] = useState(() => Math.round(putt.distanceM * 20) / 20);
+  const [flatPuttLengthM, setFlatPutt] = useState(() => Math.round(putt.distanceM * 20) / 20);
   const [result, setResult] = useState<Evaluation | null>(null);
   const [replay, setReplay] = useState<Replay | null>(null);
   const [view, setView] = useState<{ view: CameraView; key: number }>({ view: "behind", key: 0 });
@@ -136,7 +136,7 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
   const interval = contourIntervalM(hr.maxM - hr.minM, units);
 
   const reveal = () => {
-    const guess = { aimOffsetM, playsLikeM };
+    const guess = { aimOffsetM, flatPuttLengthM };
     // The same code the server runs (shared/training.ts); a signed-in player's attempt is scored again there.
     const ev = evaluateAttempt(putt, guess);
     setResult(ev);
@@ -221,7 +221,7 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
             disabled={revealed}
             onChange={(m) => setAim(clampAim(m))}
           />
-          <PlaysLikeControl playsLikeM={playsLikeM} distanceM={putt.distanceM} units={units} disabled={revealed} onChange={setPlaysLike} />
+          <FlatPuttControl flatPuttLengthM={flatPuttLengthM} distanceM={putt.distanceM} units={units} disabled={revealed} onChange={setFlatPutt} />
           {!revealed ? (
             <Button variant="accent" size="lg" onClick={reveal}>
               Reveal the line
