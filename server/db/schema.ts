@@ -181,8 +181,10 @@ export const invitations = pgTable(
       .notNull()
       .references(() => squads.id, { onDelete: "cascade" }),
     email: text("email").notNull(),
-    /** SHA-256 of the token; the token itself only travels in the e-mail. */
+    /** SHA-256 of the e-mailed link's token; the token itself only travels in the e-mail, so it proves the address. */
     tokenHash: text("token_hash").notNull().unique(),
+    /** SHA-256 of the link the coach may copy and pass on by hand: it does not prove the address. */
+    shareTokenHash: text("share_token_hash").unique(),
     status: text("status").notNull().default("pending"),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     acceptedBy: text("accepted_by").references(() => user.id, { onDelete: "set null" }),

@@ -79,6 +79,8 @@ export type InvitationPreview = {
   email: string;
   status: InvitationStatus;
   expiresAt: string;
+  /** True for the e-mailed link, whose use confirms the address; false for a link the coach passed on by hand. */
+  provesAddress: boolean;
 };
 
 /** GET /api/coach/squads/:id/overview (and its CSV export): "recent" is the last `days` days up to today. */

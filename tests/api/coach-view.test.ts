@@ -128,7 +128,10 @@ test("POST /api/invitations/:id/resend e-mails a new link; the old link is withd
   expect(resent.status).toBe(201);
   const newToken = await invitationTokenFor(server, email, seenAfterFirst);
   expect(newToken).not.toBe(oldToken);
-  expect(resent.body.link).toMatch(new RegExp(`/join/${newToken}$`));
+  // The answer's link is the share link for the coach to copy: a different token to the same new invitation.
+  const shareToken = new URL(resent.body.link).pathname.split("/").pop()!;
+  expect(shareToken).not.toBe(newToken);
+  expect((await new HttpClient(server.url).get(`/api/invitations/${shareToken}`)).body).toMatchObject({ status: "pending", provesAddress: false });
   expect((await new HttpClient(server.url).get(`/api/invitations/${oldToken}`)).body.status).toBe("revoked");
   expect((await new HttpClient(server.url).get(`/api/invitations/${newToken}`)).body.status).toBe("pending");
 
