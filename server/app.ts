@@ -9,6 +9,7 @@ import type { AppDeps } from "./deps";
 import { apiNotFound, errorHandler } from "./middleware/errors";
 import { authBodyGuard, reshapeAuthError, requireJsonBody, sameOriginWrites, type UploadRoute } from "./middleware/guards";
 import { limiter, mailLimiters, withStore } from "./middleware/rate-limit";
+import { forbidden } from "./lib/http-error";
 import { loadSession } from "./middleware/session";
 import { apiRouters } from "./routes";
 
@@ -71,6 +72,8 @@ export function createApp(appDeps: AppDeps): Express {
   app.use(limitedAuthPaths, authLimiter);
   const mailingAuthPaths = ["/api/auth/sign-up/email", "/api/auth/send-verification-email", "/api/auth/request-password-reset"];
   app.post(mailingAuthPaths, mail.byClientAddress, mail.byRecipient);
+  // Admin changes go through /api/admin (audited, with the self-protection rules), never straight to the plugin.
+  app.post("/api/auth/admin/{*any}", (_req, _res, next) => next(forbidden("Use the admin screens (/api/admin) for this; every admin action is recorded there.")));
   const authHandler = toNodeHandler(async (request: Request) => reshapeAuthError(await auth.handler(request)));
   app.all("/api/auth/{*any}", authHandler as RequestHandler);
   app.use("/api/auth", errorHandler(logger));

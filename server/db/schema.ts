@@ -181,8 +181,10 @@ export const invitations = pgTable(
       .notNull()
       .references(() => squads.id, { onDelete: "cascade" }),
     email: text("email").notNull(),
-    /** SHA-256 of the token; the token itself only travels in the e-mail. */
+    /** SHA-256 of the e-mailed link's token; the token itself only travels in the e-mail, so it proves the address. */
     tokenHash: text("token_hash").notNull().unique(),
+    /** SHA-256 of the link the coach may copy and pass on by hand: it does not prove the address. */
+    shareTokenHash: text("share_token_hash").unique(),
     status: text("status").notNull().default("pending"),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     acceptedBy: text("accepted_by").references(() => user.id, { onDelete: "set null" }),
@@ -242,4 +244,36 @@ export const trainingAttempts = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index("training_attempts_user_idx").on(t.userId, t.createdAt)],
+);
+
+/** A coach's dated note on a player of their squads; the player reads it (issue 15). */
+export const playerNotes = pgTable(
+  "player_notes",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    playerId: userRef("player_id"),
+    authorId: userRef("author_id"),
+    body: text("body").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("player_notes_player_idx").on(t.playerId, t.createdAt)],
+);
+
+/**
+ * Every admin action (who, what, when). The actor and target e-mails are copied in, so the record still
+ * reads after an account is gone; the ids are kept without foreign keys for the same reason.
+ */
+export const adminAudit = pgTable(
+  "admin_audit",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    actorId: text("actor_id").notNull(),
+    actorEmail: text("actor_email").notNull(),
+    action: text("action").notNull(),
+    targetId: text("target_id"),
+    targetEmail: text("target_email"),
+    detail: jsonb("detail"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("admin_audit_created_idx").on(t.createdAt)],
 );

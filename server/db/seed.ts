@@ -20,6 +20,8 @@ export async function createAccount(
   who: { name: string; email: string },
   role: "player" | "coach" | "admin",
   password = DEMO_PASSWORD,
+  /** When the account was made (the seed backdates its people to before their first session); default now. */
+  createdAt?: Date,
 ): Promise<string> {
   const id = crypto.randomUUID();
   await db.insert(user).values({
@@ -29,6 +31,7 @@ export async function createAccount(
     emailVerified: true,
     role,
     accountType: role === "coach" ? "coach" : "player",
+    ...(createdAt ? { createdAt, updatedAt: createdAt } : {}),
   });
   await db.insert(account).values({ id: crypto.randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
   return id;
@@ -48,10 +51,14 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
   const math = create(all!, { randomSeed: "larkspur-heath" });
   const rand = () => math.random();
 
-  await createAccount(db, DEMO_ADMIN, "admin");
-  const coachId = await createAccount(db, DEMO_COACH, "coach");
+  // Sign-up dates tell the story: the admin set the club up, the coach joined, then each junior signed up
+  // and joined the squad a few days before their first logged session (no session of player i is older than DEMO_WEEKS weeks + i days).
+  const at = (daysAgo: number, hourUtc: number) => new Date(Date.parse(`${isoDaysAgo(daysAgo)}T00:00:00Z`) + hourUtc * 3_600_000);
+  const firstSessionDaysAgo = (i: number) => DEMO_WEEKS * 7 + i; // no session of player i is older than this
+  await createAccount(db, DEMO_ADMIN, "admin", DEMO_PASSWORD, at(DEMO_WEEKS * 7 + 30, 10));
+  const coachId = await createAccount(db, DEMO_COACH, "coach", DEMO_PASSWORD, at(DEMO_WEEKS * 7 + 21, 17));
   const playerIds: string[] = [];
-  for (const p of DEMO_PLAYERS) playerIds.push(await createAccount(db, p, "player"));
+  for (const [i, p] of DEMO_PLAYERS.entries()) playerIds.push(await createAccount(db, p, "player", DEMO_PASSWORD, at(firstSessionDaysAgo(i) + 4 + i, 18)));
 
   const [green] = await db.insert(greens).values({ ownerId: coachId, name: DEMO_GREEN.name, locationNote: DEMO_GREEN.locationNote }).returning();
   await db.insert(stimpReadings).values([
@@ -59,9 +66,9 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
     { greenId: green!.id, measuredOn: isoDaysAgo(7), stimpFt: DEMO_GREEN.stimpFt },
   ]);
 
-  const [squad] = await db.insert(squads).values({ coachId, ...DEMO_SQUAD }).returning();
-  await db.insert(squadMembers).values(playerIds.map((playerId) => ({ squadId: squad!.id, playerId })));
-  await db.insert(ladders).values(DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l })));
+  const [squad] = await db.insert(squads).values({ coachId, ...DEMO_SQUAD, createdAt: at(DEMO_WEEKS * 7 + 20, 9) }).returning();
+  await db.insert(squadMembers).values(playerIds.map((playerId, i) => ({ squadId: squad!.id, playerId, joinedAt: at(firstSessionDaysAgo(i) + 2, 19) })));
+  await db.insert(ladders).values(DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l, createdAt: at(DEMO_WEEKS * 7 + 19, 20), updatedAt: at(DEMO_WEEKS * 7 + 19, 20) })));
 
   for (const [i, p] of DEMO_PLAYERS.entries()) {
     const playerId = playerIds[i]!;

@@ -13,6 +13,8 @@ import { greensRoutes } from "./greens/greens.routes";
 import { healthRoutes } from "./health/health.routes";
 import { heightMapRoutes } from "./height-maps/height-maps.routes";
 import { meRoutes } from "./me/me.routes";
+import { notesRoutes } from "./notes/notes.routes";
+import { adminRoutes } from "./admin/admin.routes";
 import { puttsRoutes } from "./putts/putts.routes";
 import { readsRoutes } from "./reads/reads.routes";
 import { roundsRoutes } from "./rounds/rounds.routes";
@@ -36,6 +38,8 @@ export function apiRouters(deps: RouterDeps): Router[] {
   routers.push(trainingRoutes(deps));
   routers.push(makeProbabilityRoutes(deps));
   routers.push(heightMapRoutes(deps));
+  routers.push(notesRoutes(deps));
+  routers.push(adminRoutes(deps));
   if (deps.smtpFake) routers.push(devRoutes(deps));
   return routers;
 }

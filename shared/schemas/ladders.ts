@@ -45,6 +45,8 @@ export type Ladder = LadderInput & {
   id: string;
   builtIn: boolean;
   ownerId: string | null;
+  /** In a library list: the owner's name (an admin sees every coach's ladders). */
+  ownerName?: string;
   createdAt: string | null;
   updatedAt: string | null;
 };

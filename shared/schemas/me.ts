@@ -12,6 +12,8 @@ export const meSchema = z.object({
     email: z.string(),
     role: z.enum(ROLES),
     emailVerified: z.boolean(),
+    /** When the account was made (ISO); the home page greets an account under a day old as new. */
+    createdAt: z.string(),
   }),
   preferences: preferencesSchema,
 });

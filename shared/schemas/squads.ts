@@ -79,4 +79,32 @@ export type InvitationPreview = {
   email: string;
   status: InvitationStatus;
   expiresAt: string;
+  /** True for the e-mailed link, whose use confirms the address; false for a link the coach passed on by hand. */
+  provesAddress: boolean;
+};
+
+/** GET /api/coach/squads/:id/overview (and its CSV export): "recent" is the last `days` days up to today. */
+export const squadOverviewQuerySchema = z
+  .object({ days: z.coerce.number().int().min(7).max(120).default(28) })
+  .strict();
+export type SquadOverviewQuery = z.infer<typeof squadOverviewQuerySchema>;
+
+type OverviewRate = { attempts: number; made: number; rate: number | null };
+export type SquadOverviewPlayer = {
+  id: string;
+  name: string;
+  email: string;
+  recent: { sessions: number; putts: number; strokesGainedPerPutt: number | null; lastSession: string | null };
+  past: { putts: number; strokesGainedPerPutt: number | null };
+  /** Per band of the overview: the recent period against everything before it. */
+  bands: { recent: OverviewRate; past: OverviewRate }[];
+  ladders: { active: number; completed: number; overdue: number; latest: { name: string; status: string; overdue: boolean; rungReached: number; rungsTotal: number } | null };
+};
+export type SquadOverview = {
+  squad: { id: string; name: string };
+  days: number;
+  recentFrom: string;
+  today: string;
+  bands: { fromM: number; toM: number | null }[];
+  players: SquadOverviewPlayer[];
 };

@@ -71,3 +71,29 @@ export const sessionStatsQuerySchema = z
 
 export type BandRate = { fromM: number; toM: number | null; attempts: number; made: number; rate: number | null; ci95: Interval | null };
 export type MakeRates = { playerId: string; from: string | null; to: string | null; source: StatSource; bands: BandRate[] };
+
+/** GET /api/stats/misses: practice putts only (a round's holes record no miss side or leave). */
+export const missesQuerySchema = z
+  .object({ ...dateRangeFields, bands: bandsParamSchema.optional(), playerId: playerIdSchema.optional() })
+  .strict()
+  .superRefine(fromNotAfterTo);
+export type MissesQuery = z.infer<typeof missesQuerySchema>;
+
+/**
+ * One band's misses and strokes: `left`/`right` count misses with a side logged; `short`/`long` misses with
+ * a leave logged (negative leave = short). `strokesGained` sums the band's putts against the tour baseline.
+ */
+export type MissBand = {
+  fromM: number;
+  toM: number | null;
+  attempts: number;
+  made: number;
+  missed: number;
+  left: number;
+  right: number;
+  short: number;
+  long: number;
+  strokesGained: number;
+  leavesAssumed: number;
+};
+export type Misses = { playerId: string; from: string | null; to: string | null; bands: MissBand[] };

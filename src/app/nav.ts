@@ -24,6 +24,7 @@ export const navItems: ReadonlyArray<NavItem> = [
   { label: "Practice", to: paths.practice.href(), signedIn: true, match: ["/practice", "/rounds", "/greens", "/stats"] },
   { label: "My ladders", to: paths.myLadders.href(), roles: ["player"], match: ["/ladders/mine", "/ladders/run", "/squads"] },
   { label: "Coaching", to: paths.coach.href(), roles: ["coach", "admin"], match: ["/coach", "/squads", "/ladders"] },
+  { label: "Admin", to: paths.admin.href(), roles: ["admin"], match: ["/admin"] },
 ];
 
 /** Tabs across the pages of one area, shown by the app shell on those pages. */
@@ -48,6 +49,16 @@ export const sectionNavs: ReadonlyArray<SectionNav> = [
       { label: "Dashboard", to: paths.coach.href() },
       { label: "Squads", to: paths.squads.href() },
       { label: "Ladders", to: paths.ladders.href() },
+    ],
+  },
+  {
+    label: "Admin",
+    roles: ["admin"],
+    match: ["/admin"],
+    items: [
+      { label: "Accounts", to: paths.admin.href() },
+      { label: "Squads and ladders", to: paths.adminCoaching.href() },
+      { label: "Audit", to: paths.adminAudit.href() },
     ],
   },
   {

@@ -55,6 +55,10 @@ export function createAppRoutes(_queryClient: QueryClient): RouteObject[] {
             { path: paths.ladderEdit.path, lazy: () => import("./routes/coaching/ladder-edit") },
             { path: paths.coach.path, lazy: () => import("./routes/coaching/coach") },
             { path: paths.coachPlayer.path, lazy: () => import("./routes/coaching/coach-player") },
+            // admin screens (issue 15)
+            { path: paths.admin.path, lazy: () => import("./routes/admin/users") },
+            { path: paths.adminCoaching.path, lazy: () => import("./routes/admin/coaching") },
+            { path: paths.adminAudit.path, lazy: () => import("./routes/admin/audit") },
             { path: paths.mailbox.path, lazy: () => import("./routes/dev/mailbox") },
             { path: "*", Component: NotFoundRoute },
           ],

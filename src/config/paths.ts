@@ -49,6 +49,11 @@ export const paths = {
   coach: { path: "/coach", href: () => "/coach" },
   coachPlayer: { path: "/coach/players/:playerId", href: (playerId: string) => `/coach/players/${encodeURIComponent(playerId)}` },
 
+  // admin screens (issue 15)
+  admin: { path: "/admin", href: () => "/admin" },
+  adminCoaching: { path: "/admin/coaching", href: () => "/admin/coaching" },
+  adminAudit: { path: "/admin/audit", href: () => "/admin/audit" },
+
   // the local inbox when no SMTP_URL is set (admins only)
   mailbox: { path: "/dev/mailbox", href: () => "/dev/mailbox" },
 } as const;
@@ -86,6 +91,16 @@ export const apiPaths = {
   statsCompare: "/api/stats/compare",
   statsBaseline: "/api/stats/baseline",
   statsSessions: "/api/stats/sessions",
+  statsMisses: "/api/stats/misses",
+  // the coach's view of a player and a squad, notes, admin (issue 15)
+  playerNotes: (playerId: string) => `/api/players/${encodeURIComponent(playerId)}/notes`,
+  squadOverview: (id: string) => `/api/coach/squads/${encodeURIComponent(id)}/overview`,
+  squadOverviewExport: (id: string) => `/api/coach/squads/${encodeURIComponent(id)}/overview/export`,
+  invitationResend: (id: string) => `/api/invitations/${encodeURIComponent(id)}/resend`,
+  adminUsers: "/api/admin/users",
+  adminUserAction: (id: string, action: "role" | "ban" | "unban" | "revoke-sessions" | "password-reset") => `/api/admin/users/${encodeURIComponent(id)}/${action}`,
+  adminAudit: "/api/admin/audit",
+  adminCoaching: "/api/admin/coaching",
   // coaching (issue 6)
   squads: "/api/squads",
   squad: (id: string) => `/api/squads/${encodeURIComponent(id)}`,

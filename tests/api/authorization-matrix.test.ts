@@ -51,6 +51,8 @@ const SIGNED_IN = (ok: number): Expect => ({ anon: 401, p1: ok, p2: ok, c1: ok, 
 const PUBLIC: Expect = { anon: 200, p1: 200, p2: 200, c1: 200, c2: 200, admin: 200 };
 /** C1's squad, ladder or invitation: players are refused by role (403), another coach finds nothing (404), an admin may. */
 const C1_COACHING = (ok: number): Expect => ({ anon: 401, p1: 403, p2: 403, c1: ok, c2: 404, admin: ok });
+/** The admin screens' API: everyone else is refused by role. */
+const ADMIN_ONLY = (ok: number): Expect => ({ anon: 401, p1: 403, p2: 403, c1: 403, c2: 403, admin: ok });
 /** A coach's own library or squads (players refused by role). */
 const ANY_COACH = (ok: number): Expect => ({ anon: 401, p1: 403, p2: 403, c1: ok, c2: ok, admin: ok });
 
@@ -105,7 +107,8 @@ type MarkerName =
   | "l2Id"
   | "l2Name"
   | "a2Id"
-  | "c2Id";
+  | "c2Id"
+  | "p1NoteText";
 /** Each marker and the personas who may see it anywhere; nobody else's answer may contain it. */
 let markers: Record<MarkerName, { value: string; audience: Persona[] }>;
 
@@ -147,6 +150,8 @@ const fresh = {
     return { id: body.invitation.id as string, token: await invitationTokenFor(server, email, seen) };
   },
   ladder: async () => createLadder(clients.c1, { ...THREE_RUNGS, name: "Throwaway ladder" }),
+  /** A new player account nobody coaches (the admin rows change it). */
+  user: async () => (await signedUpClient(server, "player", "Throwaway Player")).id,
   assignment: async (withPutt: boolean) => {
     const id = (await ok(clients.c1.post(`/api/ladders/${fx.l1}/assignments`, { playerIds: [people.p1.id] }))).assignments[0].id as string;
     if (withPutt) await ok(clients.p1.post(`/api/assignments/${id}/putts`, { holed: true }));
@@ -208,6 +213,9 @@ beforeAll(async () => {
   const l2 = await createLadder(c2.client, { ...THREE_RUNGS, name: "secret-ladder-C2" });
   const a2 = (await ok(c2.client.post(`/api/ladders/${l2}/assignments`, { playerIds: [p2.id] }))).assignments[0].id;
 
+  // C1's note on P1: P1, C1 and an admin read it.
+  await ok(c1.client.post(`/api/players/${p1.id}/notes`, { body: "secret-note-on-P1" }));
+
   fx = { s1, s2, l1, a1, green, session, scratchSession, putt, round, read, attempt, p2Session, l2, a2, coachGreen, inviteToken };
   const p1Side: Persona[] = ["p1", "c1", "admin"];
   const p2Side: Persona[] = ["p2", "c2", "admin"];
@@ -242,6 +250,7 @@ beforeAll(async () => {
     l2Name: { value: "secret-ladder-C2", audience: p2Side },
     a2Id: { value: a2, audience: p2Side },
     c2Id: { value: c2.id, audience: p2Side },
+    p1NoteText: { value: "secret-note-on-P1", audience: p1Side },
   };
 }, 120_000);
 
@@ -351,6 +360,13 @@ const rows: Row[] = [
     readBack: () => ({ as: "c1", path: `/api/squads/${fx.s1}/invitations` }),
   },
   {
+    route: "POST /api/invitations/:id/resend",
+    target: "an invitation of C1's (fresh)",
+    params: async () => ({ id: (await fresh.invitation(fx.s1, uniqueEmail("resend"))).id }),
+    expect: C1_COACHING(201),
+    readBack: () => ({ as: "c1", path: `/api/squads/${fx.s1}/invitations` }),
+  },
+  {
     // Only the invited player account may accept (coach and admin accounts never join; another e-mail is 403).
     route: "POST /api/invitations/:token/accept",
     target: "C1's invitation for P1 to a fresh squad",
@@ -432,6 +448,74 @@ const rows: Row[] = [
     expect: C1_COACHING(200),
     reveals: "a1Id",
   },
+
+  {
+    route: "GET /api/coach/squads/:id/overview",
+    target: "C1's squad S1",
+    params: () => ({ id: fx.s1 }),
+    expect: C1_COACHING(200),
+    reveals: "p1Id",
+  },
+  { route: "GET /api/coach/squads/:id/overview/export", target: "C1's squad S1", params: () => ({ id: fx.s1 }), expect: C1_COACHING(200) },
+
+  // Notes on a player: the player, their coach and an admin read them; only a coach of theirs (or an admin) writes one.
+  {
+    route: "GET /api/players/:playerId/notes",
+    target: "P1's notes",
+    params: () => ({ playerId: p1Id() }),
+    expect: PLAYER_ID_QUERY,
+    reveals: "p1NoteText",
+  },
+  {
+    route: "POST /api/players/:playerId/notes",
+    target: "P1's notes",
+    params: () => ({ playerId: p1Id() }),
+    body: () => ({ body: "Keep the putter low through the ball." }),
+    expect: { anon: 401, p1: 403, p2: 403, c1: 201, c2: 404, admin: 201 },
+    readBack: (p) => ({ as: "p1", path: `/api/players/${p.playerId}/notes` }),
+  },
+
+  // Admin screens (better-auth's admin plugin behind /api/admin, every change audited).
+  { route: "GET /api/admin/users", target: "every account", expect: ADMIN_ONLY(200), reveals: "p1Id" },
+  {
+    route: "POST /api/admin/users/:id/role",
+    target: "a fresh player",
+    params: async () => ({ id: await fresh.user() }),
+    body: () => ({ role: "coach" }),
+    expect: ADMIN_ONLY(200),
+    readBack: () => ({ as: "admin", path: "/api/admin/audit" }),
+  },
+  {
+    route: "POST /api/admin/users/:id/ban",
+    target: "a fresh player",
+    params: async () => ({ id: await fresh.user() }),
+    body: () => ({ reason: "matrix" }),
+    expect: ADMIN_ONLY(200),
+    readBack: () => ({ as: "admin", path: "/api/admin/audit" }),
+  },
+  {
+    route: "POST /api/admin/users/:id/unban",
+    target: "a fresh player",
+    params: async () => ({ id: await fresh.user() }),
+    expect: ADMIN_ONLY(200),
+    readBack: () => ({ as: "admin", path: "/api/admin/audit" }),
+  },
+  {
+    route: "POST /api/admin/users/:id/revoke-sessions",
+    target: "a fresh player",
+    params: async () => ({ id: await fresh.user() }),
+    expect: ADMIN_ONLY(204),
+    readBack: () => ({ as: "admin", path: "/api/admin/audit" }),
+  },
+  {
+    route: "POST /api/admin/users/:id/password-reset",
+    target: "a fresh player",
+    params: async () => ({ id: await fresh.user() }),
+    expect: ADMIN_ONLY(204),
+    readBack: () => ({ as: "admin", path: "/api/admin/audit" }),
+  },
+  { route: "GET /api/admin/audit", target: "the audit list", expect: ADMIN_ONLY(200) },
+  { route: "GET /api/admin/coaching", target: "every coach's squads and ladders", expect: ADMIN_ONLY(200), reveals: "s1Name" },
 
   // Greens: the owner's alone — neither P1's coach nor an admin reads them (greens.handlers.ts greenOf).
   { route: "GET /api/greens", target: "own greens", expect: SIGNED_IN(200), reveals: "p1GreenNote" },
@@ -571,6 +655,7 @@ const rows: Row[] = [
     expect: PLAYER_ID_QUERY,
     reveals: "p1Id",
   },
+  { route: "GET /api/stats/misses", target: "P1's stats (?playerId)", query: ofP1(), expect: PLAYER_ID_QUERY, reveals: "p1Id" },
   // Not public (unlike the read calculator): the tour baseline is part of the signed-in stats pages.
   { route: "GET /api/stats/baseline", target: "none", expect: SIGNED_IN(200) },
   { route: "GET /api/stats/sessions", target: "P1's stats (?playerId)", query: ofP1(), expect: PLAYER_ID_QUERY, reveals: "p1SessionId" },

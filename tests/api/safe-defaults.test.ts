@@ -69,9 +69,14 @@ test("POST /api/squads/:id/invitations answers the inviting coach with the link,
   const preview = await new HttpClient(server.url).get(`/api/invitations/${token}`);
   expect(preview.status).toBe(200);
   expect(preview.body.email).toBe(email);
-  // The e-mailed link is the same one.
+  expect(preview.body.provesAddress).toBe(false);
+  // The e-mailed link opens the same invitation with a token of its own, which the coach never sees, so only
+  // the reader of that inbox can use its proof of the address.
   const mail = await server.smtpFake!.waitFor((m) => m.to.includes(email));
-  expect(mail.text).toContain(link);
+  expect(mail.text).not.toContain(link);
+  const mailed = mail.text.match(/\/join\/([A-Za-z0-9_-]{43})/)![1]!;
+  const mailedPreview = await new HttpClient(server.url).get(`/api/invitations/${mailed}`);
+  expect(mailedPreview.body).toMatchObject({ email, provesAddress: true });
 });
 
 // ---- 2. writes from our own origin ---------------------------------------------------------------------

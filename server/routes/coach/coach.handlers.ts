@@ -1,15 +1,17 @@
 import type { RequestHandler } from "express";
 import { and, eq, inArray } from "drizzle-orm";
 import { idSchema } from "../../../shared/schemas/common";
-import { userIdSchema } from "../../../shared/schemas/squads";
+import { squadOverviewQuerySchema, userIdSchema } from "../../../shared/schemas/squads";
 import type { Db } from "../../db/client";
-import { ladderAssignments, squadMembers, squads, user } from "../../db/schema";
+import { ladderAssignments, squadMembers, squads, user, userPreferences } from "../../db/schema";
+import { toCsv } from "../../lib/csv";
 import { notFound } from "../../lib/http-error";
 import { inSquadsOf } from "../../lib/player-access";
 import { currentUser } from "../../middleware/session";
-import { parseOrThrow } from "../../middleware/validate";
+import { parseOrThrow, query } from "../../middleware/validate";
 import { assignmentRows, assignmentViews, summaryOf, withoutPutts } from "../assignments/assignment-view";
 import { findOwnSquad, ownedBy, squadsOfPlayers } from "../squads/squad-access";
+import { overviewCsvRows, squadOverview } from "./squad-overview";
 
 /**
  * Every player in the coach's squads with the state of each ladder this coach gave them. Players in
@@ -68,5 +70,30 @@ export function listSquadAssignments(db: Db): RequestHandler {
     const rows = await assignmentRows(db, and(eq(ladderAssignments.squadId, squad.id), inSquadsOf(squad.coachId, ladderAssignments.playerId)));
     const summaries = (await assignmentViews(db, rows)).map(summaryOf).reverse();
     res.json({ squad: { id: squad.id, name: squad.name }, assignments: summaries });
+  };
+}
+
+/** The squad at a glance (squad-overview.ts): a coach's own squad, or any for an admin. */
+export function getSquadOverview(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const squad = await findOwnSquad(db, me, parseOrThrow(idSchema, req.params.id, "id"));
+    const { days } = query(req, squadOverviewQuerySchema);
+    res.json(await squadOverview(db, me, squad, days));
+  };
+}
+
+/** The same overview as a CSV file (the project's CSV helper guards formula-like text cells). */
+export function exportSquadOverview(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const squad = await findOwnSquad(db, me, parseOrThrow(idSchema, req.params.id, "id"));
+    const { days } = query(req, squadOverviewQuerySchema);
+    const [prefs] = await db.select({ units: userPreferences.units }).from(userPreferences).where(eq(userPreferences.userId, me.id));
+    const { fields, data } = overviewCsvRows(await squadOverview(db, me, squad, days), prefs?.units === "metric" ? "metric" : "imperial");
+    const name = squad.name.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").toLowerCase() || "squad";
+    res.type("text/csv; charset=utf-8");
+    res.attachment(`borrowline-${name}-overview.csv`);
+    res.send(toCsv(fields, data));
   };
 }

@@ -1,6 +1,6 @@
 import crypto from "node:crypto";
 import type { RequestHandler } from "express";
-import { and, desc, eq, gt, ne, sql } from "drizzle-orm";
+import { and, desc, eq, gt, ne, or, sql } from "drizzle-orm";
 import { ERROR_CODES } from "../../../shared/errors";
 import { idSchema } from "../../../shared/schemas/common";
 import {
@@ -54,12 +54,54 @@ function refusal(status: InvitationStatus): string | null {
   return null;
 }
 
+type SquadRow = typeof squads.$inferSelect;
+
 /**
- * A single-use token travels only in the e-mail; the database keeps its SHA-256. Inviting the same
- * address again sends a fresh link and withdraws the older pending ones.
+ * Two single-use links to one invitation, the database keeping only their SHA-256: the e-mailed one (its
+ * token travels only in the e-mail, so following it proves the address) and a share link returned to the
+ * inviting coach to pass on by hand (it proves nothing, so the player must confirm their address first).
+ * Inviting the same address again (or resending) makes fresh links and withdraws the older ones, so an old
+ * link answers "withdrawn". Returns the new invitation and its share link.
  */
-export function createInvitation({ database, mailer, config, logger }: AppDeps): RequestHandler {
+async function sendInvitation({ database, mailer, config, logger }: AppDeps, squad: SquadRow, email: string) {
   const db = database.db;
+  const token = crypto.randomBytes(32).toString("base64url");
+  const shareToken = crypto.randomBytes(32).toString("base64url");
+  const expiresAt = new Date(Date.now() + INVITATION_DAYS * 24 * 3600 * 1000);
+  const [row] = await db
+    .insert(invitations)
+    .values({ squadId: squad.id, email, tokenHash: hashToken(token), shareTokenHash: hashToken(shareToken), expiresAt })
+    .returning();
+  const [coach] = await db.select({ name: user.name }).from(user).where(eq(user.id, squad.coachId));
+  const link = `${config.baseUrl}/join/${token}`;
+  const shareLink = `${config.baseUrl}/join/${shareToken}`;
+
+  const intro =
+    `${coach?.name ?? "Your coach"} invites you to join the squad "${squad.name}" on Borrowline, to run the putting ladders ` +
+    `they set and share your progress with them. The invitation is for ${email} and can be used once, until ${expiresAt.toISOString().slice(0, 10)}.`;
+  try {
+    await mailer.send(linkMail(email, `Join ${squad.name} on Borrowline`, intro, "Join the squad", link));
+  } catch (err) {
+    await db.delete(invitations).where(eq(invitations.id, row!.id));
+    logger.error({ err, to: email }, "invitation e-mail could not be sent");
+    throw new HttpError(503, ERROR_CODES.internal, "The invitation e-mail could not be sent. Try again in a moment.");
+  }
+  await db
+    .update(invitations)
+    .set({ status: "revoked" })
+    .where(
+      and(
+        eq(invitations.squadId, squad.id),
+        eq(invitations.email, email),
+        eq(invitations.status, "pending"),
+        ne(invitations.id, row!.id),
+      ),
+    );
+  return { invitation: invitationView(row!), link: shareLink };
+}
+
+export function createInvitation(deps: AppDeps): RequestHandler {
+  const db = deps.database.db;
   return async (req, res) => {
     const me = currentUser(req);
     const squad = await findOwnSquad(db, me, parseOrThrow(idSchema, req.params.id, "id"));
@@ -72,38 +114,32 @@ export function createInvitation({ database, mailer, config, logger }: AppDeps):
       .where(and(eq(squadMembers.squadId, squad.id), sql`lower(${user.email}) = ${email}`));
     if (member) throw conflict(`${email} is already in ${squad.name}.`);
 
-    const token = crypto.randomBytes(32).toString("base64url");
-    const link = `${config.baseUrl}/join/${token}`;
-    const expiresAt = new Date(Date.now() + INVITATION_DAYS * 24 * 3600 * 1000);
-    const [row] = await db
-      .insert(invitations)
-      .values({ squadId: squad.id, email, tokenHash: hashToken(token), expiresAt })
-      .returning();
-    const [coach] = await db.select({ name: user.name }).from(user).where(eq(user.id, squad.coachId));
-
-    const intro =
-      `${coach?.name ?? "Your coach"} invites you to join the squad "${squad.name}" on Borrowline, to run the putting ladders ` +
-      `they set and share your progress with them. The invitation is for ${email} and can be used once, until ${expiresAt.toISOString().slice(0, 10)}.`;
-    try {
-      await mailer.send(linkMail(email, `Join ${squad.name} on Borrowline`, intro, "Join the squad", link));
-    } catch (err) {
-      await db.delete(invitations).where(eq(invitations.id, row!.id));
-      logger.error({ err, to: email }, "invitation e-mail could not be sent");
-      throw new HttpError(503, ERROR_CODES.internal, "The invitation e-mail could not be sent. Try again in a moment.");
-    }
-    await db
-      .update(invitations)
-      .set({ status: "revoked" })
-      .where(
-        and(
-          eq(invitations.squadId, squad.id),
-          eq(invitations.email, email),
-          eq(invitations.status, "pending"),
-          ne(invitations.id, row!.id),
-        ),
-      );
     // The inviting coach gets the link too, to pass on by hand (no mailbox needed for the demo).
-    res.status(201).json({ invitation: invitationView(row!), link });
+    const sent = await sendInvitation(deps, squad, email);
+    res.status(201).json(sent);
+  };
+}
+
+/**
+ * Sends a not-yet-accepted invitation again with a new token: the old link is withdrawn (it answers 409
+ * "withdrawn"), the new one runs 14 days from now. The answer carries the new link for the coach to copy.
+ */
+export function resendInvitation(deps: AppDeps): RequestHandler {
+  const db = deps.database.db;
+  return async (req, res) => {
+    const me = currentUser(req);
+    const id = parseOrThrow(idSchema, req.params.id, "id");
+    const [found] = await db
+      .select({ invitation: invitations, squad: squads })
+      .from(invitations)
+      .innerJoin(squads, eq(squads.id, invitations.squadId))
+      .where(and(eq(invitations.id, id), ownedBy(squads.coachId, me)));
+    if (!found) throw notFound("Invitation");
+    if (found.invitation.status === "accepted") throw conflict("This invitation was already accepted; there is nothing to resend.");
+    const sent = await sendInvitation(deps, found.squad, found.invitation.email);
+    // A revoked or expired invitation resent: the old row is withdrawn too (it may not have been pending).
+    await db.update(invitations).set({ status: "revoked" }).where(and(eq(invitations.id, id), ne(invitations.status, "accepted")));
+    res.status(201).json(sent);
   };
 }
 
@@ -144,21 +180,24 @@ async function findByToken(db: Db, raw: unknown) {
     .from(invitations)
     .innerJoin(squads, eq(squads.id, invitations.squadId))
     .innerJoin(user, eq(user.id, squads.coachId))
-    .where(eq(invitations.tokenHash, hashToken(token)));
+    .where(or(eq(invitations.tokenHash, hashToken(token)), eq(invitations.shareTokenHash, hashToken(token))));
   if (!found) throw notFound("Invitation");
-  return found;
+  /** True for the e-mailed link: only someone who reads that address's mail has it. */
+  const provesAddress = found.invitation.tokenHash === hashToken(token);
+  return { ...found, provesAddress };
 }
 
 /** Public: the join page shows whom the link is for before anyone signs in. */
 export function previewInvitation(db: Db): RequestHandler {
   return async (req, res) => {
-    const { invitation, squad, coachName } = await findByToken(db, req.params.token);
+    const { invitation, squad, coachName, provesAddress } = await findByToken(db, req.params.token);
     const preview: InvitationPreview = {
       squad: { name: squad.name },
       coach: { name: coachName },
       email: invitation.email,
       status: statusOf(invitation),
       expiresAt: invitation.expiresAt.toISOString(),
+      provesAddress,
     };
     res.json(preview);
   };
@@ -166,12 +205,13 @@ export function previewInvitation(db: Db): RequestHandler {
 
 /**
  * The signed-in player joins the squad. The account's e-mail must be the invited one (compared without
- * case) and confirmed; coach and admin accounts cannot join squads. Used, withdrawn or expired links answer 409.
+ * case) and confirmed — following the e-mailed link is that confirmation; the coach's share link is not.
+ * Coach and admin accounts cannot join squads. Used, withdrawn or expired links answer 409.
  */
 export function acceptInvitation(db: Db): RequestHandler {
   return async (req, res) => {
     const me = currentUser(req);
-    const { invitation, squad, coachName } = await findByToken(db, req.params.token);
+    const { invitation, squad, coachName, provesAddress } = await findByToken(db, req.params.token);
     const why = refusal(statusOf(invitation));
     if (why) throw conflict(why);
     if (me.role !== "player") throw forbidden(`Only player accounts can join a squad; you are signed in as a ${me.role}.`);
@@ -180,7 +220,7 @@ export function acceptInvitation(db: Db): RequestHandler {
     }
     // Read from the database, not the session's cached copy: the e-mail must really be confirmed.
     const [account] = await db.select({ emailVerified: user.emailVerified }).from(user).where(eq(user.id, me.id));
-    if (!account?.emailVerified) throw forbidden("Confirm your e-mail address first (open the link we sent you), then accept the invitation.");
+    if (!account?.emailVerified && !provesAddress) throw forbidden("Confirm your e-mail address first (open the link we sent you), then accept the invitation.");
     const joinedAt = await db.transaction(async (tx) => {
       // The status guard makes the token single-use even when two accepts race.
       const used = await tx
@@ -189,6 +229,8 @@ export function acceptInvitation(db: Db): RequestHandler {
         .where(and(eq(invitations.id, invitation.id), eq(invitations.status, "pending"), gt(invitations.expiresAt, new Date())))
         .returning({ id: invitations.id });
       if (used.length === 0) throw conflict("This invitation has already been used.");
+      // Following the link that was e-mailed to this exact address proves the address: no second confirmation.
+      if (provesAddress) await tx.update(user).set({ emailVerified: true }).where(and(eq(user.id, me.id), eq(user.emailVerified, false)));
       await tx.insert(squadMembers).values({ squadId: squad.id, playerId: me.id }).onConflictDoNothing();
       const [m] = await tx
         .select({ joinedAt: squadMembers.joinedAt })

@@ -10,7 +10,7 @@ import {
   type Rung,
 } from "../../../shared/schemas/ladders";
 import type { Db } from "../../db/client";
-import { ladders } from "../../db/schema";
+import { ladders, user } from "../../db/schema";
 import { forbidden, notFound } from "../../lib/http-error";
 import { currentUser, type SessionUser } from "../../middleware/session";
 import { body, parseOrThrow } from "../../middleware/validate";
@@ -70,8 +70,14 @@ export function createLadder(db: Db): RequestHandler {
 export function listLadders(db: Db): RequestHandler {
   return async (req, res) => {
     const me = currentUser(req);
-    const rows = await db.select().from(ladders).where(ownedBy(ladders.ownerId, me)).orderBy(desc(ladders.createdAt), ladders.id);
-    res.json({ ladders: [...rows.map(ladderView), ...BUILT_IN_LADDERS] });
+    const rows = await db
+      .select({ ladder: ladders, ownerName: user.name })
+      .from(ladders)
+      .innerJoin(user, eq(user.id, ladders.ownerId))
+      .where(ownedBy(ladders.ownerId, me))
+      .orderBy(desc(ladders.createdAt), ladders.id);
+    // The owner's name goes with each ladder so an admin's list says whose it is.
+    res.json({ ladders: [...rows.map((r) => ({ ...ladderView(r.ladder), ownerName: r.ownerName })), ...BUILT_IN_LADDERS] });
   };
 }
 

@@ -2,14 +2,18 @@ import type { RequestHandler } from "express";
 import { eq } from "drizzle-orm";
 import { preferencesSchema, type Me } from "../../../shared/schemas/me";
 import type { Db } from "../../db/client";
-import { userPreferences } from "../../db/schema";
+import { user as userTable, userPreferences } from "../../db/schema";
 import { currentUser, type SessionUser } from "../../middleware/session";
 import { body } from "../../middleware/validate";
 
 async function meOf(db: Db, user: SessionUser): Promise<Me> {
-  const [prefs] = await db.select().from(userPreferences).where(eq(userPreferences.userId, user.id));
+  const [[prefs], [row]] = await Promise.all([
+    db.select().from(userPreferences).where(eq(userPreferences.userId, user.id)),
+    // Read afresh: the session's cached copy may predate a confirmation (e.g. by an invitation link).
+    db.select({ createdAt: userTable.createdAt, emailVerified: userTable.emailVerified }).from(userTable).where(eq(userTable.id, user.id)),
+  ]);
   return {
-    user,
+    user: { ...user, emailVerified: row?.emailVerified ?? user.emailVerified, createdAt: (row?.createdAt ?? new Date()).toISOString() },
     preferences: { units: prefs?.units === "metric" ? "metric" : "imperial" },
   };
 }

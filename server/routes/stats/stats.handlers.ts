@@ -1,6 +1,6 @@
 import type { RequestHandler } from "express";
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
-import { compareQuerySchema, makeRatesQuerySchema, sessionStatsQuerySchema, trendQuerySchema, type BandRate, type MakeRates } from "../../../shared/schemas/stats";
+import { compareQuerySchema, makeRatesQuerySchema, missesQuerySchema, sessionStatsQuerySchema, trendQuerySchema, type BandRate, type MakeRates, type MissBand, type Misses } from "../../../shared/schemas/stats";
 import { bandsFromEdges, DEFAULT_BAND_EDGES_M, type Band } from "../../../shared/stats/bands";
 import { BASELINE_INTERPOLATION, TOUR_EXPECTED_PUTTS, TOUR_ONE_PUTT_RATE, type BaselineSeries } from "../../../shared/stats/baseline";
 import { ASSUMED_LEAVE_FRACTION, ASSUMED_LEAVE_MIN_M, LONG_PUTT_M, summarisePutts, THREE_PUTT_RANGE_M, type PracticePutt } from "../../../shared/stats/strokes-gained";
@@ -147,5 +147,48 @@ export function sessionStats(db: Db): RequestHandler {
       page: qs.page,
       pageSize: qs.pageSize,
     });
+  };
+}
+
+/**
+ * The pattern of a player's practice misses per band (left/right, short/long) and the strokes gained or
+ * lost in each band against the tour baseline: where the strokes go.
+ */
+export function misses(db: Db): RequestHandler {
+  return async (req, res) => {
+    const viewer = currentUser(req);
+    const qs = query(req, missesQuerySchema);
+    const playerId = await targetPlayerId(db, viewer, qs.playerId);
+    const edges = await edgesFor(db, viewer.id, qs.bands);
+    const where: SQL[] = [eq(putts.playerId, playerId)];
+    if (qs.from) where.push(gte(practiceSessions.date, qs.from));
+    if (qs.to) where.push(lte(practiceSessions.date, qs.to));
+    const rows = await db
+      .select({ distanceM: putts.distanceM, holed: putts.holed, missSide: putts.missSide, missLengthM: putts.missLengthM })
+      .from(putts)
+      .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
+      .where(and(...where));
+    const bands = bandsFromEdges(edges);
+    const groups: PracticePutt[][] = bands.map(() => []);
+    const out: MissBand[] = bands.map((b) => ({ ...band(b), attempts: 0, made: 0, missed: 0, left: 0, right: 0, short: 0, long: 0, strokesGained: 0, leavesAssumed: 0 }));
+    for (const r of rows) {
+      // The band holds its lower edge and excludes its upper one; the last is open-ended (as width_bucket does).
+      const i = bands.findIndex((b) => r.distanceM >= b.fromM && (b.toM === null || r.distanceM < b.toM));
+      if (i < 0) continue;
+      groups[i]!.push(r);
+      const o = out[i]!;
+      if (r.holed) continue;
+      o.missed += 1;
+      if (r.missSide === "left") o.left += 1;
+      if (r.missSide === "right") o.right += 1;
+      if (r.missLengthM !== null && r.missLengthM < 0) o.short += 1;
+      if (r.missLengthM !== null && r.missLengthM > 0) o.long += 1;
+    }
+    groups.forEach((g, i) => {
+      const v = summarisePutts(g);
+      Object.assign(out[i]!, { attempts: v.putts, made: v.holed, strokesGained: v.strokesGained, leavesAssumed: v.leavesAssumed });
+    });
+    const answer: Misses = { playerId, from: qs.from ?? null, to: qs.to ?? null, bands: out };
+    res.json(answer);
   };
 }

@@ -3,6 +3,7 @@ import { ButtonLink, Card } from "../../components/ui";
 import { BreakDiagram } from "../../components/illustrations/break-diagram";
 import { paths } from "../../config/paths";
 import { useMe } from "../../features/auth/api/get-me";
+import { greeting } from "../../features/auth/utils/greeting";
 
 const inputs = [
   { term: "Distance", detail: "ball to hole, in feet or metres" },
@@ -65,7 +66,7 @@ function Welcome() {
 function Greeting() {
   const me = useMe();
   if (!me.data) return <p className="text-sm font-semibold tracking-wide text-coral-300 uppercase">Putting and green reading</p>;
-  return <p className="text-sm font-semibold tracking-wide text-coral-300 uppercase">Welcome back, {me.data.user.name}</p>;
+  return <p className="text-sm font-semibold tracking-wide text-coral-300 uppercase">{greeting(me.data.user.name, me.data.user.createdAt)}</p>;
 }
 
 export function HomeRoute() {

@@ -18,7 +18,7 @@ export function SquadsRoute() {
               </div>
             </>
           ) : (
-            <SquadsPage />
+            <SquadsPage viewerId={me.user.id} />
           )
         }
       </RequireAuth>

@@ -7,7 +7,7 @@ import type { Role } from "../../../../shared/roles";
 export type { Role };
 export type Units = "imperial" | "metric";
 
-export type MeUser = { id: string; name: string; email: string; role: Role; emailVerified: boolean };
+export type MeUser = { id: string; name: string; email: string; role: Role; emailVerified: boolean; createdAt?: string };
 export type MePreferences = { units: Units };
 export type Me = { user: MeUser; preferences: MePreferences };
 

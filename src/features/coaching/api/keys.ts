@@ -13,5 +13,7 @@ export const coachingKeys = {
   coach: () => [...coachingKeys.all, "coach"] as const,
   coachPlayers: () => [...coachingKeys.coach(), "players"] as const,
   coachPlayer: (playerId: string) => [...coachingKeys.coach(), "player", playerId] as const,
+  notes: (playerId: string) => [...coachingKeys.all, "notes", playerId] as const,
+  squadOverview: (squadId: string, days: number) => [...coachingKeys.coach(), "overview", squadId, days] as const,
   makeRates: (playerId: string) => [...coachingKeys.coach(), "make-rates", playerId] as const,
 };

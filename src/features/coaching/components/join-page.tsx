@@ -172,7 +172,7 @@ export function JoinPage({ token }: { token: string }) {
         <p className="text-ink-600">
           Signed in as <strong>{user.email}</strong>.
         </p>
-        {!user.emailVerified ? (
+        {!user.emailVerified && !p.provesAddress ? (
           <Alert tone="info" title="Confirm your e-mail first">
             Open the link we sent to <strong className="break-all">{user.email}</strong>: it confirms the address and brings you back here. Joining needs a
             confirmed e-mail, so that only the person who reads that inbox can use the invitation.

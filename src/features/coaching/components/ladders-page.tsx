@@ -4,7 +4,9 @@ import type { Ladder } from "../../../../shared/schemas/ladders";
 import { Button, ButtonLink, EmptyState, PageHeader, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useCopyLadder } from "../api/copy-ladder";
+import { useMe } from "../../auth/api/get-me";
 import { useDeleteLadder } from "../api/delete-ladder";
+import { splitByOwner } from "../utils/by-owner";
 import { useLadders } from "../api/get-ladders";
 import { useUnits } from "../hooks/use-units";
 import { FAIL_RULE_WORDS, ladderSpan } from "../utils/rule-words";
@@ -12,7 +14,7 @@ import { ConfirmAction } from "./confirm-action";
 import { QueryState } from "./query-state";
 import { Badge } from "./status-badge";
 
-function LadderCard({ ladder }: { ladder: Ladder }) {
+function LadderCard({ ladder, showOwner = false }: { ladder: Ladder; showOwner?: boolean }) {
   const units = useUnits();
   const navigate = useNavigate();
   const copy = useCopyLadder();
@@ -34,6 +36,7 @@ function LadderCard({ ladder }: { ladder: Ladder }) {
           {ladder.name}
         </TextLink>
         {ladder.builtIn ? <Badge tone="accent">Borrowline ladder</Badge> : null}
+        {showOwner && ladder.ownerName ? <Badge tone="neutral">{`Owner: ${ladder.ownerName}`}</Badge> : null}
       </div>
       {ladder.description ? <p className="line-clamp-3 text-ink-600">{ladder.description}</p> : null}
       <p className="text-sm text-ink-500">
@@ -57,7 +60,7 @@ function LadderCard({ ladder }: { ladder: Ladder }) {
             </Button>
             <ConfirmAction
               label="Delete"
-              ariaLabel={`Delete ${ladder.name}`}
+              ariaLabel={showOwner && ladder.ownerName ? `Delete ${ladder.name}, ${ladder.ownerName}'s ladder` : `Delete ${ladder.name}`}
               question="Players who have it keep their copy."
               confirmLabel="Yes, delete"
               pendingLabel="Deleting…"
@@ -74,6 +77,8 @@ function LadderCard({ ladder }: { ladder: Ladder }) {
 /** The coach's ladder library, and Borrowline's own ladders to give as they are or to copy. */
 export function LaddersPage() {
   const ladders = useLadders();
+  const me = useMe();
+  const viewerId = me.data?.user.id ?? "";
   return (
     <>
       <PageHeader
@@ -84,7 +89,11 @@ export function LaddersPage() {
       />
       <QueryState query={ladders} label="Loading ladders">
         {() => {
-          const own = ladders.data!.ladders.filter((l) => !l.builtIn);
+          const { own, others } = splitByOwner(
+            ladders.data!.ladders.filter((l) => !l.builtIn),
+            viewerId,
+            (l) => l.ownerId,
+          );
           const ours = ladders.data!.ladders.filter((l) => l.builtIn);
           return (
             <div className="flex flex-col gap-10">
@@ -104,6 +113,19 @@ export function LaddersPage() {
                   </ul>
                 )}
               </section>
+              {others.length > 0 ? (
+                <section aria-labelledby="other-ladders">
+                  <h2 id="other-ladders" className="text-xl font-semibold tracking-tight">
+                    Other coaches’ ladders
+                  </h2>
+                  <p className="mb-3 text-ink-500">You see these as an admin. Each belongs to the coach named on it.</p>
+                  <ul className="grid gap-4 md:grid-cols-2">
+                    {others.map((l) => (
+                      <LadderCard key={l.id} ladder={l} showOwner />
+                    ))}
+                  </ul>
+                </section>
+              ) : null}
               <section aria-labelledby="our-ladders">
                 <h2 id="our-ladders" className="text-xl font-semibold tracking-tight">
                   Borrowline ladders

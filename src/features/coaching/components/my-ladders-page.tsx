@@ -6,7 +6,9 @@ import { paths } from "../../../config/paths";
 import { useMyAssignments } from "../api/get-my-assignments";
 import { useUnits } from "../hooks/use-units";
 import { passRuleWords, STATUS_WORDS, statusKey } from "../utils/rule-words";
+import { useMe } from "../../auth/api/get-me";
 import { MySquads } from "./my-squads";
+import { NotesCard } from "./notes-card";
 import { QueryState } from "./query-state";
 import { Badge, type BadgeTone } from "./status-badge";
 
@@ -50,6 +52,7 @@ function AssignmentCard({ a }: { a: Assignment }) {
 /** The player's ladders (open ones first) and their squads. */
 export function MyLaddersPage() {
   const assignments = useMyAssignments();
+  const me = useMe();
   return (
     <>
       <PageHeader eyebrow="Practice" title="My ladders" description="The ladders your coach gave you. Take your phone to the practice green and log each putt as you go." />
@@ -92,6 +95,7 @@ export function MyLaddersPage() {
             );
           }}
         </QueryState>
+        {me.data ? <NotesCard playerId={me.data.user.id} playerName={me.data.user.name} canWrite={false} /> : null}
         <MySquads />
       </div>
     </>

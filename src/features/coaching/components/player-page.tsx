@@ -1,69 +1,19 @@
-import { lazy, Suspense } from "react";
+import type { ReactNode } from "react";
 import type { Assignment } from "../../../../shared/schemas/assignments";
 import { formatLength, type UnitSystem } from "../../../../shared/units";
-import { Alert, Card, CardTitle, EmptyState, ErrorBoundary, PageHeader, Spinner, TextLink } from "../../../components/ui";
+import { Card, CardTitle, EmptyState, PageHeader, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useCoachedPlayer } from "../api/get-coached-player";
-import { useMakeRates } from "../api/get-make-rates";
 import { useUnits } from "../hooks/use-units";
 import { STATUS_WORDS, statusKey } from "../utils/rule-words";
-import { playerChartData } from "../utils/squad-chart-data";
+import { NotesCard } from "./notes-card";
 import { QueryState } from "./query-state";
 import { Badge, type BadgeTone } from "./status-badge";
 
-const PlayerRateChart = lazy(() => import("./player-rate-chart"));
 const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
 const dueFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 const TONE: Record<ReturnType<typeof statusKey>, BadgeTone> = { "not-started": "neutral", "in-progress": "warn", completed: "ok", overdue: "bad" };
-
-function MakeRatesCard({ playerId, units }: { playerId: string; units: UnitSystem }) {
-  const rates = useMakeRates(playerId);
-  const rows = rates.data ? playerChartData(rates.data.bands, units) : [];
-  const total = rows.reduce((n, r) => n + r.attempts, 0);
-  return (
-    <Card>
-      <CardTitle>Make rate by distance</CardTitle>
-      <p className="mt-1 text-ink-500">Every logged putt, practice and ladders. The whiskers are 95 % intervals: wide ones mean few putts.</p>
-      <div className="mt-4">
-        {rates.isPending ? (
-          <Spinner label="Loading make rates" />
-        ) : rates.isError ? (
-          <Alert tone="error">{rates.error.message}</Alert>
-        ) : total === 0 ? (
-          <p className="text-ink-500">No putts logged yet.</p>
-        ) : (
-          <>
-            <ErrorBoundary fallback={() => <p className="text-sm text-ink-500">The chart could not be drawn here; the table below has the numbers.</p>}>
-              <Suspense fallback={<Spinner label="Loading the chart" />}>
-                <PlayerRateChart rows={rows} />
-              </Suspense>
-            </ErrorBoundary>
-            <table className="mt-4 w-full text-sm">
-              <caption className="sr-only">Make rate by distance band</caption>
-              <thead>
-                <tr className="border-b border-ink-900/10 text-left text-ink-500">
-                  <th scope="col" className="py-1.5 font-medium">Distance</th>
-                  <th scope="col" className="py-1.5 text-right font-medium">Holed</th>
-                  <th scope="col" className="py-1.5 text-right font-medium">Rate</th>
-                </tr>
-              </thead>
-              <tbody>
-                {rows.map((r) => (
-                  <tr key={r.band} className="border-b border-ink-900/5">
-                    <th scope="row" className="py-1.5 text-left font-normal">{r.band}</th>
-                    <td className="py-1.5 text-right tabular-nums">{r.attempts ? `${r.made} of ${r.attempts}` : "—"}</td>
-                    <td className="py-1.5 text-right tabular-nums">{r.rate === null ? "—" : `${r.rate} %`}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </>
-        )}
-      </div>
-    </Card>
-  );
-}
 
 function HistoryItem({ a, units }: { a: Assignment; units: UnitSystem }) {
   const key = statusKey(a.status, a.overdue);
@@ -102,8 +52,11 @@ function HistoryItem({ a, units }: { a: Assignment; units: UnitSystem }) {
   );
 }
 
-/** One player of the coach's squads: make rates by distance and the history of the ladders given. */
-export function PlayerPage({ playerId }: { playerId: string }) {
+/**
+ * One player of the coach's squads, read-only: their practice figures (the `stats` slot, composed by the
+ * route from the stats feature), the coach's notes and the history of the ladders given.
+ */
+export function PlayerPage({ playerId, stats }: { playerId: string; stats?: (player: { id: string; name: string }) => ReactNode }) {
   const units = useUnits();
   const detail = useCoachedPlayer(playerId);
   if (detail.isError && isApiError(detail.error) && (detail.error.status === 404 || detail.error.status === 400)) {
@@ -121,8 +74,8 @@ export function PlayerPage({ playerId }: { playerId: string }) {
           <>
             <title>{`${d.player.name} · Borrowline`}</title>
             <PageHeader eyebrow={<TextLink to={paths.coach.href()}>Coach dashboard</TextLink>} title={d.player.name} description={`${d.player.email} · ${d.squads.map((s) => s.name).join(", ")}`} />
-            <div className="grid gap-6 lg:grid-cols-[1.2fr_1fr]">
-              <MakeRatesCard playerId={playerId} units={units} />
+            <div className="grid gap-6 lg:grid-cols-2">
+              <NotesCard playerId={playerId} playerName={d.player.name} canWrite />
               <Card>
                 <CardTitle>Ladders</CardTitle>
                 {d.assignments.length === 0 ? (
@@ -136,6 +89,14 @@ export function PlayerPage({ playerId }: { playerId: string }) {
                 )}
               </Card>
             </div>
+            {stats ? (
+              <section aria-labelledby="player-practice" className="mt-8 flex flex-col gap-4">
+                <h2 id="player-practice" className="text-2xl font-semibold tracking-tight">
+                  {d.player.name}’s practice
+                </h2>
+                {stats(d.player)}
+              </section>
+            ) : null}
           </>
         );
       }}

@@ -8,12 +8,15 @@ import { useDeleteSquad } from "../api/delete-squad";
 import { useInvitations } from "../api/get-invitations";
 import { useSquad } from "../api/get-squad";
 import { useRemoveMember } from "../api/remove-member";
+import { useResendInvitation } from "../api/resend-invitation";
 import { useRevokeInvitation } from "../api/revoke-invitation";
 import { useUpdateSquad } from "../api/update-squad";
 import { ConfirmAction } from "./confirm-action";
+import { CopyLinkButton } from "./copy-link-button";
 import { InviteForm } from "./invite-form";
 import { QueryState } from "./query-state";
 import { SquadForm } from "./squad-form";
+import { SquadOverviewSection } from "./squad-overview";
 import { Badge, type BadgeTone } from "./status-badge";
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
@@ -62,6 +65,7 @@ function MembersSection({ squad }: { squad: Squad }) {
 
 function InvitationRow({ invitation, squadId }: { invitation: Invitation; squadId: string }) {
   const revoke = useRevokeInvitation();
+  const resend = useResendInvitation();
   const status = INVITATION_STATUS[invitation.status];
   return (
     <li className="flex flex-col gap-2 py-3 sm:flex-row sm:items-center sm:justify-between">
@@ -76,17 +80,39 @@ function InvitationRow({ invitation, squadId }: { invitation: Invitation; squadI
           {invitation.status === "accepted" && invitation.acceptedAt ? ` · joined ${day(invitation.acceptedAt)}` : null}
         </p>
       </div>
-      {invitation.status === "pending" ? (
-        <ConfirmAction
-          label="Withdraw"
-          ariaLabel={`Withdraw the invitation to ${invitation.email}`}
-          question="The link will stop working."
-          confirmLabel="Yes, withdraw"
-          pendingLabel="Withdrawing…"
-          pending={revoke.isPending}
-          onConfirm={() => revoke.mutate({ id: invitation.id, squadId })}
-        />
-      ) : null}
+      <div className="flex flex-wrap items-start gap-2">
+        {invitation.status !== "accepted" ? (
+          <Button
+            size="sm"
+            variant="secondary"
+            aria-label={`Send the invitation to ${invitation.email} again`}
+            disabled={resend.isPending}
+            onClick={() =>
+              resend.mutate(
+                { id: invitation.id, squadId },
+                {
+                  onSuccess: () => toast.success(`A new link went to ${invitation.email}; the old one no longer works.`),
+                  onError: (e) => toast.error(e.message),
+                },
+              )
+            }
+          >
+            {resend.isPending ? "Sending…" : "Resend"}
+          </Button>
+        ) : null}
+        {resend.data ? <CopyLinkButton link={resend.data.link} label="Copy the new link" /> : null}
+        {invitation.status === "pending" ? (
+          <ConfirmAction
+            label="Withdraw"
+            ariaLabel={`Withdraw the invitation to ${invitation.email}`}
+            question="The link will stop working."
+            confirmLabel="Yes, withdraw"
+            pendingLabel="Withdrawing…"
+            pending={revoke.isPending}
+            onConfirm={() => revoke.mutate({ id: invitation.id, squadId })}
+          />
+        ) : null}
+      </div>
     </li>
   );
 }
@@ -169,6 +195,9 @@ function SquadDetails({ squad }: { squad: Squad }) {
           </div>
         </Card>
       ) : null}
+      <div className="mb-6">
+        <SquadOverviewSection squadId={squad.id} squadName={squad.name} />
+      </div>
       <div className="grid gap-6 lg:grid-cols-2">
         <MembersSection squad={squad} />
         <InvitationsSection squad={squad} />

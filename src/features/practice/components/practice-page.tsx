@@ -11,14 +11,22 @@ export function PracticePage() {
       <PageHeader
         eyebrow="Practice log"
         title="Practice"
-        description="Log putts on the practice green as you hit them; every putt feeds your make rates."
+        // Phone first: on a phone the header stays short so "Start logging" shows without scrolling.
+        description={<span className="hidden sm:inline">Log putts on the practice green as you hit them; every putt feeds your make rates.</span>}
         actions={
-          <ButtonLink to={paths.practiceImport.href()} variant="secondary" size="sm">
-            Import or export CSV
-          </ButtonLink>
+          <span className="hidden sm:block">
+            <ButtonLink to={paths.practiceImport.href()} variant="secondary" size="sm">
+              Import or export CSV
+            </ButtonLink>
+          </span>
         }
       />
       <StartSessionForm />
+      <div className="-mt-4 sm:hidden">
+        <ButtonLink to={paths.practiceImport.href()} variant="secondary" size="sm">
+          Import or export CSV
+        </ButtonLink>
+      </div>
       <HistorySection />
     </div>
   );

@@ -101,10 +101,11 @@ export function StartSessionForm() {
     <Card>
       <CardTitle>Start a session</CardTitle>
       <form noValidate onSubmit={(e) => void submit(e)} className="mt-4 flex flex-col gap-4" aria-label="Start a session">
-        <div className="grid gap-4 sm:grid-cols-3">
+        <div className="grid grid-cols-2 gap-4 sm:grid-cols-3">
           <InputField label="Day" type="date" error={formState.errors.date?.message ?? fieldErrors.date} {...register("date")} />
           <SelectField
             label="Green"
+            containerClassName="order-last col-span-2 sm:order-none sm:col-span-1"
             options={greenOptions}
             error={fieldErrors.greenId}
             hint={
@@ -122,11 +123,10 @@ export function StartSessionForm() {
             autoComplete="off"
             placeholder="e.g. 9.5"
             hint={
-              chosenIsOther
-                ? "Leave it empty to use the green’s own latest reading."
-                : greenId
-                  ? "The green’s latest reading; change it if you measured today."
-                  : "Optional"
+              // On a phone the hint would push "Start logging" below the fold; it is a refinement, not a step.
+              <span className="hidden sm:inline">
+                {chosenIsOther ? "Leave it empty to use the green’s own latest reading." : greenId ? "The green’s latest reading; change it if you measured today." : "Optional"}
+              </span>
             }
             error={formState.errors.stimp?.message ?? fieldErrors.stimpFt}
             {...register("stimp")}

@@ -5,11 +5,11 @@ import { statsKeys } from "./keys";
 import type { SessionStats } from "./types";
 
 /** GET /api/stats/sessions: expected putts, strokes gained and long-lag share per session, newest first. */
-export function getSessionStats(params: { from?: string; to?: string; pageSize?: number }, signal?: AbortSignal): Promise<SessionStats> {
+export function getSessionStats(params: { from?: string; to?: string; pageSize?: number; playerId?: string }, signal?: AbortSignal): Promise<SessionStats> {
   return api.get<SessionStats>(apiPaths.statsSessions, { query: params, signal });
 }
 
-export function sessionStatsQueryOptions(params: { from?: string; to?: string; pageSize?: number }) {
+export function sessionStatsQueryOptions(params: { from?: string; to?: string; pageSize?: number; playerId?: string }) {
   return queryOptions({
     queryKey: statsKeys.sessions(params),
     queryFn: ({ signal }) => getSessionStats(params, signal),
@@ -19,6 +19,6 @@ export function sessionStatsQueryOptions(params: { from?: string; to?: string; p
   });
 }
 
-export function useSessionStats(params: { from?: string; to?: string; pageSize?: number }) {
+export function useSessionStats(params: { from?: string; to?: string; pageSize?: number; playerId?: string }) {
   return useQuery(sessionStatsQueryOptions(params));
 }

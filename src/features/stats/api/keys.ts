@@ -7,5 +7,7 @@ export const statsKeys = {
   trend: (p: TrendParams) => [...statsKeys.all, "trend", p] as const,
   compare: (p: CompareParams) => [...statsKeys.all, "compare", p] as const,
   baseline: () => [...statsKeys.all, "baseline"] as const,
-  sessions: (p: { from?: string; to?: string }) => [...statsKeys.all, "sessions", p] as const,
+  sessions: (p: { from?: string; to?: string; playerId?: string }) => [...statsKeys.all, "sessions", p] as const,
+  misses: (p: { from?: string; to?: string; bands?: string; playerId?: string }) => [...statsKeys.all, "misses", p] as const,
+  rounds: (p: { from?: string; to?: string; playerId?: string }) => [...statsKeys.all, "rounds", p] as const,
 };

@@ -1,13 +1,17 @@
 // The stats API's answers (server/routes/stats/stats.handlers.ts) and the parameters the page sends.
-import type { BandRate, MakeRates, StatSource } from "../../../../shared/schemas/stats";
+import type { BandRate, MakeRates, MissBand, Misses, StatSource } from "../../../../shared/schemas/stats";
 import type { Rate } from "../../../../shared/stats/wilson";
 
-export type { BandRate, MakeRates, Rate, StatSource };
+export type { BandRate, MakeRates, MissBand, Misses, Rate, StatSource };
+/** The sessions and rounds lists take a date range and, for a coach, the player's id. */
+export type PlayerRange = { from?: string; to?: string; playerId?: string };
+export type RoundSummary = { id: string; date: string; course: string | null; totals: { holes: number; putts: number; expectedPutts: number; strokesGained: number; onePutts: number; threePutts: number } };
+export type RoundList = { items: RoundSummary[]; total: number };
 
 /** `bands` is the comma-separated edge list in metres, or absent for the unit's defaults. */
-export type StatsParams = { from?: string; to?: string; bands?: string; source: StatSource };
+export type StatsParams = { from?: string; to?: string; bands?: string; source: StatSource; playerId?: string };
 export type TrendParams = StatsParams & { window: "week" | "rolling"; windowWeeks?: number };
-export type CompareParams = { aFrom: string; aTo: string; bFrom: string; bTo: string; bands?: string; source: StatSource };
+export type CompareParams = { aFrom: string; aTo: string; bFrom: string; bTo: string; bands?: string; source: StatSource; playerId?: string };
 
 export type Trend = {
   window: "week" | "rolling";

@@ -34,10 +34,10 @@ const grid = <CartesianGrid stroke="rgb(19 27 46 / 0.08)" vertical={false} />;
 const percentAxis = <YAxis domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} unit=" %" width={52} tick={{ fontSize: 12 }} />;
 const pct = (v: unknown) => (typeof v === "number" ? `${v.toFixed(1)} %` : "–");
 
-export type MakeRateChartProps = { rows: MakeRateRow[]; tourSource: string | null };
+export type MakeRateChartProps = { rows: MakeRateRow[]; tourSource: string | null; /** The line's name: "Your make rate", or the player's for their coach. */ rateLabel?: string };
 
 /** Your make rate per band (line and points), its 95 % interval as a shaded band, and the tour's one-putt rate. */
-export function MakeRateChart({ rows, tourSource }: MakeRateChartProps) {
+export function MakeRateChart({ rows, tourSource, rateLabel = "Your make rate" }: MakeRateChartProps) {
   return (
     <figure className="flex flex-col gap-2">
       <div className="h-72 w-full sm:h-80" role="img" aria-label="Make rate by distance band with its 95 % interval, and the tour one-putt rate for comparison">
@@ -56,7 +56,7 @@ export function MakeRateChart({ rows, tourSource }: MakeRateChartProps) {
             <Legend verticalAlign="top" height={28} iconSize={10} wrapperStyle={{ fontSize: 12 }} />
             <Area type="linear" dataKey="range" name="95 % interval" stroke="none" fill={COLOURS.band} fillOpacity={0.3} connectNulls={false} isAnimationActive={false} />
             <Line type="linear" dataKey="tour" name="Tour one-putt rate" stroke={COLOURS.tour} strokeWidth={2} strokeDasharray="6 4" dot={{ r: 3 }} isAnimationActive={false} />
-            <Line type="linear" dataKey="rate" name="Your make rate" stroke={COLOURS.you} strokeWidth={2.5} dot={{ r: 4, fill: COLOURS.you }} connectNulls={false} isAnimationActive={false}>
+            <Line type="linear" dataKey="rate" name={rateLabel} stroke={COLOURS.you} strokeWidth={2.5} dot={{ r: 4, fill: COLOURS.you }} connectNulls={false} isAnimationActive={false}>
               <ErrorBar dataKey="err" width={6} stroke={COLOURS.band} strokeWidth={1.5} direction="y" />
             </Line>
           </ComposedChart>

@@ -58,7 +58,7 @@ export function MakeRateTable({ rows, caption }: { rows: MakeRateRow[]; caption:
 }
 
 /** Make rate by distance band with its interval and the tour overlay: chart and table with the same numbers. */
-export function MakeRatesSection({ params, units, empty }: { params: StatsParams; units: UnitSystem; empty: ReactNode }) {
+export function MakeRatesSection({ params, units, empty, rateLabel }: { params: StatsParams; units: UnitSystem; empty: ReactNode; rateLabel?: string }) {
   const rates = useMakeRates(params);
   const baseline = useBaseline();
   const tour = baseline.data ? toBaselineSeries(baseline.data.onePuttRate) : null;
@@ -74,7 +74,7 @@ export function MakeRatesSection({ params, units, empty }: { params: StatsParams
         {n} {n === 1 ? "putt" : "putts"} in {rows.filter((r) => r.attempts > 0).length} of {rows.length} bands. The shaded band is the range the true rate
         likely lies in (95 % Wilson interval); the dashed line is the tour’s one-putt rate, averaged across each band.
       </p>
-      <MakeRateChart rows={rows} tourSource={tour ? `${TOUR_SOURCE_LINE}.` : null} />
+      <MakeRateChart rows={rows} tourSource={tour ? `${TOUR_SOURCE_LINE}.` : null} {...(rateLabel ? { rateLabel } : {})} />
       {thin > 0 ? (
         <Alert tone="warning">
           {thin === 1 ? "One band has" : `${thin} bands have`} fewer than {SMALL_SAMPLE} putts: the rate there can swing a long way from one session to the next, so read the

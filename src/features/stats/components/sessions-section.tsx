@@ -7,8 +7,8 @@ import { SessionsChart } from "./lazy-charts";
 const sg = (v: number) => `${v > 0.005 ? "+" : v < -0.005 ? "−" : ""}${Math.abs(v).toFixed(2)}`;
 
 /** Expected putts and strokes gained per session against the tour baseline, and how often long lags finish outside 1 m. */
-export function SessionsSection({ from, to }: { from?: string; to?: string }) {
-  const stats = useSessionStats({ ...(from ? { from } : {}), ...(to ? { to } : {}), pageSize: 50 });
+export function SessionsSection({ from, to, playerId }: { from?: string; to?: string; playerId?: string }) {
+  const stats = useSessionStats({ ...(from ? { from } : {}), ...(to ? { to } : {}), ...(playerId ? { playerId } : {}), pageSize: 50 });
   if (stats.isError) return <Alert tone="error" title="Could not load the session figures">{errorMessage(stats.error)}</Alert>;
   if (!stats.data) return <div className="h-56 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading the session figures" />;
   const items = stats.data.items.filter((s) => s.putts > 0);

@@ -8,6 +8,9 @@ import { addDays, statsView } from "../utils/stats-query";
 import { BandEditor } from "./band-editor";
 import { CompareSection } from "./compare-section";
 import { MakeRatesSection } from "./make-rates-section";
+import { MissesSection } from "./misses-section";
+import { RoundsSection } from "./rounds-section";
+import { SessionPuttsSection } from "./session-putts-section";
 import { SessionsSection } from "./sessions-section";
 import { TrendSection } from "./trend-section";
 
@@ -41,10 +44,31 @@ const PERIODS = [
 
 /** Make rates: by distance band against the tour, over time, between two periods, and per session. */
 export function StatsPage() {
+  return (
+    <div className="flex flex-col gap-6">
+      <title>Make rates · Borrowline</title>
+      <PageHeader eyebrow="Practice log" title="Make rates" description="How often you hole out from each distance, how sure that number is, and whether it is moving." />
+      <StatsBody />
+    </div>
+  );
+}
+
+/**
+ * The figures of one player: the signed-in one, or (for their coach or an admin) `player`. Every request
+ * carries the player's id; the server decides whether the viewer may read it (server/lib/player-access.ts).
+ */
+export function StatsBody({ player }: { player?: { id: string; name: string } }) {
   const units = useUnits();
   const [query, setQuery] = useSearchParams();
   const day = today();
-  const view = useMemo(() => statsView(new URLSearchParams(query.toString()), day), [query, day]);
+  const raw = useMemo(() => statsView(new URLSearchParams(query.toString()), day), [query, day]);
+  const view = useMemo(() => {
+    if (!player) return raw;
+    const playerId = player.id;
+    return { ...raw, stats: { ...raw.stats, playerId }, trend: { ...raw.trend, playerId }, compare: { ...raw.compare, playerId } };
+  }, [raw, player]);
+  const range = { ...(view.stats.from ? { from: view.stats.from } : {}), ...(view.stats.to ? { to: view.stats.to } : {}), ...(player ? { playerId: player.id } : {}) };
+  const who = player ? player.name : "You";
   const update = (changes: Record<string, string | undefined>) => {
     const next = new URLSearchParams(query);
     for (const [k, v] of Object.entries(changes)) {
@@ -55,7 +79,11 @@ export function StatsPage() {
   };
   const periodId = !view.stats.from && !view.stats.to ? "all" : PERIODS.find((p) => p.days !== null && view.stats.to === undefined && view.stats.from === addDays(day, -(p.days - 1)))?.id;
 
-  const empty = (
+  const empty = player ? (
+    <EmptyState title={view.stats.from || view.stats.to ? "No putts in this period" : `${player.name} has not logged any putts yet`}>
+      {view.stats.from || view.stats.to ? "Choose a longer period." : "Their make rates appear here once they log a practice session or import one."}
+    </EmptyState>
+  ) : (
     <EmptyState
       title={view.stats.from || view.stats.to ? "No putts in this period" : "Log a session to see your make rates"}
       action={
@@ -77,9 +105,6 @@ export function StatsPage() {
 
   return (
     <div className="flex flex-col gap-6">
-      <title>Make rates · Borrowline</title>
-      <PageHeader eyebrow="Practice log" title="Make rates" description="How often you hole out from each distance, how sure that number is, and whether it is moving." />
-
       <Card padded={false} className="p-4 sm:p-5">
         <div className="grid grid-cols-2 gap-3 lg:grid-cols-[auto_1fr_1fr_14rem] lg:items-end lg:gap-4">
           <fieldset className="col-span-2 lg:col-span-1">
@@ -121,10 +146,14 @@ export function StatsPage() {
       </Card>
 
       <Section id="by-distance" title="Make rate by distance">
-        <MakeRatesSection params={view.stats} units={units} empty={empty} />
+        <MakeRatesSection params={view.stats} units={units} empty={empty} {...(player ? { rateLabel: `${player.name}’s make rate` } : {})} />
       </Section>
 
-      <Section id="trend" title="Over time" intro="Your make rate per band, week by week.">
+      <Section id="misses" title="Where the strokes go" intro="Strokes gained or lost against the tour from each distance, and which way the misses finish.">
+        <MissesSection params={{ ...range, ...(view.stats.bands ? { bands: view.stats.bands } : {}) }} units={units} name={who} />
+      </Section>
+
+      <Section id="trend" title="Over time" intro={player ? "The make rate per band, week by week." : "Your make rate per band, week by week."}>
         <TrendSection
           params={view.trend}
           units={units}
@@ -139,7 +168,17 @@ export function StatsPage() {
       </Section>
 
       <Section id="sessions" title="Strokes gained per session" intro="Each session’s putts against what a tour player would take from the same distances.">
-        <SessionsSection from={view.stats.from} to={view.stats.to} />
+        <SessionsSection from={view.stats.from} to={view.stats.to} {...(player ? { playerId: player.id } : {})} />
+      </Section>
+
+      {player ? (
+        <Section id="session-putts" title="Sessions and putts" intro={`${player.name}’s sessions, newest first. Open one to see its putts.`}>
+          <SessionPuttsSection playerId={player.id} from={view.stats.from} to={view.stats.to} units={units} />
+        </Section>
+      ) : null}
+
+      <Section id="rounds" title="Strokes gained per round" intro="On the course: putts taken against the tour’s expected putts from each first putt.">
+        <RoundsSection params={range} />
       </Section>
     </div>
   );

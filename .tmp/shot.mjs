@@ -1,0 +1,13 @@
+import { chromium } from "playwright-core";
+const [url, out, email, w, h] = process.argv.slice(2);
+const b = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ["--no-sandbox"] });
+const p = await b.newPage({ viewport: { width: Number(w), height: Number(h) } });
+await p.goto(url.replace(/\/[^/]*$/, "") + "/sign-in");
+await p.getByLabel("E-mail").fill(email);
+await p.getByLabel("Password").fill("larkspur-demo");
+await p.getByRole("button", { name: "Sign in" }).click();
+await p.getByText("Signed in as").first().waitFor({ state: "attached" });
+await p.goto(url);
+await p.waitForTimeout(2500);
+await p.screenshot({ path: out });
+await b.close();
