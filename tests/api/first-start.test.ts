@@ -64,7 +64,7 @@ test.skipIf(Boolean(process.env.DATABASE_URL))("the production bundle ships the 
   const database = await openPglite(dir);
   try {
     const tables = await database.pglite!.query<{ n: number }>("select count(*)::int as n from information_schema.tables where table_name in ('user', 'putts')");
-    expect(tables.rows[0].n).toBe(2);
+    expect(tables.rows[0]?.n).toBe(2);
   } finally {
     await database.close();
   }
