@@ -46,7 +46,7 @@ test.skipIf(Boolean(process.env.DATABASE_URL))("a first start builds the databas
   } finally {
     await second.close();
   }
-});
+}, 120_000); // two server starts, the first building a database in a child Node process
 
 test.skipIf(Boolean(process.env.DATABASE_URL))("a first start whose database build fails leaves no database folder behind", async () => {
   const dataDir = newDir();
@@ -55,7 +55,7 @@ test.skipIf(Boolean(process.env.DATABASE_URL))("a first start whose database bui
   expect(fs.existsSync(path.join(dataDir, "pglite", "PG_VERSION"))).toBe(false);
   const ok = await start({ env: env(dataDir) });
   await ok.close();
-});
+}, 120_000); // two database builds in child Node processes
 
 test.skipIf(Boolean(process.env.DATABASE_URL))("the production bundle ships the database-building entry, and it builds a migrated database", async () => {
   execFileSync("npm", ["run", "--silent", "build:server"], { stdio: "ignore" });
