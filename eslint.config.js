@@ -17,7 +17,7 @@ function featureNames() {
 }
 
 export default tseslint.config(
-  { ignores: ["dist/", "dist-server/", "node_modules/", "data/", "coverage/", "drizzle/"] },
+  { ignores: ["dist/", "dist-server/", "dist-bench/", "node_modules/", "data/", "coverage/", "drizzle/"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
