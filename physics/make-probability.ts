@@ -150,7 +150,7 @@ export function makeProbability(input: MakeProbabilityInput): MakeProbabilityRes
   const normals = standardNormals(input.random, NORMALS_PER_PUTT * input.samples);
   const read = solvedRead(input, setup.readError);
   if (!read.ok) return read;
-  const tally = simulatePace(setup.sim, read.read, read.rollPastM, normals, input.samples, setup.keep);
+  const tally = simulatePace(setup.sim, read.read, read.rollPastM, normals, 0, input.samples, setup.keep);
   return { ok: true, result: describe(setup.sim, tally, input.samples) };
 }
 
@@ -197,20 +197,51 @@ export function bestPace(input: BestPaceInput): BestPaceResult {
   const normals = standardNormals(input.random, NORMALS_PER_PUTT * input.samples);
   const requestedRead = solvedRead(input, setup.readError);
   if (!requestedRead.ok) return requestedRead;
-  const requested = describe(setup.sim, simulatePace(setup.sim, requestedRead.read, requestedRead.rollPastM, normals, input.samples, setup.keep), input.samples);
+  // The requested pace in two runs, the first on the scan's samples: when it is one of the grid's paces the scan reuses it.
+  const requestedScan = simulatePace(setup.sim, requestedRead.read, requestedRead.rollPastM, normals, 0, scanSamples, setup.keep);
+  const requestedTally = addTallies(requestedScan, simulatePace(setup.sim, requestedRead.read, requestedRead.rollPastM, normals, scanSamples, input.samples, setup.keep));
+  const requested = describe(setup.sim, requestedTally, input.samples);
 
-  const curve: { outcome: PaceOutcome; read: SimRead }[] = [];
-  for (const rollPastM of grid) {
+  // Coarse then fine on the grid (common random numbers throughout): every COARSE_STRIDE-th pace first.
+  const scanned = new Map<number, ScanPoint>();
+  const scanAt = (i: number): ScanPoint | CannotStop => {
+    const hit = scanned.get(i);
+    if (hit !== undefined) return hit;
+    const rollPastM = grid[i]!;
     const r = solvedRead({ ...input, pace: { rollPastM } }, setup.readError);
     if (!r.ok) return r;
-    curve.push({ outcome: outcomeOf(simulatePace(setup.sim, r.read, rollPastM, normals, scanSamples, 0), scanSamples), read: r.read });
+    const tally = sameRead(r.read, requestedRead.read) ? { ...requestedScan, rollPastM } : simulatePace(setup.sim, r.read, rollPastM, normals, 0, scanSamples, 0);
+    const point: ScanPoint = { index: i, tally, outcome: outcomeOf(tally, scanSamples) };
+    scanned.set(i, point);
+    return point;
+  };
+  const coarse = scanIndices(grid);
+  for (const i of coarse.first) {
+    const p = scanAt(i);
+    if ("ok" in p) return p;
   }
-  const feasible = curve.filter((c) => c.outcome.secondPuttOverProbability <= riskMax);
-  const pick =
-    feasible.length > 0
-      ? feasible.reduce((a, b) => (b.outcome.makeProbability > a.outcome.makeProbability ? b : a))
-      : curve.reduce((a, b) => (b.outcome.secondPuttOverProbability < a.outcome.secondPuttOverProbability ? b : a));
-  const full = outcomeOf(simulatePace(setup.sim, pick.read, pick.outcome.rollPastM, normals, input.samples, 0), input.samples);
+  // Hill-climb on the fine grid from the coarse winner: try the untried neighbours of every pace that is level with
+  // the winner (within one putt of the scan: a plateau), until all of theirs have been tried; so the winner is at
+  // least a local best of the whole grid and a flat top is walked to its end.
+  let pick = pickPace([...scanned.values()], riskMax);
+  for (;;) {
+    const level = [...scanned.values()].filter((c) => isLevel(c.outcome, pick.outcome, riskMax, 1 / scanSamples));
+    const untried = new Set<number>();
+    for (const c of level) for (const i of [c.index - 1, c.index + 1]) if (i >= 0 && i < grid.length && !scanned.has(i)) untried.add(i);
+    if (untried.size === 0) break;
+    for (const i of untried) {
+      const p = scanAt(i);
+      if ("ok" in p) return p;
+    }
+    pick = pickPace([...scanned.values()], riskMax);
+  }
+  const curve = [...scanned.values()].sort((a, b) => a.index - b.index);
+  // The winner's full figures: all `samples` putts, the first `scanSamples` of them already rolled in the scan (the
+  // same deviates, so the counts add up to exactly those of one full run); the requested pace's run when it is that pace.
+  const full =
+    sameRead(requestedRead.read, pick.tally.read)
+      ? outcomeOf({ ...requestedTally, rollPastM: pick.outcome.rollPastM }, input.samples)
+      : outcomeOf(addTallies(pick.tally, simulatePace(setup.sim, pick.tally.read, pick.outcome.rollPastM, normals, scanSamples, input.samples, 0)), input.samples);
   return {
     ok: true,
     result: {
@@ -312,7 +343,76 @@ interface Tally {
   finishHoled: boolean[];
 }
 
-function simulatePace(sim: Sim, read: SimRead, rollPastM: number, normals: Float64Array, samples: number, keep: number): Tally {
+/** One pace tried by the best-pace scan: its index on the grid, its counts and its outcome on the scan's samples. */
+interface ScanPoint {
+  readonly index: number;
+  readonly tally: Tally;
+  readonly outcome: PaceOutcome;
+}
+
+/** Grids longer than this that rise strictly are scanned coarse then fine; shorter or unordered ones, every pace. */
+const COARSE_SCAN_MIN_PACES = 12;
+/** Every fourth pace first (20 cm on the default grid), then a hill-climb on the fine grid from the coarse winner. */
+const COARSE_STRIDE = 4;
+
+/** The grid indices of the coarse pass (always the first and last pace) and its stride (1: the whole grid). */
+function scanIndices(grid: readonly number[]): { first: number[]; stride: number } {
+  const rising = grid.every((p, i) => i === 0 || p > grid[i - 1]!);
+  const stride = rising && grid.length >= COARSE_SCAN_MIN_PACES ? COARSE_STRIDE : 1;
+  const first: number[] = [];
+  for (let i = 0; i < grid.length; i += stride) first.push(i);
+  if (first[first.length - 1] !== grid.length - 1) first.push(grid.length - 1);
+  return { first, stride };
+}
+
+/**
+ * The best of the paces tried: the most makes among those within the risk limit (the lowest pace on a tie), or,
+ * when none is, the lowest risk.
+ */
+function pickPace(points: readonly ScanPoint[], riskMax: number): ScanPoint {
+  const sorted = [...points].sort((a, b) => a.index - b.index);
+  const feasible = sorted.filter((c) => c.outcome.secondPuttOverProbability <= riskMax);
+  return feasible.length > 0
+    ? feasible.reduce((a, b) => (b.outcome.makeProbability > a.outcome.makeProbability ? b : a))
+    : sorted.reduce((a, b) => (b.outcome.secondPuttOverProbability < a.outcome.secondPuttOverProbability ? b : a));
+}
+
+/** A pace as good as the winner, to within `slack`: as many makes within the limit, or (none within it) as little risk. */
+function isLevel(c: PaceOutcome, pick: PaceOutcome, riskMax: number, slack: number): boolean {
+  if (pick.secondPuttOverProbability <= riskMax) return c.secondPuttOverProbability <= riskMax && c.makeProbability >= pick.makeProbability - slack - 1e-12;
+  return c.secondPuttOverProbability <= pick.secondPuttOverProbability + slack + 1e-12;
+}
+
+/** The same simulated read: start line, launch speed and slope sensitivity (then every putt rolls the same). */
+function sameRead(a: SimRead, b: SimRead): boolean {
+  const sa = a.sensitivity;
+  const sb = b.sensitivity;
+  return a.startLineRad === b.startLineRad && a.launchSpeedMps === b.launchSpeedMps && sa.lineX === sb.lineX && sa.lineY === sb.lineY && sa.lnSpeedX === sb.lnSpeedX && sa.lnSpeedY === sb.lnSpeedY;
+}
+
+/** One run of a pace from two runs of it on consecutive samples (the first one's first). */
+function addTallies(a: Tally, b: Tally): Tally {
+  const leaves = new Float64Array(a.misses + b.misses);
+  leaves.set(a.leaves.subarray(0, a.misses));
+  leaves.set(b.leaves.subarray(0, b.misses), a.misses);
+  return {
+    rollPastM: a.rollPastM,
+    read: a.read,
+    holed: a.holed + b.holed,
+    lipOut: a.lipOut + b.lipOut,
+    over: a.over + b.over,
+    short: a.short + b.short,
+    left: a.left + b.left,
+    right: a.right + b.right,
+    leaves,
+    misses: a.misses + b.misses,
+    finishes: [...a.finishes, ...b.finishes],
+    finishHoled: [...a.finishHoled, ...b.finishHoled],
+  };
+}
+
+/** Simulate samples [from, to) of one pace (deviates by sample index, so runs over consecutive ranges add up). */
+function simulatePace(sim: Sim, read: SimRead, rollPastM: number, normals: Float64Array, from: number, to: number, keep: number): Tally {
   const { field, distanceM: D, holeRadiusM: rh, secondPuttM } = sim;
   const sigmaA = (sim.dispersion.angleDeg * Math.PI) / 180;
   const halfSigmaP = sim.dispersion.pace / 2;
@@ -329,12 +429,12 @@ function simulatePace(sim: Sim, read: SimRead, rollPastM: number, normals: Float
     short: 0,
     left: 0,
     right: 0,
-    leaves: new Float64Array(samples),
+    leaves: new Float64Array(to - from),
     misses: 0,
     finishes: [],
     finishHoled: [],
   };
-  for (let i = 0; i < samples; i++) {
+  for (let i = from; i < to; i++) {
     const { line, speed } = perturb(read, normals, i, sigmaA, halfSigmaP, sigmaG, sr, sens);
     rollPlanarInto(field, speed, line, 0, D, out, rh, rh);
     const b = out.passDistanceM;
