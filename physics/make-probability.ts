@@ -223,6 +223,14 @@ export function bestPace(input: BestPaceInput): BestPaceResult {
   // Hill-climb on the fine grid from the coarse winner: try the untried neighbours of every pace that is level with
   // the winner (within one putt of the scan: a plateau), until all of theirs have been tried; so the winner is at
   // least a local best of the whole grid and a flat top is walked to its end.
+  // When no coarse pace meets the limit (rare: a limit too tight for the player), every pace is tried: the risk
+  // is not smooth in the pace, and a pace between the coarse ones may still meet it.
+  if (![...scanned.values()].some((c) => c.outcome.secondPuttOverProbability <= riskMax)) {
+    for (let i = 0; i < grid.length; i++) {
+      const p = scanAt(i);
+      if ("ok" in p) return p;
+    }
+  }
   let pick = pickPace([...scanned.values()], riskMax);
   for (;;) {
     const level = [...scanned.values()].filter((c) => isLevel(c.outcome, pick.outcome, riskMax, 1 / scanSamples));
