@@ -158,13 +158,13 @@ export function makeProbability(input: MakeProbabilityInput): MakeProbabilityRes
 export interface BestPaceInput extends MakeProbabilityInput {
   /** Largest acceptable probability of a second putt longer than `secondPuttM` (default 0.10). */
   readonly secondPuttRiskMax?: number;
-  /** Roll-past values to try, m (default 0.05 … 1.50 in 0.05 m steps). */
+  /** Roll-past values to try, m (default 0.05 … 1.50 in 0.05 m steps). A rising grid of 12 or more is searched coarse then fine. */
   readonly rollPastGridM?: readonly number[];
   /** Samples per pace while scanning (default min(samples, 1000), on common random numbers); the two reported paces use all `samples`. */
   readonly scanSamples?: number;
 }
 
-/** Result of {@link bestPace}. `curve` is the scan (for a chart); `requested` is the input's own pace. */
+/** Result of {@link bestPace}. `curve` is the paces the search tried, in grid order; `requested` is the input's own pace. */
 export interface BestPace {
   readonly best: PaceOutcome & { readonly meetsRiskLimit: boolean };
   readonly requested: MakeProbability;
@@ -182,8 +182,12 @@ export const DEFAULT_BEST_PACE_GRID_M: readonly number[] = Object.freeze(Array.f
  * "Your best pace": the roll-past (from `rollPastGridM`) whose read holes the most simulated putts while the chance
  * of leaving a second putt longer than `secondPuttM` stays at or under `secondPuttRiskMax` (default 10 %). Every
  * pace is simulated with the same deviates (common random numbers), so the comparison is not blurred by sampling
- * noise between paces; the scan uses `scanSamples`, the winner and the requested pace are re-run with all samples.
- * When no pace meets the limit, the one with the lowest risk is returned with `meetsRiskLimit: false`.
+ * noise between paces; the scan uses `scanSamples`, the winner and the requested pace are run with all samples (the
+ * scan's putts counted once). A rising grid of 12 paces or more is searched coarse then fine: every 4th pace, then a
+ * hill-climb over the fine grid from the coarse winner (through plateaus and paces just over the limit); it finds
+ * the exhaustive scan's winner within one step, or a pace level with it on a flat top (property-tested). When no
+ * coarse pace meets the limit every pace is tried, and when none does the one with the lowest risk is returned with
+ * `meetsRiskLimit: false`.
  * @example bestPace({ ...input, secondPuttRiskMax: 0.1 }).result.best.rollPastM // e.g. 0.35
  */
 export function bestPace(input: BestPaceInput): BestPaceResult {
