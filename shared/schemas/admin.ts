@@ -1,11 +1,12 @@
 import { z } from "zod";
 import { SIGN_UP_ROLES } from "../roles";
 import { ROLES } from "../roles";
+import { plainText } from "./text";
 
 /** GET /api/admin/users: search one field (contains, case as stored), optional role filter, pages of 25. */
 export const adminUsersQuerySchema = z
   .object({
-    search: z.string().trim().max(100, "At most 100 characters").optional(),
+    search: plainText(100).optional(),
     field: z.enum(["email", "name"]).default("email"),
     role: z.enum(ROLES).optional(),
     page: z.coerce.number().int().min(1).max(10_000).default(1),
@@ -16,7 +17,7 @@ export const ADMIN_PAGE_SIZE = 25;
 
 /** POST /api/admin/users/:id/role: only between player and coach (admins come from the CLI). */
 export const adminRoleInputSchema = z.object({ role: z.enum(SIGN_UP_ROLES, { message: "role must be player or coach" }) }).strict();
-export const adminBanInputSchema = z.object({ reason: z.string().trim().max(200, "At most 200 characters").optional() }).strict();
+export const adminBanInputSchema = z.object({ reason: plainText(200).optional() }).strict();
 export const adminAuditQuerySchema = z.object({ page: z.coerce.number().int().min(1).max(10_000).default(1) }).strict();
 
 export const ADMIN_ACTIONS = ["role.set", "user.ban", "user.unban", "sessions.revoke", "password-reset.send"] as const;

@@ -1,10 +1,11 @@
 import { z } from "zod";
+import { text } from "./text";
 
 export const NOTE_MAX = 2000;
 
 /** POST /api/players/:playerId/notes — a coach's note on a player of their squads. */
 export const noteInputSchema = z
-  .object({ body: z.string().trim().min(1, "Write something first").max(NOTE_MAX, `At most ${NOTE_MAX} characters`) })
+  .object({ body: text({ max: NOTE_MAX, min: 1, minMessage: "Write something first", multiline: true }) })
   .strict();
 export type NoteInput = z.infer<typeof noteInputSchema>;
 

@@ -230,6 +230,7 @@ test("every string field of a valid body, for every route with text and /api/aut
     { route: "POST /api/ladders/:id/copy", as: () => coach, path: () => `/api/ladders/${ladderId}/copy`, body: () => ({ name: "Copy" }) },
     { route: "POST /api/ladders/:id/assignments", as: () => coach, path: () => `/api/ladders/${ladderId}/assignments`, body: () => ({ playerIds: [member.id], dueDate: "2026-06-01" }) },
     { route: "POST /api/assignments/:id/putts", as: () => member.client, path: () => `/api/assignments/${assignmentId}/putts`, body: () => ({ holed: false, missSide: "left" }) },
+    { route: "POST /api/players/:playerId/notes", as: () => coach, path: () => `/api/players/${member.id}/notes`, body: () => ({ body: "Firm pace\nfrom six feet" }) },
     { route: "POST /api/greens", as: () => player, path: () => "/api/greens", body: () => ({ name: "Green", locationNote: "By the\nclubhouse" }) },
     { route: "PATCH /api/greens/:id", as: () => player, path: () => `/api/greens/${greenId}`, body: () => ({ name: "Green", locationNote: "Note" }) },
     { route: "POST /api/greens/:id/stimp-readings", as: () => player, path: () => `/api/greens/${greenId}/stimp-readings`, body: () => ({ measuredOn: "2026-05-01", stimpFt: 10, note: "Morning" }) },
@@ -239,7 +240,7 @@ test("every string field of a valid body, for every route with text and /api/aut
     { route: "POST /api/rounds", as: () => player, path: () => "/api/rounds", body: () => ({ date: "2026-05-01", course: "Heath", notes: "Windy\nday" }) },
     { route: "POST /api/reads", as: () => player, path: () => "/api/reads", body: () => ({ read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } }, label: "Left edge" }) },
     { route: "PATCH /api/me/preferences", as: () => player, path: () => "/api/me/preferences", body: () => ({ units: "metric" }) },
-    { route: "POST /api/training/attempts", as: () => player, path: () => "/api/training/attempts", body: () => ({ level: "club", putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 }, guess: { aimOffsetM: -0.1, playsLikeM: 3.4 } }) },
+    { route: "POST /api/training/attempts", as: () => player, path: () => "/api/training/attempts", body: () => ({ level: "club", putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 }, guess: { aimOffsetM: -0.1, flatPuttLengthM: 3.4 } }) },
     // better-auth's routes, behind the same guard.
     { route: "POST /api/auth/sign-up/email", as: () => new HttpClient(server.url), path: () => "/api/auth/sign-up/email", body: () => ({ name: "New Golfer", email: uniqueEmail("hostile"), password: TEST_PASSWORD, accountType: "player" }) },
     { route: "POST /api/auth/update-user", as: () => player, path: () => "/api/auth/update-user", body: () => ({ name: "Renamed Golfer" }), readBack: () => "/api/me" },

@@ -75,12 +75,12 @@ test(`old cookies are refused on every route within ${SESSION_CACHE_SECONDS} s o
   // A ban by an admin.
   const e = await signedUpClient(server, "player");
   stolen["ban"] = e.client;
-  expect((await admin.client.post("/api/auth/admin/ban-user", { userId: e.id })).status).toBe(200);
+  expect((await admin.client.post(`/api/admin/users/${e.id}/ban`, {})).status).toBe(200);
 
   // A role change by an admin: the coach becomes a player.
   const coach = await signedUpClient(server, "coach");
   expect((await coach.client.post("/api/ladders", { name: "Before", failRule: "restart", rungs: [{ distanceM: 1, balls: 1, passRule: { kind: "make", made: 1 } }] })).status).toBe(201);
-  expect((await admin.client.post("/api/auth/admin/set-role", { userId: coach.id, role: "player" })).status).toBe(200);
+  expect((await admin.client.post(`/api/admin/users/${coach.id}/role`, { role: "player" })).status).toBe(200);
 
   for (const [what, client] of Object.entries(stolen)) expect(client.hasCookies(), what).toBe(true);
   // The signed copy of a session in the cookie is trusted for at most SESSION_CACHE_SECONDS after it was made.
