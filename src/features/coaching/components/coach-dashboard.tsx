@@ -1,8 +1,9 @@
 import { useMemo, useState } from "react";
 import { useSearchParams } from "react-router";
 import clsx from "clsx";
-import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
+import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import { ButtonLink, EmptyState, InputField, PageHeader, SelectField, TextLink } from "../../../components/ui";
+import { SortableTable } from "../../../components/ui/sortable-table";
 import { paths } from "../../../config/paths";
 import { useCoachedPlayers } from "../api/get-coached-players";
 import { useCoachSquads } from "../api/get-squads";
@@ -118,41 +119,7 @@ function DashboardTable({ rows, emptyBecauseFiltered }: { rows: DashboardRow[]; 
         </ul>
       </div>
       {/* Desk: the sortable table. */}
-      <div className="hidden overflow-x-auto rounded-(--radius-card) bg-white ring-1 ring-ink-900/10 md:block">
-        <table className="w-full text-left text-sm">
-          <caption className="sr-only">Players and their ladders. Select a column heading to sort by it.</caption>
-          <thead className="border-b border-ink-900/10 bg-ink-50/60">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const dir = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} scope="col" aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"} className="px-3 py-2 font-semibold whitespace-nowrap text-ink-700">
-                      <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-9 items-center gap-1 rounded hover:text-ink-900">
-                        {flexRender(h.column.columnDef.header, h.getContext())}
-                        <span aria-hidden="true" className="text-ink-400">
-                          {dir === "asc" ? "▲" : dir === "desc" ? "▼" : "↕"}
-                        </span>
-                      </button>
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody className="divide-y divide-ink-900/5">
-            {sorted.map((row) => (
-              <tr key={row.id} className="hover:bg-sand-50">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2.5 align-middle whitespace-nowrap">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <SortableTable table={table} rows={sorted} caption="Players and their ladders. Select a column heading to sort by it." className="rounded-(--radius-card)" />
     </>
   );
 }

@@ -2,7 +2,6 @@ import { useMemo, useState } from "react";
 import { toast } from "sonner";
 import {
   createColumnHelper,
-  flexRender,
   getCoreRowModel,
   getFilteredRowModel,
   getSortedRowModel,
@@ -11,6 +10,7 @@ import {
   type SortingState,
 } from "@tanstack/react-table";
 import { Alert, Button, Card, CardTitle, InputField, SelectField, TextLink } from "../../../components/ui";
+import { SortableTable } from "../../../components/ui/sortable-table";
 import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";
 import { downloadSquadOverview, useSquadOverview } from "../api/get-squad-overview";
@@ -173,41 +173,7 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
               ))}
             </ul>
             {/* Desk: the sortable table. */}
-            <div className="hidden overflow-x-auto rounded-xl ring-1 ring-ink-900/10 md:block">
-              <table className="w-full bg-white text-left text-sm">
-                <caption className="sr-only">Players of {squadName}: recent practice against their own past. Select a column heading to sort by it.</caption>
-                <thead className="border-b border-ink-900/10 bg-ink-50/60">
-                  {table.getHeaderGroups().map((hg) => (
-                    <tr key={hg.id}>
-                      {hg.headers.map((h) => {
-                        const dir = h.column.getIsSorted();
-                        return (
-                          <th key={h.id} scope="col" aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"} className="px-3 py-2 font-semibold whitespace-nowrap text-ink-700">
-                            <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-9 items-center gap-1 rounded hover:text-ink-900">
-                              {flexRender(h.column.columnDef.header, h.getContext())}
-                              <span aria-hidden="true" className="text-ink-400">
-                                {dir === "asc" ? "▲" : dir === "desc" ? "▼" : "↕"}
-                              </span>
-                            </button>
-                          </th>
-                        );
-                      })}
-                    </tr>
-                  ))}
-                </thead>
-                <tbody className="divide-y divide-ink-900/5">
-                  {shown.map((row) => (
-                    <tr key={row.id} className="hover:bg-sand-50">
-                      {row.getVisibleCells().map((cell) => (
-                        <td key={cell.id} className="px-3 py-2.5 align-middle whitespace-nowrap">
-                          {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                        </td>
-                      ))}
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
+            <SortableTable table={table} rows={shown} caption={`Players of ${squadName}: recent practice against their own past. Select a column heading to sort by it.`} className="rounded-xl" />
           </>
         )}
       </section>
