@@ -11,6 +11,7 @@ import { analyzeStale } from "../server/db/maintenance";
 import { readEnv } from "../server/env";
 import { start } from "../server/start";
 import { seedClub } from "./stats";
+import { puttsCsvForm } from "../tests/factories/csv";
 
 type Probe = { p50: number; p99: number; max: number; n: number; failed: number };
 export type ConcurrencyBenchResult = { idle: Probe; busy: Probe; importMs: number; statsQueries: number; putts: number };
@@ -24,15 +25,6 @@ async function signUp(url: string, name: string): Promise<{ cookie: string; id: 
   if (!res.ok) throw new Error(`sign-up ${res.status}`);
   const cookie = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
   return { cookie, id: ((await res.json()) as { user: { id: string } }).user.id };
-}
-
-function csv(rows: number): FormData {
-  const lines = ["Date,Distance (m),Made"];
-  for (let i = 0; i < rows; i++) lines.push(`2025-${String(1 + (i % 12)).padStart(2, "0")}-${String(1 + (i % 28)).padStart(2, "0")},${1 + (i % 90) / 10},${i % 3 === 0 ? 1 : 0}`);
-  const f = new FormData();
-  f.append("file", new Blob([lines.join("\n")], { type: "text/csv" }), "big.csv");
-  f.append("mapping", JSON.stringify({ date: "Date", distance: "Distance (m)", distanceUnit: "m", holed: "Made" }));
-  return f;
 }
 
 /** Health + putt post every 200 ms (open loop) until `until` resolves; latency from when each was due. */
@@ -94,7 +86,7 @@ export async function runConcurrencyBench({ putts = Number(process.env.STATS_PUT
 
     const t0 = performance.now();
     let importMs = 0;
-    const importing = fetch(`${url}/api/csv/putts/import`, { method: "POST", headers: { origin: url, cookie: importer.cookie }, body: csv(50_000) }).then(async (res) => {
+    const importing = fetch(`${url}/api/csv/putts/import`, { method: "POST", headers: { origin: url, cookie: importer.cookie }, body: puttsCsvForm(50_000) }).then(async (res) => {
       await res.arrayBuffer();
       importMs = performance.now() - t0;
       if (!res.ok) throw new Error(`import ${res.status}`);

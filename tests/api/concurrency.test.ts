@@ -7,6 +7,7 @@ import { isStatementTimeout, errorHandler } from "../../server/middleware/errors
 import { createLogger } from "../../server/lib/logger";
 import { signedUpClient } from "../factories/users";
 import { startTestServer, type TestServer } from "../setup/server";
+import { puttsCsvForm } from "../factories/csv";
 
 let server: TestServer;
 beforeAll(async () => {
@@ -19,15 +20,6 @@ afterAll(async () => {
   await server?.stop();
 });
 
-function csvForm(rows: number): FormData {
-  const lines = ["Date,Distance (m),Made"];
-  for (let i = 0; i < rows; i++) lines.push(`2025-${String(1 + (i % 12)).padStart(2, "0")}-${String(1 + (i % 28)).padStart(2, "0")},${1 + (i % 90) / 10},${i % 3 === 0 ? 1 : 0}`);
-  const f = new FormData();
-  f.append("file", new Blob([lines.join("\n")], { type: "text/csv" }), "big.csv");
-  f.append("mapping", JSON.stringify({ date: "Date", distance: "Distance (m)", distanceUnit: "m", holed: "Made" }));
-  return f;
-}
-
 test("GET /api/health and POST /api/sessions/:id/putts are answered while a 50 000-row import is being written", async () => {
   const { client: importer } = await signedUpClient(server, "player");
   const { client: logger } = await signedUpClient(server, "player");
@@ -35,7 +27,7 @@ test("GET /api/health and POST /api/sessions/:id/putts are answered while a 50 0
   expect(session.status).toBe(201);
 
   let importDone = false;
-  const importing = importer.post("/api/csv/putts/import", csvForm(50_000)).then((res) => {
+  const importing = importer.post("/api/csv/putts/import", puttsCsvForm(50_000)).then((res) => {
     importDone = true;
     return res;
   });
@@ -73,12 +65,12 @@ test("GET /api/health and POST /api/sessions/:id/putts are answered while a 50 0
 test("POST /api/csv/putts/import is rate-limited per user: 429 with the error body, another user still imports", async () => {
   const { client: a } = await signedUpClient(server, "player");
   const { client: b } = await signedUpClient(server, "player");
-  expect((await a.post("/api/csv/putts/import", csvForm(3))).status).toBe(200);
-  expect((await a.post("/api/csv/putts/import", csvForm(3))).status).toBe(200);
-  const third = await a.post("/api/csv/putts/import", csvForm(3));
+  expect((await a.post("/api/csv/putts/import", puttsCsvForm(3))).status).toBe(200);
+  expect((await a.post("/api/csv/putts/import", puttsCsvForm(3))).status).toBe(200);
+  const third = await a.post("/api/csv/putts/import", puttsCsvForm(3));
   expect(third.status).toBe(429);
   expect(third.body.error.code).toBe("too_many_requests");
-  expect((await b.post("/api/csv/putts/import", csvForm(3))).status).toBe(200);
+  expect((await b.post("/api/csv/putts/import", puttsCsvForm(3))).status).toBe(200);
 });
 
 test("a statement timeout (SQLSTATE 57014) answers 503 with Retry-After and the error body", async () => {
