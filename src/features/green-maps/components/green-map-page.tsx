@@ -21,7 +21,7 @@ import { useHeightMap } from "../api/get-height-map";
 import { useSurfaceRead } from "../api/solve-on-surface";
 import { useDebouncedValue } from "../hooks/use-debounced-value";
 import { downhillArrows } from "../utils/downhill-arrows";
-import { aimPoint, roundCm } from "../utils/map-view";
+import { aimSpot, roundCm } from "../utils/map-view";
 import { surfaceSolveRequest } from "../utils/solve-request";
 import { HeightMapSummary } from "./height-map-summary";
 import { HeightMapUpload } from "./height-map-upload";
@@ -151,7 +151,7 @@ function MapWorkspace({
   const settled = useDebouncedValue(request, 300);
   const read = useSurfaceRead(greenId, settled);
   const answer = request && read.data && !read.isError ? read.data : null;
-  const aim = answer && ball && hole && answer.aimOffsetM !== null ? aimPoint(ball, hole, answer.aimOffsetM) : null;
+  const aim = answer && ball && hole && answer.aimOffsetM !== null ? aimSpot(ball, hole, answer.aimOffsetM) : null;
 
   const place = (point: [number, number]) => {
     if (placing === "ball") {

@@ -1,5 +1,5 @@
 // The green from above: height shading (lighter is higher), contour lines, arrows down the slope, and the putt — the
-// ball, the hole, the start line to the aim point and the curved line the ball rolls. A tap places the ball or the hole.
+// ball, the hole, the start line to the aim spot and the curved line the ball rolls. A tap places the ball or the hole.
 import { useId, useMemo, type MouseEvent } from "react";
 import { scaleStep } from "../../../components/putt-diagram/putt-diagram";
 import { contourLines, type HeightRaster } from "../../../components/green-3d/surface-grid";
