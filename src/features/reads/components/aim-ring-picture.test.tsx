@@ -19,7 +19,7 @@ function modelAnswer(units: UnitSystem, slopePct = 2, stimpFt = 10): BreakChartA
 function draw(units: UnitSystem = "imperial") {
   render(<AimRingPicture answer={modelAnswer(units)} units={units} settingsWords="Slope 2 %, Stimp 10, finishing 18 in past" />);
   const svg = screen.getByRole("img", { name: /Aim spots all round the hole/ });
-  const hole = [...svg.querySelectorAll("circle")].find((c) => c.getAttribute("fill") === "#06090f")!;
+  const hole = svg.querySelector('[data-testid="hole"]')!;
   const holeX = Number(hole.getAttribute("cx"));
   const holeY = Number(hole.getAttribute("cy"));
   const spot = (ring: string, bearing: number) => {

@@ -52,8 +52,8 @@ export function AimRingPicture({ answer, units, settingsWords }: Props) {
   const unit = shortUnitLabel(units);
 
   return (
-    <figure className="flex flex-col gap-3">
-      <div className="mx-auto w-full max-w-[34rem]">
+    <figure className="grid gap-4 lg:grid-cols-[minmax(0,28rem)_minmax(0,1fr)] lg:items-start">
+      <div className="mx-auto w-full max-w-[28rem]">
         <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-labelledby={`${titleId} ${descId}`} className="block h-auto w-full">
           <title id={titleId}>Aim spots all round the hole</title>
           <desc id={descId}>
@@ -96,6 +96,17 @@ export function AimRingPicture({ answer, units, settingsWords }: Props) {
             strokeDasharray="1 5"
             strokeLinecap="round"
           />
+          {/* The hole to scale, under the rings and see-through, so short putts' spots inside its rim still show. */}
+          <circle
+            data-testid="hole"
+            cx={toX(0)}
+            cy={toY(0)}
+            r={Math.max(4, HOLE_RADIUS_M * k)}
+            fill="#06090f"
+            fillOpacity="0.22"
+            stroke="#06090f"
+            strokeWidth="2"
+          />
           {rings.map((r, i) => {
             const s = RING_STYLES[i % RING_STYLES.length]!;
             if (r.spots.length < 2) return null;
@@ -125,7 +136,6 @@ export function AimRingPicture({ answer, units, settingsWords }: Props) {
               </g>
             );
           })}
-          <circle cx={toX(0)} cy={toY(0)} r={Math.max(4, HOLE_RADIUS_M * k)} fill="#06090f" stroke="#ffffff" strokeWidth="1.5" />
           {labels.map((l) => (
             <text
               key={l.key}
@@ -181,7 +191,7 @@ export function AimRingPicture({ answer, units, settingsWords }: Props) {
         </fieldset>
         <div aria-live="polite">
           <p className="font-medium text-ink-900">Ball {sideLabel.toLowerCase()} of the hole, standing behind it:</p>
-          <ul className="mt-1 grid grid-cols-1 gap-x-6 sm:grid-cols-2">
+          <ul className="mt-1 flex flex-col">
             {chosen.map(({ ring, spot }) => (
               <li key={ring.distanceM} className="tabular-nums">
                 {distanceHeading(ring.distanceM, units)}:{" "}
