@@ -25,13 +25,13 @@ export type SlopeTick = { at: [number, number]; from: [number, number]; to: [num
 export const FLAT_PCT = 0.1;
 
 /**
- * Ticks on a lattice of about `perSide` across the longer side. Every tick is 0.6 of the lattice step long and runs
+ * Ticks on a lattice of about `perSide` across the longer side. Every tick is half the lattice step long and runs
  * along −∇h (downhill) through its lattice point.
  */
 export function slopeTicks(surface: HeightSurface, bounds: Bounds, perSide = 9): SlopeTick[] {
   const span = Math.max(bounds.maxX - bounds.minX, bounds.maxY - bounds.minY);
   const step = span / perSide;
-  const half = 0.3 * step;
+  const half = 0.25 * step;
   const g: [number, number] = [0, 0];
   const out: SlopeTick[] = [];
   for (let y = bounds.minY + step / 2; y < bounds.maxY; y += step) {
