@@ -12,3 +12,4 @@ export { LogoMark } from "./logo";
 export { ErrorBoundary, type ErrorBoundaryProps } from "./error-boundary";
 export { ChipGroup, type ChipGroupProps, type ChipOption } from "./chip-group";
 export { Stepper, type StepperProps } from "./stepper";
+export { TableScroller, type TableScrollerProps } from "./table-scroller";

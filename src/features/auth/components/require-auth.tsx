@@ -18,22 +18,30 @@ export function RequireAuth({ children, roles }: RequireAuthProps) {
   if (me.isPending) return <PageSpinner label="Checking your account" />;
   if (me.isError) {
     return (
-      <Alert
-        tone="error"
-        title="Could not check your account"
-        action={
-          <Button size="sm" variant="secondary" onClick={() => void me.refetch()}>
-            Try again
-          </Button>
-        }
-      >
-        {me.error.message}
-      </Alert>
+      <>
+        <h1 className="sr-only">Your account</h1>
+        <Alert
+          tone="error"
+          title="Could not check your account"
+          action={
+            <Button size="sm" variant="secondary" onClick={() => void me.refetch()}>
+              Try again
+            </Button>
+          }
+        >
+          {me.error.message}
+        </Alert>
+      </>
     );
   }
   if (!me.data) return <Navigate to={paths.signIn.href(`${location.pathname}${location.search}`)} replace />;
   if (roles && !roles.includes(me.data.user.role)) {
-    return <Alert tone="info" title="Not part of your account">This page is for {roles.join(" or ")} accounts.</Alert>;
+    return (
+      <>
+        <h1 className="mb-4 text-2xl font-semibold text-ink-900">Not part of your account</h1>
+        <Alert tone="info">This page is for {roles.join(" or ")} accounts.</Alert>
+      </>
+    );
   }
   return <>{typeof children === "function" ? children(me.data) : children}</>;
 }

@@ -21,7 +21,7 @@ export function LadderPreview({ name, description, failRule, rungs, units, class
   return (
     <section aria-label="Preview for the player" className={clsx("rounded-(--radius-card) bg-ink-900 p-5 text-sand-50 sm:p-6", className)}>
       <p className="text-sm font-semibold tracking-wide text-coral-300 uppercase">As the player sees it</p>
-      <h3 className="mt-1 text-xl font-semibold tracking-tight">{name.trim() || "Untitled ladder"}</h3>
+      <h2 className="mt-1 text-xl font-semibold tracking-tight">{name.trim() || "Untitled ladder"}</h2>
       {description?.trim() ? <p className="mt-1 text-sand-200">{description}</p> : null}
       <p className="mt-2 text-sm text-sand-300">
         Start at rung 1 and work up. If a rung is missed: {FAIL_RULE_WORDS[failRule].label.toLowerCase()}.

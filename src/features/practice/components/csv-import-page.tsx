@@ -1,7 +1,7 @@
 import { useId, useRef, useState, type DragEvent } from "react";
 import clsx from "clsx";
 import type { CsvImportResult, CsvPreview, CsvRowError } from "../../../../shared/schemas/putts";
-import { Alert, Button, ButtonLink, Card, CardTitle, PageHeader, SelectField } from "../../../components/ui";
+import { Alert, Button, ButtonLink, Card, CardTitle, PageHeader, SelectField, TableScroller } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { rowErrorsOf, useImportCsv } from "../api/import-csv";
 import { usePreviewCsv } from "../api/preview-csv";
@@ -62,7 +62,7 @@ function FilePicker({ onFile, busy }: { onFile: (f: File) => void; busy: boolean
 
 function PreviewTable({ preview }: { preview: CsvPreview }) {
   return (
-    <div className="-mx-4 overflow-x-auto sm:mx-0 sm:rounded-xl sm:ring-1 sm:ring-ink-900/10">
+    <TableScroller label="The first rows of the file">
       <table className="w-full border-collapse bg-white text-left text-sm">
         <caption className="sr-only">The first rows of the file</caption>
         <thead className="bg-ink-50 text-ink-700">
@@ -90,7 +90,7 @@ function PreviewTable({ preview }: { preview: CsvPreview }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </TableScroller>
   );
 }
 

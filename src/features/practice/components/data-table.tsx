@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { flexRender, type Table } from "@tanstack/react-table";
 import clsx from "clsx";
-import { Button, Spinner } from "../../../components/ui";
+import { Button, Spinner, TableScroller } from "../../../components/ui";
 
 export type DataTableProps<T> = {
   table: Table<T>;
@@ -32,7 +32,7 @@ export function DataTable<T>({ table, caption, fetching = false, total, noun, em
 
   return (
     <div className="flex flex-col gap-3">
-      <div className="relative -mx-4 overflow-x-auto sm:mx-0 sm:rounded-xl sm:ring-1 sm:ring-ink-900/10" aria-busy={fetching || undefined}>
+      <TableScroller label={caption} className="relative" aria-busy={fetching || undefined}>
         <table className="w-full min-w-[36rem] border-collapse bg-white text-left text-sm">
           <caption className="sr-only">{caption}</caption>
           <thead className="bg-ink-50 text-ink-700">
@@ -84,7 +84,7 @@ export function DataTable<T>({ table, caption, fetching = false, total, noun, em
             <Spinner size="sm" label="Updating" />
           </div>
         ) : null}
-      </div>
+      </TableScroller>
       <nav aria-label={`${caption}: pages`} className="flex flex-wrap items-center justify-between gap-2 text-sm text-ink-600">
         <p aria-live="polite">
           {total === 0 ? `No ${noun[1]}` : `${first}–${last} of ${total} ${total === 1 ? noun[0] : noun[1]}`}

@@ -1,4 +1,5 @@
 import clsx from "clsx";
+import { TableScroller } from "../../../components/ui";
 import type { UnitSystem } from "../../../../shared/units";
 import { toChartTable, type BreakChartAnswer } from "../utils/chart-data";
 
@@ -10,7 +11,7 @@ export function BreakChartTable({ answer, units, caption }: BreakChartTableProps
   return (
     <figure className="flex flex-col gap-3">
       <figcaption className="text-sm text-ink-600 print:text-[9pt]">{caption}</figcaption>
-      <div className="-mx-5 overflow-x-auto px-5 sm:mx-0 sm:px-0 print:mx-0 print:overflow-visible print:px-0">
+      <TableScroller label="The aims in numbers" framed={false} className="-mx-5 px-5 sm:mx-0 sm:px-0 print:mx-0 print:overflow-visible print:px-0">
         <table
           aria-label="Aim offset by distance and by which way the green falls"
           className="w-full min-w-[46rem] border-collapse text-sm tabular-nums print:min-w-0 print:text-[7.5pt]"
@@ -69,7 +70,7 @@ export function BreakChartTable({ answer, units, caption }: BreakChartTableProps
             ))}
           </tbody>
         </table>
-      </div>
+      </TableScroller>
     </figure>
   );
 }

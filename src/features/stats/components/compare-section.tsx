@@ -1,6 +1,6 @@
 import clsx from "clsx";
 import type { UnitSystem } from "../../../../shared/units";
-import { Alert, InputField } from "../../../components/ui";
+import { Alert, InputField, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useCompare } from "../api/get-compare";
 import type { CompareParams } from "../api/types";
@@ -50,7 +50,7 @@ export function CompareSection({ params, units, onChange }: CompareSectionProps)
                 {aN > 0 && bN > 0 ? " The mix of distances can differ between the periods; the bands below compare like with like." : ""}
               </p>
               {aN + bN > 0 ? <CompareChart rows={rows} aLabel={aLabel} bLabel={bLabel} /> : null}
-              <div className="-mx-4 overflow-x-auto sm:mx-0 sm:rounded-xl sm:ring-1 sm:ring-ink-900/10">
+              <TableScroller label="Make rate per band in period A and period B">
                 <table className="w-full border-collapse bg-white text-left text-sm">
                   <caption className="sr-only">Make rate per band in period A and period B</caption>
                   <thead className="bg-ink-50 text-ink-700">
@@ -96,7 +96,7 @@ export function CompareSection({ params, units, onChange }: CompareSectionProps)
                     </tbody>
                   ))}
                 </table>
-              </div>
+              </TableScroller>
               <p className="text-xs text-ink-500">
                 “Likely a real change”: a pooled two-proportion z-test gives p below 0.05 — a difference this large would turn up by chance less than one time in twenty.
                 Otherwise it “could be chance”. With few putts the test is rough; the intervals say more.

@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import type { UnitSystem } from "../../../../shared/units";
-import { Alert } from "../../../components/ui";
+import { Alert, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useBaseline } from "../api/get-baseline";
 import { useMakeRates } from "../api/get-make-rates";
@@ -15,7 +15,7 @@ const fmt = (v: number | null) => (v === null ? "–" : `${v.toFixed(0)} %`);
 
 export function MakeRateTable({ rows, caption }: { rows: MakeRateRow[]; caption: string }) {
   return (
-    <div className="-mx-4 overflow-x-auto sm:mx-0 sm:rounded-xl sm:ring-1 sm:ring-ink-900/10">
+    <TableScroller label={caption}>
       <table className="w-full border-collapse bg-white text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-ink-50 text-ink-700">
@@ -53,7 +53,7 @@ export function MakeRateTable({ rows, caption }: { rows: MakeRateRow[]; caption:
           ))}
         </tbody>
       </table>
-    </div>
+    </TableScroller>
   );
 }
 

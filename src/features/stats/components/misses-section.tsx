@@ -1,5 +1,5 @@
 import type { UnitSystem } from "../../../../shared/units";
-import { Alert } from "../../../components/ui";
+import { Alert, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useMisses } from "../api/get-misses";
 import { bandLabel } from "../utils/bands";
@@ -30,7 +30,7 @@ export function MissesSection({ params, units, name }: { params: { from?: string
           <p className="mt-1 text-ink-600">Too few putts in any one band to say where the strokes go; ten or more in a band will do.</p>
         )}
       </div>
-      <div className="-mx-4 overflow-x-auto sm:mx-0 sm:rounded-xl sm:ring-1 sm:ring-ink-900/10">
+      <TableScroller label="Misses and strokes gained per distance band">
         <table className="w-full border-collapse bg-white text-left text-sm">
           <caption className="sr-only">Misses by side and length, and strokes gained, per distance band</caption>
           <thead className="bg-ink-50 align-bottom text-ink-700">
@@ -62,7 +62,7 @@ export function MissesSection({ params, units, name }: { params: { from?: string
             ))}
           </tbody>
         </table>
-      </div>
+      </TableScroller>
       <p className="text-xs text-ink-500">
         Shares count only the misses whose side or leave was logged. Strokes: the tour’s expected putts from each putt’s distance minus the putts it took (holed 1, missed 1 + the tour’s
         expected putts from the leave).

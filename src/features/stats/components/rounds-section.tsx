@@ -1,4 +1,4 @@
-import { Alert } from "../../../components/ui";
+import { Alert, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useRounds } from "../api/get-rounds";
 import type { PlayerRange } from "../api/types";
@@ -14,7 +14,7 @@ export function RoundsSection({ params }: { params: PlayerRange }) {
   const items = rounds.data.items.filter((r) => r.totals.holes > 0);
   if (items.length === 0) return <p className="text-ink-500">No rounds logged in this period.</p>;
   return (
-    <div className="-mx-4 overflow-x-auto sm:mx-0 sm:rounded-xl sm:ring-1 sm:ring-ink-900/10">
+    <TableScroller label="Strokes gained per round">
       <table className="w-full border-collapse bg-white text-left text-sm">
         <caption className="sr-only">Strokes gained per round</caption>
         <thead className="bg-ink-50 text-ink-700">
@@ -41,6 +41,6 @@ export function RoundsSection({ params }: { params: PlayerRange }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </TableScroller>
   );
 }

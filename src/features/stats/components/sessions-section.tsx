@@ -1,4 +1,4 @@
-import { Alert } from "../../../components/ui";
+import { Alert, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useSessionStats } from "../api/get-session-stats";
 import { lagSummary, sessionRows, weekLabel } from "../utils/chart-data";
@@ -36,7 +36,7 @@ export function SessionsSection({ from, to, playerId }: { from?: string; to?: st
         </div>
       </div>
       <SessionsChart rows={rows} />
-      <div className="-mx-4 overflow-x-auto sm:mx-0 sm:rounded-xl sm:ring-1 sm:ring-ink-900/10">
+      <TableScroller label="Expected putts and strokes gained per session">
         <table className="w-full border-collapse bg-white text-left text-sm">
           <caption className="sr-only">Expected putts and strokes gained per session</caption>
           <thead className="bg-ink-50 align-bottom text-ink-700">
@@ -76,7 +76,7 @@ export function SessionsSection({ from, to, playerId }: { from?: string; to?: st
             ))}
           </tbody>
         </table>
-      </div>
+      </TableScroller>
       <p className="text-xs text-ink-500">
         Each putt is worth the tour’s average putts to hole out from its distance; a holed putt took 1, a miss took 1 plus the average from where it finished. A miss
         logged without its length is assumed to finish 45 cm or a tenth of its length away (whichever is more), and is counted as “leaves assumed”. Baseline: tour
