@@ -4,7 +4,7 @@ import { formatLength } from "../../../../shared/units";
 import { ButtonLink, EmptyState, PageHeader } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useMyAssignments } from "../api/get-my-assignments";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { passRuleWords, STATUS_WORDS, statusKey } from "../utils/rule-words";
 import { useMe } from "../../auth/api/get-me";
 import { MySquads } from "./my-squads";
@@ -17,7 +17,7 @@ const doneFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "
 const STATUS_TONE: Record<ReturnType<typeof statusKey>, BadgeTone> = { "not-started": "neutral", "in-progress": "warn", completed: "ok", overdue: "bad" };
 
 function AssignmentCard({ a }: { a: Assignment }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const key = statusKey(a.status, a.overdue);
   const total = a.ladder.rungs.length;
   const rung = a.currentRung;

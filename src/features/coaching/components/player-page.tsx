@@ -5,7 +5,7 @@ import { Card, CardTitle, EmptyState, PageHeader, TextLink } from "../../../comp
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useCoachedPlayer } from "../api/get-coached-player";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { STATUS_WORDS, statusKey } from "../utils/rule-words";
 import { NotesCard } from "./notes-card";
 import { QueryState } from "./query-state";
@@ -57,7 +57,7 @@ function HistoryItem({ a, units }: { a: Assignment; units: UnitSystem }) {
  * route from the stats feature), the coach's notes and the history of the ladders given.
  */
 export function PlayerPage({ playerId, stats }: { playerId: string; stats?: (player: { id: string; name: string }) => ReactNode }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const detail = useCoachedPlayer(playerId);
   if (detail.isError && isApiError(detail.error) && (detail.error.status === 404 || detail.error.status === 400)) {
     return (

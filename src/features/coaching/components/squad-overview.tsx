@@ -14,7 +14,7 @@ import { SortableTable } from "../../../components/ui/sortable-table";
 import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";
 import { downloadSquadOverview, useSquadOverview } from "../api/get-squad-overview";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { bandLabel } from "../utils/bands";
 import { COMPARE_MIN_PUTTS, overviewRows, sgTrendWord, type OverviewBand, type OverviewRow } from "../utils/overview-rows";
 
@@ -55,7 +55,7 @@ const col = createColumnHelper<OverviewRow>();
  * gained per putt now and before, and their latest ladder. Sortable by every column, filtered by name; CSV out.
  */
 export function SquadOverviewSection({ squadId, squadName }: { squadId: string; squadName: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const [days, setDays] = useState(28);
   const [filter, setFilter] = useState("");
   const [sorting, setSorting] = useState<SortingState>([{ id: "putts", desc: true }]);

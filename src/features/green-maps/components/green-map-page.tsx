@@ -1,5 +1,6 @@
 // A green's height map: upload it, see its summary, tap the ball and the hole on the map, and get the read on that
 // real surface (POST /api/greens/:id/reads/solve), drawn on the map and in 3D.
+import { formatStimp } from "../../../../shared/format";
 import { useMemo, useState } from "react";
 import clsx from "clsx";
 import { surfaceFromGrid } from "../../../../physics";
@@ -136,7 +137,7 @@ function MapWorkspace({
   const [ball, setBall] = useState<[number, number] | null>(null);
   const [hole, setHole] = useState<[number, number] | null>(null);
   const [placing, setPlacing] = useState<Placing>("ball");
-  const [stimpText, setStimpText] = useState(String(greenStimpFt ?? 10));
+  const [stimpText, setStimpText] = useState(formatStimp(greenStimpFt ?? 10));
   const [rollPastText, setRollPastText] = useState(units === "imperial" ? "17" : "45");
   const [view, setView] = useState<{ view: CameraView; key: number }>({ view: "free", key: 0 });
   const [exaggerate, setExaggerate] = useState(false);

@@ -11,7 +11,7 @@ import { useDeleteGreen } from "../api/delete-green";
 import { useDeleteStimpReading } from "../api/delete-stimp-reading";
 import { useGreen } from "../api/get-green";
 import { useUpdateGreen } from "../api/update-green";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { formatShortDate, todayIso } from "../utils/dates";
 import { formatRoll, formatStimp } from "../utils/stimp";
 import { STIMP_CAUTION, StimpHelper } from "./stimp-helper";
@@ -45,7 +45,7 @@ function RenameForm({ green, onDone }: { green: Green; onDone: () => void }) {
 }
 
 function ReadingForm({ greenId }: { greenId: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const add = useAddStimpReading(greenId);
   const [mode, setMode] = useState<"level" | "slope">("level");
   const [measuredOn, setMeasuredOn] = useState(todayIso());
@@ -123,7 +123,7 @@ function ReadingForm({ greenId }: { greenId: string }) {
 }
 
 function ReadingsList({ green }: { green: Green }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const remove = useDeleteStimpReading(green.id);
   const [confirm, setConfirm] = useState<StimpReading | null>(null);
   if (green.readings.length === 0) return <p className="text-ink-500">No readings yet. Add one below; it becomes the green’s speed for new sessions.</p>;

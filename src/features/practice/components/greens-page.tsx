@@ -1,3 +1,4 @@
+import { stimpText } from "../../../../shared/format";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Link, useNavigate } from "react-router";
@@ -80,7 +81,7 @@ export function GreensPage() {
                 <span className="text-lg font-semibold">{g.name}</span>
                 <span className="flex items-baseline justify-between gap-2 text-sm text-ink-500">
                   <span className="truncate">{g.locationNote ?? `Added ${formatShortDate(g.createdAt.slice(0, 10))}`}</span>
-                  <span className="shrink-0 font-medium text-ink-800">{g.currentStimpFt !== null ? `Stimp ${g.currentStimpFt.toFixed(1)}` : "no reading yet"}</span>
+                  <span className="shrink-0 font-medium text-ink-800">{g.currentStimpFt !== null ? stimpText(g.currentStimpFt) : "no reading yet"}</span>
                 </span>
               </Link>
             </li>

@@ -9,7 +9,7 @@ import { errorMessage } from "../../../lib/query-client";
 import { useDeleteRound } from "../api/delete-round";
 import { useRound } from "../api/get-round";
 import { useSaveHole } from "../api/put-hole";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { formatSessionDate } from "../utils/dates";
 import { DEFAULT_DISTANCE, DISTANCE_PICKS, distanceLabel, samePick, stepDistanceM } from "../utils/distances";
 import { formatStrokesGained, HOLES, holeBody, LEAVE_PICKS, nextHole } from "../utils/hole-entry";
@@ -175,7 +175,7 @@ function HoleEntry({ round, holeNumber, units, onSaved }: { round: Round; holeNu
 
 /** A round on the course, logged hole by hole from a phone; each hole is saved as soon as its putts are tapped. */
 export function RoundPage({ roundId }: { roundId: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const round = useRound(roundId);
   const remove = useDeleteRound();
   const navigate = useNavigate();

@@ -1,3 +1,4 @@
+import { stimpText } from "../../../../shared/format";
 import { useEffect, useMemo, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import clsx from "clsx";
@@ -11,7 +12,7 @@ import { useDeletePutt } from "../api/delete-putt";
 import { useSession } from "../api/get-session";
 import { useSessionPutts } from "../api/get-session-putts";
 import { useOnline } from "../hooks/use-online";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { newClientId } from "../utils/client-id";
 import { DEFAULT_DISTANCE } from "../utils/distances";
 import { percent, puttLine, tally, waitingText } from "../utils/putt-text";
@@ -62,7 +63,7 @@ function OutboxNotice({ waiting, online }: { waiting: number; online: boolean })
 
 /** Logging on the green: each putt is saved at once (optimistically), queued while offline, and can be undone. */
 export function SessionLogPage({ sessionId }: { sessionId: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const queryClient = useQueryClient();
   const session = useSession(sessionId);
   const stored = useSessionPutts(sessionId);
@@ -124,7 +125,7 @@ export function SessionLogPage({ sessionId }: { sessionId: string }) {
     );
   }
   const s = session.data;
-  const details = [s.greenName, s.stimpFt !== null ? `Stimp ${s.stimpFt.toFixed(1)}` : null, s.conditions, ...s.tags].filter(Boolean).join(" · ");
+  const details = [s.greenName, s.stimpFt !== null ? stimpText(s.stimpFt) : null, s.conditions, ...s.tags].filter(Boolean).join(" · ");
 
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-4" data-putt-log={sessionId}>

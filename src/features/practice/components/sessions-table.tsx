@@ -1,3 +1,4 @@
+import { formatStimp } from "../../../../shared/format";
 import { useMemo, useState } from "react";
 import { getCoreRowModel, useReactTable, type ColumnDef, type PaginationState, type SortingState, type Updater } from "@tanstack/react-table";
 import type { SessionItem } from "../../../../shared/schemas/sessions";
@@ -54,7 +55,7 @@ export function SessionsTable({ query, onQueryChange }: SessionsTableProps) {
         header: "Stimp",
         enableSorting: false,
         meta: { align: "right" },
-        cell: ({ row }) => (row.original.stimpFt === null ? "–" : row.original.stimpFt.toFixed(1)),
+        cell: ({ row }) => (row.original.stimpFt === null ? "–" : formatStimp(row.original.stimpFt)),
       },
       {
         id: "tags",

@@ -20,7 +20,7 @@ export const CAUTION = "Assumes an even slope and a true roll; grain, wind and c
 export function ReadAnswer({ read, distanceM, fallLineDeg, units, state = "fresh" }: ReadAnswerProps) {
   const aim = aimWords(read.aimOffsetM, read.startLineDeg, units);
   const pace = paceWords(read.rollPastM, read.flatPuttLengthM, units);
-  const capture = captureWords(read.entrySpeedMps, read.capture);
+  const capture = captureWords(read.entrySpeedMps, read.capture, units);
 
   return (
     <section

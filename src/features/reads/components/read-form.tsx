@@ -7,6 +7,7 @@ import type { UnitSystem } from "../../../../shared/units";
 import { useDebouncedCallback } from "../hooks/use-debounced-callback";
 import { NAMED_DIRECTIONS, describeFallLine, normaliseDeg } from "../utils/directions";
 import {
+  FIELD_SPECS,
   convertFormValues,
   fieldLimits,
   formatNumber,
@@ -18,7 +19,7 @@ import {
   type NumericField,
   type ReadFormValues,
 } from "../utils/read-form";
-import { encodeReadQuery, type ReadValues } from "../utils/read-query";
+import { encodeReadQuery, type ReadValues } from "../../../lib/read-url";
 import { DirectionDial } from "./direction-dial";
 
 /** The eight named directions placed as the golfer sees them: away (downhill) on top, toward them below, the hole in the middle. */
@@ -268,7 +269,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
             Use entry speed instead of the distance past
           </label>
           <InputField
-            label="Entry speed (m/s)"
+            label={`Entry speed (${FIELD_SPECS.entrySpeed.unit(units)})`}
             inputMode="decimal"
             autoComplete="off"
             hint={limitsHint("entrySpeed")}

@@ -10,10 +10,10 @@ import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner, TextLink } fr
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useSolveRead } from "../api/solve-read";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { cannotStopWords, steepestFromMessage } from "../utils/answer-text";
 import { formFieldForApi, type NumericField } from "../utils/read-form";
-import { decodeReadQuery, encodeReadQuery, isCompleteReadQuery, toReadRequest, type ReadValues } from "../utils/read-query";
+import { decodeReadQuery, encodeReadQuery, isCompleteReadQuery, toReadRequest, type ReadValues } from "../../../lib/read-url";
 import { AnswerBar } from "./answer-bar";
 import { ReadAnswer } from "./read-answer";
 import { ReadForm } from "./read-form";
@@ -174,7 +174,7 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
                 </ButtonLink>
               )}
               <ButtonLink
-                to={paths.breakChart.href(new URLSearchParams({ s: String(values.slopePct), st: String(values.stimpFt) }).toString())}
+                to={paths.breakChart.href(encoded)}
                 variant="secondary"
                 size="sm"
               >

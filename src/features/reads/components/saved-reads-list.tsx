@@ -6,7 +6,7 @@ import { useDeleteRead } from "../api/delete-read";
 import { useSavedReads, type SavedRead } from "../api/get-saved-reads";
 import { aimWords, readInputSummary } from "../utils/answer-text";
 import { describeFallLine } from "../utils/directions";
-import { encodeReadQuery, fromReadRequest } from "../utils/read-query";
+import { encodeReadQuery, fromReadRequest } from "../../../lib/read-url";
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
 
