@@ -39,6 +39,10 @@ export function formatSpeed(mps: number, units: UnitSystem): string {
 export function exportMetres(m: number): number {
   return roundTo(m, 3);
 }
+/** A Stimp reading for a file: to 0.01 ft (people see 0.1 ft; the file keeps one more place for a re-import). */
+export function exportStimp(ft: number): number {
+  return roundTo(ft, 2);
+}
 /** A speed for a file: to the mm/s. */
 export function exportSpeed(mps: number): number {
   return roundTo(mps, 3);

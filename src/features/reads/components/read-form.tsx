@@ -41,13 +41,15 @@ export type ReadFormProps = {
   /** A note under the slope (e.g. the steepest slope a ball stops on at this Stimp). */
   slopeNote?: string;
   solving?: boolean;
+  /** What is wrong with the form's values now (messages in the user's units), or null when they can be read. */
+  onProblems?: (problems: string[] | null) => void;
 };
 
 function unitLabel(field: NumericField, units: UnitSystem): string {
   return fieldLimits(field, units).unit;
 }
 
-export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, slopeNote, solving }: ReadFormProps) {
+export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, slopeNote, solving, onProblems }: ReadFormProps) {
   const ids = { dial: useId(), degrees: useId(), dialHelp: useId() };
   const [initial] = useState(() => toFormValues(values, units));
   // The units the form's text is written in, and the exact SI values behind that text.
@@ -85,6 +87,18 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
     }
     debounced.call();
   }, [watched, debounced]);
+
+  // The page greys out an answer that no longer matches the form, at once, and says why.
+  const lastProblems = useRef<string | null>(null);
+  useEffect(() => {
+    if (!onProblems) return;
+    const parsed = readFormSchema(textUnits.current).safeParse(getValues());
+    const problems = parsed.success ? null : [...new Set(parsed.error.issues.map((i) => i.message))];
+    const key = problems ? problems.join("|") : null;
+    if (key === lastProblems.current) return;
+    lastProblems.current = key;
+    onProblems(problems);
+  }, [watched, units, getValues, onProblems]);
 
   // Units switched: rewrite every field in the new units from the exact SI values behind it.
   useLayoutEffect(() => {
