@@ -69,7 +69,7 @@ function toDate(value: DateInput): { date: Date; calendar: boolean } {
   return { date: value instanceof Date ? value : new Date(value), calendar: false };
 }
 
-export type DateStyle = "date" | "day" | "weekday" | "long" | "dateTime";
+export type DateStyle = "date" | "day" | "weekday" | "long" | "dateTime" | "instant";
 
 const STYLES: Record<DateStyle, Intl.DateTimeFormatOptions> = {
   /** "2 Dec 2026" / "Dec 2, 2026" as the reader's locale writes it. */
@@ -82,18 +82,20 @@ const STYLES: Record<DateStyle, Intl.DateTimeFormatOptions> = {
   long: { weekday: "long", day: "numeric", month: "long", year: "numeric" },
   /** "2 Dec 2026, 14:05". */
   dateTime: { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" },
+  /** "2 Dec 2026, 14:05:09": a record (audit, mail) to the second. */
+  instant: { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", second: "2-digit" },
 };
 
 /** The one date formatter. `locale` is for tests; the app passes none (the reader's locale). */
 export function formatDate(value: DateInput, style: DateStyle = "date", locale?: string): string {
   const { date, calendar } = toDate(value);
-  if (Number.isNaN(date.getTime())) return "";
+  if (Number.isNaN(date.getTime())) return typeof value === "string" ? value : "";
   return formatter(locale, { ...STYLES[style], ...(calendar ? { timeZone: "UTC" } : {}) }).format(date);
 }
 
 /** A count with the reader's grouping: "10,000" / "10 000". */
 export function formatCount(n: number, locale?: string): string {
-  return formatter(locale, {}).format(n);
+  return new Intl.NumberFormat(locale).format(n);
 }
 
 /** Below this the ball is all but still at the hole (5 cm/s): it topples in, and is said so in words. */
