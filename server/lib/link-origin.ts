@@ -25,7 +25,12 @@ function hostPart(address: string): string {
  * interface (0.0.0.0 / ::), each of this machine's IPv4 addresses, its IPv6 addresses (not link-local) and its
  * host name; when bound to one address, that address.
  */
-export function localOrigins(host: string, port: number, interfaces: Interfaces = os.networkInterfaces(), hostname = os.hostname()): string[] {
+export function localOrigins(
+  host: string,
+  port: number,
+  interfaces: Interfaces = os.networkInterfaces(),
+  hostname = os.hostname(),
+): string[] {
   const hosts = ["localhost", "127.0.0.1"];
   if (host === "0.0.0.0" || host === "::" || host === "") {
     for (const list of Object.values(interfaces)) {

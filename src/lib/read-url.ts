@@ -21,7 +21,14 @@ export type ReadValues = {
 
 export type ReadKey = Exclude<keyof ReadValues, "paceMode">;
 
-export const READ_URL_KEYS: Record<ReadKey, string> = { distanceM: "d", slopePct: "s", fallLineDeg: "f", stimpFt: "st", rollPastM: "rp", entrySpeedMps: "es" };
+export const READ_URL_KEYS: Record<ReadKey, string> = {
+  distanceM: "d",
+  slopePct: "s",
+  fallLineDeg: "f",
+  stimpFt: "st",
+  rollPastM: "rp",
+  entrySpeedMps: "es",
+};
 const ORDER: ReadKey[] = ["distanceM", "slopePct", "fallLineDeg", "stimpFt"];
 
 /** The one set of defaults, a putt a golfer would recognise: 10 ft (3 m), 2 %, falls right, Stimp 10, 17 in (45 cm) past. */

@@ -64,7 +64,9 @@ const linksIn = (text: string) => [...text.matchAll(/https?:\/\/[^\s<>"')\]]+/g)
 test("sign-up and reset mail: links use the trusted address the request came to (127.0.0.1, not localhost)", async () => {
   const email = uniqueEmail("reached");
   const client = new HttpClient(server.url); // http://127.0.0.1:<port>
-  expect((await client.post("/api/auth/sign-up/email", { name: "Reached", email, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+  expect(
+    (await client.post("/api/auth/sign-up/email", { name: "Reached", email, password: TEST_PASSWORD, accountType: "player" })).status,
+  ).toBe(200);
   const confirm = await server.smtpFake!.waitFor((m) => m.to.includes(email) && m.subject.startsWith("Confirm"));
   expect(linksIn(confirm.text)).toEqual([`http://127.0.0.1:${port}`]);
   await new HttpClient(server.url).post("/api/auth/request-password-reset", { email, redirectTo: "/reset-password" });
@@ -74,7 +76,12 @@ test("sign-up and reset mail: links use the trusted address the request came to 
 
 test("POST /api/auth/request-password-reset with an untrusted Host: the link falls back to the default address", async () => {
   const email = uniqueEmail("poison");
-  await new HttpClient(server.url).post("/api/auth/sign-up/email", { name: "Target", email, password: TEST_PASSWORD, accountType: "player" });
+  await new HttpClient(server.url).post("/api/auth/sign-up/email", {
+    name: "Target",
+    email,
+    password: TEST_PASSWORD,
+    accountType: "player",
+  });
   const forged = new HostClient(server.url, "evil.example");
   const res = await forged.post("/api/auth/request-password-reset", { email, redirectTo: "/reset-password" });
   expect(res.status).toBe(200);
@@ -86,7 +93,9 @@ test("POST /api/auth/request-password-reset with an untrusted Host: the link fal
 test("POST /api/auth/sign-up/email with an untrusted Host (same port): the confirmation link falls back", async () => {
   const email = uniqueEmail("poison-signup");
   const forged = new HostClient(server.url, `attacker.example:${port}`);
-  expect((await forged.post("/api/auth/sign-up/email", { name: "Target", email, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+  expect(
+    (await forged.post("/api/auth/sign-up/email", { name: "Target", email, password: TEST_PASSWORD, accountType: "player" })).status,
+  ).toBe(200);
   const confirm = await server.smtpFake!.waitFor((m) => m.to.includes(email) && m.subject.startsWith("Confirm"));
   expect(confirm.text).not.toContain("attacker.example");
   expect(linksIn(confirm.text)).toEqual([`http://localhost:${port}`]);
@@ -105,7 +114,10 @@ test("POST /api/squads/:id/invitations: links on the trusted address reached; an
   // The same kind of request, a coach signed in through a forged Host.
   const forged = new HostClient(server.url, "evil.example");
   const coachEmail = uniqueEmail("forged-coach");
-  expect((await forged.post("/api/auth/sign-up/email", { name: "Coach", email: coachEmail, password: TEST_PASSWORD, accountType: "coach" })).status).toBe(200);
+  expect(
+    (await forged.post("/api/auth/sign-up/email", { name: "Coach", email: coachEmail, password: TEST_PASSWORD, accountType: "coach" }))
+      .status,
+  ).toBe(200);
   const squad = await forged.post("/api/squads", { name: "Forged squad" });
   expect(squad.status).toBe(201);
   const other = uniqueEmail("invited-forged");
@@ -127,13 +139,20 @@ test("POST /api/ladders/:id/assignments: the notice links to the trusted address
 
 test("with BASE_URL every link uses it, whatever the Host; start-up says which address links use", async () => {
   const lines: string[] = [];
-  const s = await startTestServer({ env: { BASE_URL: "https://putting.example-club.test", LOG_LEVEL: "info" }, logDestination: { write: (l) => void lines.push(l) } });
+  const s = await startTestServer({
+    env: { BASE_URL: "https://putting.example-club.test", LOG_LEVEL: "info" },
+    logDestination: { write: (l) => void lines.push(l) },
+  });
   try {
     expect(lines.some((l) => l.includes("Links in e-mail point at https://putting.example-club.test"))).toBe(true);
     const email = uniqueEmail("fixed");
     // BASE_URL is the only trusted origin now: the test's write comes from it.
     const client = new HttpClient(s.url);
-    const res = await client.post("/api/auth/sign-up/email", { name: "Fixed", email, password: TEST_PASSWORD, accountType: "player" }, { origin: "https://putting.example-club.test" });
+    const res = await client.post(
+      "/api/auth/sign-up/email",
+      { name: "Fixed", email, password: TEST_PASSWORD, accountType: "player" },
+      { origin: "https://putting.example-club.test" },
+    );
     expect(res.status).toBe(200);
     const mail = await s.smtpFake!.waitFor((m) => m.to.includes(email));
     expect(linksIn(mail.text)).toEqual(["https://putting.example-club.test"]);

@@ -106,7 +106,12 @@ test("on a phone, every order of side, finish and length is stored as the Missed
     });
     // The list says it the same way.
     const list = page.getByRole("list", { name: "Putts, newest first" });
-    await expect(list.getByRole("listitem").nth(summaries.length - 3).textContent()).resolves.toContain(`Missed ${summaries[2]}`);
+    await expect(
+      list
+        .getByRole("listitem")
+        .nth(summaries.length - 3)
+        .textContent(),
+    ).resolves.toContain(`Missed ${summaries[2]}`);
     expect(browser.errors.filter((e) => !/status of 401/.test(e))).toEqual([]);
   } finally {
     await browser.close();

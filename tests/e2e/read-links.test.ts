@@ -50,13 +50,24 @@ test("read → chart → rehearse → read → chart: a 45 cm roll-past read arr
     await expect(form.getByLabel("Slope (%)").inputValue()).resolves.toBe("3.5");
     await expect(form.getByLabel("Stimp (ft)").inputValue()).resolves.toBe("11.5");
     await expect(form.getByLabel(/Finish past/).inputValue()).resolves.toBe("18");
-    await page.getByText(/Slope 3\.5 %, Stimp 11\.5, finishing 18 in past/).first().waitFor();
+    await page
+      .getByText(/Slope 3\.5 %, Stimp 11\.5, finishing 18 in past/)
+      .first()
+      .waitFor();
     await screenshot(page, "read-links-chart-desk");
 
     await page.getByRole("link", { name: "Rehearse the read" }).click();
     await expectRead(page, "/rehearse", read);
-    await page.getByText(/Change the putt/).first().waitFor();
-    expect(await page.getByText(/Change the putt/).first().textContent()).toMatch(/3\.5 %, Stimp 11\.5/);
+    await page
+      .getByText(/Change the putt/)
+      .first()
+      .waitFor();
+    expect(
+      await page
+        .getByText(/Change the putt/)
+        .first()
+        .textContent(),
+    ).toMatch(/3\.5 %, Stimp 11\.5/);
 
     await page.getByRole("link", { name: "Open in the read calculator" }).click();
     await expectRead(page, "/read", read);
@@ -82,7 +93,10 @@ test("a dying-pace read stays dying on the chart; an entry-speed read keeps its 
     await page.getByTestId("aim-headline").waitFor();
     await page.getByRole("link", { name: "Break chart for this green" }).click();
     await expectRead(page, "/chart", dying);
-    await page.getByText(/at a dying pace/).first().waitFor();
+    await page
+      .getByText(/at a dying pace/)
+      .first()
+      .waitFor();
     await screenshot(page, "read-links-chart-dying-phone");
     await page.getByRole("link", { name: "Rehearse the read" }).click();
     await expectRead(page, "/rehearse", dying);
@@ -92,7 +106,10 @@ test("a dying-pace read stays dying on the chart; an entry-speed read keeps its 
     await page.getByTestId("aim-headline").waitFor();
     await page.getByRole("link", { name: "Break chart for this green" }).click();
     await expectRead(page, "/chart", entry);
-    await page.getByText(/reaching the hole at 3\.0 ft\/s/).first().waitFor();
+    await page
+      .getByText(/reaching the hole at 3\.0 ft\/s/)
+      .first()
+      .waitFor();
     await page.goto(`${server.url}/read?${query(entry)}`);
     await page.getByRole("link", { name: "Rehearse this putt" }).click();
     await page.waitForURL(/\/rehearse\?/);

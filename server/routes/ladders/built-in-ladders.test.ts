@@ -13,5 +13,6 @@ test("every built-in rung is a whole number of feet, shown as the golfer says it
 });
 
 test("the built-in ladders pass the schema a coach's copy must pass", () => {
-  for (const { name, description, failRule, rungs } of BUILT_IN_LADDERS) expect(ladderInputSchema.safeParse({ name, description, failRule, rungs }).success).toBe(true);
+  for (const { name, description, failRule, rungs } of BUILT_IN_LADDERS)
+    expect(ladderInputSchema.safeParse({ name, description, failRule, rungs }).success).toBe(true);
 });

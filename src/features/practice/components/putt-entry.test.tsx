@@ -11,7 +11,16 @@ const INCH = 0.0254;
 
 function setup() {
   const onLog = vi.fn<(d: PuttDraft) => void>();
-  render(<PuttEntry units="imperial" distanceM={6 * 0.3048} onDistanceChange={() => undefined} breakType={null} onBreakTypeChange={() => undefined} onLog={onLog} />);
+  render(
+    <PuttEntry
+      units="imperial"
+      distanceM={6 * 0.3048}
+      onDistanceChange={() => undefined}
+      breakType={null}
+      onBreakTypeChange={() => undefined}
+      onLog={onLog}
+    />,
+  );
   const miss = screen.getByRole("region", { name: "A miss" });
   const missed = () => within(miss).getByRole("button", { name: /^Missed/ });
   return { onLog, miss, missed };

@@ -11,7 +11,13 @@ test("a read's link decodes to that putt in SI, and encodes back to the same lin
 
 test("the defaults are the read calculator's: 10 ft and 17 in past in feet, 3 m and 45 cm in metres", () => {
   expect(decodeRehearse(new URLSearchParams(""), "imperial").putt.rollPastM).toBeCloseTo(17 * 0.0254, 12);
-  expect(decodeRehearse(new URLSearchParams(""), "metric").putt).toEqual({ distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, rollPastM: 0.45 });
+  expect(decodeRehearse(new URLSearchParams(""), "metric").putt).toEqual({
+    distanceM: 3,
+    slopePct: 2,
+    fallLineDeg: 90,
+    stimpFt: 10,
+    rollPastM: 0.45,
+  });
 });
 
 test("an entry-speed read becomes the roll-past that speed gives on the same putt", () => {
