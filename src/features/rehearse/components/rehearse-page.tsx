@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useState } from "react";
 import { useSearchParams } from "react-router";
-import { formatSlope, formatSpeed, stimpText } from "../../../../shared/format";
-import { formatShort, longUnitLabel, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import { formatLength, formatSlope, formatSpeed, stimpText } from "../../../../shared/format";
+import { formatShort, type UnitSystem } from "../../../../shared/units";
 import { CameraButtons } from "../../../components/green-3d/camera-buttons";
 import { contourIntervalM, greenShape, heightRange } from "../../../components/green-3d/frame";
 import { GreenView } from "../../../components/green-3d/green-view";
@@ -145,7 +145,7 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
   }
 
   const sceneLabel = current.ok
-    ? `A ${putt.distanceM.toFixed(1)} metre putt on a green that ${fallLineWords(putt.fallLineDeg)}; aim ${aimWords(current.read.aimOffsetM, units, current.read.startLineDeg)}.`
+    ? `A ${formatLength(putt.distanceM, units)} putt on a green that ${fallLineWords(putt.fallLineDeg)}; aim ${aimWords(current.read.aimOffsetM, units, current.read.startLineDeg)}.`
     : "The putt on the green.";
 
   return (
@@ -257,9 +257,6 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
 }
 
 function puttWords(p: RehearsePutt, units: UnitSystem): string {
-  return `${formatLengthShort(p.distanceM, units)}, ${formatSlope(p.slopePct)}, ${stimpText(p.stimpFt)}, the green ${fallLineWords(p.fallLineDeg)}`;
+  return `${formatLength(p.distanceM, units)}, ${formatSlope(p.slopePct)}, ${stimpText(p.stimpFt)}, the green ${fallLineWords(p.fallLineDeg)}`;
 }
 
-function formatLengthShort(m: number, units: UnitSystem): string {
-  return `${Number(toLongUnit(m, units).toFixed(units === "metric" ? 2 : 1))} ${longUnitLabel(units)}`;
-}
