@@ -5,6 +5,12 @@ import type { ReactNode } from "react";
 import { Symbols } from "recharts";
 import { CHART_TEXT, SERIES, patternId, seriesLook, type PatternKind } from "../../lib/chart-palette";
 
+/**
+ * Every chart is a figure: an image with a spoken label, its numbers in the table beside it. recharts 3 otherwise
+ * makes the drawing a focusable "application" with no name (a Tab stop that says nothing).
+ */
+export const figureChart = { accessibilityLayer: false } as const;
+
 /** Legend text in dark ink (recharts colours it like the series by default, too faint for the lighter ones). */
 export function inkLegend(value: ReactNode): ReactNode {
   return <span style={{ color: CHART_TEXT.ink }}>{value}</span>;

@@ -1,7 +1,7 @@
 // Grouped bars of make rate by distance band, one bar per player (recharts; loaded lazily).
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { CHART_GRID, patternId } from "../../../lib/chart-palette";
-import { ChartPatterns, legendProps, tickStyle } from "../../../components/charts/chart-parts";
+import { ChartPatterns, legendProps, tickStyle, figureChart } from "../../../components/charts/chart-parts";
 import type { SquadChartData } from "../utils/squad-chart-data";
 
 // Each player's bars have their own colour and their own fill pattern (stripes, dots, checks), so players are told
@@ -11,7 +11,7 @@ export default function SquadChart({ data }: { data: SquadChartData }) {
   return (
     <div className="h-72 w-full" role="img" aria-label={`Make rate by distance band for ${data.series.map((s) => s.name).join(", ")}`}>
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={data.rows} margin={{ top: 8, right: 8, bottom: 4, left: -16 }} barCategoryGap="18%">
+        <BarChart {...figureChart} data={data.rows} margin={{ top: 8, right: 8, bottom: 4, left: -16 }} barCategoryGap="18%">
           <CartesianGrid stroke={CHART_GRID} strokeDasharray="3 4" vertical={false} />
           <ChartPatterns />
           <XAxis dataKey="band" tick={tickStyle} />

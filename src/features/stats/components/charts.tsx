@@ -18,7 +18,7 @@ import {
   YAxis,
 } from "recharts";
 import { CHART_GRID, ROLE_COLOURS, patternId, seriesLook } from "../../../lib/chart-palette";
-import { ChartPatterns, legendProps, seriesDot, tickStyle } from "../../../components/charts/chart-parts";
+import { ChartPatterns, legendProps, seriesDot, tickStyle, figureChart } from "../../../components/charts/chart-parts";
 import type { CompareRow, MakeRateRow, SessionRow, TrendRow, TrendSeries } from "../utils/chart-data";
 
 const COLOURS = {
@@ -41,7 +41,7 @@ export function MakeRateChart({ rows, tourSource, rateLabel = "Your make rate" }
     <figure className="flex flex-col gap-2">
       <div className="h-72 w-full sm:h-80" role="img" aria-label="Make rate by distance band with its 95 % interval, and the tour one-putt rate for comparison">
         <ResponsiveContainer width="100%" height="100%">
-          <ComposedChart data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
+          <ComposedChart {...figureChart} data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
             {grid}
             <XAxis dataKey="label" tick={tickStyle} interval={0} angle={rows.length > 6 ? -30 : 0} textAnchor={rows.length > 6 ? "end" : "middle"} height={rows.length > 6 ? 48 : 28} />
             {percentAxis}
@@ -73,7 +73,7 @@ export function TrendChart({ rows, series, rolling }: TrendChartProps) {
   return (
     <div className="h-72 w-full sm:h-80" role="img" aria-label={`Make rate per ${rolling ? "rolling window" : "week"} for the chosen distance bands`}>
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={rows} margin={{ top: 8, right: 12, bottom: 4, left: 0 }}>
+        <LineChart {...figureChart} data={rows} margin={{ top: 8, right: 12, bottom: 4, left: 0 }}>
           {grid}
           <XAxis dataKey="label" tick={tickStyle} minTickGap={16} />
           {percentAxis}
@@ -113,7 +113,7 @@ export function CompareChart({ rows, aLabel, bLabel }: CompareChartProps) {
   return (
     <div className="h-72 w-full sm:h-80" role="img" aria-label="Make rate per band in the two periods, with 95 % intervals">
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }} barGap={2}>
+        <BarChart {...figureChart} data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }} barGap={2}>
           {grid}
           <XAxis dataKey="label" tick={tickStyle} interval={0} angle={rows.length > 6 ? -30 : 0} textAnchor={rows.length > 6 ? "end" : "middle"} height={rows.length > 6 ? 48 : 28} />
           {percentAxis}
@@ -137,7 +137,7 @@ export function SessionsChart({ rows }: { rows: SessionRow[] }) {
   return (
     <div className="h-56 w-full" role="img" aria-label="Strokes gained per session; above zero is better than the tour average">
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
+        <BarChart {...figureChart} data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
           {grid}
           <XAxis dataKey="label" tick={tickStyle} minTickGap={12} />
           <YAxis width={44} tick={tickStyle} />

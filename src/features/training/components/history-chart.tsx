@@ -1,7 +1,7 @@
 // The history chart (recharts; loaded lazily, so recharts stays out of the page's own chunk).
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { CHART_GRID, CHART_TEXT, seriesLook } from "../../../lib/chart-palette";
-import { inkLegend, seriesDot, tickStyle } from "../../../components/charts/chart-parts";
+import { inkLegend, seriesDot, tickStyle, figureChart } from "../../../components/charts/chart-parts";
 import type { HistoryRow } from "../utils/history-chart-data";
 
 export default function HistoryChart({ rows, window }: { rows: HistoryRow[]; window: number }) {
@@ -12,7 +12,7 @@ export default function HistoryChart({ rows, window }: { rows: HistoryRow[]; win
       aria-label={`Score of each read, and the mean of the last ${window}, over ${rows.length} reads`}
     >
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={rows} margin={{ top: 8, right: 12, bottom: 4, left: -12 }}>
+        <LineChart {...figureChart} data={rows} margin={{ top: 8, right: 12, bottom: 4, left: -12 }}>
           <CartesianGrid stroke={CHART_GRID} strokeDasharray="3 4" />
           <XAxis
             dataKey="attempt"
