@@ -52,6 +52,7 @@ test("read → chart → rehearse → read → chart: a 45 cm roll-past read arr
     await expect(form.getByLabel(/Finish past/).inputValue()).resolves.toBe("18");
     await page
       .getByText(/Slope 3\.5 %, Stimp 11\.5, finishing 18 in past/)
+      .filter({ visible: true })
       .first()
       .waitFor();
     await screenshot(page, "read-links-chart-desk");
@@ -95,6 +96,7 @@ test("a dying-pace read stays dying on the chart; an entry-speed read keeps its 
     await expectRead(page, "/chart", dying);
     await page
       .getByText(/at a dying pace/)
+      .filter({ visible: true })
       .first()
       .waitFor();
     await screenshot(page, "read-links-chart-dying-phone");
@@ -108,6 +110,7 @@ test("a dying-pace read stays dying on the chart; an entry-speed read keeps its 
     await expectRead(page, "/chart", entry);
     await page
       .getByText(/reaching the hole at 3\.0 ft\/s/)
+      .filter({ visible: true })
       .first()
       .waitFor();
     await page.goto(`${server.url}/read?${query(entry)}`);
