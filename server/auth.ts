@@ -6,6 +6,7 @@ import { z } from "zod";
 import { SIGN_UP_ROLES } from "../shared/roles";
 import type { Db } from "./db/client";
 import * as schema from "./db/schema";
+import { linkBaseForWebRequest, onOrigin, type LinkOrigins } from "./lib/link-origin";
 import { linkMail, type Mailer } from "./lib/mailer";
 import type { Logger } from "./lib/logger";
 
@@ -17,11 +18,14 @@ export type AuthConfig = {
   secret: string;
   baseUrl: string;
   trustedOrigins: string[];
+  /** Where e-mailed links point (lib/link-origin.ts); better-auth builds them on baseUrl, moved here per request. */
+  links?: LinkOrigins;
   mailer: Mailer;
   logger: Logger;
 };
 
-export function createAuth({ db, secret, baseUrl, trustedOrigins, mailer, logger }: AuthConfig) {
+export function createAuth({ db, secret, baseUrl, trustedOrigins, links, mailer, logger }: AuthConfig) {
+  const linkFor = (url: string, request: Request | undefined) => (links ? onOrigin(url, linkBaseForWebRequest(links, request)) : url);
   const send = async (mail: Parameters<Mailer["send"]>[0]) => {
     try {
       await mailer.send(mail);
@@ -62,18 +66,18 @@ export function createAuth({ db, secret, baseUrl, trustedOrigins, mailer, logger
       maxPasswordLength: 128,
       requireEmailVerification: false,
       revokeSessionsOnPasswordReset: true,
-      sendResetPassword: async ({ user, url }) => {
+      sendResetPassword: async ({ user, url }, request) => {
         await send(
-          linkMail(user.email, "Reset your Borrowline password", `Someone asked to reset the password for ${user.email}.`, "Choose a new password", url),
+          linkMail(user.email, "Reset your Borrowline password", `Someone asked to reset the password for ${user.email}.`, "Choose a new password", linkFor(url, request)),
         );
       },
     },
     emailVerification: {
       sendOnSignUp: true,
       autoSignInAfterVerification: true,
-      sendVerificationEmail: async ({ user, url }) => {
+      sendVerificationEmail: async ({ user, url }, request) => {
         await send(
-          linkMail(user.email, "Confirm your e-mail for Borrowline", `Welcome to Borrowline, ${user.name}. Please confirm this is your e-mail address.`, "Confirm my e-mail", url),
+          linkMail(user.email, "Confirm your e-mail for Borrowline", `Welcome to Borrowline, ${user.name}. Please confirm this is your e-mail address.`, "Confirm my e-mail", linkFor(url, request)),
         );
       },
     },

@@ -5,10 +5,13 @@ import type { Database } from "./db/client";
 import type { Logger } from "./lib/logger";
 import type { Mailer } from "./lib/mailer";
 import type { SmtpFake } from "./lib/smtp-fake";
+import type { LinkOrigins } from "./lib/link-origin";
 import type { MailLimiters, RateLimitConfig, RateLimitStoreFactory } from "./middleware/rate-limit";
 
 export type AppConfig = {
   baseUrl: string;
+  /** Where e-mailed links point: BASE_URL, else the trusted address a request reached us at (lib/link-origin.ts). */
+  links: LinkOrigins;
   /** Vite's dev server injects inline scripts: CSP is off in development only. */
   devCsp: boolean;
   trustProxy: boolean;

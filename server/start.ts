@@ -16,6 +16,7 @@ import type { Env } from "./env";
 import { ERROR_CODES, type ApiErrorBody } from "../shared/errors";
 import { createLogger } from "./lib/logger";
 import { postgresRateLimits } from "./lib/rate-limit-store";
+import { localOrigins, type LinkOrigins } from "./lib/link-origin";
 import { createMailer } from "./lib/mailer";
 import { makePrivate, usePrivateUmask } from "./lib/private-files";
 import { keepInInbox } from "./lib/dev-inbox";
@@ -112,11 +113,16 @@ export async function start(options: StartOptions): Promise<Running> {
     const mailer = createMailer(env.SMTP_URL ?? smtpFake!.url, env.MAIL_FROM, logger);
 
     const baseUrl = env.BASE_URL ?? `http://localhost:${port}`;
-    const trustedOrigins = env.BASE_URL
-      ? [new URL(env.BASE_URL).origin]
-      : [`http://localhost:${port}`, `http://127.0.0.1:${port}`];
+    const trustedOrigins = env.BASE_URL ? [new URL(env.BASE_URL).origin] : localOrigins(env.HOST, port);
+    const links: LinkOrigins = { fixed: env.BASE_URL ? new URL(env.BASE_URL).origin : undefined, fallback: new URL(baseUrl).origin, trusted: trustedOrigins };
+    if (env.BASE_URL) logger.info({ links: links.fixed }, `Links in e-mail point at ${links.fixed} (BASE_URL)`);
+    else
+      logger.info(
+        { links: trustedOrigins, fallback: links.fallback },
+        `No BASE_URL: links in e-mail use the address the app was reached at, one of ${trustedOrigins.join(", ")} (any other address: ${links.fallback}). Set BASE_URL to fix one.`,
+      );
 
-    const auth = createAuth({ db: database.db, secret: authSecret(env), baseUrl, trustedOrigins, mailer, logger });
+    const auth = createAuth({ db: database.db, secret: authSecret(env), baseUrl, trustedOrigins, links, mailer, logger });
     if (env.SEED === "1") await seedDemo(database.db, logger);
 
     // With DATABASE_URL every server on the database shares the rate-limit counts (PostgreSQL store).
@@ -132,6 +138,7 @@ export async function start(options: StartOptions): Promise<Running> {
       rateLimitStore: sharedLimits?.store,
       config: {
         baseUrl,
+        links,
         devCsp: env.NODE_ENV === "development",
         trustProxy: env.TRUST_PROXY === "1",
         trustedOrigins,

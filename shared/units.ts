@@ -64,3 +64,21 @@ export function formatShort(m: number, units: UnitSystem): string {
   const v = toShortUnit(Math.abs(m), units);
   return `${v < 10 ? v.toFixed(1) : Math.round(v)} ${shortUnitLabel(units)}`;
 }
+
+/** Metres per second in feet per second. */
+export function mpsToFtps(mps: number): number {
+  return mps / METRES_PER_FOOT;
+}
+
+/**
+ * The one parser for a number a person typed or a link carried: " 3.5 ", "3,5" (comma decimals) and "+2" are
+ * numbers; "", "0x1A", "1e3", "Infinity", "3.5 ft" and "1,234.5" are not (null). Never `Number(text)`, which turns
+ * "0x1A" into 26 and "" into 0.
+ */
+export function parseDecimal(text: string | null | undefined): number | null {
+  if (text === null || text === undefined) return null;
+  const t = text.trim().replace(",", ".");
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)$/.test(t)) return null;
+  const n = Number.parseFloat(t);
+  return Number.isFinite(n) ? n : null;
+}

@@ -17,7 +17,7 @@ export const paths = {
   account: { path: "/account", href: () => "/account" },
 
   // the five flows (reserved; routes are registered as each feature lands)
-  // `query` is a read's URL query without "?" (see src/features/reads/utils/read-query.ts), so a read can be shared.
+  // `query` is a read's URL query without "?" (see src/lib/read-url.ts), so a read can be shared.
   read: { path: "/read", href: (query?: string) => (query ? `/read?${query}` : "/read") },
   breakChart: { path: "/chart", href: (query?: string) => (query ? `/chart?${query}` : "/chart") },
   rehearse: { path: "/rehearse", href: (query?: string) => (query ? `/rehearse?${query}` : "/rehearse") },

@@ -241,3 +241,15 @@ test("CSV export of another player: 403 for a player, allowed for their squad's 
   expect((await anon.get("/api/csv/putts/export")).status).toBe(401);
   expect((await anon.get("/api/csv/sessions/export")).status).toBe(401);
 });
+
+test("GET /api/csv/putts/export and /sessions/export: metres to the millimetre, Stimp to 0.01 ft (issue 14: 6 ft was 1.8288000000000002)", async () => {
+  const { client } = await signedUpClient(server);
+  // 6 ft and a 9.58974… corrected Stimp: what a feet-and-inches player's entries store.
+  const s = await newSession(client, { date: "2024-07-01", stimpFt: 9.58974358974359 });
+  await addPutts(client, s, [{ distanceM: 6 * 0.3048, holed: false, missSide: "left", missLengthM: -(7 * 0.0254) }]);
+  const putts = Papa.parse<string[]>((await client.get("/api/csv/putts/export")).body as string, { skipEmptyLines: true }).data;
+  expect(putts[1]![2]).toBe("1.829"); // 1.8288 m
+  expect(putts[1]![5]).toBe("-0.178"); // 7 in = 0.1778 m
+  const sessions = Papa.parse<string[]>((await client.get("/api/csv/sessions/export")).body as string, { skipEmptyLines: true }).data;
+  expect(sessions[1]![2]).toBe("9.59");
+});

@@ -8,6 +8,7 @@ import type { AppDeps } from "../../deps";
 import type { Db } from "../../db/client";
 import { ladderAssignments, practiceSessions, putts, squadMembers, squads, user } from "../../db/schema";
 import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
+import { linkBase } from "../../lib/link-origin";
 import { linkMail } from "../../lib/mailer";
 import { currentUser, type SessionUser } from "../../middleware/session";
 import { body, parseOrThrow } from "../../middleware/validate";
@@ -91,7 +92,7 @@ export function createAssignments({ database, mailer, config, logger }: AppDeps)
         "Take it to the practice green and log each putt; your progress is saved as you go.";
       try {
         await mailer.send(
-          linkMail(to, `You have a new ladder: ${ladder.name}`, intro, "Open the ladder", `${config.baseUrl}/ladders/run/${row.id}`),
+          linkMail(to, `You have a new ladder: ${ladder.name}`, intro, "Open the ladder", `${linkBase(config.links, req)}/ladders/run/${row.id}`),
         );
       } catch (err) {
         // The assignment stands: the player also finds it in the app.

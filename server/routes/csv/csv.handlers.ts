@@ -1,3 +1,4 @@
+import { exportMetres, exportStimp } from "../../../shared/format";
 import type { RequestHandler } from "express";
 import { setImmediate } from "node:timers/promises";
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
@@ -341,7 +342,7 @@ export function exportPutts(db: Db): RequestHandler {
       .orderBy(asc(practiceSessions.date), asc(putts.createdAt), asc(putts.id));
     const csv = toCsv(
       PUTT_EXPORT_COLUMNS,
-      rows.map((r) => [r.date, r.green, r.distanceM, r.holed, r.missSide, r.missLengthM, r.breakType, r.sessionId, r.id]),
+      rows.map((r) => [r.date, r.green, exportMetres(r.distanceM), r.holed, r.missSide, r.missLengthM === null ? null : exportMetres(r.missLengthM), r.breakType, r.sessionId, r.id]),
     );
     attachment(res, `borrowline-putts-${new Date().toISOString().slice(0, 10)}.csv`, csv);
   };
@@ -370,7 +371,7 @@ export function exportSessions(db: Db): RequestHandler {
       .orderBy(asc(practiceSessions.date), asc(practiceSessions.createdAt));
     const csv = toCsv(
       SESSION_EXPORT_COLUMNS,
-      rows.map((r) => [r.date, r.green, r.stimpFt, r.conditions, r.tags.join("; "), r.notes, Number(r.putts), Number(r.holed), r.id]),
+      rows.map((r) => [r.date, r.green, r.stimpFt === null ? null : exportStimp(r.stimpFt), r.conditions, r.tags.join("; "), r.notes, Number(r.putts), Number(r.holed), r.id]),
     );
     attachment(res, `borrowline-sessions-${new Date().toISOString().slice(0, 10)}.csv`, csv);
   };

@@ -14,6 +14,7 @@ import type { AppDeps } from "../../deps";
 import type { Db } from "../../db/client";
 import { invitations, squadMembers, squads, user } from "../../db/schema";
 import { conflict, forbidden, HttpError, notFound } from "../../lib/http-error";
+import { linkBase } from "../../lib/link-origin";
 import { linkMail } from "../../lib/mailer";
 import { currentUser } from "../../middleware/session";
 import { body, parseOrThrow } from "../../middleware/validate";
@@ -63,7 +64,7 @@ type SquadRow = typeof squads.$inferSelect;
  * Inviting the same address again (or resending) makes fresh links and withdraws the older ones, so an old
  * link answers "withdrawn". Returns the new invitation and its share link.
  */
-async function sendInvitation({ database, mailer, config, logger }: AppDeps, squad: SquadRow, email: string) {
+async function sendInvitation({ database, mailer, logger }: AppDeps, squad: SquadRow, email: string, base: string) {
   const db = database.db;
   const token = crypto.randomBytes(32).toString("base64url");
   const shareToken = crypto.randomBytes(32).toString("base64url");
@@ -73,8 +74,8 @@ async function sendInvitation({ database, mailer, config, logger }: AppDeps, squ
     .values({ squadId: squad.id, email, tokenHash: hashToken(token), shareTokenHash: hashToken(shareToken), expiresAt })
     .returning();
   const [coach] = await db.select({ name: user.name }).from(user).where(eq(user.id, squad.coachId));
-  const link = `${config.baseUrl}/join/${token}`;
-  const shareLink = `${config.baseUrl}/join/${shareToken}`;
+  const link = `${base}/join/${token}`;
+  const shareLink = `${base}/join/${shareToken}`;
 
   const intro =
     `${coach?.name ?? "Your coach"} invites you to join the squad "${squad.name}" on Borrowline, to run the putting ladders ` +
@@ -115,7 +116,7 @@ export function createInvitation(deps: AppDeps): RequestHandler {
     if (member) throw conflict(`${email} is already in ${squad.name}.`);
 
     // The inviting coach gets the link too, to pass on by hand (no mailbox needed for the demo).
-    const sent = await sendInvitation(deps, squad, email);
+    const sent = await sendInvitation(deps, squad, email, linkBase(deps.config.links, req));
     res.status(201).json(sent);
   };
 }
@@ -136,7 +137,7 @@ export function resendInvitation(deps: AppDeps): RequestHandler {
       .where(and(eq(invitations.id, id), ownedBy(squads.coachId, me)));
     if (!found) throw notFound("Invitation");
     if (found.invitation.status === "accepted") throw conflict("This invitation was already accepted; there is nothing to resend.");
-    const sent = await sendInvitation(deps, found.squad, found.invitation.email);
+    const sent = await sendInvitation(deps, found.squad, found.invitation.email, linkBase(deps.config.links, req));
     // A revoked or expired invitation resent: the old row is withdrawn too (it may not have been pending).
     await db.update(invitations).set({ status: "revoked" }).where(and(eq(invitations.id, id), ne(invitations.status, "accepted")));
     res.status(201).json(sent);

@@ -1,10 +1,9 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { Alert, Button, EmptyState, PageHeader } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useAudit } from "../api/admin";
 import { auditWords } from "../utils/audit-words";
-
-const when = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", second: "2-digit" });
 
 /** What every admin did, newest first: who, what, to whom, when. */
 export function AdminAuditPage() {
@@ -14,22 +13,39 @@ export function AdminAuditPage() {
   return (
     <>
       <title>Audit · Admin · Borrowline</title>
-      <PageHeader eyebrow="Admin" title="Audit" description="Every admin action, newest first. Entries cannot be edited or removed from here." />
+      <PageHeader
+        eyebrow="Admin"
+        title="Audit"
+        description="Every admin action, newest first. Entries cannot be edited or removed from here."
+      />
       {audit.isError ? (
-        <Alert tone="error" title="Could not load the audit list" action={<Button size="sm" variant="secondary" onClick={() => void audit.refetch()}>Try again</Button>}>
+        <Alert
+          tone="error"
+          title="Could not load the audit list"
+          action={
+            <Button size="sm" variant="secondary" onClick={() => void audit.refetch()}>
+              Try again
+            </Button>
+          }
+        >
           {errorMessage(audit.error)}
         </Alert>
       ) : !audit.data ? (
         <div className="h-48 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading the audit list" />
       ) : audit.data.entries.length === 0 ? (
-        <EmptyState title="Nothing recorded yet">Role changes, bans, sign-outs and password-reset e-mails sent from the Accounts page are listed here.</EmptyState>
+        <EmptyState title="Nothing recorded yet">
+          Role changes, bans, sign-outs and password-reset e-mails sent from the Accounts page are listed here.
+        </EmptyState>
       ) : (
         <>
-          <ol className="divide-y divide-ink-900/10 rounded-(--radius-card) bg-white px-4 ring-1 ring-ink-900/10 sm:px-5" data-testid="audit-list">
+          <ol
+            className="divide-y divide-ink-900/10 rounded-(--radius-card) bg-white px-4 ring-1 ring-ink-900/10 sm:px-5"
+            data-testid="audit-list"
+          >
             {audit.data.entries.map((e) => (
               <li key={e.id} className="flex flex-col gap-0.5 py-3 sm:flex-row sm:gap-4">
                 <time dateTime={e.createdAt} className="shrink-0 text-sm text-ink-500 tabular-nums sm:w-52">
-                  {when.format(new Date(e.createdAt))}
+                  {formatDate(e.createdAt, "instant")}
                 </time>
                 <p className="text-ink-800">
                   <span className="font-semibold break-all">{e.actor.email}</span> {auditWords(e)}

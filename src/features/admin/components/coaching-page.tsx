@@ -1,8 +1,7 @@
+import { formatDate } from "../../../../shared/format";
 import { Alert, Button, Card, CardTitle, EmptyState, PageHeader } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useAdminCoaching } from "../api/admin";
-
-const created = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
 
 /** Every coach's squads and ladders, each with its owner's name and e-mail (read-only; the coach pages manage them). */
 export function AdminCoachingPage() {
@@ -12,7 +11,15 @@ export function AdminCoachingPage() {
       <title>Squads and ladders · Admin · Borrowline</title>
       <PageHeader eyebrow="Admin" title="Squads and ladders" description="Every coach’s squads and ladders, with whose each one is." />
       {data.isError ? (
-        <Alert tone="error" title="Could not load the squads and ladders" action={<Button size="sm" variant="secondary" onClick={() => void data.refetch()}>Try again</Button>}>
+        <Alert
+          tone="error"
+          title="Could not load the squads and ladders"
+          action={
+            <Button size="sm" variant="secondary" onClick={() => void data.refetch()}>
+              Try again
+            </Button>
+          }
+        >
           {errorMessage(data.error)}
         </Alert>
       ) : !data.data ? (
@@ -32,7 +39,7 @@ export function AdminCoachingPage() {
                       Owner: {s.owner.name} ({s.owner.email})
                     </p>
                     <p className="text-sm text-ink-500">
-                      {s.members} {s.members === 1 ? "player" : "players"} · created {created.format(new Date(s.createdAt))}
+                      {s.members} {s.members === 1 ? "player" : "players"} · created {formatDate(s.createdAt)}
                     </p>
                   </li>
                 ))}
@@ -52,7 +59,7 @@ export function AdminCoachingPage() {
                       Owner: {l.owner.name} ({l.owner.email})
                     </p>
                     <p className="text-sm text-ink-500">
-                      {l.rungs} rungs · created {created.format(new Date(l.createdAt))}
+                      {l.rungs} rungs · created {formatDate(l.createdAt)}
                     </p>
                   </li>
                 ))}

@@ -1,10 +1,10 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { toast } from "sonner";
 import { Alert, Button, ConfirmDialog, EmptyState, InputField, PageHeader, SelectField } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useAdminAction, useAdminUsers, type AdminActionName, type AdminUser, type UsersQuery } from "../api/admin";
 
-const joined = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
 const ROLE_WORDS: Record<string, string> = { player: "Player", coach: "Coach", admin: "Admin" };
 
 type Pending = { user: AdminUser; action: "ban" | "revoke-sessions" | "password-reset" } | null;
@@ -21,16 +21,20 @@ function UserRow({ u, me, onAsk }: { u: AdminUser; me: string; onAsk: (p: NonNul
           <span className="font-semibold text-ink-900">{u.name}</span>
           {self ? <span className="rounded-full bg-ink-900/5 px-2 py-0.5 text-xs font-medium text-ink-600">you</span> : null}
           {u.banned ? <span className="rounded-full bg-bad-50 px-2 py-0.5 text-xs font-medium text-bad-800">Banned</span> : null}
-          {!u.emailVerified ? <span className="rounded-full bg-warn-50 px-2 py-0.5 text-xs font-medium text-warn-800">E-mail not confirmed</span> : null}
+          {!u.emailVerified ? (
+            <span className="rounded-full bg-warn-50 px-2 py-0.5 text-xs font-medium text-warn-800">E-mail not confirmed</span>
+          ) : null}
         </p>
         <p className="text-sm break-all text-ink-500">
-          {u.email} · joined {joined.format(new Date(u.createdAt))}
+          {u.email} · joined {formatDate(u.createdAt)}
           {u.banned && u.banReason ? ` · ban: ${u.banReason}` : ""}
         </p>
       </div>
       <div className="flex flex-wrap items-end gap-2">
         {u.role === "admin" ? (
-          <span className="inline-flex min-h-11 items-center px-2 text-sm font-medium text-ink-700">Admin{self ? " (cannot be changed here)" : ""}</span>
+          <span className="inline-flex min-h-11 items-center px-2 text-sm font-medium text-ink-700">
+            Admin{self ? " (cannot be changed here)" : ""}
+          </span>
         ) : (
           <SelectField
             label={<span className="sr-only">Role of {u.name}</span>}
@@ -44,7 +48,12 @@ function UserRow({ u, me, onAsk }: { u: AdminUser; me: string; onAsk: (p: NonNul
           />
         )}
         {self ? null : u.banned ? (
-          <Button size="sm" variant="secondary" disabled={act.isPending} onClick={() => run("unban", undefined, `${u.name} can sign in again.`)}>
+          <Button
+            size="sm"
+            variant="secondary"
+            disabled={act.isPending}
+            onClick={() => run("unban", undefined, `${u.name} can sign in again.`)}
+          >
             Lift ban
           </Button>
         ) : (
@@ -52,10 +61,20 @@ function UserRow({ u, me, onAsk }: { u: AdminUser; me: string; onAsk: (p: NonNul
             Ban
           </Button>
         )}
-        <Button size="sm" variant="secondary" aria-label={`Sign ${u.name} out everywhere`} onClick={() => onAsk({ user: u, action: "revoke-sessions" })}>
+        <Button
+          size="sm"
+          variant="secondary"
+          aria-label={`Sign ${u.name} out everywhere`}
+          onClick={() => onAsk({ user: u, action: "revoke-sessions" })}
+        >
           Sign out everywhere
         </Button>
-        <Button size="sm" variant="secondary" aria-label={`Send ${u.name} a password-reset e-mail`} onClick={() => onAsk({ user: u, action: "password-reset" })}>
+        <Button
+          size="sm"
+          variant="secondary"
+          aria-label={`Send ${u.name} a password-reset e-mail`}
+          onClick={() => onAsk({ user: u, action: "password-reset" })}
+        >
           Send password reset
         </Button>
       </div>
@@ -76,7 +95,12 @@ export function AdminUsersPage({ me }: { me: string }) {
   const confirm = () => {
     if (!pending) return;
     const { user: u, action } = pending;
-    const done = action === "ban" ? `${u.name} is banned and signed out.` : action === "revoke-sessions" ? `${u.name} is signed out on every device.` : `A password-reset e-mail went to ${u.email}.`;
+    const done =
+      action === "ban"
+        ? `${u.name} is banned and signed out.`
+        : action === "revoke-sessions"
+          ? `${u.name} is signed out on every device.`
+          : `A password-reset e-mail went to ${u.email}.`;
     act.mutate(
       { userId: u.id, action, body: action === "ban" ? (reason.trim() ? { reason: reason.trim() } : {}) : undefined },
       {
@@ -93,7 +117,11 @@ export function AdminUsersPage({ me }: { me: string }) {
   return (
     <>
       <title>Accounts · Admin · Borrowline</title>
-      <PageHeader eyebrow="Admin" title="Accounts" description="Everyone with a Borrowline account. Every change you make here is recorded in the audit list." />
+      <PageHeader
+        eyebrow="Admin"
+        title="Accounts"
+        description="Everyone with a Borrowline account. Every change you make here is recorded in the audit list."
+      />
       <form
         role="search"
         className="mb-4 grid gap-3 sm:grid-cols-[1fr_10rem_10rem_auto] sm:items-end"
@@ -102,7 +130,13 @@ export function AdminUsersPage({ me }: { me: string }) {
           setQ({ ...q, search: draft.trim() || undefined, page: 1 });
         }}
       >
-        <InputField label="Search" type="search" value={draft} onChange={(e) => setDraft(e.target.value)} placeholder={q.field === "email" ? "part of an e-mail address" : "part of a name"} />
+        <InputField
+          label="Search"
+          type="search"
+          value={draft}
+          onChange={(e) => setDraft(e.target.value)}
+          placeholder={q.field === "email" ? "part of an e-mail address" : "part of a name"}
+        />
         <SelectField
           label="In"
           value={q.field}
@@ -126,7 +160,15 @@ export function AdminUsersPage({ me }: { me: string }) {
         <Button type="submit">Search</Button>
       </form>
       {users.isError ? (
-        <Alert tone="error" title="Could not load the accounts" action={<Button size="sm" variant="secondary" onClick={() => void users.refetch()}>Try again</Button>}>
+        <Alert
+          tone="error"
+          title="Could not load the accounts"
+          action={
+            <Button size="sm" variant="secondary" onClick={() => void users.refetch()}>
+              Try again
+            </Button>
+          }
+        >
           {errorMessage(users.error)}
         </Alert>
       ) : !users.data ? (
@@ -179,13 +221,19 @@ export function AdminUsersPage({ me }: { me: string }) {
       >
         {pending?.action === "ban" ? (
           <div className="flex flex-col gap-3">
-            <p>They are signed out at once (within a minute on a device that was already open) and cannot sign in until the ban is lifted. Their data stays.</p>
+            <p>
+              They are signed out at once (within a minute on a device that was already open) and cannot sign in until the ban is lifted.
+              Their data stays.
+            </p>
             <InputField label="Reason (they do not see it)" value={reason} maxLength={200} onChange={(e) => setReason(e.target.value)} />
           </div>
         ) : pending?.action === "revoke-sessions" ? (
           <p>Every device they are signed in on has to sign in again (an open page notices within a minute).</p>
         ) : (
-          <p>The e-mail goes to {pending?.user.email}, with a link to choose a new password. Their current password keeps working until they do.</p>
+          <p>
+            The e-mail goes to {pending?.user.email}, with a link to choose a new password. Their current password keeps working until they
+            do.
+          </p>
         )}
       </ConfirmDialog>
     </>

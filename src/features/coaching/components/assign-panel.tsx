@@ -1,13 +1,23 @@
+import { formatDate } from "../../../../shared/format";
 import { useId, useState, type FormEvent } from "react";
 import type { Assignment } from "../../../../shared/schemas/assignments";
 import type { Ladder } from "../../../../shared/schemas/ladders";
-import { Alert, Button, ButtonLink, Card, CardTitle, ChoiceGroup, InputField, SelectField, Spinner, TextLink } from "../../../components/ui";
+import {
+  Alert,
+  Button,
+  ButtonLink,
+  Card,
+  CardTitle,
+  ChoiceGroup,
+  InputField,
+  SelectField,
+  Spinner,
+  TextLink,
+} from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useAssignLadder } from "../api/assign-ladder";
 import { useCoachSquads } from "../api/get-squads";
-
-const dueFormat = new Intl.DateTimeFormat(undefined, { weekday: "long", day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
 
 function Assigned({ assignments, onAgain }: { assignments: Assignment[]; onAgain: () => void }) {
   const due = assignments[0]?.dueDate;
@@ -18,7 +28,9 @@ function Assigned({ assignments, onAgain }: { assignments: Assignment[]; onAgain
           <li key={a.id}>{a.player.name}</li>
         ))}
       </ul>
-      <p className="mt-2">{due ? `Due ${dueFormat.format(new Date(`${due}T00:00:00Z`))}.` : "No due date."} Each player has an e-mail with a link to the ladder.</p>
+      <p className="mt-2">
+        {due ? `Due ${formatDate(due, "long")}.` : "No due date."} Each player has an e-mail with a link to the ladder.
+      </p>
       <div className="mt-3 flex flex-wrap gap-2">
         <ButtonLink to={paths.coach.href()} size="sm">
           Follow progress
@@ -61,7 +73,14 @@ export function AssignPanel({ ladder }: { ladder: Ladder }) {
     assign.mutate(
       { ladderId: ladder.id, input: { ...target, ...(dueDate ? { dueDate } : {}) } },
       {
-        onError: (error) => setProblem(isApiError(error) ? (Object.values(error.fields)[0] ? `${error.message} ${Object.values(error.fields)[0]}` : error.message) : "Could not give the ladder."),
+        onError: (error) =>
+          setProblem(
+            isApiError(error)
+              ? Object.values(error.fields)[0]
+                ? `${error.message} ${Object.values(error.fields)[0]}`
+                : error.message
+              : "Could not give the ladder.",
+          ),
       },
     );
   };
@@ -113,7 +132,10 @@ export function AssignPanel({ ladder }: { ladder: Ladder }) {
               label="Squad"
               value={effectiveSquad}
               onChange={(e) => setSquadId(e.target.value)}
-              options={withPlayers.map((s) => ({ value: s.id, label: `${s.name} (${s.members.length} player${s.members.length === 1 ? "" : "s"})` }))}
+              options={withPlayers.map((s) => ({
+                value: s.id,
+                label: `${s.name} (${s.members.length} player${s.members.length === 1 ? "" : "s"})`,
+              }))}
             />
           ) : (
             <fieldset className="flex flex-col gap-3">
@@ -126,7 +148,10 @@ export function AssignPanel({ ladder }: { ladder: Ladder }) {
                       const inputId = `${id}-${s.id}-${m.id}`;
                       return (
                         <li key={m.id}>
-                          <label htmlFor={inputId} className="flex min-h-11 cursor-pointer items-center gap-3 rounded-lg px-2 hover:bg-ink-900/5">
+                          <label
+                            htmlFor={inputId}
+                            className="flex min-h-11 cursor-pointer items-center gap-3 rounded-lg px-2 hover:bg-ink-900/5"
+                          >
                             <input
                               id={inputId}
                               type="checkbox"
@@ -149,7 +174,13 @@ export function AssignPanel({ ladder }: { ladder: Ladder }) {
               ))}
             </fieldset>
           )}
-          <InputField label="Due date (optional)" type="date" value={dueDate} onChange={(e) => setDueDate(e.target.value)} containerClassName="max-w-xs" />
+          <InputField
+            label="Due date (optional)"
+            type="date"
+            value={dueDate}
+            onChange={(e) => setDueDate(e.target.value)}
+            containerClassName="max-w-xs"
+          />
           {problem ? <Alert tone="error">{problem}</Alert> : null}
           <Button type="submit" loading={assign.isPending} loadingText="Giving…" className="self-start">
             Give {ladder.name}

@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import { useMemo, useState } from "react";
 import { useSearchParams } from "react-router";
 import clsx from "clsx";
@@ -13,12 +14,15 @@ import { QueryState } from "./query-state";
 import { SquadChartSection } from "./squad-chart-section";
 import { Badge, type BadgeTone } from "./status-badge";
 
-const dayFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short" });
-const dueFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", timeZone: "UTC" });
-
 type StatusValue = DashboardRow["status"];
 const STATUS_LABEL: Record<StatusValue, string> = { ...STATUS_WORDS, "no-ladder": "No ladder yet" };
-const STATUS_TONE: Record<StatusValue, BadgeTone> = { "not-started": "neutral", "in-progress": "warn", completed: "ok", overdue: "bad", "no-ladder": "neutral" };
+const STATUS_TONE: Record<StatusValue, BadgeTone> = {
+  "not-started": "neutral",
+  "in-progress": "warn",
+  completed: "ok",
+  overdue: "bad",
+  "no-ladder": "neutral",
+};
 // Sorting by status puts what needs attention first.
 const STATUS_ORDER: Record<StatusValue, number> = { overdue: 0, "not-started": 1, "in-progress": 2, completed: 3, "no-ladder": 4 };
 
@@ -31,7 +35,10 @@ function RungBar({ row }: { row: DashboardRow }) {
         {row.rungReached} / {row.rungsTotal}
       </span>
       <span aria-hidden="true" className="h-1.5 w-14 overflow-hidden rounded-full bg-ink-900/10">
-        <span className={clsx("block h-full rounded-full", row.status === "completed" ? "bg-ok-600" : "bg-coral-500")} style={{ width: `${pct}%` }} />
+        <span
+          className={clsx("block h-full rounded-full", row.status === "completed" ? "bg-ok-600" : "bg-coral-500")}
+          style={{ width: `${pct}%` }}
+        />
       </span>
     </span>
   );
@@ -44,22 +51,29 @@ const columns = [
     cell: (c) => <TextLink to={paths.coachPlayer.href(c.row.original.playerId)}>{c.getValue()}</TextLink>,
   }),
   col.accessor("squadNames", { header: "Squad" }),
-  col.accessor((r) => r.ladderName ?? "", { id: "ladder", header: "Ladder", cell: (c) => c.getValue() || <span className="text-ink-400">—</span> }),
+  col.accessor((r) => r.ladderName ?? "", {
+    id: "ladder",
+    header: "Ladder",
+    cell: (c) => c.getValue() || <span className="text-ink-400">—</span>,
+  }),
   col.accessor((r) => (r.rungsTotal ? (r.status === "completed" ? 1 : (r.rungReached - 1) / r.rungsTotal) : -1), {
     id: "rung",
     header: "Rung reached",
     cell: (c) => <RungBar row={c.row.original} />,
   }),
-  col.accessor("attempts", { header: "Rung attempts", cell: (c) => <span className="tabular-nums">{c.row.original.ladderName ? c.getValue() : "—"}</span> }),
+  col.accessor("attempts", {
+    header: "Rung attempts",
+    cell: (c) => <span className="tabular-nums">{c.row.original.ladderName ? c.getValue() : "—"}</span>,
+  }),
   col.accessor((r) => r.lastActivityAt ?? "", {
     id: "last",
     header: "Last putt",
-    cell: (c) => (c.getValue() ? dayFormat.format(new Date(c.getValue())) : <span className="text-ink-400">—</span>),
+    cell: (c) => (c.getValue() ? formatDate(c.getValue(), "day") : <span className="text-ink-400">—</span>),
   }),
   col.accessor((r) => r.dueDate ?? "9999-12-31", {
     id: "due",
     header: "Due",
-    cell: (c) => (c.row.original.dueDate ? dueFormat.format(new Date(`${c.row.original.dueDate}T00:00:00Z`)) : <span className="text-ink-400">—</span>),
+    cell: (c) => (c.row.original.dueDate ? formatDate(c.row.original.dueDate, "day") : <span className="text-ink-400">—</span>),
   }),
   col.accessor((r) => STATUS_ORDER[r.status], {
     id: "status",
@@ -85,7 +99,14 @@ function DashboardTable({ rows, emptyBecauseFiltered }: { rows: DashboardRow[]; 
   const [sorting, setSorting] = useState<SortingState>([{ id: "status", desc: false }]);
   // TanStack Table's instance is not memoisable by the React Compiler; this component simply is not compiled.
   // eslint-disable-next-line react-hooks/incompatible-library
-  const table = useReactTable({ data: rows, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+  const table = useReactTable({
+    data: rows,
+    columns,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+  });
   const sorted = table.getRowModel().rows;
   if (rows.length === 0) {
     return emptyBecauseFiltered ? <p className="py-6 text-ink-500">No rows match these filters.</p> : null;
@@ -95,7 +116,13 @@ function DashboardTable({ rows, emptyBecauseFiltered }: { rows: DashboardRow[]; 
     <>
       {/* Phone: one card per row, with a sort choice instead of column headers. */}
       <div className="md:hidden">
-        <SelectField label="Sort by" value={SORT_OPTIONS.some((o) => o.value === sortValue) ? sortValue : "status"} onChange={(e) => setSorting(sortFromOption(e.target.value))} options={SORT_OPTIONS} containerClassName="mb-3" />
+        <SelectField
+          label="Sort by"
+          value={SORT_OPTIONS.some((o) => o.value === sortValue) ? sortValue : "status"}
+          onChange={(e) => setSorting(sortFromOption(e.target.value))}
+          options={SORT_OPTIONS}
+          containerClassName="mb-3"
+        />
         <ul className="flex flex-col gap-2">
           {sorted.map(({ original: r }) => (
             <li key={r.id} className="rounded-xl bg-white px-4 py-3 ring-1 ring-ink-900/10">
@@ -110,8 +137,8 @@ function DashboardTable({ rows, emptyBecauseFiltered }: { rows: DashboardRow[]; 
                     Rung {r.rungReached} / {r.rungsTotal}
                   </span>
                   <span>{r.attempts} attempts</span>
-                  {r.dueDate ? <span>Due {dueFormat.format(new Date(`${r.dueDate}T00:00:00Z`))}</span> : null}
-                  {r.lastActivityAt ? <span>Last putt {dayFormat.format(new Date(r.lastActivityAt))}</span> : null}
+                  {r.dueDate ? <span>Due {formatDate(r.dueDate, "day")}</span> : null}
+                  {r.lastActivityAt ? <span>Last putt {formatDate(r.lastActivityAt, "day")}</span> : null}
                 </p>
               ) : null}
             </li>
@@ -119,7 +146,12 @@ function DashboardTable({ rows, emptyBecauseFiltered }: { rows: DashboardRow[]; 
         </ul>
       </div>
       {/* Desk: the sortable table. */}
-      <SortableTable table={table} rows={sorted} caption="Players and their ladders. Select a column heading to sort by it." className="rounded-(--radius-card)" />
+      <SortableTable
+        table={table}
+        rows={sorted}
+        caption="Players and their ladders. Select a column heading to sort by it."
+        className="rounded-(--radius-card)"
+      />
     </>
   );
 }
@@ -153,7 +185,12 @@ export function CoachDashboard() {
 
   return (
     <>
-      <PageHeader eyebrow="Coaching" title="Coach dashboard" description="Every player in your squads and the ladders you gave them." actions={<ButtonLink to={paths.ladders.href()}>Give a ladder</ButtonLink>} />
+      <PageHeader
+        eyebrow="Coaching"
+        title="Coach dashboard"
+        description="Every player in your squads and the ladders you gave them."
+        actions={<ButtonLink to={paths.ladders.href()}>Give a ladder</ButtonLink>}
+      />
       <QueryState query={players} label="Loading your players">
         {() =>
           allRows.length === 0 ? (
@@ -167,18 +204,33 @@ export function CoachDashboard() {
                   Ladder progress
                 </h2>
                 <p className="text-ink-600">
-                  <strong>{counts.players}</strong> player{counts.players === 1 ? "" : "s"} · <strong>{counts.completed}</strong> ladder{counts.completed === 1 ? "" : "s"} completed ·{" "}
+                  <strong>{counts.players}</strong> player{counts.players === 1 ? "" : "s"} · <strong>{counts.completed}</strong> ladder
+                  {counts.completed === 1 ? "" : "s"} completed ·{" "}
                   <strong className={counts.overdue ? "text-bad-600" : undefined}>{counts.overdue}</strong> overdue
                 </p>
                 <div className="grid gap-3 sm:grid-cols-3" role="search" aria-label="Filter the players">
-                  <SelectField label="Squad" value={filter.squadId} onChange={(e) => setFilter("squad", e.target.value)} options={[{ value: "", label: "All squads" }, ...squadList.map((s) => ({ value: s.id, label: s.name }))]} />
+                  <SelectField
+                    label="Squad"
+                    value={filter.squadId}
+                    onChange={(e) => setFilter("squad", e.target.value)}
+                    options={[{ value: "", label: "All squads" }, ...squadList.map((s) => ({ value: s.id, label: s.name }))]}
+                  />
                   <SelectField
                     label="Status"
                     value={filter.status}
                     onChange={(e) => setFilter("status", e.target.value)}
-                    options={[{ value: "", label: "Any status" }, ...(Object.keys(STATUS_LABEL) as StatusValue[]).map((k) => ({ value: k, label: STATUS_LABEL[k] }))]}
+                    options={[
+                      { value: "", label: "Any status" },
+                      ...(Object.keys(STATUS_LABEL) as StatusValue[]).map((k) => ({ value: k, label: STATUS_LABEL[k] })),
+                    ]}
                   />
-                  <InputField label="Search" type="search" placeholder="Player or ladder" value={filter.text} onChange={(e) => setFilter("q", e.target.value)} />
+                  <InputField
+                    label="Search"
+                    type="search"
+                    placeholder="Player or ladder"
+                    value={filter.text}
+                    onChange={(e) => setFilter("q", e.target.value)}
+                  />
                 </div>
                 <DashboardTable rows={rows} emptyBecauseFiltered={allRows.length > 0} />
               </section>

@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import type { InvitationPreview } from "../../../../shared/schemas/squads";
@@ -10,8 +11,6 @@ import { authKeys } from "../../auth/api/keys";
 import { SignUpForm } from "../../auth/components/sign-up-form";
 import { useAcceptInvitation } from "../api/accept-invitation";
 import { useInvitationPreview } from "../api/get-invitation-preview";
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "long", year: "numeric" });
 
 /** Signs out here without leaving the page, so the link can be used with another account. */
 function useSignOutHere() {
@@ -46,7 +45,8 @@ function InvitationCard({ preview }: { preview: InvitationPreview }) {
         </div>
       </dl>
       <p className="mt-4 text-sand-200">
-        In a squad you run the putting ladders {preview.coach.name} sets, and they can see your practice and progress. You can leave a squad at any time.
+        In a squad you run the putting ladders {preview.coach.name} sets, and they can see your practice and progress. You can leave a squad
+        at any time.
       </p>
     </Card>
   );
@@ -54,9 +54,15 @@ function InvitationCard({ preview }: { preview: InvitationPreview }) {
 
 function Closed({ preview, me }: { preview: InvitationPreview; me: Me | null | undefined }) {
   const copy = {
-    accepted: { title: "This invitation has already been used", body: "Each link works once. If you accepted it, the squad is on your ladders page." },
+    accepted: {
+      title: "This invitation has already been used",
+      body: "Each link works once. If you accepted it, the squad is on your ladders page.",
+    },
     expired: { title: "This invitation has expired", body: `Links work for 14 days. Ask ${preview.coach.name} to send you a new one.` },
-    revoked: { title: "This invitation was withdrawn", body: `${preview.coach.name} withdrew this link. If you still want to join, ask them for a new invitation.` },
+    revoked: {
+      title: "This invitation was withdrawn",
+      body: `${preview.coach.name} withdrew this link. If you still want to join, ask them for a new invitation.`,
+    },
     pending: { title: "", body: "" },
   }[preview.status];
   return (
@@ -80,8 +86,8 @@ function SignedOut({ token, preview, onSignedUp }: { token: string; preview: Inv
       <Card>
         <h2 className="text-xl font-semibold tracking-tight">Create your player account</h2>
         <p className="mt-1 mb-6 text-ink-500">
-          Use the invited e-mail so the invitation matches your account. Then confirm the address with the link we e-mail you: it brings you back here to join{" "}
-          {preview.squad.name}.
+          Use the invited e-mail so the invitation matches your account. Then confirm the address with the link we e-mail you: it brings you
+          back here to join {preview.squad.name}.
         </p>
         <SignUpForm defaultEmail={preview.email} role="player" onSignedUp={onSignedUp} callbackURL={paths.join.href(token)} />
         <Button variant="ghost" className="mt-3" onClick={() => setCreating(false)}>
@@ -158,8 +164,9 @@ export function JoinPage({ token }: { token: string }) {
     body = (
       <Alert tone="warning" title="This invitation is for another e-mail">
         <p>
-          It was sent to <strong className="break-all">{p.email}</strong>, and you are signed in as <strong className="break-all">{user.email}</strong>. Sign out and
-          use the account for {p.email}, or ask {p.coach.name} to invite {user.email} instead.
+          It was sent to <strong className="break-all">{p.email}</strong>, and you are signed in as{" "}
+          <strong className="break-all">{user.email}</strong>. Sign out and use the account for {p.email}, or ask {p.coach.name} to invite{" "}
+          {user.email} instead.
         </p>
         <Button size="sm" variant="secondary" className="mt-3" loading={signingOut} onClick={() => void signOut()}>
           Sign out
@@ -174,8 +181,8 @@ export function JoinPage({ token }: { token: string }) {
         </p>
         {!user.emailVerified && !p.provesAddress ? (
           <Alert tone="info" title="Confirm your e-mail first">
-            Open the link we sent to <strong className="break-all">{user.email}</strong>: it confirms the address and brings you back here. Joining needs a
-            confirmed e-mail, so that only the person who reads that inbox can use the invitation.
+            Open the link we sent to <strong className="break-all">{user.email}</strong>: it confirms the address and brings you back here.
+            Joining needs a confirmed e-mail, so that only the person who reads that inbox can use the invitation.
           </Alert>
         ) : null}
         <Button size="lg" loading={accept.isPending} loadingText="Joining…" onClick={() => accept.mutate(token)} className="sm:self-start">
@@ -195,7 +202,9 @@ export function JoinPage({ token }: { token: string }) {
         </Alert>
       ) : null}
       {body}
-      {p.status === "pending" && !joined ? <p className="mt-6 text-sm text-ink-500">The link works once, until {dateFormat.format(new Date(p.expiresAt))}.</p> : null}
+      {p.status === "pending" && !joined ? (
+        <p className="mt-6 text-sm text-ink-500">The link works once, until {formatDate(p.expiresAt)}.</p>
+      ) : null}
     </div>
   );
 }

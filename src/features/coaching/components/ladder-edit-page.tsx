@@ -1,13 +1,13 @@
 import { ButtonLink, PageHeader, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useLadder } from "../api/get-ladder";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { LadderBuilder } from "./ladder-builder";
 import { QueryState } from "./query-state";
 
 /** The builder for a new ladder or one of the coach's own; a Borrowline ladder must be copied first. */
 export function LadderEditPage({ ladderId }: { ladderId?: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const ladder = useLadder(ladderId);
   if (!ladderId) {
     return (

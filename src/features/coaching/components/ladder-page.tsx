@@ -5,7 +5,7 @@ import { Button, ButtonLink, PageHeader, TextLink } from "../../../components/ui
 import { paths } from "../../../config/paths";
 import { useCopyLadder } from "../api/copy-ladder";
 import { useLadder } from "../api/get-ladder";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { ladderSpan } from "../utils/rule-words";
 import { AssignPanel } from "./assign-panel";
 import { LadderPreview } from "./ladder-preview";
@@ -13,7 +13,7 @@ import { QueryState } from "./query-state";
 import { Badge } from "./status-badge";
 
 function LadderView({ ladder }: { ladder: Ladder }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const copy = useCopyLadder();
   const navigate = useNavigate();
   return (

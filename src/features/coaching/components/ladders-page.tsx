@@ -8,14 +8,14 @@ import { useMe } from "../../auth/api/get-me";
 import { useDeleteLadder } from "../api/delete-ladder";
 import { splitByOwner } from "../utils/by-owner";
 import { useLadders } from "../api/get-ladders";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { FAIL_RULE_WORDS, ladderSpan } from "../utils/rule-words";
 import { ConfirmAction } from "./confirm-action";
 import { QueryState } from "./query-state";
 import { Badge } from "./status-badge";
 
 function LadderCard({ ladder, showOwner = false }: { ladder: Ladder; showOwner?: boolean }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const navigate = useNavigate();
   const copy = useCopyLadder();
   const remove = useDeleteLadder();

@@ -1,10 +1,11 @@
+import { formatDate } from "../../../../shared/format";
 import clsx from "clsx";
 import type { Assignment } from "../../../../shared/schemas/assignments";
 import { formatLength } from "../../../../shared/units";
 import { ButtonLink, EmptyState, PageHeader } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useMyAssignments } from "../api/get-my-assignments";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { passRuleWords, STATUS_WORDS, statusKey } from "../utils/rule-words";
 import { useMe } from "../../auth/api/get-me";
 import { MySquads } from "./my-squads";
@@ -12,17 +13,25 @@ import { NotesCard } from "./notes-card";
 import { QueryState } from "./query-state";
 import { Badge, type BadgeTone } from "./status-badge";
 
-const dueFormat = new Intl.DateTimeFormat(undefined, { weekday: "short", day: "numeric", month: "short", timeZone: "UTC" });
-const doneFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
-const STATUS_TONE: Record<ReturnType<typeof statusKey>, BadgeTone> = { "not-started": "neutral", "in-progress": "warn", completed: "ok", overdue: "bad" };
+const STATUS_TONE: Record<ReturnType<typeof statusKey>, BadgeTone> = {
+  "not-started": "neutral",
+  "in-progress": "warn",
+  completed: "ok",
+  overdue: "bad",
+};
 
 function AssignmentCard({ a }: { a: Assignment }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const key = statusKey(a.status, a.overdue);
   const total = a.ladder.rungs.length;
   const rung = a.currentRung;
   return (
-    <li className={clsx("flex flex-col gap-3 rounded-(--radius-card) p-5 shadow-(--shadow-card) ring-1 ring-ink-900/5", key === "completed" ? "bg-sand-50/60" : "bg-sand-50")}>
+    <li
+      className={clsx(
+        "flex flex-col gap-3 rounded-(--radius-card) p-5 shadow-(--shadow-card) ring-1 ring-ink-900/5",
+        key === "completed" ? "bg-sand-50/60" : "bg-sand-50",
+      )}
+    >
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div className="min-w-0">
           <h3 className="text-lg font-semibold tracking-tight">{a.ladder.name}</h3>
@@ -32,16 +41,24 @@ function AssignmentCard({ a }: { a: Assignment }) {
       </div>
       {rung ? (
         <p className="text-ink-700">
-          Rung {a.progress.rungIndex + 1} of {total}: <strong>{formatLength(rung.distanceM, units)}</strong>, {passRuleWords(rung.passRule, rung.balls).toLowerCase()}
+          Rung {a.progress.rungIndex + 1} of {total}: <strong>{formatLength(rung.distanceM, units)}</strong>,{" "}
+          {passRuleWords(rung.passRule, rung.balls).toLowerCase()}
         </p>
       ) : (
-        <p className="text-ink-700">All {total} rungs passed{a.completedAt ? ` on ${doneFormat.format(new Date(a.completedAt))}` : ""}.</p>
+        <p className="text-ink-700">
+          All {total} rungs passed{a.completedAt ? ` on ${formatDate(a.completedAt)}` : ""}.
+        </p>
       )}
       <div className="mt-auto flex flex-wrap items-center justify-between gap-2">
         <span className={clsx("text-sm", key === "overdue" ? "font-semibold text-bad-600" : "text-ink-500")}>
-          {a.dueDate ? `Due ${dueFormat.format(new Date(`${a.dueDate}T00:00:00Z`))}` : "No due date"}
+          {a.dueDate ? `Due ${formatDate(a.dueDate, "weekday")}` : "No due date"}
         </span>
-        <ButtonLink to={paths.runLadder.href(a.id)} size="sm" variant={key === "completed" ? "secondary" : "primary"} aria-label={`${key === "completed" ? "View" : a.status === "assigned" ? "Start" : "Continue"} ${a.ladder.name}`}>
+        <ButtonLink
+          to={paths.runLadder.href(a.id)}
+          size="sm"
+          variant={key === "completed" ? "secondary" : "primary"}
+          aria-label={`${key === "completed" ? "View" : a.status === "assigned" ? "Start" : "Continue"} ${a.ladder.name}`}
+        >
           {key === "completed" ? "View" : a.status === "assigned" ? "Start" : "Continue"}
         </ButtonLink>
       </div>
@@ -55,14 +72,25 @@ export function MyLaddersPage() {
   const me = useMe();
   return (
     <>
-      <PageHeader eyebrow="Practice" title="My ladders" description="The ladders your coach gave you. Take your phone to the practice green and log each putt as you go." />
+      <PageHeader
+        eyebrow="Practice"
+        title="My ladders"
+        description="The ladders your coach gave you. Take your phone to the practice green and log each putt as you go."
+      />
       <div className="flex flex-col gap-10">
         <QueryState query={assignments} label="Loading your ladders">
           {() => {
             const all = assignments.data!.assignments;
-            const open = all.filter((a) => a.status !== "completed").sort((x, y) => Number(y.overdue) - Number(x.overdue) || (x.dueDate ?? "9999").localeCompare(y.dueDate ?? "9999"));
+            const open = all
+              .filter((a) => a.status !== "completed")
+              .sort((x, y) => Number(y.overdue) - Number(x.overdue) || (x.dueDate ?? "9999").localeCompare(y.dueDate ?? "9999"));
             const done = all.filter((a) => a.status === "completed");
-            if (all.length === 0) return <EmptyState title="No ladders yet">When your coach gives you a ladder it appears here, and you get an e-mail with a link to it.</EmptyState>;
+            if (all.length === 0)
+              return (
+                <EmptyState title="No ladders yet">
+                  When your coach gives you a ladder it appears here, and you get an e-mail with a link to it.
+                </EmptyState>
+              );
             return (
               <>
                 <section aria-labelledby="open-ladders">

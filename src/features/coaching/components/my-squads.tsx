@@ -1,10 +1,9 @@
+import { formatDate } from "../../../../shared/format";
 import { toast } from "sonner";
 import { Alert, Card, CardTitle, Spinner } from "../../../components/ui";
 import { useLeaveSquad } from "../api/leave-squad";
 import { useMySquads } from "../api/get-squads";
 import { ConfirmAction } from "./confirm-action";
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
 
 /** The squads a player belongs to, with a way out of each. */
 export function MySquads() {
@@ -30,7 +29,7 @@ export function MySquads() {
               <div className="min-w-0">
                 <p className="font-semibold text-ink-900">{s.name}</p>
                 <p className="text-sm text-ink-500">
-                  Coach {s.coach.name} · {s.counts.members} player{s.counts.members === 1 ? "" : "s"} · joined {dateFormat.format(new Date(s.joinedAt))}
+                  Coach {s.coach.name} · {s.counts.members} player{s.counts.members === 1 ? "" : "s"} · joined {formatDate(s.joinedAt)}
                 </p>
               </div>
               <ConfirmAction

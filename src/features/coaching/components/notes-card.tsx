@@ -1,11 +1,10 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { toast } from "sonner";
 import { NOTE_MAX } from "../../../../shared/schemas/notes";
 import { Alert, Button, Card, CardTitle } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useAddNote, useNotes } from "../api/notes";
-
-const when = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" });
 
 /** Dated notes on a player, newest first. `canWrite`: the coach's form (the player only reads). */
 export function NotesCard({ playerId, playerName, canWrite }: { playerId: string; playerName: string; canWrite: boolean }) {
@@ -65,13 +64,15 @@ export function NotesCard({ playerId, playerName, canWrite }: { playerId: string
         ) : notes.isError ? (
           <Alert tone="error">{errorMessage(notes.error)}</Alert>
         ) : notes.data.notes.length === 0 ? (
-          <p className="text-ink-500">{canWrite ? `No notes yet. What you write here, ${playerName} reads.` : "No notes from your coach yet."}</p>
+          <p className="text-ink-500">
+            {canWrite ? `No notes yet. What you write here, ${playerName} reads.` : "No notes from your coach yet."}
+          </p>
         ) : (
           <ol className="flex flex-col divide-y divide-ink-900/10">
             {notes.data.notes.map((n) => (
               <li key={n.id} className="py-3">
                 <p className="text-sm text-ink-500">
-                  <time dateTime={n.createdAt}>{when.format(new Date(n.createdAt))}</time> · {n.author.name}
+                  <time dateTime={n.createdAt}>{formatDate(n.createdAt, "dateTime")}</time> · {n.author.name}
                 </p>
                 <p className="mt-1 whitespace-pre-line text-ink-800">{n.body}</p>
               </li>

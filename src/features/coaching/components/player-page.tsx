@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import type { ReactNode } from "react";
 import type { Assignment } from "../../../../shared/schemas/assignments";
 import { formatLength, type UnitSystem } from "../../../../shared/units";
@@ -5,15 +6,18 @@ import { Card, CardTitle, EmptyState, PageHeader, TextLink } from "../../../comp
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useCoachedPlayer } from "../api/get-coached-player";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { STATUS_WORDS, statusKey } from "../utils/rule-words";
 import { NotesCard } from "./notes-card";
 import { QueryState } from "./query-state";
 import { Badge, type BadgeTone } from "./status-badge";
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
-const dueFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
-const TONE: Record<ReturnType<typeof statusKey>, BadgeTone> = { "not-started": "neutral", "in-progress": "warn", completed: "ok", overdue: "bad" };
+const TONE: Record<ReturnType<typeof statusKey>, BadgeTone> = {
+  "not-started": "neutral",
+  "in-progress": "warn",
+  completed: "ok",
+  overdue: "bad",
+};
 
 function HistoryItem({ a, units }: { a: Assignment; units: UnitSystem }) {
   const key = statusKey(a.status, a.overdue);
@@ -32,9 +36,13 @@ function HistoryItem({ a, units }: { a: Assignment; units: UnitSystem }) {
         {failed.length > 0 ? ` · ${failed.length} missed rung${failed.length === 1 ? "" : "s"}` : ""}
       </p>
       <p className="text-sm text-ink-500">
-        Given {dateFormat.format(new Date(a.createdAt))}
-        {a.dueDate ? ` · due ${dueFormat.format(new Date(`${a.dueDate}T00:00:00Z`))}` : ""}
-        {a.completedAt ? ` · completed ${dateFormat.format(new Date(a.completedAt))}` : a.lastActivityAt ? ` · last putt ${dateFormat.format(new Date(a.lastActivityAt))}` : ""}
+        Given {formatDate(a.createdAt)}
+        {a.dueDate ? ` · due ${formatDate(a.dueDate)}` : ""}
+        {a.completedAt
+          ? ` · completed ${formatDate(a.completedAt)}`
+          : a.lastActivityAt
+            ? ` · last putt ${formatDate(a.lastActivityAt)}`
+            : ""}
       </p>
       {a.progress.history.length > 0 ? (
         <details className="text-sm">
@@ -42,7 +50,8 @@ function HistoryItem({ a, units }: { a: Assignment; units: UnitSystem }) {
           <ol className="mt-1 flex flex-col gap-0.5 pl-1 text-ink-600">
             {a.progress.history.map((h, i) => (
               <li key={i}>
-                Rung {h.rungIndex + 1} ({formatLength(a.ladder.rungs[h.rungIndex]!.distanceM, units)}): {h.result === "passed" ? "passed" : "missed"}, {h.holed} holed of {h.ballsTaken}
+                Rung {h.rungIndex + 1} ({formatLength(a.ladder.rungs[h.rungIndex]!.distanceM, units)}):{" "}
+                {h.result === "passed" ? "passed" : "missed"}, {h.holed} holed of {h.ballsTaken}
               </li>
             ))}
           </ol>
@@ -57,7 +66,7 @@ function HistoryItem({ a, units }: { a: Assignment; units: UnitSystem }) {
  * route from the stats feature), the coach's notes and the history of the ladders given.
  */
 export function PlayerPage({ playerId, stats }: { playerId: string; stats?: (player: { id: string; name: string }) => ReactNode }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const detail = useCoachedPlayer(playerId);
   if (detail.isError && isApiError(detail.error) && (detail.error.status === 404 || detail.error.status === 400)) {
     return (
@@ -73,7 +82,11 @@ export function PlayerPage({ playerId, stats }: { playerId: string; stats?: (pla
         return (
           <>
             <title>{`${d.player.name} · Borrowline`}</title>
-            <PageHeader eyebrow={<TextLink to={paths.coach.href()}>Coach dashboard</TextLink>} title={d.player.name} description={`${d.player.email} · ${d.squads.map((s) => s.name).join(", ")}`} />
+            <PageHeader
+              eyebrow={<TextLink to={paths.coach.href()}>Coach dashboard</TextLink>}
+              title={d.player.name}
+              description={`${d.player.email} · ${d.squads.map((s) => s.name).join(", ")}`}
+            />
             <div className="grid gap-6 lg:grid-cols-2">
               <NotesCard playerId={playerId} playerName={d.player.name} canWrite />
               <Card>

@@ -13,7 +13,10 @@ import { RunPage } from "./run-page";
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
 
 const ID = "aaaaaaaa-aaaa-4aaa-8aaa-aaaaaaaaaaaa";
-const me = { user: { id: "p1", name: "Ivo Marsh", email: "ivo@example.test", role: "player", emailVerified: true }, preferences: { units: "imperial" } };
+const me = {
+  user: { id: "p1", name: "Ivo Marsh", email: "ivo@example.test", role: "player", emailVerified: true },
+  preferences: { units: "imperial" },
+};
 const ladder: LadderSnapshot = {
   sourceLadderId: "l1",
   name: "Short stuff",
@@ -93,10 +96,14 @@ afterEach(() => {
 });
 
 function renderRun() {
-  return renderRoute(<RunPage assignmentId={ID} />, { at: `/ladders/run/${ID}`, routes: [{ path: "/ladders/mine", element: <p>My ladders page</p> }] });
+  return renderRoute(<RunPage assignmentId={ID} />, {
+    at: `/ladders/run/${ID}`,
+    routes: [{ path: "/ladders/mine", element: <p>My ladders page</p> }],
+  });
 }
 
-const stat = (label: string) => within(screen.getByRole("region", { name: "Current rung" })).getByText(label).nextElementSibling?.textContent;
+const stat = (label: string) =>
+  within(screen.getByRole("region", { name: "Current rung" })).getByText(label).nextElementSibling?.textContent;
 
 test("a tap shows the new state at once, before the server has answered", async () => {
   answerPost = () => new Promise<Response>(() => {});
@@ -163,6 +170,21 @@ test("miss details go with the putt; skipping sends it without them", async () =
   await user.click(screen.getByRole("button", { name: "Skip" }));
   await waitFor(() => expect(posts).toHaveLength(2));
   expect(posts[1]).toEqual({ holed: false, clientId: expect.any(String) });
+});
+
+test("a ladder miss marked long is not saved without how far: Save waits, and taking Long back saves the side only", async () => {
+  const user = userEvent.setup();
+  renderRun();
+  await screen.findByText("3 ft");
+  await user.click(screen.getByRole("button", { name: "Missed" }));
+  await user.click(screen.getByRole("button", { name: "Left" }));
+  await user.click(screen.getByRole("button", { name: "Long" }));
+  expect(screen.getByRole("button", { name: "Save miss" })).toBeDisabled();
+  expect(screen.getByText(/Enter how far long/)).toBeInTheDocument();
+  await user.type(screen.getByLabelText("How far long (in)"), "6");
+  await user.click(screen.getByRole("button", { name: "Save miss" }));
+  await waitFor(() => expect(posts).toHaveLength(1));
+  expect(posts[0]).toMatchObject({ holed: false, missSide: "left", missLengthM: 0.152 });
 });
 
 test("without a connection the putts wait on the phone and go out, once each, when it comes back", async () => {

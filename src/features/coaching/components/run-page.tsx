@@ -8,7 +8,7 @@ import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useMe } from "../../auth/api/get-me";
 import { useLadderRun, type LadderRun } from "../hooks/use-ladder-run";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { BREAK_TYPE_WORDS, FAIL_RULE_WORDS, momentWords, passRuleWords, type Moment } from "../utils/rule-words";
 import { MissDetails } from "./miss-details";
 import { QueryState } from "./query-state";
@@ -179,7 +179,7 @@ function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDe
 /** Runs one assigned ladder on the green: the rung in large type, one tap per putt. */
 export function RunPage({ assignmentId }: { assignmentId: string }) {
   const run = useLadderRun(assignmentId);
-  const units = useUnits();
+  const { units } = useUnits();
   const me = useMe();
   if (!run.assignment && run.query.isError && isApiError(run.query.error) && (run.query.error.status === 404 || run.query.error.status === 400)) {
     return (

@@ -2,14 +2,14 @@ import { lazy, Suspense, useState } from "react";
 import type { Squad } from "../../../../shared/schemas/squads";
 import { Alert, Card, CardTitle, ErrorBoundary, SelectField, Spinner } from "../../../components/ui";
 import { useSquadMakeRates } from "../api/get-make-rates";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { squadChartData } from "../utils/squad-chart-data";
 
 const SquadChart = lazy(() => import("./squad-chart"));
 
 /** Make rates by distance band compared across one squad's players. */
 export function SquadChartSection({ squads, squadId }: { squads: Squad[]; squadId?: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const [chosen, setChosen] = useState("");
   const withPlayers = squads.filter((s) => s.members.length > 0);
   const squad = withPlayers.find((s) => s.id === (chosen || squadId)) ?? withPlayers[0];

@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import { useMemo, useState } from "react";
 import { toast } from "sonner";
 import {
@@ -14,7 +15,7 @@ import { SortableTable } from "../../../components/ui/sortable-table";
 import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";
 import { downloadSquadOverview, useSquadOverview } from "../api/get-squad-overview";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { bandLabel } from "../utils/bands";
 import { COMPARE_MIN_PUTTS, overviewRows, sgTrendWord, type OverviewBand, type OverviewRow } from "../utils/overview-rows";
 
@@ -23,7 +24,6 @@ const PERIODS = [
   { value: "28", label: "Last 4 weeks" },
   { value: "56", label: "Last 8 weeks" },
 ];
-const dayFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", timeZone: "UTC" });
 const pct = (v: number | null) => (v === null ? "–" : `${Math.round(v * 100)} %`);
 const sg = (v: number | null) => (v === null ? "–" : `${v > 0.0005 ? "+" : v < -0.0005 ? "−" : ""}${Math.abs(v).toFixed(3)}`);
 
@@ -42,7 +42,15 @@ function BandCell({ b }: { b: OverviewBand }) {
       </span>
       <span className="text-xs text-ink-500 tabular-nums">
         was {pct(b.past)}
-        <span className="sr-only">{b.change === null ? `, too few putts to compare (under ${COMPARE_MIN_PUTTS})` : b.change > 0.05 ? ", up" : b.change < -0.05 ? ", down" : ", about the same"}</span>
+        <span className="sr-only">
+          {b.change === null
+            ? `, too few putts to compare (under ${COMPARE_MIN_PUTTS})`
+            : b.change > 0.05
+              ? ", up"
+              : b.change < -0.05
+                ? ", down"
+                : ", about the same"}
+        </span>
       </span>
     </span>
   );
@@ -55,7 +63,7 @@ const col = createColumnHelper<OverviewRow>();
  * gained per putt now and before, and their latest ladder. Sortable by every column, filtered by name; CSV out.
  */
 export function SquadOverviewSection({ squadId, squadName }: { squadId: string; squadName: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const [days, setDays] = useState(28);
   const [filter, setFilter] = useState("");
   const [sorting, setSorting] = useState<SortingState>([{ id: "putts", desc: true }]);
@@ -66,16 +74,23 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
   const columns = useMemo(
     () =>
       [
-        col.accessor("name", { header: "Player", cell: (c) => <TextLink to={paths.coachPlayer.href(c.row.original.playerId)}>{c.getValue()}</TextLink> }),
+        col.accessor("name", {
+          header: "Player",
+          cell: (c) => <TextLink to={paths.coachPlayer.href(c.row.original.playerId)}>{c.getValue()}</TextLink>,
+        }),
         col.accessor("sessions", { header: "Sessions", cell: (c) => <span className="tabular-nums">{c.getValue()}</span> }),
         col.accessor("putts", { header: "Putts", cell: (c) => <span className="tabular-nums">{c.getValue()}</span> }),
         col.accessor((r) => r.lastSession ?? "", {
           id: "last",
           header: "Last session",
-          cell: (c) => (c.getValue() ? dayFormat.format(new Date(`${c.getValue()}T00:00:00Z`)) : <span className="text-ink-400">–</span>),
+          cell: (c) => (c.getValue() ? formatDate(c.getValue(), "day") : <span className="text-ink-400">–</span>),
         }),
         ...bands.map((b, i) =>
-          col.accessor((r) => r.bands[i]?.recent ?? -1, { id: `band${i}`, header: bandLabel(b.fromM, b.toM, units), cell: (c) => <BandCell b={c.row.original.bands[i]!} /> }),
+          col.accessor((r) => r.bands[i]?.recent ?? -1, {
+            id: `band${i}`,
+            header: bandLabel(b.fromM, b.toM, units),
+            cell: (c) => <BandCell b={c.row.original.bands[i]!} />,
+          }),
         ),
         col.accessor((r) => r.sgChange ?? -99, {
           id: "sg",
@@ -89,7 +104,11 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
             </span>
           ),
         }),
-        col.accessor("ladderOrder", { id: "ladder", header: "Ladder", cell: (c) => <span className="whitespace-normal">{c.row.original.ladder}</span> }),
+        col.accessor("ladderOrder", {
+          id: "ladder",
+          header: "Ladder",
+          cell: (c) => <span className="whitespace-normal">{c.row.original.ladder}</span>,
+        }),
       ] as ColumnDef<OverviewRow, unknown>[],
     [bands, units],
   );
@@ -101,7 +120,8 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
     state: { sorting, globalFilter: filter },
     onSortingChange: setSorting,
     onGlobalFilterChange: setFilter,
-    globalFilterFn: (row, _id, value: string) => `${row.original.name} ${row.original.email}`.toLowerCase().includes(String(value).trim().toLowerCase()),
+    globalFilterFn: (row, _id, value: string) =>
+      `${row.original.name} ${row.original.email}`.toLowerCase().includes(String(value).trim().toLowerCase()),
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),
@@ -116,7 +136,10 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
             <CardTitle as="h2">
               <span id="overview-title">How the squad is putting</span>
             </CardTitle>
-            <p className="mt-1 text-ink-500">Each player’s recent practice against their own earlier putts. ▲ / ▼: up or down by more than 5 points with {COMPARE_MIN_PUTTS}+ putts each side.</p>
+            <p className="mt-1 text-ink-500">
+              Each player’s recent practice against their own earlier putts. ▲ / ▼: up or down by more than 5 points with{" "}
+              {COMPARE_MIN_PUTTS}+ putts each side.
+            </p>
           </div>
           <Button
             size="sm"
@@ -138,7 +161,13 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
           </Button>
         </div>
         <div className="grid gap-3 sm:grid-cols-[1fr_14rem]">
-          <InputField label="Find a player" type="search" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder={`Name or e-mail in ${squadName}`} />
+          <InputField
+            label="Find a player"
+            type="search"
+            value={filter}
+            onChange={(e) => setFilter(e.target.value)}
+            placeholder={`Name or e-mail in ${squadName}`}
+          />
           <SelectField label="Recent means" value={String(days)} options={PERIODS} onChange={(e) => setDays(Number(e.target.value))} />
         </div>
         {overview.isError ? (
@@ -148,7 +177,9 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
         ) : !overview.data ? (
           <div className="h-40 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading the overview" />
         ) : rows.length === 0 ? (
-          <p className="text-ink-500">Nobody has joined {squadName} yet. Once players accept their invitations, their practice shows here.</p>
+          <p className="text-ink-500">
+            Nobody has joined {squadName} yet. Once players accept their invitations, their practice shows here.
+          </p>
         ) : shown.length === 0 ? (
           <p className="text-ink-500">No player matches “{filter}”.</p>
         ) : (
@@ -159,7 +190,8 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
                 <li key={r.playerId} className="rounded-xl bg-white px-4 py-3 ring-1 ring-ink-900/10">
                   <TextLink to={paths.coachPlayer.href(r.playerId)}>{r.name}</TextLink>
                   <p className="mt-1 text-sm text-ink-600">
-                    {r.putts} putts in {r.sessions} sessions · strokes gained {sg(r.sgRecent)} a putt, {sgTrendWord(r.sgChange).toLowerCase()}
+                    {r.putts} putts in {r.sessions} sessions · strokes gained {sg(r.sgRecent)} a putt,{" "}
+                    {sgTrendWord(r.sgChange).toLowerCase()}
                   </p>
                   <p className="mt-1 flex flex-wrap gap-x-3 text-sm text-ink-500">
                     {bands.map((b, i) => (
@@ -173,7 +205,12 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
               ))}
             </ul>
             {/* Desk: the sortable table. */}
-            <SortableTable table={table} rows={shown} caption={`Players of ${squadName}: recent practice against their own past. Select a column heading to sort by it.`} className="rounded-xl" />
+            <SortableTable
+              table={table}
+              rows={shown}
+              caption={`Players of ${squadName}: recent practice against their own past. Select a column heading to sort by it.`}
+              className="rounded-xl"
+            />
           </>
         )}
       </section>

@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { useNavigate } from "react-router";
 import { toast } from "sonner";
@@ -19,8 +20,7 @@ import { SquadForm } from "./squad-form";
 import { SquadOverviewSection } from "./squad-overview";
 import { Badge, type BadgeTone } from "./status-badge";
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
-const day = (iso: string) => dateFormat.format(new Date(iso));
+const day = (iso: string) => formatDate(iso);
 
 const INVITATION_STATUS: Record<InvitationStatus, { label: string; tone: BadgeTone }> = {
   pending: { label: "Waiting", tone: "warn" },
@@ -53,7 +53,12 @@ function MembersSection({ squad }: { squad: Squad }) {
                 confirmLabel="Yes, remove"
                 pendingLabel="Removing…"
                 pending={remove.isPending && remove.variables?.playerId === m.id}
-                onConfirm={() => remove.mutate({ squadId: squad.id, playerId: m.id }, { onSuccess: () => toast.success(`${m.name} is no longer in ${squad.name}.`) })}
+                onConfirm={() =>
+                  remove.mutate(
+                    { squadId: squad.id, playerId: m.id },
+                    { onSuccess: () => toast.success(`${m.name} is no longer in ${squad.name}.`) },
+                  )
+                }
               />
             </li>
           ))}
@@ -123,7 +128,9 @@ function InvitationsSection({ squad }: { squad: Squad }) {
   return (
     <Card>
       <CardTitle>Invite players</CardTitle>
-      <p className="mt-1 text-ink-500">Each address gets an e-mail with a link to join {squad.name}. New players create their account from the link.</p>
+      <p className="mt-1 text-ink-500">
+        Each address gets an e-mail with a link to join {squad.name}. New players create their account from the link.
+      </p>
       <div className="mt-4">
         <InviteForm squadId={squad.id} squadName={squad.name} />
       </div>
@@ -206,7 +213,9 @@ function SquadDetails({ squad }: { squad: Squad }) {
         <h2 id="danger-title" className="font-semibold text-ink-900">
           Delete this squad
         </h2>
-        <p className="text-ink-500">Its members and invitations go with it. Ladders already given stay with the players, with their progress.</p>
+        <p className="text-ink-500">
+          Its members and invitations go with it. Ladders already given stay with the players, with their progress.
+        </p>
         <div>
           <ConfirmAction
             label="Delete squad"
@@ -234,7 +243,11 @@ function SquadDetails({ squad }: { squad: Squad }) {
 export function SquadPage({ squadId }: { squadId: string }) {
   const squad = useSquad(squadId);
   if (squad.isError && squad.error && "status" in squad.error && squad.error.status === 404) {
-    return <EmptyState title="Squad not found">It may have been deleted, or it belongs to another coach. <TextLink to={paths.squads.href()}>Back to your squads</TextLink></EmptyState>;
+    return (
+      <EmptyState title="Squad not found">
+        It may have been deleted, or it belongs to another coach. <TextLink to={paths.squads.href()}>Back to your squads</TextLink>
+      </EmptyState>
+    );
   }
   return (
     <QueryState query={squad} label="Loading the squad">

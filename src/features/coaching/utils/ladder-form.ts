@@ -1,5 +1,6 @@
 // The ladder builder's form values (lengths in the user's unit, numbers as typed) and their way to and from
 // the API's LadderInput (SI). Validation is the shared schema's; its messages are placed beside the fields.
+import { parseDecimal } from "../../../../shared/units";
 import type { z } from "zod";
 import { ladderInputSchema, type FailRule, type Ladder, type LadderInput } from "../../../../shared/schemas/ladders";
 import type { BreakType } from "../../../../shared/schemas/putts";
@@ -27,8 +28,7 @@ export type LadderFormValues = {
 export type LadderFormErrors = Record<string, string>;
 
 function parseNumber(text: string): number {
-  const t = text.trim().replace(",", ".");
-  return t === "" ? Number.NaN : Number(t);
+  return parseDecimal(text) ?? Number.NaN;
 }
 
 /** A length for an input: 6 (ft) or 1.8 (m), without float noise. */

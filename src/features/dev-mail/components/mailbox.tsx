@@ -1,18 +1,16 @@
+import { formatDate } from "../../../../shared/format";
 import { Alert, Button, Card, EmptyState, PageSpinner, textLinkClasses } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
 import { useDevMail, type DevMailMessage } from "../api/get-dev-mail";
 import { linkify } from "../utils/linkify";
 
-const timeFormat = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "medium" });
-
 function formatTime(iso: string): string {
-  const t = Date.parse(iso);
-  return Number.isNaN(t) ? iso : timeFormat.format(t);
+  return formatDate(iso, "instant");
 }
 
 function MessageBody({ text }: { text: string }) {
   return (
-    <pre className="mt-4 overflow-x-auto rounded-xl bg-white p-4 font-sans text-sm leading-relaxed whitespace-pre-wrap break-words text-ink-800 ring-1 ring-ink-900/10">
+    <pre className="mt-4 overflow-x-auto rounded-xl bg-white p-4 font-sans text-sm leading-relaxed break-words whitespace-pre-wrap text-ink-800 ring-1 ring-ink-900/10">
       {linkify(text).map((part, i) =>
         part.kind === "link" ? (
           <a key={i} href={part.href} className={`${textLinkClasses} break-all`}>
@@ -44,7 +42,11 @@ function MessageCard({ message }: { message: DevMailMessage }) {
         <dt className="text-ink-500">From</dt>
         <dd className="break-all">{message.from}</dd>
       </dl>
-      {message.text ? <MessageBody text={message.text} /> : <p className="mt-4 text-sm text-ink-500">This message has no plain-text body.</p>}
+      {message.text ? (
+        <MessageBody text={message.text} />
+      ) : (
+        <p className="mt-4 text-sm text-ink-500">This message has no plain-text body.</p>
+      )}
       {message.html ? (
         <details className="mt-3">
           <summary className="min-h-11 cursor-pointer rounded-md py-2 text-sm font-medium text-ink-700">Show the HTML version</summary>
@@ -66,13 +68,17 @@ export function Mailbox() {
   if (mail.isPending) return <PageSpinner label="Loading the mailbox" />;
   if (mail.isError) {
     if (isApiError(mail.error) && mail.error.status === 404) {
-      return <Alert tone="info" title="No mailbox on this server">This server sends its e-mail through a mail server (SMTP_URL is set), so there is no local inbox.</Alert>;
+      return (
+        <Alert tone="info" title="No mailbox on this server">
+          This server sends its e-mail through a mail server (SMTP_URL is set), so there is no local inbox.
+        </Alert>
+      );
     }
     if (isApiError(mail.error) && (mail.error.status === 401 || mail.error.status === 403)) {
       return (
         <Alert tone="info" title="The local inbox is for administrators">
-          No mail server is set up, so the e-mail this server sends is held here instead of being delivered. It holds sign-in and invitation links, so only
-          an administrator can read it.
+          No mail server is set up, so the e-mail this server sends is held here instead of being delivered. It holds sign-in and invitation
+          links, so only an administrator can read it.
         </Alert>
       );
     }

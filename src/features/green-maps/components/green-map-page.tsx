@@ -1,5 +1,7 @@
 // A green's height map: upload it, see its summary, tap the ball and the hole on the map, and get the read on that
 // real surface (POST /api/greens/:id/reads/solve), drawn on the map and in 3D.
+import { parseDecimal } from "../../../../shared/units";
+import { formatStimp } from "../../../../shared/format";
 import { useMemo, useState } from "react";
 import clsx from "clsx";
 import { surfaceFromGrid } from "../../../../physics";
@@ -136,7 +138,7 @@ function MapWorkspace({
   const [ball, setBall] = useState<[number, number] | null>(null);
   const [hole, setHole] = useState<[number, number] | null>(null);
   const [placing, setPlacing] = useState<Placing>("ball");
-  const [stimpText, setStimpText] = useState(String(greenStimpFt ?? 10));
+  const [stimpText, setStimpText] = useState(formatStimp(greenStimpFt ?? 10));
   const [rollPastText, setRollPastText] = useState(units === "imperial" ? "17" : "45");
   const [view, setView] = useState<{ view: CameraView; key: number }>({ view: "free", key: 0 });
   const [exaggerate, setExaggerate] = useState(false);
@@ -204,8 +206,8 @@ function MapWorkspace({
           />
           {answer ? (
             <p className="font-semibold text-ink-900 lg:hidden" aria-hidden="true">
-              Aim {aimWords(answer.aimOffsetM, units, answer.startLineDeg)}, finish {formatShort(answer.rollPastM, units)} past; as hard as a
-              flat {formatLength(Math.max(0, answer.flatPuttLengthM), units)} putt.
+              Aim {aimWords(answer.aimOffsetM, units, answer.startLineDeg)}, finish {formatShort(answer.rollPastM, units)} past; as hard as
+              a flat {formatLength(Math.max(0, answer.flatPuttLengthM), units)} putt.
             </p>
           ) : null}
           <p className="text-sm text-ink-600" data-testid="placement">
@@ -324,7 +326,7 @@ function PositionInputs({
   onHole: (p: [number, number]) => void;
 }) {
   const [text, setText] = useState({ bx: "", by: "", hx: "", hy: "" });
-  const num = (t: string) => Number(t.trim().replace(",", "."));
+  const num = (t: string) => parseDecimal(t) ?? Number.NaN;
   const apply = () => {
     const b: [number, number] = [num(text.bx), num(text.by)];
     const h: [number, number] = [num(text.hx), num(text.hy)];

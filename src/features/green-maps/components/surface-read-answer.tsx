@@ -1,3 +1,4 @@
+import { atHoleText } from "../../../../shared/format";
 import { formatLength, formatShort, type UnitSystem } from "../../../../shared/units";
 import { aimWords, holeWidthsWords } from "../../../components/green-3d/words";
 import type { SurfaceReadResponse } from "../api/solve-on-surface";
@@ -32,7 +33,7 @@ export function SurfaceReadAnswer({ read, units, updating }: { read: SurfaceRead
         <div className="rounded-xl bg-white p-3 ring-1 ring-ink-900/5">
           <dt className="text-sm text-ink-600">Pace</dt>
           <dd className="font-semibold">Finish {formatShort(read.rollPastM, units)} past if it misses</dd>
-          <dd className="text-sm text-ink-600">reaches the hole at {read.entrySpeedMps.toFixed(2)} m/s</dd>
+          <dd className="text-sm text-ink-600">{atHoleText(read.entrySpeedMps, units)} at the hole</dd>
         </div>
         <div className="rounded-xl bg-white p-3 ring-1 ring-ink-900/5">
           <dt className="text-sm text-ink-600">Flat-putt length</dt>

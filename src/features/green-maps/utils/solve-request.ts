@@ -1,5 +1,6 @@
 // The body of POST /api/greens/:id/reads/solve from what the page holds: the tapped ball and hole (green frame,
 // metres), the Stimp text and the roll-past text in the user's short unit. Null with a reason when it cannot be asked.
+import { parseDecimal } from "../../../../shared/units";
 import { READ_LIMITS } from "../../../../shared/schemas/reads";
 import type { SurfaceSolveRequest } from "../../../../shared/schemas/height-map";
 import { fromShortUnit, type UnitSystem } from "../../../../shared/units";
@@ -20,8 +21,7 @@ export type SolveRequestResult = {
 };
 
 function parse(text: string): number {
-  const t = text.trim().replace(",", ".");
-  return t === "" || !/^[-+]?(\d+\.?\d*|\.\d+)$/.test(t) ? Number.NaN : Number(t);
+  return parseDecimal(text) ?? Number.NaN;
 }
 
 export function surfaceSolveRequest({ ball, hole, stimpText, rollPastText, units }: SolveInputs): SolveRequestResult {

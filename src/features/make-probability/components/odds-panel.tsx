@@ -2,6 +2,7 @@
 // (POST /api/reads/make-probability), their best pace with a button to use it, the spread used and where it comes
 // from, and where 100 simulated putts finish. While the fall-line dial is dragged a Web Worker simulates the putt
 // for instant feedback; the numbers the panel settles on always come from the API.
+import { formatCount } from "../../../../shared/format";
 import type { ReadRequest } from "../../../../shared/schemas/reads";
 import { formatShort, type UnitSystem } from "../../../../shared/units";
 import { Alert, Button, Spinner, TextLink } from "../../../components/ui";
@@ -120,7 +121,7 @@ function SignedInOdds({ read, liveRead = null, line, units, onApplyRollPast }: O
         {heading}
         {liveOk ? (
           <span role="status" className="text-xs font-medium text-ink-500">
-            Live: {LIVE_SAMPLES.toLocaleString("en-GB")} putts while you turn the dial
+            Live: {formatCount(LIVE_SAMPLES)} putts while you turn the dial
           </span>
         ) : updating ? (
           <span role="status" className="text-xs font-medium text-ink-500">
@@ -193,8 +194,8 @@ function SignedInOdds({ read, liveRead = null, line, units, onApplyRollPast }: O
           className="mx-auto max-w-sm"
         />
         <p className="mt-2 text-sm text-ink-600">
-          Each dot is where one of the first 100 of the {(liveOk ? liveOk.samples : data!.samples).toLocaleString("en-GB")} simulated putts
-          stopped; a ring means it left more than 1 m, outside the dashed circle. Holed putts are counted below the picture.
+          Each dot is where one of the first 100 of the {formatCount(liveOk ? liveOk.samples : data!.samples)} simulated putts stopped; a
+          ring means it left more than 1 m, outside the dashed circle. Holed putts are counted below the picture.
         </p>
       </div>
 
@@ -203,8 +204,8 @@ function SignedInOdds({ read, liveRead = null, line, units, onApplyRollPast }: O
           className={data.logged.oddsOutside ? "rounded-xl bg-warn-50 px-3 py-2 text-sm text-ink-800" : "text-sm text-ink-700"}
           data-testid="odds-vs-log"
         >
-          Your log: {percentWords(data.logged.rate)} holed from {formatShort(data.logged.fromM, units)}–{formatShort(data.logged.toM, units)} (
-          {data.logged.attempts} putts).
+          Your log: {percentWords(data.logged.rate)} holed from {formatShort(data.logged.fromM, units)}–
+          {formatShort(data.logged.toM, units)} ({data.logged.attempts} putts).
           {data.logged.oddsOutside ? ` Why these odds differ: ${data.logged.why}` : null}
         </p>
       ) : null}
@@ -232,7 +233,8 @@ function SignedInOdds({ read, liveRead = null, line, units, onApplyRollPast }: O
                 : null}
           </p>
           <p className="mt-1 text-ink-500">
-            The “likely” ranges hold 95 % of what your putts allow. The odds add a misread of the slope and the green’s bumps to your stroke.
+            The “likely” ranges hold 95 % of what your putts allow. The odds add a misread of the slope and the green’s bumps to your
+            stroke.
           </p>
         </div>
       ) : null}

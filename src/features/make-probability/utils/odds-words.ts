@@ -1,5 +1,6 @@
 // Plain words for the odds panel. Probabilities in [0, 1]; spreads as the API gives them (start line in degrees,
 // pace as the σ of ln(actual ÷ intended roll length), shown as a percentage of the roll).
+import { formatCount } from "../../../../shared/format";
 import { formatShort, type UnitSystem } from "../../../../shared/units";
 
 /** "34 %", "under 1 %", "over 99 %": a whole percentage, never a false 0 or 100. */
@@ -28,7 +29,7 @@ export function makeHeadline(p: number): string {
 /** "give or take 0.5 %" for a Monte Carlo standard error (one σ), to one decimal. */
 export function sampleErrorWords(standardError: number, samples: number): string {
   const pct = standardError * 100;
-  return `${samples.toLocaleString("en-GB")} simulated putts, give or take ${pct < 0.1 ? "0.1" : pct.toFixed(1)} %`;
+  return `${formatCount(samples)} simulated putts, give or take ${pct < 0.1 ? "0.1" : pct.toFixed(1)} %`;
 }
 
 /** "over 1 m" or "over 1 m (3 ft 3 in)": the second-putt length the API counts. */
@@ -54,9 +55,9 @@ export function rangeWords(lo: number, hi: number, format: (v: number) => string
 /** Where the spread comes from: the player's own putts, or mostly the club-golfer prior. */
 export function basisWords(putts: number | null, usedPrior: boolean | null): string {
   if (putts === null || usedPrior === null) return "Spread given with the request.";
-  if (!usedPrior) return `Based on ${putts.toLocaleString("en-GB")} of your putts.`;
+  if (!usedPrior) return `Based on ${formatCount(putts)} of your putts.`;
   if (putts === 0) return "No putts logged yet — using typical club-golfer values.";
-  return `Few putts logged yet — using typical club-golfer values, moved a little by your ${putts.toLocaleString("en-GB")}.`;
+  return `Few putts logged yet — using typical club-golfer values, moved a little by your ${formatCount(putts)}.`;
 }
 
 /** "Finish 14 in past" for a roll-past. */

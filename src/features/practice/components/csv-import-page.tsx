@@ -5,7 +5,7 @@ import { Alert, Button, ButtonLink, Card, CardTitle, PageHeader, SelectField, Ta
 import { paths } from "../../../config/paths";
 import { rowErrorsOf, useImportCsv } from "../api/import-csv";
 import { usePreviewCsv } from "../api/preview-csv";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { COLUMN_FIELDS, fieldLabel, initialMapping, toCsvMapping, uploadProblem, validRowCount, type MappingState } from "../utils/csv-mapping";
 import { CsvExportButtons } from "./csv-export-buttons";
 
@@ -190,7 +190,7 @@ export function MappingForm({ preview, mapping, onChange }: MappingFormProps) {
 
 /** Upload, preview, map the columns, import; a refused import lists every bad row and offers the valid ones only. */
 export function CsvImportPage() {
-  const units = useUnits();
+  const { units } = useUnits();
   const preview = usePreviewCsv();
   const importer = useImportCsv();
   const [file, setFile] = useState<File | null>(null);

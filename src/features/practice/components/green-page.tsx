@@ -1,8 +1,20 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { useNavigate } from "react-router";
 import type { Green, StimpReading } from "../../../../shared/schemas/greens";
 import { STIMP_LIMITS } from "../../../../shared/schemas/greens";
-import { Alert, Button, ButtonLink, Card, CardTitle, ChipGroup, ConfirmDialog, InputField, PageHeader, PageSpinner } from "../../../components/ui";
+import {
+  Alert,
+  Button,
+  ButtonLink,
+  Card,
+  CardTitle,
+  ChipGroup,
+  ConfirmDialog,
+  InputField,
+  PageHeader,
+  PageSpinner,
+} from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { errorMessage } from "../../../lib/query-client";
@@ -11,8 +23,8 @@ import { useDeleteGreen } from "../api/delete-green";
 import { useDeleteStimpReading } from "../api/delete-stimp-reading";
 import { useGreen } from "../api/get-green";
 import { useUpdateGreen } from "../api/update-green";
-import { useUnits } from "../hooks/use-units";
-import { formatShortDate, todayIso } from "../utils/dates";
+import { useUnits } from "../../auth/hooks/use-units";
+import { todayIso } from "../utils/dates";
 import { formatRoll, formatStimp } from "../utils/stimp";
 import { STIMP_CAUTION, StimpHelper } from "./stimp-helper";
 
@@ -31,7 +43,12 @@ function RenameForm({ green, onDone }: { green: Green; onDone: () => void }) {
         update.mutate({ name: name.trim(), locationNote: note.trim() || null }, { onSuccess: onDone });
       }}
     >
-      <InputField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={fields.name ?? (name.trim() === "" ? "Give the green a name" : undefined)} />
+      <InputField
+        label="Name"
+        value={name}
+        onChange={(e) => setName(e.target.value)}
+        error={fields.name ?? (name.trim() === "" ? "Give the green a name" : undefined)}
+      />
       <InputField label="Where (optional)" value={note} onChange={(e) => setNote(e.target.value)} error={fields.locationNote} />
       <Button type="submit" loading={update.isPending} loadingText="Saving…" disabled={name.trim() === ""} className="sm:mt-7">
         Save
@@ -39,13 +56,17 @@ function RenameForm({ green, onDone }: { green: Green; onDone: () => void }) {
       <Button variant="ghost" onClick={onDone} className="sm:mt-7">
         Cancel
       </Button>
-      {update.isError && Object.keys(fields).length === 0 ? <Alert tone="error" className="sm:col-span-4">{errorMessage(update.error)}</Alert> : null}
+      {update.isError && Object.keys(fields).length === 0 ? (
+        <Alert tone="error" className="sm:col-span-4">
+          {errorMessage(update.error)}
+        </Alert>
+      ) : null}
     </form>
   );
 }
 
 function ReadingForm({ greenId }: { greenId: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const add = useAddStimpReading(greenId);
   const [mode, setMode] = useState<"level" | "slope">("level");
   const [measuredOn, setMeasuredOn] = useState(todayIso());
@@ -59,7 +80,7 @@ function ReadingForm({ greenId }: { greenId: string }) {
   const done = (g: Green) => {
     setStimp("");
     setEntry((n) => n + 1);
-    setSaved(`Saved ${g.readings[0] ? formatStimp(g.readings[0].stimpFt) : ""} for ${formatShortDate(measuredOn)}.`);
+    setSaved(`Saved ${g.readings[0] ? formatStimp(g.readings[0].stimpFt) : ""} for ${formatDate(measuredOn)}.`);
   };
 
   return (
@@ -67,7 +88,14 @@ function ReadingForm({ greenId }: { greenId: string }) {
       <CardTitle>Add a Stimp reading</CardTitle>
       <div className="mt-4 flex flex-col gap-4">
         <div className="grid gap-4 sm:grid-cols-2">
-          <InputField label="Measured on" type="date" value={measuredOn} max={todayIso()} onChange={(e) => setMeasuredOn(e.target.value)} error={fields.measuredOn} />
+          <InputField
+            label="Measured on"
+            type="date"
+            value={measuredOn}
+            max={todayIso()}
+            onChange={(e) => setMeasuredOn(e.target.value)}
+            error={fields.measuredOn}
+          />
           <ChipGroup
             legend="Where it was rolled"
             columns={2}
@@ -104,7 +132,10 @@ function ReadingForm({ greenId }: { greenId: string }) {
                 setStimp(e.target.value);
                 setSaved(null);
               }}
-              error={fields.stimpFt ?? (stimp.trim() !== "" && !stimpOk ? `Between ${STIMP_LIMITS.minFt} and ${STIMP_LIMITS.maxFt} ft` : undefined)}
+              error={
+                fields.stimpFt ??
+                (stimp.trim() !== "" && !stimpOk ? `Between ${STIMP_LIMITS.minFt} and ${STIMP_LIMITS.maxFt} ft` : undefined)
+              }
               containerClassName="sm:max-w-xs"
             />
             <Alert tone="warning">{STIMP_CAUTION}</Alert>
@@ -113,9 +144,18 @@ function ReadingForm({ greenId }: { greenId: string }) {
             </Button>
           </form>
         ) : (
-          <StimpHelper key={entry} units={units} saving={add.isPending} onSave={({ upFt, downFt }) => add.mutate({ measuredOn, upFt, downFt }, { onSuccess: done })} />
+          <StimpHelper
+            key={entry}
+            units={units}
+            saving={add.isPending}
+            onSave={({ upFt, downFt }) => add.mutate({ measuredOn, upFt, downFt }, { onSuccess: done })}
+          />
         )}
-        {add.isError ? <Alert tone="error">{Object.values(fields)[0] ? `${errorMessage(add.error)} (${Object.values(fields).join("; ")})` : errorMessage(add.error)}</Alert> : null}
+        {add.isError ? (
+          <Alert tone="error">
+            {Object.values(fields)[0] ? `${errorMessage(add.error)} (${Object.values(fields).join("; ")})` : errorMessage(add.error)}
+          </Alert>
+        ) : null}
         {saved ? <Alert tone="success">{saved}</Alert> : null}
       </div>
     </Card>
@@ -123,10 +163,11 @@ function ReadingForm({ greenId }: { greenId: string }) {
 }
 
 function ReadingsList({ green }: { green: Green }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const remove = useDeleteStimpReading(green.id);
   const [confirm, setConfirm] = useState<StimpReading | null>(null);
-  if (green.readings.length === 0) return <p className="text-ink-500">No readings yet. Add one below; it becomes the green’s speed for new sessions.</p>;
+  if (green.readings.length === 0)
+    return <p className="text-ink-500">No readings yet. Add one below; it becomes the green’s speed for new sessions.</p>;
   return (
     <>
       <ul className="flex flex-col gap-2" aria-label="Stimp readings, newest first">
@@ -138,15 +179,17 @@ function ReadingsList({ green }: { green: Green }) {
                 {i === 0 ? <span className="ml-2 rounded-full bg-ok-50 px-2 py-0.5 text-xs font-medium text-ok-800">current</span> : null}
               </p>
               <p className="text-sm text-ink-500">
-                {formatShortDate(r.measuredOn)}
-                {r.upFt !== null && r.downFt !== null ? ` · on a slope: ${formatRoll(r.upFt, units)} up, ${formatRoll(r.downFt, units)} down` : " · level spot"}
+                {formatDate(r.measuredOn)}
+                {r.upFt !== null && r.downFt !== null
+                  ? ` · on a slope: ${formatRoll(r.upFt, units)} up, ${formatRoll(r.downFt, units)} down`
+                  : " · level spot"}
               </p>
             </div>
             <button
               type="button"
               onClick={() => setConfirm(r)}
               className="min-h-11 rounded-lg px-3 text-sm font-medium text-bad-600 hover:bg-bad-50"
-              aria-label={`Delete the reading of ${formatShortDate(r.measuredOn)}`}
+              aria-label={`Delete the reading of ${formatDate(r.measuredOn)}`}
             >
               Delete
             </button>
@@ -161,7 +204,9 @@ function ReadingsList({ green }: { green: Green }) {
         onCancel={() => setConfirm(null)}
         onConfirm={() => confirm && remove.mutate(confirm.id, { onSettled: () => setConfirm(null) })}
       >
-        {confirm ? `${formatStimp(confirm.stimpFt)} measured ${formatShortDate(confirm.measuredOn)}. Sessions already logged keep their Stimp.` : null}
+        {confirm
+          ? `${formatStimp(confirm.stimpFt)} measured ${formatDate(confirm.measuredOn)}. Sessions already logged keep their Stimp.`
+          : null}
       </ConfirmDialog>
     </>
   );
@@ -178,7 +223,15 @@ export function GreenPage({ greenId }: { greenId: string }) {
   if (green.isPending) return <PageSpinner label="Loading the green" />;
   if (green.isError) {
     return (
-      <Alert tone="error" title="Could not open this green" action={<ButtonLink to={paths.greens.href()} size="sm" variant="secondary">All greens</ButtonLink>}>
+      <Alert
+        tone="error"
+        title="Could not open this green"
+        action={
+          <ButtonLink to={paths.greens.href()} size="sm" variant="secondary">
+            All greens
+          </ButtonLink>
+        }
+      >
         {errorMessage(green.error)}
       </Alert>
     );
@@ -195,7 +248,12 @@ export function GreenPage({ greenId }: { greenId: string }) {
         <PageHeader
           eyebrow="Green"
           title={g.name}
-          description={[g.locationNote, g.currentStimpFt !== null ? `Stimp ${g.currentStimpFt.toFixed(1)} ft (latest reading)` : "No Stimp reading yet"].filter(Boolean).join(" · ")}
+          description={[
+            g.locationNote,
+            g.currentStimpFt !== null ? `Stimp ${g.currentStimpFt.toFixed(1)} ft (latest reading)` : "No Stimp reading yet",
+          ]
+            .filter(Boolean)
+            .join(" · ")}
           actions={
             <>
               <ButtonLink to={paths.greenMap.href(g.id)} variant="secondary" size="sm">

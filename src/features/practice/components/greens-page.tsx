@@ -1,3 +1,5 @@
+import { formatDate } from "../../../../shared/format";
+import { stimpText } from "../../../../shared/format";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Link, useNavigate } from "react-router";
@@ -8,7 +10,6 @@ import { isApiError } from "../../../lib/api-client";
 import { errorMessage } from "../../../lib/query-client";
 import { useCreateGreen } from "../api/create-green";
 import { useGreens } from "../api/get-greens";
-import { formatShortDate } from "../utils/dates";
 
 const newGreenSchema = z.object({
   name: z.string().trim().min(1, "Give the green a name").max(80, "At most 80 characters"),
@@ -19,7 +20,10 @@ type NewGreen = z.infer<typeof newGreenSchema>;
 function NewGreenForm() {
   const create = useCreateGreen();
   const navigate = useNavigate();
-  const { register, handleSubmit, formState, reset } = useForm<NewGreen>({ resolver: zodResolver(newGreenSchema), defaultValues: { name: "", locationNote: "" } });
+  const { register, handleSubmit, formState, reset } = useForm<NewGreen>({
+    resolver: zodResolver(newGreenSchema),
+    defaultValues: { name: "", locationNote: "" },
+  });
   const fields = isApiError(create.error) ? create.error.fields : {};
   return (
     <Card>
@@ -42,8 +46,18 @@ function NewGreenForm() {
           )(e)
         }
       >
-        <InputField label="Name" placeholder="e.g. Practice green by the first tee" error={formState.errors.name?.message ?? fields.name} {...register("name")} />
-        <InputField label="Where (optional)" placeholder="Club, course" error={formState.errors.locationNote?.message ?? fields.locationNote} {...register("locationNote")} />
+        <InputField
+          label="Name"
+          placeholder="e.g. Practice green by the first tee"
+          error={formState.errors.name?.message ?? fields.name}
+          {...register("name")}
+        />
+        <InputField
+          label="Where (optional)"
+          placeholder="Club, course"
+          error={formState.errors.locationNote?.message ?? fields.locationNote}
+          {...register("locationNote")}
+        />
         <Button type="submit" loading={create.isPending} loadingText="Adding…" className="sm:mt-7">
           Add green
         </Button>
@@ -63,11 +77,21 @@ export function GreensPage() {
   return (
     <div className="flex flex-col gap-6">
       <title>Greens · Borrowline</title>
-      <PageHeader eyebrow="Practice log" title="Greens" description="The putting surfaces you practise on, with their measured speed. A session on a green starts from its latest Stimp." />
+      <PageHeader
+        eyebrow="Practice log"
+        title="Greens"
+        description="The putting surfaces you practise on, with their measured speed. A session on a green starts from its latest Stimp."
+      />
       {greens.isPending ? <PageSpinner label="Loading your greens" /> : null}
-      {greens.isError ? <Alert tone="error" title="Could not load your greens">{errorMessage(greens.error)}</Alert> : null}
+      {greens.isError ? (
+        <Alert tone="error" title="Could not load your greens">
+          {errorMessage(greens.error)}
+        </Alert>
+      ) : null}
       {greens.data && greens.data.items.length === 0 ? (
-        <EmptyState title="No greens yet">Add the practice green you use most; measure its speed with a Stimpmeter when you can.</EmptyState>
+        <EmptyState title="No greens yet">
+          Add the practice green you use most; measure its speed with a Stimpmeter when you can.
+        </EmptyState>
       ) : null}
       {greens.data && greens.data.items.length > 0 ? (
         <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3" aria-label="Your greens">
@@ -79,8 +103,10 @@ export function GreensPage() {
               >
                 <span className="text-lg font-semibold">{g.name}</span>
                 <span className="flex items-baseline justify-between gap-2 text-sm text-ink-500">
-                  <span className="truncate">{g.locationNote ?? `Added ${formatShortDate(g.createdAt.slice(0, 10))}`}</span>
-                  <span className="shrink-0 font-medium text-ink-800">{g.currentStimpFt !== null ? `Stimp ${g.currentStimpFt.toFixed(1)}` : "no reading yet"}</span>
+                  <span className="truncate">{g.locationNote ?? `Added ${formatDate(g.createdAt.slice(0, 10))}`}</span>
+                  <span className="shrink-0 font-medium text-ink-800">
+                    {g.currentStimpFt !== null ? stimpText(g.currentStimpFt) : "no reading yet"}
+                  </span>
                 </span>
               </Link>
             </li>

@@ -1,7 +1,7 @@
 import { useSearchParams } from "react-router";
 import clsx from "clsx";
 import { historyTab, switchTab, type HistoryTab } from "../utils/table-query";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { PuttsTable } from "./putts-table";
 import { SessionsTable } from "./sessions-table";
 
@@ -13,7 +13,7 @@ const TABS: { id: HistoryTab; label: string }[] = [
 /** The practice history: sessions or single putts; tab, sort, page and filters sit in the URL query. */
 export function HistorySection() {
   const [query, setQuery] = useSearchParams();
-  const units = useUnits();
+  const { units } = useUnits();
   const tab = historyTab(query);
   const change = (next: URLSearchParams) => setQuery(next, { preventScrollReset: true });
   return (

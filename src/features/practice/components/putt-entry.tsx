@@ -38,7 +38,11 @@ export function PuttEntry({ units, distanceM, onDistanceChange, breakType, onBre
     onLog({ distanceM, holed: true, missSide: null, missLengthM: null, breakType });
     resetMiss();
   };
+  // A finish is stored only as a signed length (negative = short), so "long" without "how far" cannot be kept:
+  // Missed waits for the length (or for the finish to be taken back) rather than drop what the screen shows.
+  const needsLength = finish !== null && missM === null;
   const logMissed = () => {
+    if (needsLength) return;
     const length = finish && missM !== null ? (finish === "short" ? -missM : missM) : null;
     onLog({ distanceM, holed: false, missSide: side, missLengthM: length, breakType });
     resetMiss();
@@ -125,10 +129,17 @@ export function PuttEntry({ units, distanceM, onDistanceChange, breakType, onBre
             />
           ) : null}
         </div>
+        {needsLength ? (
+          <p id="miss-needs-length" className="text-sm text-ink-700" role="status">
+            Pick how far {finish === "short" ? "short" : "long"} it finished, or tap {finish === "short" ? "Short" : "Long"} again to log the miss without it.
+          </p>
+        ) : null}
         <button
           type="button"
           onClick={logMissed}
-          className="min-h-16 w-full rounded-2xl bg-ink-900 px-6 text-xl font-semibold text-sand-50 transition-colors hover:bg-ink-700 active:bg-ink-800 focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500"
+          disabled={needsLength}
+          aria-describedby={needsLength ? "miss-needs-length" : undefined}
+          className="min-h-16 w-full rounded-2xl bg-ink-900 disabled:cursor-not-allowed disabled:opacity-50 px-6 text-xl font-semibold text-sand-50 transition-colors hover:bg-ink-700 active:bg-ink-800 focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500"
         >
           Missed{missSummary ? " " : null}
           {missSummary ? <span className="block text-sm font-normal text-sand-200">{missSummary}</span> : null}

@@ -1,5 +1,13 @@
+import { formatDate } from "../../../../shared/format";
 import { useMemo, useState } from "react";
-import { getCoreRowModel, useReactTable, type ColumnDef, type PaginationState, type SortingState, type Updater } from "@tanstack/react-table";
+import {
+  getCoreRowModel,
+  useReactTable,
+  type ColumnDef,
+  type PaginationState,
+  type SortingState,
+  type Updater,
+} from "@tanstack/react-table";
 import { BREAK_TYPES, type Putt } from "../../../../shared/schemas/putts";
 import { formatLength, type UnitSystem } from "../../../../shared/units";
 import { Alert, ConfirmDialog, TextLink } from "../../../components/ui";
@@ -7,7 +15,6 @@ import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";
 import { useDeletePutt } from "../api/delete-putt";
 import { usePutts } from "../api/get-putts";
-import { formatShortDate } from "../utils/dates";
 import { BREAK_LABELS, missText } from "../utils/putt-text";
 import { fromSorting, pageCount, puttParams, toSorting, withChanges } from "../utils/table-query";
 import { DataTable } from "./data-table";
@@ -24,8 +31,18 @@ export function PuttsTable({ query, onQueryChange, units }: PuttsTableProps) {
 
   const columns = useMemo<ColumnDef<Putt>[]>(
     () => [
-      { id: "date", header: "Day", sortDescFirst: true, cell: ({ row }) => <span className="whitespace-nowrap">{formatShortDate(row.original.date)}</span> },
-      { id: "distance", header: "Distance", meta: { align: "right" }, cell: ({ row }) => <span className="whitespace-nowrap">{formatLength(row.original.distanceM, units)}</span> },
+      {
+        id: "date",
+        header: "Day",
+        sortDescFirst: true,
+        cell: ({ row }) => <span className="whitespace-nowrap">{formatDate(row.original.date)}</span>,
+      },
+      {
+        id: "distance",
+        header: "Distance",
+        meta: { align: "right" },
+        cell: ({ row }) => <span className="whitespace-nowrap">{formatLength(row.original.distanceM, units)}</span>,
+      },
       {
         id: "result",
         header: "Result",
@@ -39,7 +56,12 @@ export function PuttsTable({ query, onQueryChange, units }: PuttsTableProps) {
             </span>
           ),
       },
-      { id: "break", header: "Break", enableSorting: false, cell: ({ row }) => (row.original.breakType ? BREAK_LABELS[row.original.breakType] : "–") },
+      {
+        id: "break",
+        header: "Break",
+        enableSorting: false,
+        cell: ({ row }) => (row.original.breakType ? BREAK_LABELS[row.original.breakType] : "–"),
+      },
       {
         id: "actions",
         header: () => <span className="sr-only">Actions</span>,
@@ -53,7 +75,7 @@ export function PuttsTable({ query, onQueryChange, units }: PuttsTableProps) {
               type="button"
               onClick={() => setConfirm(row.original)}
               className="min-h-11 rounded-lg px-3 text-sm font-medium text-bad-600 hover:bg-bad-50"
-              aria-label={`Delete the ${formatLength(row.original.distanceM, units)} putt of ${formatShortDate(row.original.date)}`}
+              aria-label={`Delete the ${formatLength(row.original.distanceM, units)} putt of ${formatDate(row.original.date)}`}
             >
               Delete
             </button>
@@ -79,8 +101,10 @@ export function PuttsTable({ query, onQueryChange, units }: PuttsTableProps) {
     enableMultiSort: false,
     pageCount: pageCount(total, params.pageSize),
     state: { sorting, pagination },
-    onSortingChange: (u: Updater<SortingState>) => onQueryChange(withChanges(query, { sort: fromSorting(typeof u === "function" ? u(sorting) : u, "-date") })),
-    onPaginationChange: (u: Updater<PaginationState>) => onQueryChange(withChanges(query, { page: (typeof u === "function" ? u(pagination) : u).pageIndex + 1 })),
+    onSortingChange: (u: Updater<SortingState>) =>
+      onQueryChange(withChanges(query, { sort: fromSorting(typeof u === "function" ? u(sorting) : u, "-date") })),
+    onPaginationChange: (u: Updater<PaginationState>) =>
+      onQueryChange(withChanges(query, { page: (typeof u === "function" ? u(pagination) : u).pageIndex + 1 })),
   });
 
   const active = [params.from, params.to, params.holed, params.breakType, params.minM, params.maxM].filter((v) => v !== undefined).length;
@@ -89,7 +113,11 @@ export function PuttsTable({ query, onQueryChange, units }: PuttsTableProps) {
     <div className="flex flex-col gap-4">
       <FilterBar
         active={active}
-        onClear={() => onQueryChange(withChanges(query, { from: undefined, to: undefined, holed: undefined, break: undefined, minM: undefined, maxM: undefined }))}
+        onClear={() =>
+          onQueryChange(
+            withChanges(query, { from: undefined, to: undefined, holed: undefined, break: undefined, minM: undefined, maxM: undefined }),
+          )
+        }
       >
         <DateRangeFilter from={params.from} to={params.to} onChange={(from, to) => onQueryChange(withChanges(query, { from, to }))} />
         <SelectFilter
@@ -121,7 +149,11 @@ export function PuttsTable({ query, onQueryChange, units }: PuttsTableProps) {
           }}
         />
       </FilterBar>
-      {putts.isError ? <Alert tone="error" title="Could not load your putts">{errorMessage(putts.error)}</Alert> : null}
+      {putts.isError ? (
+        <Alert tone="error" title="Could not load your putts">
+          {errorMessage(putts.error)}
+        </Alert>
+      ) : null}
       <DataTable
         table={table}
         caption="Logged putts"
@@ -138,7 +170,9 @@ export function PuttsTable({ query, onQueryChange, units }: PuttsTableProps) {
         onCancel={() => setConfirm(null)}
         onConfirm={() => confirm && remove.mutate(confirm, { onSettled: () => setConfirm(null) })}
       >
-        {confirm ? `${formatLength(confirm.distanceM, units)}, ${confirm.holed ? "holed" : "missed"}, on ${formatShortDate(confirm.date)}.` : null}
+        {confirm
+          ? `${formatLength(confirm.distanceM, units)}, ${confirm.holed ? "holed" : "missed"}, on ${formatDate(confirm.date)}.`
+          : null}
       </ConfirmDialog>
     </div>
   );

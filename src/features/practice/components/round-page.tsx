@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { useNavigate } from "react-router";
 import clsx from "clsx";
@@ -9,8 +10,7 @@ import { errorMessage } from "../../../lib/query-client";
 import { useDeleteRound } from "../api/delete-round";
 import { useRound } from "../api/get-round";
 import { useSaveHole } from "../api/put-hole";
-import { useUnits } from "../hooks/use-units";
-import { formatSessionDate } from "../utils/dates";
+import { useUnits } from "../../auth/hooks/use-units";
 import { DEFAULT_DISTANCE, DISTANCE_PICKS, distanceLabel, samePick, stepDistanceM } from "../utils/distances";
 import { formatStrokesGained, HOLES, holeBody, LEAVE_PICKS, nextHole } from "../utils/hole-entry";
 
@@ -24,7 +24,10 @@ function Totals({ round }: { round: Round }) {
   ];
   return (
     <div>
-      <dl aria-label="Round totals" className="grid grid-cols-4 divide-x divide-sand-50/15 rounded-2xl bg-ink-900 py-3 text-center text-sand-50">
+      <dl
+        aria-label="Round totals"
+        className="grid grid-cols-4 divide-x divide-sand-50/15 rounded-2xl bg-ink-900 py-3 text-center text-sand-50"
+      >
         {items.map((i) => (
           <div key={i.label} className="px-1">
             <dt className="text-[0.7rem] leading-tight tracking-wide text-sand-200 uppercase">{i.label}</dt>
@@ -33,8 +36,11 @@ function Totals({ round }: { round: Round }) {
         ))}
       </dl>
       <p className="mt-1.5 text-xs text-ink-500">
-        Strokes gained putting: the tour’s average putts from each first-putt distance minus your putts (M. Broadie, 2012); above 0 is better than a tour player.
-        {t.longFirstPutts > 0 ? ` Long first putts (6 m or more): ${t.longFirstPutts}, of them left outside 1 m: ${t.longLagsOutside1m}.` : ""}
+        Strokes gained putting: the tour’s average putts from each first-putt distance minus your putts (M. Broadie, 2012); above 0 is
+        better than a tour player.
+        {t.longFirstPutts > 0
+          ? ` Long first putts (6 m or more): ${t.longFirstPutts}, of them left outside 1 m: ${t.longLagsOutside1m}.`
+          : ""}
       </p>
     </div>
   );
@@ -55,11 +61,17 @@ function HolePicker({ holes, current, onPick }: { holes: RoundHole[]; current: n
             onClick={() => onPick(n)}
             className={clsx(
               "flex min-h-12 flex-col items-center justify-center rounded-lg border-2 text-sm leading-none font-semibold tabular-nums",
-              n === current ? "border-coral-500 bg-white" : h ? "border-transparent bg-ink-900 text-sand-50" : "border-ink-900/10 bg-white/60 text-ink-500",
+              n === current
+                ? "border-coral-500 bg-white"
+                : h
+                  ? "border-transparent bg-ink-900 text-sand-50"
+                  : "border-ink-900/10 bg-white/60 text-ink-500",
             )}
           >
             <span>{n}</span>
-            {h ? <span className={clsx("mt-0.5 text-[0.7rem] font-normal", n === current ? "text-ink-500" : "text-sand-200")}>{h.putts}</span> : null}
+            {h ? (
+              <span className={clsx("mt-0.5 text-[0.7rem] font-normal", n === current ? "text-ink-500" : "text-sand-200")}>{h.putts}</span>
+            ) : null}
           </button>
         );
       })}
@@ -67,7 +79,17 @@ function HolePicker({ holes, current, onPick }: { holes: RoundHole[]; current: n
   );
 }
 
-function HoleEntry({ round, holeNumber, units, onSaved }: { round: Round; holeNumber: number; units: UnitSystem; onSaved: (n: number) => void }) {
+function HoleEntry({
+  round,
+  holeNumber,
+  units,
+  onSaved,
+}: {
+  round: Round;
+  holeNumber: number;
+  units: UnitSystem;
+  onSaved: (n: number) => void;
+}) {
   const existing = round.holes.find((h) => h.holeNumber === holeNumber);
   const save = useSaveHole(round.id);
   const [distanceM, setDistanceM] = useState(existing?.firstPuttM ?? fromLongUnit(DEFAULT_DISTANCE[units] * 2, units));
@@ -75,7 +97,10 @@ function HoleEntry({ round, holeNumber, units, onSaved }: { round: Round; holeNu
   const [fourPlus, setFourPlus] = useState(existing ? existing.putts >= 4 : false);
 
   const commit = (putts: number) => {
-    save.mutate({ holeNumber, ...holeBody({ firstPuttM: distanceM, putts, leftAfterFirstM: putts >= 2 ? leaveM : null }) }, { onSuccess: () => onSaved(holeNumber) });
+    save.mutate(
+      { holeNumber, ...holeBody({ firstPuttM: distanceM, putts, leftAfterFirstM: putts >= 2 ? leaveM : null }) },
+      { onSuccess: () => onSaved(holeNumber) },
+    );
   };
   const leavePicks = LEAVE_PICKS[units];
 
@@ -147,7 +172,10 @@ function HoleEntry({ round, holeNumber, units, onSaved }: { round: Round; holeNu
             type="button"
             onClick={() => setFourPlus(!fourPlus)}
             aria-expanded={fourPlus}
-            className={clsx("min-h-20 rounded-2xl text-3xl font-semibold", existing && existing.putts >= 4 ? "bg-coral-500 text-ink-950" : "bg-ink-900 text-sand-50 hover:bg-ink-700")}
+            className={clsx(
+              "min-h-20 rounded-2xl text-3xl font-semibold",
+              existing && existing.putts >= 4 ? "bg-coral-500 text-ink-950" : "bg-ink-900 text-sand-50 hover:bg-ink-700",
+            )}
           >
             4+
           </button>
@@ -168,14 +196,18 @@ function HoleEntry({ round, holeNumber, units, onSaved }: { round: Round; holeNu
       <p aria-live="polite" className="text-sm text-ink-500">
         {save.isPending ? `Saving hole ${holeNumber}…` : save.isSuccess ? `Hole ${holeNumber} saved.` : ""}
       </p>
-      {save.isError ? <Alert tone="error" title={`Hole ${holeNumber} was not saved`}>{errorMessage(save.error)}</Alert> : null}
+      {save.isError ? (
+        <Alert tone="error" title={`Hole ${holeNumber} was not saved`}>
+          {errorMessage(save.error)}
+        </Alert>
+      ) : null}
     </section>
   );
 }
 
 /** A round on the course, logged hole by hole from a phone; each hole is saved as soon as its putts are tapped. */
 export function RoundPage({ roundId }: { roundId: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const round = useRound(roundId);
   const remove = useDeleteRound();
   const navigate = useNavigate();
@@ -185,7 +217,15 @@ export function RoundPage({ roundId }: { roundId: string }) {
   if (round.isPending) return <PageSpinner label="Opening the round" />;
   if (round.isError) {
     return (
-      <Alert tone="error" title="Could not open this round" action={<ButtonLink to={paths.rounds.href()} size="sm" variant="secondary">All rounds</ButtonLink>}>
+      <Alert
+        tone="error"
+        title="Could not open this round"
+        action={
+          <ButtonLink to={paths.rounds.href()} size="sm" variant="secondary">
+            All rounds
+          </ButtonLink>
+        }
+      >
         {errorMessage(round.error)}
       </Alert>
     );
@@ -194,12 +234,12 @@ export function RoundPage({ roundId }: { roundId: string }) {
   const hole = current ?? nextHole(r.holes);
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-5">
-      <title>{`Round · ${formatSessionDate(r.date)} · Borrowline`}</title>
+      <title>{`Round · ${formatDate(r.date, "weekday")} · Borrowline`}</title>
       <header className="flex items-start justify-between gap-3">
         <div className="min-w-0">
           <p className="text-sm font-semibold tracking-wide text-coral-700 uppercase">Round</p>
           <h1 className="text-2xl font-semibold tracking-tight">{r.course ?? "Round"}</h1>
-          <p className="text-sm text-ink-500">{formatSessionDate(r.date)}</p>
+          <p className="text-sm text-ink-500">{formatDate(r.date, "weekday")}</p>
         </div>
         <ButtonLink to={paths.rounds.href()} variant="secondary" size="sm" className="shrink-0">
           Done
@@ -214,10 +254,18 @@ export function RoundPage({ roundId }: { roundId: string }) {
           <table className="w-full text-sm">
             <thead className="text-left text-ink-500">
               <tr>
-                <th scope="col" className="py-1">Hole</th>
-                <th scope="col" className="py-1">First putt</th>
-                <th scope="col" className="py-1 text-right">Putts</th>
-                <th scope="col" className="py-1 text-right">SG</th>
+                <th scope="col" className="py-1">
+                  Hole
+                </th>
+                <th scope="col" className="py-1">
+                  First putt
+                </th>
+                <th scope="col" className="py-1 text-right">
+                  Putts
+                </th>
+                <th scope="col" className="py-1 text-right">
+                  SG
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -229,7 +277,9 @@ export function RoundPage({ roundId }: { roundId: string }) {
                     {h.leftAfterFirstM ? <span className="text-ink-500"> · left {formatLength(h.leftAfterFirstM, units)}</span> : null}
                   </td>
                   <td className="py-1.5 text-right tabular-nums">{h.putts}</td>
-                  <td className="py-1.5 text-right tabular-nums">{h.strokesGained === null ? "–" : formatStrokesGained(h.strokesGained)}</td>
+                  <td className="py-1.5 text-right tabular-nums">
+                    {h.strokesGained === null ? "–" : formatStrokesGained(h.strokesGained)}
+                  </td>
                 </tr>
               ))}
             </tbody>
@@ -247,7 +297,7 @@ export function RoundPage({ roundId }: { roundId: string }) {
         onCancel={() => setConfirm(false)}
         onConfirm={() => remove.mutate(r.id, { onSuccess: () => void navigate(paths.rounds.href()), onSettled: () => setConfirm(false) })}
       >
-        {`${formatSessionDate(r.date)}${r.course ? ` at ${r.course}` : ""}, ${r.totals.holes} holes entered.`}
+        {`${formatDate(r.date, "weekday")}${r.course ? ` at ${r.course}` : ""}, ${r.totals.holes} holes entered.`}
       </ConfirmDialog>
     </div>
   );

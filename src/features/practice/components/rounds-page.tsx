@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { Link, useNavigate } from "react-router";
 import { Alert, Button, Card, CardTitle, EmptyState, InputField, PageHeader, PageSpinner } from "../../../components/ui";
@@ -6,7 +7,7 @@ import { isApiError } from "../../../lib/api-client";
 import { errorMessage } from "../../../lib/query-client";
 import { useCreateRound } from "../api/create-round";
 import { ROUNDS_PAGE_SIZE, useRounds } from "../api/get-rounds";
-import { formatSessionDate, todayIso } from "../utils/dates";
+import { todayIso } from "../utils/dates";
 import { formatStrokesGained } from "../utils/hole-entry";
 
 function NewRoundForm() {
@@ -28,7 +29,13 @@ function NewRoundForm() {
         }}
       >
         <InputField label="Day" type="date" value={date} onChange={(e) => setDate(e.target.value)} error={fields.date} />
-        <InputField label="Course (optional)" value={course} onChange={(e) => setCourse(e.target.value)} placeholder="e.g. Larkspur Heath" error={fields.course} />
+        <InputField
+          label="Course (optional)"
+          value={course}
+          onChange={(e) => setCourse(e.target.value)}
+          placeholder="e.g. Larkspur Heath"
+          error={fields.course}
+        />
         <Button type="submit" variant="accent" size="lg" loading={create.isPending} loadingText="Starting…" className="sm:mt-6">
           Start the round
         </Button>
@@ -58,7 +65,11 @@ export function RoundsPage() {
       />
       <NewRoundForm />
       {rounds.isPending ? <PageSpinner label="Loading your rounds" /> : null}
-      {rounds.isError ? <Alert tone="error" title="Could not load your rounds">{errorMessage(rounds.error)}</Alert> : null}
+      {rounds.isError ? (
+        <Alert tone="error" title="Could not load your rounds">
+          {errorMessage(rounds.error)}
+        </Alert>
+      ) : null}
       {rounds.data && rounds.data.items.length === 0 ? (
         <EmptyState title="No rounds yet">Start one before you tee off; each hole takes two or three taps.</EmptyState>
       ) : null}
@@ -75,7 +86,7 @@ export function RoundsPage() {
                   className="flex min-h-16 flex-wrap items-center justify-between gap-x-4 gap-y-1 rounded-xl bg-white px-4 py-3 ring-1 ring-ink-900/5 hover:ring-ink-900/20 focus-visible:outline-3 focus-visible:outline-coral-500"
                 >
                   <span className="min-w-0">
-                    <span className="block font-semibold">{formatSessionDate(r.date)}</span>
+                    <span className="block font-semibold">{formatDate(r.date, "weekday")}</span>
                     <span className="block text-sm text-ink-500">{r.course ?? "Course not named"}</span>
                   </span>
                   <span className="flex gap-4 text-sm text-ink-700 tabular-nums">

@@ -1,3 +1,5 @@
+import { formatDate } from "../../../../shared/format";
+import { stimpText } from "../../../../shared/format";
 import { useEffect, useMemo, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import clsx from "clsx";
@@ -11,12 +13,11 @@ import { useDeletePutt } from "../api/delete-putt";
 import { useSession } from "../api/get-session";
 import { useSessionPutts } from "../api/get-session-putts";
 import { useOnline } from "../hooks/use-online";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { newClientId } from "../utils/client-id";
 import { DEFAULT_DISTANCE } from "../utils/distances";
 import { percent, puttLine, tally, waitingText } from "../utils/putt-text";
 import { listedPutts, type ListedPutt } from "../utils/session-list";
-import { formatSessionDate } from "../utils/dates";
 import { PuttEntry, type PuttDraft } from "./putt-entry";
 
 const LAST_DISTANCE_KEY = "borrowline.last-distance-m";
@@ -42,7 +43,12 @@ function rememberDistance(m: number) {
 function SavedMark({ putt }: { putt: ListedPutt }) {
   if (putt.saved === "yes") return null;
   return (
-    <span className={clsx("rounded-full px-2 py-0.5 text-xs font-medium", putt.saved === "waiting" ? "bg-warn-50 text-warn-800" : "bg-ink-50 text-ink-600")}>
+    <span
+      className={clsx(
+        "rounded-full px-2 py-0.5 text-xs font-medium",
+        putt.saved === "waiting" ? "bg-warn-50 text-warn-800" : "bg-ink-50 text-ink-600",
+      )}
+    >
       {putt.saved === "waiting" ? "waiting to be saved" : "saving…"}
     </span>
   );
@@ -62,7 +68,7 @@ function OutboxNotice({ waiting, online }: { waiting: number; online: boolean })
 
 /** Logging on the green: each putt is saved at once (optimistically), queued while offline, and can be undone. */
 export function SessionLogPage({ sessionId }: { sessionId: string }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const queryClient = useQueryClient();
   const session = useSession(sessionId);
   const stored = useSessionPutts(sessionId);
@@ -78,7 +84,10 @@ export function SessionLogPage({ sessionId }: { sessionId: string }) {
 
   useEffect(() => watchSession(sessionId), [sessionId]);
 
-  const putts = useMemo(() => listedPutts(stored.data?.items ?? [], queue, sessionId, session.data?.date), [stored.data, queue, sessionId, session.data?.date]);
+  const putts = useMemo(
+    () => listedPutts(stored.data?.items ?? [], queue, sessionId, session.data?.date),
+    [stored.data, queue, sessionId, session.data?.date],
+  );
   const t = tally(putts);
   const waiting = queue.length;
   const last = putts[putts.length - 1];
@@ -100,7 +109,9 @@ export function SessionLogPage({ sessionId }: { sessionId: string }) {
       loggedAt: new Date().toISOString(),
     });
     const next = tally([...putts, { holed: draft.holed }]);
-    setAnnouncement(`${draft.holed ? "Holed" : "Missed"} from ${formatLength(draft.distanceM, units)}. ${next.holed} of ${next.putts} holed.`);
+    setAnnouncement(
+      `${draft.holed ? "Holed" : "Missed"} from ${formatLength(draft.distanceM, units)}. ${next.holed} of ${next.putts} holed.`,
+    );
   };
 
   const undo = () => {
@@ -118,21 +129,29 @@ export function SessionLogPage({ sessionId }: { sessionId: string }) {
   if (session.isPending) return <PageSpinner label="Opening the session" />;
   if (session.isError) {
     return (
-      <Alert tone="error" title="Could not open this session" action={<ButtonLink to={paths.practice.href()} size="sm" variant="secondary">All sessions</ButtonLink>}>
+      <Alert
+        tone="error"
+        title="Could not open this session"
+        action={
+          <ButtonLink to={paths.practice.href()} size="sm" variant="secondary">
+            All sessions
+          </ButtonLink>
+        }
+      >
         {errorMessage(session.error)}
       </Alert>
     );
   }
   const s = session.data;
-  const details = [s.greenName, s.stimpFt !== null ? `Stimp ${s.stimpFt.toFixed(1)}` : null, s.conditions, ...s.tags].filter(Boolean).join(" · ");
+  const details = [s.greenName, s.stimpFt !== null ? stimpText(s.stimpFt) : null, s.conditions, ...s.tags].filter(Boolean).join(" · ");
 
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-4" data-putt-log={sessionId}>
-      <title>{`Logging · ${formatSessionDate(s.date)} · Borrowline`}</title>
+      <title>{`Logging · ${formatDate(s.date, "weekday")} · Borrowline`}</title>
       <header className="flex items-start justify-between gap-3">
         <div className="min-w-0">
           <p className="text-sm font-semibold tracking-wide text-coral-700 uppercase">Logging putts</p>
-          <h1 className="text-2xl font-semibold tracking-tight">{formatSessionDate(s.date)}</h1>
+          <h1 className="text-2xl font-semibold tracking-tight">{formatDate(s.date, "weekday")}</h1>
           {details ? <p className="truncate text-sm text-ink-500">{details}</p> : null}
         </div>
         <ButtonLink to={paths.practice.href()} variant="secondary" size="sm" className="shrink-0">
@@ -140,7 +159,10 @@ export function SessionLogPage({ sessionId }: { sessionId: string }) {
         </ButtonLink>
       </header>
 
-      <dl aria-label="This session so far" className="grid grid-cols-3 divide-x divide-sand-50/15 rounded-2xl bg-ink-900 py-3 text-center text-sand-50">
+      <dl
+        aria-label="This session so far"
+        className="grid grid-cols-3 divide-x divide-sand-50/15 rounded-2xl bg-ink-900 py-3 text-center text-sand-50"
+      >
         <div>
           <dt className="text-xs tracking-wide text-sand-200 uppercase">Putts</dt>
           <dd className="text-3xl font-semibold tabular-nums">{t.putts}</dd>
@@ -169,13 +191,24 @@ export function SessionLogPage({ sessionId }: { sessionId: string }) {
           {`The ${formatLength(failed[failed.length - 1]!.putt.distanceM, units)} putt was taken off the list: ${errorMessage(failed[failed.length - 1]!.error)}`}
         </Alert>
       ) : null}
-      {stored.isError ? <Alert tone="error" title="Could not load this session's putts">{errorMessage(stored.error)}</Alert> : null}
+      {stored.isError ? (
+        <Alert tone="error" title="Could not load this session's putts">
+          {errorMessage(stored.error)}
+        </Alert>
+      ) : null}
 
       <p aria-live="polite" className="sr-only">
         {announcement}
       </p>
 
-      <PuttEntry units={units} distanceM={distanceM} onDistanceChange={changeDistance} breakType={breakType} onBreakTypeChange={setBreakType} onLog={log} />
+      <PuttEntry
+        units={units}
+        distanceM={distanceM}
+        onDistanceChange={changeDistance}
+        breakType={breakType}
+        onBreakTypeChange={setBreakType}
+        onLog={log}
+      />
 
       <Button variant="secondary" size="lg" fullWidth onClick={undo} disabled={!last || deletePutt.isPending} className="min-h-14">
         Undo last putt
@@ -186,19 +219,21 @@ export function SessionLogPage({ sessionId }: { sessionId: string }) {
           Putts this session
         </h2>
         {stored.isPending && putts.length === 0 ? <PageSpinner label="Loading putts" /> : null}
-        {!stored.isPending && putts.length === 0 ? <p className="text-ink-500">No putts yet. Set the distance, then tap Holed or Missed after each putt.</p> : null}
+        {!stored.isPending && putts.length === 0 ? (
+          <p className="text-ink-500">No putts yet. Set the distance, then tap Holed or Missed after each putt.</p>
+        ) : null}
         <ol className="flex flex-col gap-1.5" aria-label="Putts, newest first">
           {putts
             .map((p, i) => ({ p, n: i + 1 }))
             .reverse()
             .map(({ p, n }) => (
-            <li key={p.clientId ?? p.id} className="flex items-center gap-3 rounded-xl bg-white px-3 py-2.5 ring-1 ring-ink-900/5">
-              <span className="w-7 shrink-0 text-right text-sm text-ink-400 tabular-nums">{n}</span>
-              <span aria-hidden="true" className={clsx("size-2.5 shrink-0 rounded-full", p.holed ? "bg-ok-600" : "bg-ink-300")} />
-              <span className="min-w-0 flex-1">{puttLine(p, units)}</span>
-              <SavedMark putt={p} />
-            </li>
-          ))}
+              <li key={p.clientId ?? p.id} className="flex items-center gap-3 rounded-xl bg-white px-3 py-2.5 ring-1 ring-ink-900/5">
+                <span className="w-7 shrink-0 text-right text-sm text-ink-400 tabular-nums">{n}</span>
+                <span aria-hidden="true" className={clsx("size-2.5 shrink-0 rounded-full", p.holed ? "bg-ok-600" : "bg-ink-300")} />
+                <span className="min-w-0 flex-1">{puttLine(p, units)}</span>
+                <SavedMark putt={p} />
+              </li>
+            ))}
         </ol>
       </section>
     </div>

@@ -1,5 +1,14 @@
+import { formatDate } from "../../../../shared/format";
+import { formatStimp } from "../../../../shared/format";
 import { useMemo, useState } from "react";
-import { getCoreRowModel, useReactTable, type ColumnDef, type PaginationState, type SortingState, type Updater } from "@tanstack/react-table";
+import {
+  getCoreRowModel,
+  useReactTable,
+  type ColumnDef,
+  type PaginationState,
+  type SortingState,
+  type Updater,
+} from "@tanstack/react-table";
 import type { SessionItem } from "../../../../shared/schemas/sessions";
 import { Alert, ButtonLink, ConfirmDialog, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
@@ -7,7 +16,6 @@ import { errorMessage } from "../../../lib/query-client";
 import { useDeleteSession } from "../api/delete-session";
 import { useGreens } from "../api/get-greens";
 import { useSessions } from "../api/get-sessions";
-import { formatShortDate } from "../utils/dates";
 import { percent } from "../utils/putt-text";
 import { fromSorting, pageCount, sessionParams, toSorting, withChanges } from "../utils/table-query";
 import { DataTable } from "./data-table";
@@ -31,7 +39,7 @@ export function SessionsTable({ query, onQueryChange }: SessionsTableProps) {
         sortDescFirst: true,
         cell: ({ row }) => (
           <TextLink to={paths.session.href(row.original.id)} className="whitespace-nowrap">
-            {formatShortDate(row.original.date)}
+            {formatDate(row.original.date)}
           </TextLink>
         ),
       },
@@ -48,19 +56,28 @@ export function SessionsTable({ query, onQueryChange }: SessionsTableProps) {
           </span>
         ),
       },
-      { id: "green", header: "Green", enableSorting: false, cell: ({ row }) => row.original.greenName ?? <span className="text-ink-400">none</span> },
+      {
+        id: "green",
+        header: "Green",
+        enableSorting: false,
+        cell: ({ row }) => row.original.greenName ?? <span className="text-ink-400">none</span>,
+      },
       {
         id: "stimp",
         header: "Stimp",
         enableSorting: false,
         meta: { align: "right" },
-        cell: ({ row }) => (row.original.stimpFt === null ? "–" : row.original.stimpFt.toFixed(1)),
+        cell: ({ row }) => (row.original.stimpFt === null ? "–" : formatStimp(row.original.stimpFt)),
       },
       {
         id: "tags",
         header: "Conditions",
         enableSorting: false,
-        cell: ({ row }) => <span className="line-clamp-2 text-ink-600">{[row.original.conditions, ...row.original.tags].filter(Boolean).join(" · ") || "–"}</span>,
+        cell: ({ row }) => (
+          <span className="line-clamp-2 text-ink-600">
+            {[row.original.conditions, ...row.original.tags].filter(Boolean).join(" · ") || "–"}
+          </span>
+        ),
       },
       {
         id: "actions",
@@ -68,14 +85,19 @@ export function SessionsTable({ query, onQueryChange }: SessionsTableProps) {
         enableSorting: false,
         cell: ({ row }) => (
           <div className="flex justify-end gap-1">
-            <ButtonLink to={paths.session.href(row.original.id)} variant="ghost" size="sm" aria-label={`Open the session of ${formatShortDate(row.original.date)}`}>
+            <ButtonLink
+              to={paths.session.href(row.original.id)}
+              variant="ghost"
+              size="sm"
+              aria-label={`Open the session of ${formatDate(row.original.date)}`}
+            >
               Open
             </ButtonLink>
             <button
               type="button"
               onClick={() => setConfirm(row.original)}
               className="min-h-11 rounded-lg px-3 text-sm font-medium text-bad-600 hover:bg-bad-50"
-              aria-label={`Delete the session of ${formatShortDate(row.original.date)}`}
+              aria-label={`Delete the session of ${formatDate(row.original.date)}`}
             >
               Delete
             </button>
@@ -116,11 +138,23 @@ export function SessionsTable({ query, onQueryChange }: SessionsTableProps) {
 
   return (
     <div className="flex flex-col gap-4">
-      <FilterBar active={activeFilters} onClear={() => onQueryChange(withChanges(query, { from: undefined, to: undefined, green: undefined }))}>
+      <FilterBar
+        active={activeFilters}
+        onClear={() => onQueryChange(withChanges(query, { from: undefined, to: undefined, green: undefined }))}
+      >
         <DateRangeFilter from={params.from} to={params.to} onChange={(from, to) => onQueryChange(withChanges(query, { from, to }))} />
-        <SelectFilter label="Green" value={params.greenId ?? ""} options={greenOptions} onChange={(v) => onQueryChange(withChanges(query, { green: v || undefined }))} />
+        <SelectFilter
+          label="Green"
+          value={params.greenId ?? ""}
+          options={greenOptions}
+          onChange={(v) => onQueryChange(withChanges(query, { green: v || undefined }))}
+        />
       </FilterBar>
-      {sessions.isError ? <Alert tone="error" title="Could not load your sessions">{errorMessage(sessions.error)}</Alert> : null}
+      {sessions.isError ? (
+        <Alert tone="error" title="Could not load your sessions">
+          {errorMessage(sessions.error)}
+        </Alert>
+      ) : null}
       <DataTable
         table={table}
         caption="Practice sessions"
@@ -137,7 +171,9 @@ export function SessionsTable({ query, onQueryChange }: SessionsTableProps) {
         onCancel={() => setConfirm(null)}
         onConfirm={() => confirm && remove.mutate(confirm.id, { onSettled: () => setConfirm(null) })}
       >
-        {confirm ? `The session of ${formatShortDate(confirm.date)} and its ${confirm.putts} ${confirm.putts === 1 ? "putt" : "putts"} will be gone for good.` : null}
+        {confirm
+          ? `The session of ${formatDate(confirm.date)} and its ${confirm.putts} ${confirm.putts === 1 ? "putt" : "putts"} will be gone for good.`
+          : null}
       </ConfirmDialog>
     </div>
   );

@@ -1,3 +1,4 @@
+import { formatStimp, stimpText } from "../../../../shared/format";
 import { useEffect, useRef } from "react";
 import { Controller, useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -62,7 +63,7 @@ export function StartSessionForm() {
     if (greenId === lastGreen.current) return;
     lastGreen.current = greenId;
     const g = greens.data?.items.find((x) => x.id === greenId);
-    setValue("stimp", g?.currentStimpFt != null ? g.currentStimpFt.toFixed(1) : "", { shouldValidate: false });
+    setValue("stimp", g?.currentStimpFt != null ? formatStimp(g.currentStimpFt) : "", { shouldValidate: false });
   }, [greenId, greens.data, setValue]);
 
   // The green of the latest session (or a single own green) is the likely one: pick it.
@@ -92,7 +93,7 @@ export function StartSessionForm() {
   const others = otherGreens(recent.data?.items ?? [], own.map((g) => g.id));
   const greenOptions = [
     { value: "", label: greens.isPending ? "Loading greens…" : "No particular green" },
-    ...own.map((g) => ({ value: g.id, label: g.currentStimpFt != null ? `${g.name} (Stimp ${g.currentStimpFt.toFixed(1)})` : g.name })),
+    ...own.map((g) => ({ value: g.id, label: g.currentStimpFt != null ? `${g.name} (${stimpText(g.currentStimpFt)})` : g.name })),
     ...others.map((g) => ({ value: g.id, label: `${g.name} (from your sessions)` })),
   ];
   const chosenIsOther = others.some((g) => g.id === greenId);

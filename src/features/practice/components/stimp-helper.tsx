@@ -1,3 +1,4 @@
+import { formatStimp as formatStimpFt } from "../../../../shared/format";
 import { useState } from "react";
 import type { UnitSystem } from "../../../../shared/units";
 import { Alert, Button, InputField } from "../../../components/ui";
@@ -90,7 +91,7 @@ export function StimpHelper({ units, onSave, saving = false }: StimpHelperProps)
       </div>
       <Alert tone="warning">{STIMP_CAUTION}</Alert>
       <Button variant="primary" disabled={!result.ok} loading={saving} loadingText="Saving…" onClick={() => result.ok && onSave({ upFt: result.upFt, downFt: result.downFt })} className="sm:self-start">
-        {result.ok ? `Save ${result.stimpFt.toFixed(1)} ft` : "Save the reading"}
+        {result.ok ? `Save ${formatStimpFt(result.stimpFt)} ft` : "Save the reading"}
       </Button>
     </div>
   );

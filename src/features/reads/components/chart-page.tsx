@@ -3,9 +3,9 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useSearchParams } from "react-router";
 import type { ChartRequest } from "../../../../shared/schemas/reads";
-import { Alert, Button, Card, ErrorBoundary, InputField, PageHeader, PageSpinner, Spinner } from "../../../components/ui";
+import { Alert, Button, ButtonLink, Card, ErrorBoundary, InputField, PageHeader, PageSpinner, Spinner } from "../../../components/ui";
 import { useBreakChart } from "../api/get-break-chart";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { CHART_DIRECTIONS_DEG, cannotStopCount, chartDistancesM } from "../utils/chart-data";
 import { cannotStopWords } from "../utils/answer-text";
 import {
@@ -17,7 +17,9 @@ import {
   type ChartFormValues,
   type ExactMemory,
 } from "../utils/read-form";
-import { defaultReadValues } from "../utils/read-query";
+import { formatSlope, formatSpeed, stimpText } from "../../../../shared/format";
+import { paths } from "../../../config/paths";
+import { decodeReadQueryChecked, encodeReadQuery, isCompleteReadQuery, type ReadValues } from "../../../lib/read-url";
 import { ringFallLineDegs, ringLengthsM } from "../utils/aim-ring";
 import { AimRingPicture } from "./aim-ring-picture";
 import { BreakChartTable } from "./break-chart-table";
@@ -27,14 +29,6 @@ import { UnitsSwitch } from "./units-switch";
 const BreakChartGraph = lazy(() => import("./break-chart-graph").then((m) => ({ default: m.BreakChartGraph })));
 
 type ChartSettings = { slopePct: number; stimpFt: number; rollPastM: number };
-
-function readSettings(params: URLSearchParams, fallback: ChartSettings): ChartSettings {
-  const n = (k: string, d: number) => {
-    const v = Number(params.get(k));
-    return params.get(k) !== null && Number.isFinite(v) ? v : d;
-  };
-  return { slopePct: n("s", fallback.slopePct), stimpFt: n("st", fallback.stimpFt), rollPastM: n("rp", fallback.rollPastM) };
-}
 
 function toText(s: ChartSettings, units: ReturnType<typeof useUnits>["units"]): { values: ChartFormValues; memory: ExactMemory } {
   const slope = formatNumber(s.slopePct, 1);
@@ -115,21 +109,26 @@ function ChartControls({
   );
 }
 
+/** The pace after "Show the chart": the roll-past field wins, unless it still shows what an entry-speed read started with. */
+function paceFrom(read: ReadValues, rollPastM: number): Pick<ReadValues, "paceMode" | "rollPastM"> {
+  if (read.paceMode === "entrySpeed" && Math.abs(rollPastM - read.rollPastM) < 1e-9) return { paceMode: "entrySpeed", rollPastM };
+  return { paceMode: "rollPast", rollPastM };
+}
+
 export function ChartPage() {
   const { units, setUnits, ready, saving } = useUnits();
   const [params, setParams] = useSearchParams();
   const query = params.toString();
-  const defaults = defaultReadValues(units);
-  const settings = useMemo(
-    () =>
-      readSettings(new URLSearchParams(query), { slopePct: defaults.slopePct, stimpFt: defaults.stimpFt, rollPastM: defaults.rollPastM }),
-    [query, defaults.slopePct, defaults.stimpFt, defaults.rollPastM],
-  );
+  // The whole read travels in the address (the one read codec): the chart uses its slope, Stimp and pace, and keeps
+  // its distance and fall line for the links back to the read and to rehearse.
+  const { values: read, replaced } = useMemo(() => decodeReadQueryChecked(new URLSearchParams(query), units), [query, units]);
+  const settings: ChartSettings = { slopePct: read.slopePct, stimpFt: read.stimpFt, rollPastM: read.rollPastM };
+  const entryPace = read.paceMode === "entrySpeed";
   const request: ChartRequest | null = ready
     ? {
         slopePct: settings.slopePct,
         stimpFt: settings.stimpFt,
-        pace: { rollPastM: settings.rollPastM },
+        pace: entryPace ? { entrySpeedMps: read.entrySpeedMps } : { rollPastM: settings.rollPastM },
         distances: chartDistancesM(units),
         fallLineDegs: [...CHART_DIRECTIONS_DEG],
       }
@@ -141,22 +140,20 @@ export function ChartPage() {
     : null;
   const rings = useBreakChart(ringRequest);
 
+  // A bare or partial /chart gets the whole read written into the address, so it can be shared as it is.
+  const encoded = encodeReadQuery(read);
   useEffect(() => {
-    if (ready && (!params.has("s") || !params.has("st") || !params.has("rp"))) {
-      setParams(
-        new URLSearchParams({
-          s: String(settings.slopePct),
-          st: String(settings.stimpFt),
-          rp: String(Number(settings.rollPastM.toFixed(6))),
-        }),
-        { replace: true },
-      );
-    }
-  }, [ready, params, settings, setParams]);
+    if (ready && (!isCompleteReadQuery(params) || replaced.length > 0)) setParams(encoded, { replace: true });
+  }, [ready, params, replaced.length, encoded, setParams]);
 
   if (!ready) return <PageSpinner label="Getting the chart ready" />;
 
-  const settingsWords = `Slope ${settings.slopePct} %, Stimp ${settings.stimpFt}, finishing ${formatNumber(FIELD_SPECS.rollPast.toUnit(settings.rollPastM, units), 0)} ${fieldLimits("rollPast", units).unit} past`;
+  const paceText = entryPace
+    ? `reaching the hole at ${formatSpeed(read.entrySpeedMps, units)}`
+    : settings.rollPastM < 0.01
+      ? "at a dying pace (just reaching the hole)"
+      : `finishing ${formatNumber(FIELD_SPECS.rollPast.toUnit(settings.rollPastM, units), 0)} ${fieldLimits("rollPast", units).unit} past`;
+  const settingsWords = `Slope ${formatSlope(settings.slopePct)}, ${stimpText(settings.stimpFt)}, ${paceText}`;
   const caption = `Each number is how far left or right of the hole the start line passes, at the hole's distance. Rows: putt length; columns: which way the green falls as you stand behind the ball. ${settingsWords}. Assumes an even slope and a true roll.`;
   const answer = chart.data;
 
@@ -178,10 +175,22 @@ export function ChartPage() {
           settings={settings}
           units={units}
           busy={chart.isFetching}
-          onApply={(s) =>
-            setParams(new URLSearchParams({ s: String(s.slopePct), st: String(s.stimpFt), rp: String(Number(s.rollPastM.toFixed(6))) }))
-          }
+          onApply={(s) => setParams(encodeReadQuery({ ...read, slopePct: s.slopePct, stimpFt: s.stimpFt, ...paceFrom(read, s.rollPastM) }))}
         />
+        {entryPace ? (
+          <p className="mt-3 text-sm text-ink-600">
+            The read gave its pace as an entry speed ({formatSpeed(read.entrySpeedMps, units)} at the hole); the chart uses it for every cell.
+            Show the chart with a finish-past to change it.
+          </p>
+        ) : null}
+        <div className="mt-4 flex flex-wrap gap-2 border-t border-ink-900/10 pt-4">
+          <ButtonLink to={paths.read.href(encoded)} variant="secondary" size="sm">
+            Back to the read
+          </ButtonLink>
+          <ButtonLink to={paths.rehearse.href(encoded)} variant="secondary" size="sm">
+            Rehearse the read
+          </ButtonLink>
+        </div>
       </Card>
 
       {chart.isError ? (

@@ -7,6 +7,7 @@ import type { UnitSystem } from "../../../../shared/units";
 import { useDebouncedCallback } from "../hooks/use-debounced-callback";
 import { NAMED_DIRECTIONS, describeFallLine, normaliseDeg } from "../utils/directions";
 import {
+  FIELD_SPECS,
   convertFormValues,
   fieldLimits,
   formatNumber,
@@ -18,7 +19,7 @@ import {
   type NumericField,
   type ReadFormValues,
 } from "../utils/read-form";
-import { encodeReadQuery, type ReadValues } from "../utils/read-query";
+import { encodeReadQuery, type ReadValues } from "../../../lib/read-url";
 import { DirectionDial } from "./direction-dial";
 
 /** The eight named directions placed as the golfer sees them: away (downhill) on top, toward them below, the hole in the middle. */
@@ -40,13 +41,15 @@ export type ReadFormProps = {
   /** A note under the slope (e.g. the steepest slope a ball stops on at this Stimp). */
   slopeNote?: string;
   solving?: boolean;
+  /** What is wrong with the form's values now (messages in the user's units), or null when they can be read. */
+  onProblems?: (problems: string[] | null) => void;
 };
 
 function unitLabel(field: NumericField, units: UnitSystem): string {
   return fieldLimits(field, units).unit;
 }
 
-export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, slopeNote, solving }: ReadFormProps) {
+export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, slopeNote, solving, onProblems }: ReadFormProps) {
   const ids = { dial: useId(), degrees: useId(), dialHelp: useId() };
   const [initial] = useState(() => toFormValues(values, units));
   // The units the form's text is written in, and the exact SI values behind that text.
@@ -84,6 +87,18 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
     }
     debounced.call();
   }, [watched, debounced]);
+
+  // The page greys out an answer that no longer matches the form, at once, and says why.
+  const lastProblems = useRef<string | null>(null);
+  useEffect(() => {
+    if (!onProblems) return;
+    const parsed = readFormSchema(textUnits.current).safeParse(getValues());
+    const problems = parsed.success ? null : [...new Set(parsed.error.issues.map((i) => i.message))];
+    const key = problems ? problems.join("|") : null;
+    if (key === lastProblems.current) return;
+    lastProblems.current = key;
+    onProblems(problems);
+  }, [watched, units, getValues, onProblems]);
 
   // Units switched: rewrite every field in the new units from the exact SI values behind it.
   useLayoutEffect(() => {
@@ -268,7 +283,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
             Use entry speed instead of the distance past
           </label>
           <InputField
-            label="Entry speed (m/s)"
+            label={`Entry speed (${FIELD_SPECS.entrySpeed.unit(units)})`}
             inputMode="decimal"
             autoComplete="off"
             hint={limitsHint("entrySpeed")}

@@ -115,18 +115,18 @@ test("out-of-range values are named in the user's units and nothing is sent for 
   await user.clear(distance);
   await user.type(distance, "120");
   await user.tab();
-  expect(await screen.findByText("Enter a distance from 1 to 98.4 ft.")).toBeInTheDocument();
+  expect(await within(screen.getByRole("form", { name: "The putt" })).findByText("Enter a distance from 1 to 98.4 ft.")).toBeInTheDocument();
   expect(distance).toHaveAccessibleDescription("Enter a distance from 1 to 98.4 ft.");
   await user.clear(screen.getByLabelText("Slope (%)"));
   await user.type(screen.getByLabelText("Slope (%)"), "9");
   await user.tab();
-  expect(await screen.findByText("Enter a slope from 0 to 8%.")).toBeInTheDocument();
+  expect(await within(screen.getByRole("form", { name: "The putt" })).findByText("Enter a slope from 0 to 8%.")).toBeInTheDocument();
   await new Promise((r) => setTimeout(r, 600));
   expect(solveBodies()).toHaveLength(1);
 
   // In metric the same field speaks metres.
   await user.click(screen.getByRole("radio", { name: "Metres and centimetres" }));
-  expect(await screen.findByText("Enter a distance from 0.3 to 30 m.")).toBeInTheDocument();
+  expect(await within(screen.getByRole("form", { name: "The putt" })).findByText("Enter a distance from 0.3 to 30 m.")).toBeInTheDocument();
   expect(screen.getByLabelText("Distance (m)")).toHaveValue("36.58");
 });
 
@@ -280,4 +280,34 @@ test("typing is read again only after a pause", async () => {
   });
   await waitFor(() => expect(solveBodies()).toContainEqual(expect.objectContaining({ distanceM: 25 * 0.3048 })));
   expect(solveBodies().filter((b) => (b as { distanceM: number }).distanceM === 2 * 0.3048)).toHaveLength(0);
+});
+
+test("after an invalid entry (slope 9 %) the old answer is greyed out and the reason is given; a valid one clears it", async () => {
+  stubApi();
+  const user = userEvent.setup();
+  renderPage("/read?d=3.048&s=2&f=90&st=10&rp=0.4318");
+  await screen.findByTestId("aim-headline");
+  expect(screen.queryByTestId("stale-answer")).toBeNull();
+  const slope = screen.getByLabelText("Slope (%)");
+  await user.clear(slope);
+  await user.type(slope, "9");
+  const stale = await screen.findByTestId("stale-answer");
+  expect(stale).toHaveTextContent(/last putt that could be read/);
+  expect(stale).toHaveTextContent(/slope from 0 to 8/i);
+  expect(screen.getByTestId("answer-body")).toHaveAttribute("aria-disabled", "true");
+  expect(screen.getByTestId("answer-body")).toHaveClass("opacity-40");
+  await user.clear(slope);
+  await user.type(slope, "3");
+  await waitFor(() => expect(screen.queryByTestId("stale-answer")).toBeNull());
+  expect(screen.getByTestId("answer-body")).not.toHaveAttribute("aria-disabled");
+});
+
+test("in feet and inches the answer gives speeds in ft/s, never m/s", async () => {
+  stubApi();
+  renderPage("/read?d=3.048&s=2&f=90&st=10&rp=0.4318");
+  await screen.findByTestId("aim-headline");
+  const answer = screen.getByTestId("answer-body");
+  // 0.67 m/s = 2.2 ft/s (0.3048 m a foot).
+  expect(answer).toHaveTextContent("Still rolling at the hole (2.2 ft/s)");
+  expect(answer.textContent).not.toMatch(/m\/s/);
 });

@@ -10,10 +10,10 @@ import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner, TextLink } fr
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useSolveRead } from "../api/solve-read";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { cannotStopWords, steepestFromMessage } from "../utils/answer-text";
 import { formFieldForApi, type NumericField } from "../utils/read-form";
-import { decodeReadQuery, encodeReadQuery, isCompleteReadQuery, toReadRequest, type ReadValues } from "../utils/read-query";
+import { decodeReadQuery, encodeReadQuery, isCompleteReadQuery, toReadRequest, type ReadValues } from "../../../lib/read-url";
 import { AnswerBar } from "./answer-bar";
 import { ReadAnswer } from "./read-answer";
 import { ReadForm } from "./read-form";
@@ -80,6 +80,7 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
   const request = useMemo(() => toReadRequest(values), [values]);
   const solve = useSolveRead(request);
   const [liveValues, setLiveValues] = useState<ReadValues | null>(null);
+  const [formProblems, setFormProblems] = useState<string[] | null>(null);
   const live = useMemo(() => previewRead(liveValues), [liveValues]);
   const liveRequest = useMemo(() => (liveValues ? toReadRequest(liveValues) : null), [liveValues]);
 
@@ -109,6 +110,12 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
   const unplacedError = error && !cannotStop && Object.keys(serverErrors).length === 0 ? error : null;
   const steepest = cannotStop && isApiError(error) ? steepestFromMessage(error.fields.slopePct, error.message) : undefined;
   const shownRead = live ?? solve.data;
+  // The form holds a value that cannot be read (slope 9 %), or the server refused one: the answer on screen is for
+  // the last putt that could be read, so it is greyed out and the reason given.
+  const staleBecause = live
+    ? null
+    : (formProblems ??
+      (!request ? ["Fix the values marked in the form."] : Object.keys(serverErrors).length > 0 ? Object.values(serverErrors) : null));
   const encoded = encodeReadQuery(values);
 
   return (
@@ -130,6 +137,7 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
             serverErrors={serverErrors}
             slopeNote={steepest !== undefined ? `Steepest a ball stops on at this Stimp: ${steepest.toFixed(1)} %` : undefined}
             solving={solve.isFetching}
+            onProblems={setFormProblems}
           />
         </Card>
 
@@ -160,7 +168,8 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
                 distanceM={live && liveValues ? liveValues.distanceM : values.distanceM}
                 fallLineDeg={live && liveValues ? liveValues.fallLineDeg : values.fallLineDeg}
                 units={units}
-                state={live ? "live" : solve.isPlaceholderData ? "updating" : "fresh"}
+                state={live ? "live" : staleBecause ? "stale" : solve.isPlaceholderData ? "updating" : "fresh"}
+                staleBecause={staleBecause ?? undefined}
               />
             ) : !request ? (
               <p className="text-ink-600">Fix the values marked in the form and the read appears here.</p>
@@ -173,11 +182,7 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
                   Rehearse this putt
                 </ButtonLink>
               )}
-              <ButtonLink
-                to={paths.breakChart.href(new URLSearchParams({ s: String(values.slopePct), st: String(values.stimpFt) }).toString())}
-                variant="secondary"
-                size="sm"
-              >
+              <ButtonLink to={paths.breakChart.href(encoded)} variant="secondary" size="sm">
                 Break chart for this green
               </ButtonLink>
               <CopyLinkButton />

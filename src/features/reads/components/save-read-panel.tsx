@@ -1,3 +1,4 @@
+import { stimpText } from "../../../../shared/format";
 import { useId, useState, type FormEvent } from "react";
 import { Alert, Button, InputField, SelectField } from "../../../components/ui";
 import type { ReadRequest } from "../../../../shared/schemas/reads";
@@ -41,7 +42,7 @@ export function SaveReadPanel({ request }: SaveReadPanelProps) {
             onChange={(e) => setGreenId(e.target.value)}
             options={[
               { value: "", label: "No green" },
-              ...choices.map((g) => ({ value: g.id, label: g.currentStimpFt !== null ? `${g.name} (Stimp ${g.currentStimpFt})` : g.name })),
+              ...choices.map((g) => ({ value: g.id, label: g.currentStimpFt !== null ? `${g.name} (${stimpText(g.currentStimpFt)})` : g.name })),
             ]}
           />
         ) : (

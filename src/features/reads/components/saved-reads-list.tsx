@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import { useState } from "react";
 import { Alert, Button, ButtonLink, EmptyState, Spinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
@@ -6,9 +7,7 @@ import { useDeleteRead } from "../api/delete-read";
 import { useSavedReads, type SavedRead } from "../api/get-saved-reads";
 import { aimWords, readInputSummary } from "../utils/answer-text";
 import { describeFallLine } from "../utils/directions";
-import { encodeReadQuery, fromReadRequest } from "../utils/read-query";
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: "numeric", month: "short", year: "numeric" });
+import { encodeReadQuery, fromReadRequest } from "../../../lib/read-url";
 
 function SavedReadItem({ item, units }: { item: SavedRead; units: UnitSystem }) {
   const [confirming, setConfirming] = useState(false);
@@ -32,7 +31,7 @@ function SavedReadItem({ item, units }: { item: SavedRead; units: UnitSystem }) 
         <p className="text-sm text-ink-600">{aim.headline}</p>
         <p className="text-xs text-ink-500">
           {item.greenName ? `${item.greenName} · ` : ""}
-          {dateFormat.format(new Date(item.createdAt))}
+          {formatDate(item.createdAt)}
         </p>
       </div>
       <div className="flex shrink-0 flex-wrap gap-2">

@@ -44,13 +44,26 @@ test("pace reads as the distance past and the flat putt needing the same stroke"
   expect(paceWords(0, 3, "metric").headline).toMatch(/dying pace/);
 });
 
-test("capture says whether the hole holds the ball and by how much", () => {
-  expect(captureWords(0.67, { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.637, marginMps: 0.967 }).verdict).toBe(
-    "The hole holds it: up to 1.64 m/s drops, 0.97 m/s to spare",
-  );
-  const fast = captureWords(1.9, { holed: false, outcome: "lip-out", maxCaptureSpeedMps: 1.637, marginMps: -0.263 });
+test("capture says whether the hole holds the ball, in ft/s in feet-and-inches mode and m/s in metric", () => {
+  const holds = { holed: true, outcome: "holed" as const, maxCaptureSpeedMps: 1.637, marginMps: 0.967 };
+  // 0.67 m/s = 2.198 ft/s; 1.637 m/s = 5.371 ft/s (0.3048 m a foot).
+  expect(captureWords(0.67, holds, "imperial")).toEqual({
+    entry: "Still rolling at the hole (2.2 ft/s)",
+    verdict: "The hole holds it, with room to roll it firmer (up to 5.4 ft/s drops)",
+    tone: "ok",
+  });
+  expect(captureWords(0.67, holds, "metric").entry).toBe("Still rolling at the hole (0.67 m/s)");
+  expect(captureWords(1.5, { ...holds, marginMps: 0.137 }, "imperial").verdict).toMatch(/^It drops, but only just/);
+  const fast = captureWords(1.9, { holed: false, outcome: "lip-out", maxCaptureSpeedMps: 1.637, marginMps: -0.263 }, "imperial");
   expect(fast.tone).toBe("warn");
-  expect(fast.verdict).toMatch(/0\.26 m\/s over/);
+  expect(fast.verdict).toMatch(/^Too fast to drop/);
+  expect(`${fast.entry} ${fast.verdict}`).not.toMatch(/m\/s/);
+});
+
+test("a ball stopped at the hole is said in words, never 0.00 m/s or speed to spare", () => {
+  const dying = captureWords(0, { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.637, marginMps: 1.637 }, "imperial");
+  expect(dying.entry).toBe("Just reaches the hole and topples in");
+  expect(`${dying.entry} ${dying.verdict}`).not.toMatch(/\d|spare/);
 });
 
 test("the cannot-stop answer names the slope, the Stimp and the steepest stoppable slope", () => {

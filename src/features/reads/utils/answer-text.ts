@@ -1,5 +1,6 @@
 // The answer in words, in the user's units. Signed lengths: + = the golfer's right.
 import { HOLE_DIAMETER_M, formatLength, formatShort, metresToHoleWidths, toShortUnit, type UnitSystem } from "../../../../shared/units";
+import { STOPPED_AT_HOLE_MPS, formatSpeed, stimpText } from "../../../../shared/format";
 
 const HOLE_RADIUS_M = HOLE_DIAMETER_M / 2;
 /** Below this the aim is "the centre": about a fifth of an inch, less than anyone can aim. */
@@ -71,22 +72,33 @@ export function paceWords(rollPastM: number, flatPuttLengthM: number, units: Uni
 
 export type CaptureSummary = { holed: boolean; outcome: "holed" | "lip-out" | "miss"; maxCaptureSpeedMps: number; marginMps: number };
 
-/** Entry speed and whether the hole holds it (capture model: Holmes 1991, centre-of-ball criterion). */
-export function captureWords(entrySpeedMps: number, capture: CaptureSummary): { entry: string; verdict: string; tone: "ok" | "warn" } {
-  const entry = `Reaches the hole at ${entrySpeedMps.toFixed(2)} m/s`;
+/** Within this of the hole's limit a firmer stroke would lip out: "only just" (0.25 m/s, our own threshold). */
+const ONLY_JUST_MPS = 0.25;
+
+/**
+ * The ball at the hole in a golfer's words (capture model: Holmes 1991, see docs/sources.md): a stopped ball is
+ * said in words, never "0.00 m/s"; a rolling one in the user's speed unit (ft/s in feet and inches).
+ */
+export function captureWords(entrySpeedMps: number, capture: CaptureSummary, units: UnitSystem): { entry: string; verdict: string; tone: "ok" | "warn" } {
+  const limit = formatSpeed(capture.maxCaptureSpeedMps, units);
+  if (entrySpeedMps < STOPPED_AT_HOLE_MPS) {
+    return capture.outcome === "miss"
+      ? { entry: "Runs out of pace at the hole", verdict: "It does not pass over the hole", tone: "warn" }
+      : { entry: "Just reaches the hole and topples in", verdict: "A dying pace: any softer and it stays out", tone: "ok" };
+  }
+  const entry = `Still rolling at the hole (${formatSpeed(entrySpeedMps, units)})`;
   if (capture.outcome === "holed") {
     return {
       entry,
-      verdict: `The hole holds it: up to ${capture.maxCaptureSpeedMps.toFixed(2)} m/s drops, ${capture.marginMps.toFixed(2)} m/s to spare`,
+      verdict:
+        capture.marginMps < ONLY_JUST_MPS
+          ? `It drops, but only just: any firmer and it lips out (the hole holds up to ${limit})`
+          : `The hole holds it, with room to roll it firmer (up to ${limit} drops)`,
       tone: "ok",
     };
   }
   if (capture.outcome === "lip-out") {
-    return {
-      entry,
-      verdict: `Too fast to drop: the hole holds up to ${capture.maxCaptureSpeedMps.toFixed(2)} m/s, this is ${Math.abs(capture.marginMps).toFixed(2)} m/s over`,
-      tone: "warn",
-    };
+    return { entry, verdict: `Too fast to drop: it lips out or jumps the hole (it holds up to ${limit}); roll it softer`, tone: "warn" };
   }
   return { entry, verdict: "It does not pass over the hole", tone: "warn" };
 }
@@ -96,7 +108,7 @@ export function cannotStopWords(slopePct: number, stimpFt: number, steepestPct: 
   const slope = formatPct(slopePct);
   const article = aOrAn(slope);
   const tail = steepestPct !== undefined ? ` — the steepest it stops on is ${steepestPct.toFixed(1)} %` : "";
-  return `On ${article} ${slope} % slope at Stimp ${formatPct(stimpFt)} the ball would not stop${tail}.`;
+  return `On ${article} ${slope} % slope at ${stimpText(stimpFt)} the ball would not stop${tail}.`;
 }
 
 /** "an 8 ft", "an 11 ft", "an 18 ft", but "a 10 ft" (numbers read aloud). */
@@ -119,5 +131,5 @@ export function steepestFromMessage(...texts: Array<string | undefined>): number
 
 /** One line describing a read's inputs: "10 ft, 2 % falls to the right, Stimp 10". */
 export function readInputSummary(distanceM: number, slopePct: number, direction: string, stimpFt: number, units: UnitSystem): string {
-  return `${formatLength(distanceM, units)}, ${formatPct(slopePct)} % ${direction}, Stimp ${formatPct(stimpFt)}`;
+  return `${formatLength(distanceM, units)}, ${formatPct(slopePct)} % ${direction}, ${stimpText(stimpFt)}`;
 }

@@ -2,7 +2,7 @@ import { expect, test } from "vitest";
 import fc from "fast-check";
 import { READ_LIMITS } from "../../../../shared/schemas/reads";
 import { convertFormValues, fieldLimits, formFieldForApi, fromFormValues, parseNumber, readFormSchema, toFormValues } from "./read-form";
-import { defaultReadValues, toReadRequest } from "./read-query";
+import { defaultReadValues, toReadRequest } from "../../../lib/read-url";
 
 test("limits in the user's units are rounded inward, so what the form accepts the API accepts", () => {
   expect(fieldLimits("distance", "imperial")).toEqual({ min: 1, max: 98.4, unit: "ft" });

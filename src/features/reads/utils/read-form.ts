@@ -7,12 +7,15 @@ import {
   fromLongUnit,
   fromShortUnit,
   longUnitLabel,
+  METRES_PER_FOOT,
+  mpsToFtps,
+  parseDecimal,
   shortUnitLabel,
   toLongUnit,
   toShortUnit,
   type UnitSystem,
 } from "../../../../shared/units";
-import type { PaceMode, ReadValues } from "./read-query";
+import type { PaceMode, ReadValues } from "../../../lib/read-url";
 
 export type ReadFormValues = {
   distance: string;
@@ -62,7 +65,14 @@ export const FIELD_SPECS: Record<NumericField, FieldSpec> = {
     limits: READ_LIMITS.rollPastM,
     what: "a length",
   },
-  entrySpeed: { toUnit: same, fromUnit: same, decimals: () => 2, unit: () => "m/s", limits: READ_LIMITS.entrySpeedMps, what: "a speed" },
+  entrySpeed: {
+    toUnit: (v, u) => (u === "imperial" ? mpsToFtps(v) : v),
+    fromUnit: (v, u) => (u === "imperial" ? v * METRES_PER_FOOT : v),
+    decimals: (u) => (u === "imperial" ? 1 : 2),
+    unit: (u) => (u === "imperial" ? "ft/s" : "m/s"),
+    limits: READ_LIMITS.entrySpeedMps,
+    what: "a speed",
+  },
 };
 
 function roundTo(value: number, decimals: number, dir: "up" | "down" | "near"): number {
@@ -92,9 +102,7 @@ export function fieldLimits(field: NumericField, units: UnitSystem): { min: numb
 
 /** "3,5" and " 3.5 " both mean 3.5; anything else that is not a plain number is NaN. */
 export function parseNumber(text: string): number {
-  const t = text.trim().replace(",", ".");
-  if (t === "" || !/^[-+]?(\d+\.?\d*|\.\d+)$/.test(t)) return Number.NaN;
-  return Number(t);
+  return parseDecimal(text) ?? Number.NaN;
 }
 
 function rangeMessage(field: NumericField, units: UnitSystem): string {

@@ -1,7 +1,7 @@
 import { useId } from "react";
 import type { UnitSystem } from "../../../../shared/units";
 import { paceFeel, rollPastWords } from "../utils/pace-words";
-import { ROLL_PAST_RANGE_M } from "../utils/rehearse-query";
+import { ROLL_PAST_RANGE_M } from "../utils/rehearse-putt";
 
 /** The pace, as roll-past, from dying (0) to firm (1.5 m past). A native range input: arrow keys, Home, End work. */
 export function PaceControl({ rollPastM, units, onChange }: { rollPastM: number; units: UnitSystem; onChange: (m: number) => void }) {

@@ -1,14 +1,15 @@
 import { useState, type FormEvent } from "react";
 import { READ_LIMITS } from "../../../../shared/schemas/reads";
-import { fromLongUnit, longUnitLabel, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import { fromLongUnit, longUnitLabel, parseDecimal, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import { formatNumber } from "../../../../shared/format";
 import { Button, InputField } from "../../../components/ui";
-import type { RehearsePutt } from "../utils/rehearse-query";
+import type { RehearsePutt } from "../utils/rehearse-putt";
 
 type Draft = { distance: string; slopePct: string; fallLineDeg: string; stimpFt: string };
 
 function draftOf(p: RehearsePutt, units: UnitSystem): Draft {
   return {
-    distance: String(Number(toLongUnit(p.distanceM, units).toFixed(2))),
+    distance: formatNumber(toLongUnit(p.distanceM, units), 2),
     slopePct: String(p.slopePct),
     fallLineDeg: String(p.fallLineDeg),
     stimpFt: String(p.stimpFt),
@@ -22,13 +23,14 @@ export function PuttEditor({ putt, units, onSubmit }: { putt: RehearsePutt; unit
   const unit = longUnitLabel(units);
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    const distanceM = fromLongUnit(Number(draft.distance), units);
+    const n = (t: string) => parseDecimal(t) ?? Number.NaN;
+    const distanceM = fromLongUnit(n(draft.distance), units);
     const next = {
       ...putt,
       distanceM,
-      slopePct: Number(draft.slopePct),
-      fallLineDeg: Number(draft.fallLineDeg),
-      stimpFt: Number(draft.stimpFt),
+      slopePct: n(draft.slopePct),
+      fallLineDeg: n(draft.fallLineDeg),
+      stimpFt: n(draft.stimpFt),
     };
     const bad: Partial<Record<keyof Draft, string>> = {};
     const check = (k: keyof Draft, v: number, [min, max]: [number, number], words: string) => {

@@ -1,3 +1,4 @@
+import { STOPPED_AT_HOLE_MPS, formatSpeed } from "../../../../shared/format";
 import type { Read } from "../../../../physics";
 import { formatLength, type UnitSystem } from "../../../../shared/units";
 import { aimWords, holeWidthsWords } from "../../../components/green-3d/words";
@@ -30,9 +31,9 @@ export function ReadNumbers({ read, units }: { read: Read; units: UnitSystem }) 
       <Row term="Roll-past" value={`${rollPastWords(read.rollPastM, units)} past`} detail="if it misses" />
       <Row term="Flat-putt length" value={formatLength(Math.max(0, read.flatPuttLengthM), units)} detail="hit it as hard as a flat putt this long" />
       <Row
-        term="Entry speed"
-        value={`${read.entrySpeedMps.toFixed(2)} m/s`}
-        detail={`at the hole; ${read.launchSpeedMps.toFixed(2)} m/s off the putter`}
+        term="At the hole"
+        value={read.entrySpeedMps < STOPPED_AT_HOLE_MPS ? "Just reaches it, dying" : `Still rolling, ${formatSpeed(read.entrySpeedMps, units)}`}
+        detail={`${formatSpeed(read.launchSpeedMps, units)} off the putter`}
       />
     </dl>
   );

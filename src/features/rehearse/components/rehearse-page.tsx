@@ -1,6 +1,7 @@
 import { useEffect, useMemo, useState } from "react";
 import { useSearchParams } from "react-router";
-import { formatShort, longUnitLabel, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import { formatLength, formatSlope, formatSpeed, stimpText } from "../../../../shared/format";
+import { formatShort, type UnitSystem } from "../../../../shared/units";
 import { CameraButtons } from "../../../components/green-3d/camera-buttons";
 import { contourIntervalM, greenShape, heightRange } from "../../../components/green-3d/frame";
 import { GreenView } from "../../../components/green-3d/green-view";
@@ -10,20 +11,29 @@ import { SlopeLegend } from "../../../components/green-3d/slope-legend";
 import { aimWords, fallLineWords, holeWidthsWords } from "../../../components/green-3d/words";
 import { Alert, Button, Card, PageHeader, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
-import { useMe } from "../../auth/api/get-me";
+import type { ReadKey } from "../../../lib/read-url";
+import { useUnits } from "../../auth/hooks/use-units";
 import { replayOf, useRehearseReads } from "../hooks/use-rehearse-reads";
-import { decodeRehearseQuery, encodeRehearseQuery, type RehearsePutt } from "../utils/rehearse-query";
+import { decodeRehearse, encodeRehearse, type RehearsePutt } from "../utils/rehearse-putt";
 import { PaceControl } from "./pace-control";
 import { PuttEditor } from "./putt-editor";
 import { ReadNumbers } from "./read-numbers";
+
+const READ_WORDS: Record<ReadKey, string> = {
+  distanceM: "distance",
+  slopePct: "slope",
+  fallLineDeg: "fall line",
+  stimpFt: "Stimp",
+  rollPastM: "roll-past",
+  entrySpeedMps: "entry speed",
+};
 
 const EXAGGERATION = 5;
 
 export function RehearsePage() {
   const [params, setParams] = useSearchParams();
-  const { putt, replaced } = useMemo(() => decodeRehearseQuery(params), [params]);
-  const me = useMe();
-  const units: UnitSystem = me.data?.preferences.units ?? "imperial";
+  const { units } = useUnits();
+  const { putt, replaced, fromEntrySpeedMps, clampedRollPastM } = useMemo(() => decodeRehearse(params, units), [params, units]);
   const greenKey = `${putt.distanceM}|${putt.slopePct}|${putt.fallLineDeg}|${putt.stimpFt}`;
   return (
     <>
@@ -35,15 +45,27 @@ export function RehearsePage() {
       />
       {replaced.length > 0 ? (
         <Alert tone="warning" className="mb-4">
-          Some numbers in the link could not be used ({replaced.join(", ")}), so the usual values stand in for them.
+          Some numbers in the link could not be used ({replaced.map((k) => READ_WORDS[k]).join(", ")}), so the usual values stand in for them.
+        </Alert>
+      ) : null}
+      {fromEntrySpeedMps !== null ? (
+        <Alert tone="info" className="mb-4">
+          The read gave its pace as reaching the hole at {formatSpeed(fromEntrySpeedMps, units)}: here that is a ball finishing{" "}
+          {formatShort(putt.rollPastM, units)} past if it misses.
+        </Alert>
+      ) : null}
+      {clampedRollPastM !== null ? (
+        <Alert tone="info" className="mb-4">
+          The read finishes {formatShort(clampedRollPastM, units)} past; the pace control stops at {formatShort(putt.rollPastM, units)}, so the
+          firmest pace here is shown.
         </Alert>
       ) : null}
       <RehearseView
         key={greenKey}
         putt={putt}
         units={units}
-        onPuttChange={(next) => setParams(encodeRehearseQuery(next))}
-        onPaceSettled={(rollPastM) => setParams(encodeRehearseQuery({ ...putt, rollPastM }), { replace: true, preventScrollReset: true })}
+        onPuttChange={(next) => setParams(encodeRehearse(next))}
+        onPaceSettled={(rollPastM) => setParams(encodeRehearse({ ...putt, rollPastM }), { replace: true, preventScrollReset: true })}
       />
     </>
   );
@@ -124,7 +146,7 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
   }
 
   const sceneLabel = current.ok
-    ? `A ${putt.distanceM.toFixed(1)} metre putt on a green that ${fallLineWords(putt.fallLineDeg)}; aim ${aimWords(current.read.aimOffsetM, units, current.read.startLineDeg)}.`
+    ? `A ${formatLength(putt.distanceM, units)} putt on a green that ${fallLineWords(putt.fallLineDeg)}; aim ${aimWords(current.read.aimOffsetM, units, current.read.startLineDeg)}.`
     : "The putt on the green.";
 
   return (
@@ -203,7 +225,8 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
           use it as a starting point for your own judgement.
         </p>
         <p className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
-          <TextLink to={paths.read.href(encodeRehearseQuery({ ...putt, rollPastM }))}>Open in the read calculator</TextLink>
+          <TextLink to={paths.read.href(encodeRehearse({ ...putt, rollPastM }))}>Open in the read calculator</TextLink>
+          <TextLink to={paths.breakChart.href(encodeRehearse({ ...putt, rollPastM }))}>Break chart for this green</TextLink>
           <TextLink to={paths.train.href()}>Practise reading putts</TextLink>
         </p>
       </div>
@@ -235,9 +258,6 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
 }
 
 function puttWords(p: RehearsePutt, units: UnitSystem): string {
-  return `${formatLengthShort(p.distanceM, units)}, ${p.slopePct} %, Stimp ${p.stimpFt}, the green ${fallLineWords(p.fallLineDeg)}`;
+  return `${formatLength(p.distanceM, units)}, ${formatSlope(p.slopePct)}, ${stimpText(p.stimpFt)}, the green ${fallLineWords(p.fallLineDeg)}`;
 }
 
-function formatLengthShort(m: number, units: UnitSystem): string {
-  return `${Number(toLongUnit(m, units).toFixed(units === "metric" ? 2 : 1))} ${longUnitLabel(units)}`;
-}

@@ -1,7 +1,7 @@
 import { useMemo } from "react";
 import { simulateRoll, solveRead, type Read, type ReadResult } from "../../../../physics";
 import type { Replay } from "../../../components/green-3d/scene-types";
-import { ROLL_PAST_RANGE_M, type RehearsePutt } from "../utils/rehearse-query";
+import { ROLL_PAST_RANGE_M, type RehearsePutt } from "../utils/rehearse-putt";
 
 type Green = Omit<RehearsePutt, "rollPastM">;
 

@@ -1,3 +1,4 @@
+import { formatDate } from "../../../../shared/format";
 import clsx from "clsx";
 import type { UnitSystem } from "../../../../shared/units";
 import { Alert, InputField, TableScroller } from "../../../components/ui";
@@ -7,8 +8,7 @@ import type { CompareParams } from "../api/types";
 import { compareRows, verdict } from "../utils/chart-data";
 import { CompareChart } from "./lazy-charts";
 
-const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", timeZone: "UTC" });
-const d = (iso: string) => dateFormat.format(Date.parse(`${iso}T00:00:00Z`));
+const d = (iso: string) => formatDate(iso, "day");
 
 export type CompareSectionProps = {
   params: CompareParams;
@@ -24,7 +24,8 @@ export function CompareSection({ params, units, onChange }: CompareSectionProps)
   const compare = useCompare(params);
   const aLabel = `A: ${d(params.aFrom)} – ${d(params.aTo)}`;
   const bLabel = `B: ${d(params.bFrom)} – ${d(params.bTo)}`;
-  const set = (k: keyof Pick<CompareParams, "aFrom" | "aTo" | "bFrom" | "bTo">, v: string) => v && onChange({ aFrom: params.aFrom, aTo: params.aTo, bFrom: params.bFrom, bTo: params.bTo, [k]: v });
+  const set = (k: keyof Pick<CompareParams, "aFrom" | "aTo" | "bFrom" | "bTo">, v: string) =>
+    v && onChange({ aFrom: params.aFrom, aTo: params.aTo, bFrom: params.bFrom, bTo: params.bTo, [k]: v });
 
   return (
     <div className="flex flex-col gap-4">
@@ -34,7 +35,11 @@ export function CompareSection({ params, units, onChange }: CompareSectionProps)
         <InputField label="B from" type="date" value={params.bFrom} max={params.bTo} onChange={(e) => set("bFrom", e.target.value)} />
         <InputField label="B to" type="date" value={params.bTo} min={params.bFrom} onChange={(e) => set("bTo", e.target.value)} />
       </div>
-      {compare.isError ? <Alert tone="error" title="Could not compare the periods">{errorMessage(compare.error)}</Alert> : null}
+      {compare.isError ? (
+        <Alert tone="error" title="Could not compare the periods">
+          {errorMessage(compare.error)}
+        </Alert>
+      ) : null}
       {compare.data ? (
         (() => {
           const rows = compareRows(compare.data, units);
@@ -43,10 +48,13 @@ export function CompareSection({ params, units, onChange }: CompareSectionProps)
           const bN = compare.data.overall.b.attempts;
           return (
             <>
-              {compare.data.overlap ? <Alert tone="warning">The two periods overlap: putts in both count twice, and the test then overstates the evidence.</Alert> : null}
+              {compare.data.overlap ? (
+                <Alert tone="warning">The two periods overlap: putts in both count twice, and the test then overstates the evidence.</Alert>
+              ) : null}
               <p className={clsx("rounded-xl px-4 py-3", overall.tone === "real" ? "bg-ok-50 text-ok-800" : "bg-ink-50 text-ink-800")}>
                 <span className="font-semibold">All distances: </span>
-                {fmt(compare.data.overall.a.rate === null ? null : compare.data.overall.a.rate * 100)} in A ({aN} putts), {fmt(compare.data.overall.b.rate === null ? null : compare.data.overall.b.rate * 100)} in B ({bN} putts) — {overall.words}.
+                {fmt(compare.data.overall.a.rate === null ? null : compare.data.overall.a.rate * 100)} in A ({aN} putts),{" "}
+                {fmt(compare.data.overall.b.rate === null ? null : compare.data.overall.b.rate * 100)} in B ({bN} putts) — {overall.words}.
                 {aN > 0 && bN > 0 ? " The mix of distances can differ between the periods; the bands below compare like with like." : ""}
               </p>
               {aN + bN > 0 ? <CompareChart rows={rows} aLabel={aLabel} bLabel={bLabel} /> : null}
@@ -89,7 +97,14 @@ export function CompareSection({ params, units, onChange }: CompareSectionProps)
                       </tr>
                       <tr>
                         <td colSpan={3} className="pt-1 pr-4 pb-2 pl-2 text-right text-sm">
-                          <span className={clsx(r.verdict.tone === "real" && "font-medium text-ok-800", r.verdict.tone === "none" && "text-ink-400")}>{r.verdict.words}</span>
+                          <span
+                            className={clsx(
+                              r.verdict.tone === "real" && "font-medium text-ok-800",
+                              r.verdict.tone === "none" && "text-ink-400",
+                            )}
+                          >
+                            {r.verdict.words}
+                          </span>
                           {r.caution ? <span className="block text-xs text-warn-800">{r.caution}</span> : null}
                         </td>
                       </tr>
@@ -98,8 +113,8 @@ export function CompareSection({ params, units, onChange }: CompareSectionProps)
                 </table>
               </TableScroller>
               <p className="text-xs text-ink-500">
-                “Likely a real change”: a pooled two-proportion z-test gives p below 0.05 — a difference this large would turn up by chance less than one time in twenty.
-                Otherwise it “could be chance”. With few putts the test is rough; the intervals say more.
+                “Likely a real change”: a pooled two-proportion z-test gives p below 0.05 — a difference this large would turn up by chance
+                less than one time in twenty. Otherwise it “could be chance”. With few putts the test is rough; the intervals say more.
               </p>
             </>
           );

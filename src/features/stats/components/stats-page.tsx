@@ -2,7 +2,7 @@ import { useMemo, type ReactNode } from "react";
 import { useSearchParams } from "react-router";
 import { ButtonLink, Card, CardTitle, EmptyState, InputField, PageHeader, SelectField } from "../../../components/ui";
 import { paths } from "../../../config/paths";
-import { useUnits } from "../hooks/use-units";
+import { useUnits } from "../../auth/hooks/use-units";
 import { bandsParam } from "../utils/bands";
 import { addDays, statsView } from "../utils/stats-query";
 import { BandEditor } from "./band-editor";
@@ -58,7 +58,7 @@ export function StatsPage() {
  * carries the player's id; the server decides whether the viewer may read it (server/lib/player-access.ts).
  */
 export function StatsBody({ player }: { player?: { id: string; name: string } }) {
-  const units = useUnits();
+  const { units } = useUnits();
   const [query, setQuery] = useSearchParams();
   const day = today();
   const raw = useMemo(() => statsView(new URLSearchParams(query.toString()), day), [query, day]);

@@ -1,5 +1,6 @@
 // Pure data shaping for the make-rate charts and tables: what the API answers, laid out per band in the user's
 // units, with the tour baseline beside it and the cautions a small sample needs.
+import { formatDate } from "../../../../shared/format";
 import { interpolateBaseline, type BaselineSeries } from "../../../../shared/stats/baseline";
 import type { UnitSystem } from "../../../../shared/units";
 import type { BandRate, Compare, Rate, SessionStat, Trend } from "../api/types";
@@ -58,7 +59,10 @@ export function makeRateRows(bands: ReadonlyArray<BandRate>, units: UnitSystem, 
       lo,
       hi,
       range: lo !== null && hi !== null ? [lo, hi] : null,
-      err: lo !== null && hi !== null && b.rate !== null ? [Math.round((pct(b.rate)! - lo) * 10) / 10, Math.round((hi - pct(b.rate)!) * 10) / 10] : null,
+      err:
+        lo !== null && hi !== null && b.rate !== null
+          ? [Math.round((pct(b.rate)! - lo) * 10) / 10, Math.round((hi - pct(b.rate)!) * 10) / 10]
+          : null,
       tour: tour ? pct(tourRateForBand(tour, b.fromM, b.toM)) : null,
       caution: sampleCaution(b.attempts),
     };
@@ -74,12 +78,9 @@ export function totalAttempts(bands: ReadonlyArray<{ attempts: number }>): numbe
 export type TrendRow = { weekStart: string; label: string } & Record<string, number | string | null>;
 export type TrendSeries = { key: string; band: number; label: string };
 
-const weekFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", timeZone: "UTC" });
-
-/** "6 May": the Monday a week starts on. */
+/** "6 May" / "May 6" (the reader's locale): the Monday a week starts on. */
 export function weekLabel(isoDate: string): string {
-  const t = Date.parse(`${isoDate}T00:00:00Z`);
-  return Number.isNaN(t) ? isoDate : weekFormat.format(t);
+  return formatDate(isoDate, "day");
 }
 
 /**
@@ -87,7 +88,9 @@ export function weekLabel(isoDate: string): string {
  * attempts in a band is null there, so the line has a gap rather than a false zero.
  */
 export function trendRows(trend: Trend, chosen: readonly number[], units: UnitSystem): { rows: TrendRow[]; series: TrendSeries[] } {
-  const series = chosen.filter((i) => i >= 0 && i < trend.bands.length).map((i) => ({ key: `b${i}`, band: i, label: bandLabel(trend.bands[i]!.fromM, trend.bands[i]!.toM, units) }));
+  const series = chosen
+    .filter((i) => i >= 0 && i < trend.bands.length)
+    .map((i) => ({ key: `b${i}`, band: i, label: bandLabel(trend.bands[i]!.fromM, trend.bands[i]!.toM, units) }));
   const rows = trend.weeks.map((w) => {
     const row: TrendRow = { weekStart: w.weekStart, label: weekLabel(w.weekStart) };
     for (const s of series) {
@@ -182,7 +185,8 @@ export function compareRows(compare: Compare, units: UnitSystem): CompareRow[] {
       difference: pct(b.difference),
       verdict: v,
       // Only where a test was made: "nothing to test" needs no second warning.
-      caution: v.tone !== "none" && smaller < SMALL_SAMPLE ? `${smaller} putts in the smaller period — read the intervals, not the test` : null,
+      caution:
+        v.tone !== "none" && smaller < SMALL_SAMPLE ? `${smaller} putts in the smaller period — read the intervals, not the test` : null,
     };
   });
 }
@@ -218,7 +222,12 @@ export function lagSummary(items: ReadonlyArray<SessionStat>): LagSummary {
 }
 
 /** The API's baseline series in the shape shared/stats interpolates. */
-export function toBaselineSeries(s: { label: string; source: string; firmness: string; points: { distanceFt: number; value: number }[] }): BaselineSeries {
+export function toBaselineSeries(s: {
+  label: string;
+  source: string;
+  firmness: string;
+  points: { distanceFt: number; value: number }[];
+}): BaselineSeries {
   const firmness = s.firmness === "published" || s.firmness === "memory" ? s.firmness : "secondary";
   return { label: s.label, source: s.source, firmness, points: s.points.map((p) => ({ distanceFt: p.distanceFt, value: p.value })) };
 }

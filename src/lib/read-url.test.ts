@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { decodeReadQuery, defaultReadValues, encodeReadQuery, fromReadRequest, isCompleteReadQuery, toReadRequest } from "./read-query";
+import { decodeReadQuery, decodeReadQueryChecked, defaultReadValues, encodeReadQuery, fromReadRequest, isCompleteReadQuery, toReadRequest } from "./read-url";
 
 test("a read's query is SI, in a fixed key order, and decodes back to the same values", () => {
   const v = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, paceMode: "rollPast" as const, rollPastM: 0.45, entrySpeedMps: 0.8 };
@@ -54,4 +54,24 @@ test("links stay short: floating-point dust is cut at six decimals without chang
 test("a saved read's request becomes the same link as the read it came from", () => {
   const request = { distanceM: 2.5, slopePct: 3, fallLineDeg: 135, stimpFt: 9.5, pace: { rollPastM: 0.3 } };
   expect(toReadRequest(fromReadRequest(request, "imperial"))).toEqual(request);
+});
+
+test("a link's numbers are read as a person wrote them: hex, exponents and blanks are not numbers", () => {
+  const v = decodeReadQuery(new URLSearchParams("d=0x1A&s=1e1&f=%2090%20&st=9,5&rp=0"), "metric");
+  expect(v.distanceM).toBe(3); // "0x1A" is not 26 m: the default stands
+  expect(v.slopePct).toBe(2); // nor is "1e1" 10 %
+  expect(v.fallLineDeg).toBe(90);
+  expect(v.stimpFt).toBe(9.5); // a comma decimal is a decimal
+  expect(v.rollPastM).toBe(0); // a dying pace is a pace, not a missing value
+  expect(v.paceMode).toBe("rollPast");
+});
+
+test("the checked decode (rehearse, chart) replaces out-of-range or garbled values by the defaults and names them", () => {
+  const { values, replaced } = decodeReadQueryChecked(new URLSearchParams("d=abc&s=12&f=450&st=9&rp=0.45"), "imperial");
+  expect(replaced.sort()).toEqual(["distanceM", "fallLineDeg", "slopePct"]);
+  expect(values).toMatchObject({ slopePct: 2, fallLineDeg: 90, stimpFt: 9, rollPastM: 0.45 });
+  expect(values.distanceM).toBeCloseTo(3.048, 12);
+  const entry = decodeReadQueryChecked(new URLSearchParams("d=3&s=2&f=10&st=10&es=0.9"), "metric");
+  expect(entry.replaced).toEqual([]);
+  expect(entry.values).toMatchObject({ paceMode: "entrySpeed", entrySpeedMps: 0.9 });
 });

@@ -1,7 +1,7 @@
 import { useCallback, useSyncExternalStore } from "react";
 import { UNIT_SYSTEMS, type UnitSystem } from "../../../../shared/units";
-import { useMe } from "../../auth/api/get-me";
-import { useUpdatePreferences } from "../../auth/api/update-preferences";
+import { useMe } from "../api/get-me";
+import { useUpdatePreferences } from "../api/update-preferences";
 
 const STORAGE_KEY = "borrowline.units";
 const CHANGE_EVENT = "borrowline:units";

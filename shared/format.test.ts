@@ -1,0 +1,47 @@
+import { expect, test } from "vitest";
+import { exportMetres, formatCount, formatDate, formatSpeed, formatStimp, stimpText, atHoleText } from "./format";
+import { parseDecimal } from "./units";
+
+test("a corrected Stimp reads to 0.1 ft: 9.58974358974359 is 9.6, 10 is 10", () => {
+  expect(formatStimp(9.58974358974359)).toBe("9.6");
+  expect(formatStimp(10)).toBe("10");
+  expect(formatStimp(9.96)).toBe("10");
+  expect(stimpText(11.04)).toBe("Stimp 11");
+});
+
+test("speeds are ft/s in feet and inches, m/s in metres (0.3048 m a foot)", () => {
+  expect(formatSpeed(0.9, "imperial")).toBe("3.0 ft/s");
+  expect(formatSpeed(1.637, "imperial")).toBe("5.4 ft/s");
+  expect(formatSpeed(0.9, "metric")).toBe("0.90 m/s");
+  expect(atHoleText(0.01, "imperial")).toBe("just reaching the hole, dying");
+  expect(atHoleText(0.67, "imperial")).toBe("rolling at 2.2 ft/s");
+});
+
+test("files get metres to the millimetre", () => {
+  expect(exportMetres(6 * 0.3048)).toBe(1.829);
+  expect(exportMetres(-(7 * 0.0254))).toBe(-0.178);
+  expect(String(exportMetres(0.1 + 0.2))).toBe("0.3");
+});
+
+test("one date format, in the reader's locale; a calendar day is that day in every time zone", () => {
+  expect(formatDate("2026-12-02", "date", "en-GB")).toBe("2 Dec 2026");
+  expect(formatDate("2026-12-02", "date", "en-US")).toBe("Dec 2, 2026");
+  expect(formatDate("2024-05-01", "weekday", "en-GB")).toMatch(/^Wed,? 1 May 2024$/);
+  expect(formatDate("2024-05-06", "day", "en-GB")).toBe("6 May");
+  expect(formatDate("2099-06-30", "long", "en-GB")).toMatch(/^Tuesday,? 30 June 2099$/);
+  // An instant is shown in local time; its day depends on where the reader is, but the format does not.
+  expect(formatDate("2026-12-02T12:00:00Z", "date", "de-DE")).toMatch(/^\d\. Dez\. 2026$/);
+  expect(formatDate("not a date")).toBe("not a date");
+  expect(formatCount(10000, "en-GB")).toBe("10,000");
+});
+
+test("the one number parser: comma decimals yes; hex, exponents, blanks and units no", () => {
+  expect(parseDecimal("3,5")).toBe(3.5);
+  expect(parseDecimal(" 3.5 ")).toBe(3.5);
+  expect(parseDecimal("+2")).toBe(2);
+  expect(parseDecimal(".5")).toBe(0.5);
+  expect(parseDecimal("-0.25")).toBe(-0.25);
+  for (const bad of ["0x1A", "1e3", "", "  ", "Infinity", "NaN", "3.5 ft", "1,234.5", "1.2.3", null, undefined])
+    expect(parseDecimal(bad), String(bad)).toBeNull();
+  expect(Number("0x1A")).toBe(26); // why bare Number() is not used
+});
