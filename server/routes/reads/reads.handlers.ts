@@ -4,6 +4,7 @@ import { breakChart, solveRead, type Read } from "../../../physics";
 import { idSchema } from "../../../shared/schemas/common";
 import { chartRequestSchema, readRequestSchema, saveReadSchema, type ReadResponse } from "../../../shared/schemas/reads";
 import type { Db } from "../../db/client";
+import { visibleGreen } from "../../lib/green-access";
 import { greens, savedReads } from "../../db/schema";
 import { cannotStopError, notFound } from "../../lib/http-error";
 import { currentUser } from "../../middleware/session";
@@ -66,7 +67,7 @@ export function saveRead(db: Db): RequestHandler {
     const me = currentUser(req);
     const input = body(req, saveReadSchema);
     if (input.greenId) {
-      const [green] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, input.greenId), eq(greens.ownerId, me.id)));
+      const [green] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, input.greenId), visibleGreen(me.id)));
       if (!green) throw notFound("That green");
     }
     const result = solveOrThrow(input.read);
