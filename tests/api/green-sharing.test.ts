@@ -46,7 +46,16 @@ test("PUT /api/greens/:id/squad shares the green: the squad's players see it wit
   expect(shared.body).toMatchObject({ squad: { id: squad, name: "Juniors" }, ownerName: "Coach Ash", mine: true });
 
   const list = await member.client.get("/api/greens");
-  expect(list.body.items).toEqual([expect.objectContaining({ id: green, name: "Club green", currentStimpFt: 10.5, squad: { id: squad, name: "Juniors" }, ownerName: "Coach Ash", mine: false })]);
+  expect(list.body.items).toEqual([
+    expect.objectContaining({
+      id: green,
+      name: "Club green",
+      currentStimpFt: 10.5,
+      squad: { id: squad, name: "Juniors" },
+      ownerName: "Coach Ash",
+      mine: false,
+    }),
+  ]);
   const one = await member.client.get(`/api/greens/${green}`);
   expect(one.status).toBe(200);
   expect(one.body.readings).toEqual([expect.objectContaining({ measuredOn: "2026-05-01", stimpFt: 10.5 })]);
@@ -62,11 +71,22 @@ test("a squad player logs a session on the shared green (with its Stimp) and rea
   await coach.client.put(`/api/greens/${green}/squad`, { squadId: squad });
   const session = await member.client.post("/api/sessions", { date: "2026-05-06", greenId: green });
   expect(session.status).toBe(201);
-  expect((await member.client.get(`/api/sessions/${session.body.id}`)).body).toMatchObject({ greenId: green, greenName: "Club green", stimpFt: 10.5 });
+  expect((await member.client.get(`/api/sessions/${session.body.id}`)).body).toMatchObject({
+    greenId: green,
+    greenName: "Club green",
+    stimpFt: 10.5,
+  });
   expect((await member.client.get(`/api/greens/${green}/height-map`)).status).toBe(200);
   const read = await member.client.post(`/api/greens/${green}/reads/solve`, { ball: [1, 1], hole: [1, 3], stimpFt: 10 });
   expect(read.status).toBe(200);
-  expect((await member.client.post("/api/reads", { read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } }, greenId: green })).status).toBe(201);
+  expect(
+    (
+      await member.client.post("/api/reads", {
+        read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } },
+        greenId: green,
+      })
+    ).status,
+  ).toBe(201);
   // Someone outside the squad cannot use it.
   const refused = await outsider.client.post("/api/sessions", { date: "2026-05-06", greenId: green });
   expect(refused.status).toBe(400);

@@ -3,7 +3,16 @@ import { greenInputSchema, greenPatchSchema, greenShareSchema, stimpReadingInput
 import type { AppDeps } from "../../deps";
 import { requireRole, requireUser } from "../../middleware/session";
 import { validateBody } from "../../middleware/validate";
-import { addStimpReading, createGreen, deleteGreen, deleteStimpReading, getGreen, listGreens, shareGreen, updateGreen } from "./greens.handlers";
+import {
+  addStimpReading,
+  createGreen,
+  deleteGreen,
+  deleteStimpReading,
+  getGreen,
+  listGreens,
+  shareGreen,
+  updateGreen,
+} from "./greens.handlers";
 
 export function greensRoutes({ database }: AppDeps) {
   const db = database.db;
