@@ -7,6 +7,7 @@ import "@fontsource/lexend/700.css";
 import "./index.css";
 import { AppProvider } from "./app/provider";
 import { AppRouter } from "./app/router";
+import { ServiceWorker } from "./app/service-worker";
 
 const container = document.getElementById("root");
 if (!container) throw new Error("Missing #root element in index.html");
@@ -15,6 +16,7 @@ createRoot(container).render(
   <StrictMode>
     <AppProvider>
       <AppRouter />
+      <ServiceWorker />
     </AppProvider>
   </StrictMode>,
 );
