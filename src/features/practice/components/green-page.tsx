@@ -220,7 +220,7 @@ function ShareCard({ green }: { green: Green }) {
             }}
             error={fields.squadId}
           />
-          <Button type="submit" disabled={!changed} loading={share.isPending} loadingText="Saving…" className="sm:mt-7">
+          <Button type="submit" disabled={!changed} loading={share.isPending} loadingText="Saving…" className="sm:mt-7 sm:justify-self-start">
             {choice === "" && green.squad ? "Stop sharing" : "Share"}
           </Button>
           {share.isError && !fields.squadId ? <Alert tone="error" className="sm:col-span-2">{errorMessage(share.error)}</Alert> : null}

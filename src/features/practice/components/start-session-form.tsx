@@ -80,8 +80,9 @@ export function StartSessionForm() {
   const greenOptions = [
     { value: "", label: greens.isPending ? "Loading greens…" : "No particular green" },
     ...own.map((g) => {
-      const label = g.currentStimpFt != null ? `${g.name} (Stimp ${g.currentStimpFt.toFixed(1)})` : g.name;
-      return { value: g.id, label: g.mine || !g.squad ? label : `${label}, ${g.squad.name}` };
+      // A squad's green names its squad first: on a phone the end of a long option is cut off (the Stimp field shows it).
+      const name = g.mine || !g.squad ? g.name : `${g.name}, ${g.squad.name}`;
+      return { value: g.id, label: g.currentStimpFt != null ? `${name} (Stimp ${g.currentStimpFt.toFixed(1)})` : name };
     }),
   ];
 
