@@ -18,6 +18,7 @@ import { createLogger } from "./lib/logger";
 import { postgresRateLimits } from "./lib/rate-limit-store";
 import { createMailer } from "./lib/mailer";
 import { makePrivate, usePrivateUmask } from "./lib/private-files";
+import { keepInInbox } from "./lib/dev-inbox";
 import { startSmtpFake, type SmtpFake } from "./lib/smtp-fake";
 
 export type StartOptions = {
@@ -101,7 +102,7 @@ export async function start(options: StartOptions): Promise<Running> {
 
     let smtpFake: SmtpFake | undefined;
     if (!env.SMTP_URL) {
-      smtpFake = await startSmtpFake();
+      smtpFake = await startSmtpFake({ keep: keepInInbox(database.db) });
       releases.unshift(() => smtpFake!.close());
       logger.warn(
         { smtp: smtpFake.url },

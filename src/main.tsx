@@ -1,3 +1,4 @@
+import "./lib/zod-config";
 import { StrictMode } from "react";
 import { createRoot } from "react-dom/client";
 import "@fontsource/lexend/400.css";

@@ -280,3 +280,22 @@ export const adminAudit = pgTable(
   },
   (t) => [index("admin_audit_created_idx").on(t.createdAt)],
 );
+
+/**
+ * The local e-mail fake's inbox (no SMTP_URL): every message a server's fake received, so that any server on the
+ * database shows the same mailbox (behind a load balancer the mail and the admin reading it may be on different
+ * servers). Only the newest few hundred are kept; only an admin reads it (routes/dev).
+ */
+export const devMail = pgTable(
+  "dev_mail",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    fromAddress: text("from_address").notNull(),
+    toAddresses: jsonb("to_addresses").$type<string[]>().notNull(),
+    subject: text("subject").notNull(),
+    text: text("text").notNull(),
+    html: text("html").notNull(),
+    receivedAt: timestamp("received_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [index("dev_mail_received_idx").on(t.receivedAt)],
+);

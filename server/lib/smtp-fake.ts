@@ -24,7 +24,16 @@ export type SmtpFake = {
 
 const MAX_KEPT = 200;
 
-export async function startSmtpFake(port = 0): Promise<SmtpFake> {
+export type SmtpFakeOptions = {
+  port?: number;
+  /**
+   * Keeps a received message somewhere lasting (the database's inbox, db/schema.ts `devMail`). The SMTP "250 OK"
+   * waits for it, so a message the sender saw accepted is in the inbox; a failure is an SMTP error to the sender.
+   */
+  keep?: (mail: ReceivedMail) => Promise<void>;
+};
+
+export async function startSmtpFake({ port = 0, keep }: SmtpFakeOptions = {}): Promise<SmtpFake> {
   const messages: ReceivedMail[] = [];
   const waiters = new Set<{ match: (m: ReceivedMail) => boolean; resolve: (m: ReceivedMail) => void }>();
   let counter = 0;
@@ -36,7 +45,7 @@ export async function startSmtpFake(port = 0): Promise<SmtpFake> {
     size: 5 * 1024 * 1024,
     onData(stream, _session, callback) {
       simpleParser(stream)
-        .then((parsed) => {
+        .then(async (parsed) => {
           const toField = Array.isArray(parsed.to) ? parsed.to : parsed.to ? [parsed.to] : [];
           const mail: ReceivedMail = {
             id: String(++counter),
@@ -47,6 +56,7 @@ export async function startSmtpFake(port = 0): Promise<SmtpFake> {
             html: typeof parsed.html === "string" ? parsed.html : "",
             receivedAt: new Date().toISOString(),
           };
+          if (keep) await keep(mail);
           messages.push(mail);
           if (messages.length > MAX_KEPT) messages.shift();
           for (const w of waiters) {

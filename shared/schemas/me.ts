@@ -18,3 +18,7 @@ export const meSchema = z.object({
   preferences: preferencesSchema,
 });
 export type Me = z.infer<typeof meSchema>;
+
+/** GET /api/me when nobody is signed in: a 200 that says so (a page asking "who is here?" is not an error). */
+export const signedOutMeSchema = z.object({ user: z.null(), preferences: z.null() }).strict();
+export type SignedOutMe = z.infer<typeof signedOutMeSchema>;

@@ -69,7 +69,7 @@ test("POST /api/auth/sign-in/email signs in; a wrong password is 401", async () 
   const wrong = new HttpClient(server.url);
   const bad = await wrong.post("/api/auth/sign-in/email", { email, password: "not-the-password" });
   expect(bad.status).toBe(401);
-  expect((await wrong.get("/api/me")).status).toBe(401);
+  expect((await wrong.get("/api/me")).body).toEqual({ user: null, preferences: null });
 
   const right = new HttpClient(server.url);
   const ok = await right.post("/api/auth/sign-in/email", { email, password: TEST_PASSWORD });
@@ -82,7 +82,7 @@ test("POST /api/auth/sign-out ends the session", async () => {
   expect((await client.get("/api/me")).status).toBe(200);
   const out = await client.post("/api/auth/sign-out");
   expect(out.status).toBe(200);
-  expect((await client.get("/api/me")).status).toBe(401);
+  expect((await client.get("/api/me")).body).toEqual({ user: null, preferences: null });
 });
 
 test("GET /api/auth/get-session reads the session", async () => {
@@ -140,9 +140,15 @@ test("PATCH /api/me/preferences remembers units and rejects unknown ones with th
 });
 
 test("signed-out requests to a signed-in route are 401 with the error shape", async () => {
-  const res = await new HttpClient(server.url).get("/api/me");
+  const res = await new HttpClient(server.url).get("/api/sessions");
   expect(res.status).toBe(401);
   expect(res.body).toEqual({ error: { code: "unauthenticated", message: expect.any(String) } });
+});
+
+test("GET /api/me signed out is a 200 saying nobody is signed in (no error in a signed-out page's console), and reveals nothing", async () => {
+  const res = await new HttpClient(server.url).get("/api/me");
+  expect(res.status).toBe(200);
+  expect(res.body).toEqual({ user: null, preferences: null });
 });
 
 test("unknown /api paths are a JSON 404; malformed JSON is a 400; a non-JSON body is 415", async () => {

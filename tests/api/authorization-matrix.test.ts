@@ -295,7 +295,8 @@ const rows: Row[] = [
   },
 
   // Me and saved reads: one's own only.
-  { route: "GET /api/me", target: "own account", expect: SIGNED_IN(200), reveals: "p1Id", revealsTo: ["p1"] },
+  // Signed out, "who am I?" answers { user: null } (a 200, so a signed-out page logs no error) and reveals nothing.
+  { route: "GET /api/me", target: "own account", expect: { ...SIGNED_IN(200), anon: 200 }, reveals: "p1Id", revealsTo: ["p1"] },
   { route: "PATCH /api/me/preferences", target: "own account", body: () => ({ units: "imperial" }), expect: SIGNED_IN(200) },
   { route: "GET /api/reads", target: "own saved reads", expect: SIGNED_IN(200), reveals: "p1ReadLabel" },
   { route: "POST /api/reads", target: "own saved reads", body: () => ({ read: sideHill, label: "mine" }), expect: SIGNED_IN(201) },

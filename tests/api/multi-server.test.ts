@@ -115,3 +115,35 @@ test.skipIf(!adminUrl)("the sign-in rate limit holds across two servers on one d
   b.child.kill("SIGTERM");
   await Promise.all([a.exited, b.exited]);
 }, 120_000);
+
+test.skipIf(!adminUrl)("the local mail fake's inbox is one across servers: mail sent by one is read by an admin on the other", async () => {
+  const db = await freshPostgresDatabase(adminUrl!);
+  drops.push(db.drop);
+  const [a, b] = await Promise.all([spawnServer(db.url), spawnServer(db.url)]);
+  const golfer = uniqueEmail("inbox-a");
+  // The verification e-mail is sent by server A, through A's own local fake.
+  expect((await new HttpClient(a.url).post("/api/auth/sign-up/email", { name: "Mail On A", email: golfer, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+  const adminEmail = uniqueEmail("inbox-admin");
+  expect((await new HttpClient(b.url).post("/api/auth/sign-up/email", { name: "Admin On B", email: adminEmail, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+  const client = new pg.Client({ connectionString: db.url });
+  await client.connect();
+  try {
+    await client.query(`update "user" set role = 'admin' where email = $1`, [adminEmail]);
+  } finally {
+    await client.end();
+  }
+  const admin = new HttpClient(b.url);
+  expect((await admin.post("/api/auth/sign-in/email", { email: adminEmail, password: TEST_PASSWORD })).status).toBe(200);
+  // Sending is asynchronous to the sign-up answer: poll B's mailbox briefly for A's message.
+  let seen = false;
+  for (let i = 0; i < 50 && !seen; i++) {
+    const read = await admin.get("/api/dev/mail");
+    expect(read.status).toBe(200);
+    seen = (read.body.messages as { to: string[] }[]).some((m) => m.to.includes(golfer));
+    if (!seen) await new Promise((r) => setTimeout(r, 200));
+  }
+  expect(seen).toBe(true);
+  a.child.kill("SIGTERM");
+  b.child.kill("SIGTERM");
+  await Promise.all([a.exited, b.exited]);
+}, 120_000);

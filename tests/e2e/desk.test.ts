@@ -187,3 +187,34 @@ test("on a 390 × 844 phone the main action of each page shows without scrolling
   await screenshot(p, "desk-phone-run-rung");
   expect(realErrors(player)).toEqual([]);
 });
+
+/** Elements a Tab reaches (tabindex ≥ 0, or natively focusable) that have no accessible name at all (a rough check: author labels, content, a label element). */
+async function unnamedTabStops(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    const focusable = document.querySelectorAll<HTMLElement>('a[href], button, input, select, textarea, [tabindex]:not([tabindex="-1"])');
+    return [...focusable]
+      .filter((el) => !(el as HTMLButtonElement).disabled && el.getClientRects().length > 0)
+      .filter((el) => {
+        // A drawing (or an "application") is named by its author only, never by the text drawn inside it.
+        const authorOnly = el instanceof SVGElement || ["application", "img", "figure", "group", "region"].includes(el.getAttribute("role") ?? "");
+        if (authorOnly) return !(el.getAttribute("aria-label")?.trim() || el.getAttribute("aria-labelledby") || el.querySelector(":scope > title")?.textContent?.trim());
+        const labelled = el.getAttribute("aria-labelledby")?.split(" ").some((id) => (document.getElementById(id)?.textContent ?? "").trim() !== "");
+        const labels = (el as HTMLInputElement).labels;
+        return !(el.getAttribute("aria-label")?.trim() || labelled || el.getAttribute("title")?.trim() || (el.textContent ?? "").trim() || (labels && labels.length > 0) || (el as HTMLInputElement).placeholder);
+      })
+      .map((el) => el.outerHTML.slice(0, 120));
+  });
+}
+
+test("the make-rates page and the coach's squad charts have no Tab stop without a name (charts are labelled figures)", async () => {
+  const player = await signedIn(DEMO_PLAYERS[1]!);
+  await player.page.goto(`${server.url}/stats`);
+  await player.page.locator("svg.recharts-surface").first().waitFor();
+  expect(await unnamedTabStops(player.page)).toEqual([]);
+  const coach = await signedIn(DEMO_COACH);
+  await coach.page.goto(`${server.url}/coach`);
+  await coach.page.locator("svg.recharts-surface").first().waitFor();
+  expect(await unnamedTabStops(coach.page)).toEqual([]);
+  expect(realErrors(player)).toEqual([]);
+  expect(realErrors(coach)).toEqual([]);
+}, 120_000);

@@ -1,15 +1,17 @@
 import { Router } from "express";
 import type { AppDeps } from "../../deps";
+import { readInbox } from "../../lib/dev-inbox";
 import { requireRole } from "../../middleware/session";
 
 /**
- * The local SMTP fake's mailbox (no SMTP_URL set): every e-mail the server sent, reset links included, so only
- * a signed-in admin may read it, in every mode.
+ * The local SMTP fake's mailbox (no SMTP_URL set): every e-mail the servers on this database sent, reset links
+ * included, so only a signed-in admin may read it, in every mode. Read from the database (lib/dev-inbox.ts), so
+ * every server shows the same mailbox.
  */
-export function devRoutes({ smtpFake }: AppDeps) {
+export function devRoutes({ database }: AppDeps) {
   const router = Router();
-  router.get("/dev/mail", requireRole("admin"), (_req, res) => {
-    res.json({ messages: [...(smtpFake?.messages ?? [])].reverse() });
+  router.get("/dev/mail", requireRole("admin"), async (_req, res) => {
+    res.json({ messages: await readInbox(database.db) });
   });
   return router;
 }

@@ -1,6 +1,6 @@
 import type { RequestHandler } from "express";
 import { eq } from "drizzle-orm";
-import { preferencesSchema, type Me } from "../../../shared/schemas/me";
+import { preferencesSchema, type Me, type SignedOutMe } from "../../../shared/schemas/me";
 import type { Db } from "../../db/client";
 import { user as userTable, userPreferences } from "../../db/schema";
 import { currentUser, type SessionUser } from "../../middleware/session";
@@ -20,7 +20,12 @@ async function meOf(db: Db, user: SessionUser): Promise<Me> {
 
 export function getMe(db: Db): RequestHandler {
   return async (req, res) => {
-    res.json(await meOf(db, currentUser(req)));
+    if (!req.user) {
+      const nobody: SignedOutMe = { user: null, preferences: null };
+      res.json(nobody);
+      return;
+    }
+    res.json(await meOf(db, req.user));
   };
 }
 

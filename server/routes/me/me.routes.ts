@@ -7,7 +7,8 @@ import { getMe, updatePreferences } from "./me.handlers";
 
 export function meRoutes({ database }: AppDeps) {
   const router = Router();
-  router.get("/me", requireUser, getMe(database.db));
+  // Open to everyone: signed out it answers { user: null } (no 401 in the console of every signed-out page).
+  router.get("/me", getMe(database.db));
   router.patch("/me/preferences", requireUser, validateBody(preferencesSchema), updatePreferences(database.db));
   return router;
 }

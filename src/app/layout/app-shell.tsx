@@ -3,6 +3,7 @@ import { VerifyEmailNotice } from "../../features/auth/components/verify-email-n
 import { Link } from "react-router";
 import { paths } from "../../config/paths";
 import { useDevMailAvailable } from "../../features/dev-mail/api/get-dev-mail";
+import { useFocusHeadingOnNavigate } from "./focus-on-navigate";
 import { SectionNav } from "./section-nav";
 import { TopBar } from "./top-bar";
 
@@ -22,6 +23,7 @@ function DevMailLink() {
 }
 
 export function AppShell() {
+  useFocusHeadingOnNavigate();
   return (
     <div className="flex min-h-dvh flex-col">
       <a

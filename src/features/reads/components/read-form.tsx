@@ -185,9 +185,9 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
 
       <section aria-labelledby={`${ids.dial}-h`} className="flex flex-col gap-4">
         <div>
-          <h3 id={`${ids.dial}-h`} className="text-sm font-medium text-ink-800">
+          <h2 id={`${ids.dial}-h`} className="text-sm font-medium text-ink-800">
             Which way the green falls
-          </h3>
+          </h2>
           <p id={ids.dialHelp} className="text-sm text-ink-500">
             Drag the handle to where the ground runs down to, or use the arrow keys.
             {Number.isFinite(dialDeg) ? <span className="font-medium text-ink-800"> Now: {describeFallLine(dialDeg)}.</span> : null}

@@ -17,21 +17,20 @@ import {
   XAxis,
   YAxis,
 } from "recharts";
+import { CHART_GRID, ROLE_COLOURS, patternId, seriesLook } from "../../../lib/chart-palette";
+import { ChartPatterns, legendProps, seriesDot, tickStyle, figureChart } from "../../../components/charts/chart-parts";
 import type { CompareRow, MakeRateRow, SessionRow, TrendRow, TrendSeries } from "../utils/chart-data";
 
-export const COLOURS = {
-  you: "#131b2e",
-  band: "#8894b0",
-  tour: "#c4462a",
-  a: "#8894b0",
-  b: "#131b2e",
-  gain: "#2c7463",
-  loss: "#b3282f",
-  series: ["#131b2e", "#c4462a", "#2c7463", "#a86a12", "#1d4ed8", "#7c3aed", "#0e7490"],
+const COLOURS = {
+  you: ROLE_COLOURS.you,
+  band: ROLE_COLOURS.band,
+  tour: ROLE_COLOURS.tour,
+  gain: ROLE_COLOURS.gain,
+  loss: ROLE_COLOURS.loss,
 };
 
-const grid = <CartesianGrid stroke="rgb(19 27 46 / 0.08)" vertical={false} />;
-const percentAxis = <YAxis domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} unit=" %" width={52} tick={{ fontSize: 12 }} />;
+const grid = <CartesianGrid stroke={CHART_GRID} vertical={false} />;
+const percentAxis = <YAxis domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} unit=" %" width={52} tick={tickStyle} />;
 const pct = (v: unknown) => (typeof v === "number" ? `${v.toFixed(1)} %` : "–");
 
 export type MakeRateChartProps = { rows: MakeRateRow[]; tourSource: string | null; /** The line's name: "Your make rate", or the player's for their coach. */ rateLabel?: string };
@@ -42,9 +41,9 @@ export function MakeRateChart({ rows, tourSource, rateLabel = "Your make rate" }
     <figure className="flex flex-col gap-2">
       <div className="h-72 w-full sm:h-80" role="img" aria-label="Make rate by distance band with its 95 % interval, and the tour one-putt rate for comparison">
         <ResponsiveContainer width="100%" height="100%">
-          <ComposedChart data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
+          <ComposedChart {...figureChart} data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
             {grid}
-            <XAxis dataKey="label" tick={{ fontSize: 12 }} interval={0} angle={rows.length > 6 ? -30 : 0} textAnchor={rows.length > 6 ? "end" : "middle"} height={rows.length > 6 ? 48 : 28} />
+            <XAxis dataKey="label" tick={tickStyle} interval={0} angle={rows.length > 6 ? -30 : 0} textAnchor={rows.length > 6 ? "end" : "middle"} height={rows.length > 6 ? 48 : 28} />
             {percentAxis}
             <Tooltip
               formatter={(v) => (Array.isArray(v) ? `${pct(v[0])} – ${pct(v[1])}` : pct(v))}
@@ -53,11 +52,11 @@ export function MakeRateChart({ rows, tourSource, rateLabel = "Your make rate" }
                 return row ? `${l}: ${row.made} of ${row.attempts} holed` : String(l);
               }}
             />
-            <Legend verticalAlign="top" height={28} iconSize={10} wrapperStyle={{ fontSize: 12 }} />
-            <Area type="linear" dataKey="range" name="95 % interval" stroke="none" fill={COLOURS.band} fillOpacity={0.3} connectNulls={false} isAnimationActive={false} />
-            <Line type="linear" dataKey="tour" name="Tour one-putt rate" stroke={COLOURS.tour} strokeWidth={2} strokeDasharray="6 4" dot={{ r: 3 }} isAnimationActive={false} />
-            <Line type="linear" dataKey="rate" name={rateLabel} stroke={COLOURS.you} strokeWidth={2.5} dot={{ r: 4, fill: COLOURS.you }} connectNulls={false} isAnimationActive={false}>
-              <ErrorBar dataKey="err" width={6} stroke={COLOURS.band} strokeWidth={1.5} direction="y" />
+            <Legend verticalAlign="top" height={28} {...legendProps} />
+            <Area type="linear" dataKey="range" name="95 % interval" legendType="rect" stroke="none" fill={COLOURS.band} fillOpacity={0.3} connectNulls={false} isAnimationActive={false} />
+            <Line type="linear" dataKey="tour" name="Tour one-putt rate" legendType="triangle" stroke={COLOURS.tour} strokeWidth={2} strokeDasharray="6 4" dot={seriesDot(1, 40)} isAnimationActive={false} />
+            <Line type="linear" dataKey="rate" name={rateLabel} legendType="circle" stroke={COLOURS.you} strokeWidth={2.5} dot={seriesDot(0, 56)} connectNulls={false} isAnimationActive={false}>
+              <ErrorBar dataKey="err" width={6} stroke={COLOURS.you} strokeWidth={1.5} direction="y" />
             </Line>
           </ComposedChart>
         </ResponsiveContainer>
@@ -74,9 +73,9 @@ export function TrendChart({ rows, series, rolling }: TrendChartProps) {
   return (
     <div className="h-72 w-full sm:h-80" role="img" aria-label={`Make rate per ${rolling ? "rolling window" : "week"} for the chosen distance bands`}>
       <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={rows} margin={{ top: 8, right: 12, bottom: 4, left: 0 }}>
+        <LineChart {...figureChart} data={rows} margin={{ top: 8, right: 12, bottom: 4, left: 0 }}>
           {grid}
-          <XAxis dataKey="label" tick={{ fontSize: 12 }} minTickGap={16} />
+          <XAxis dataKey="label" tick={tickStyle} minTickGap={16} />
           {percentAxis}
           <Tooltip
             formatter={(v, _name, item) => {
@@ -85,16 +84,18 @@ export function TrendChart({ rows, series, rolling }: TrendChartProps) {
             }}
             labelFormatter={(l) => (rolling ? `Window ending the week of ${l}` : `Week of ${l}`)}
           />
-          <Legend verticalAlign="top" height={28} iconSize={10} wrapperStyle={{ fontSize: 12 }} />
+          <Legend verticalAlign="top" height={28} {...legendProps} />
           {series.map((s, i) => (
             <Line
               key={s.key}
               type="monotone"
               dataKey={s.key}
               name={s.label}
-              stroke={COLOURS.series[i % COLOURS.series.length]}
+              legendType={seriesLook(i).shape}
+              stroke={seriesLook(i).colour}
+              strokeDasharray={seriesLook(i).dash}
               strokeWidth={2.5}
-              dot={{ r: 3 }}
+              dot={seriesDot(i)}
               connectNulls={false}
               isAnimationActive={false}
             />
@@ -112,17 +113,18 @@ export function CompareChart({ rows, aLabel, bLabel }: CompareChartProps) {
   return (
     <div className="h-72 w-full sm:h-80" role="img" aria-label="Make rate per band in the two periods, with 95 % intervals">
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }} barGap={2}>
+        <BarChart {...figureChart} data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }} barGap={2}>
           {grid}
-          <XAxis dataKey="label" tick={{ fontSize: 12 }} interval={0} angle={rows.length > 6 ? -30 : 0} textAnchor={rows.length > 6 ? "end" : "middle"} height={rows.length > 6 ? 48 : 28} />
+          <XAxis dataKey="label" tick={tickStyle} interval={0} angle={rows.length > 6 ? -30 : 0} textAnchor={rows.length > 6 ? "end" : "middle"} height={rows.length > 6 ? 48 : 28} />
           {percentAxis}
           <Tooltip formatter={(v) => pct(v)} />
-          <Legend verticalAlign="top" height={28} iconSize={10} wrapperStyle={{ fontSize: 12 }} />
-          <Bar dataKey="a" name={aLabel} fill={COLOURS.a} isAnimationActive={false}>
+          <Legend verticalAlign="top" height={28} {...legendProps} />
+          <ChartPatterns />
+          <Bar dataKey="a" name={aLabel} fill={`url(#${patternId(1)})`} isAnimationActive={false}>
             <ErrorBar dataKey="aErr" width={4} stroke={COLOURS.you} direction="y" />
           </Bar>
-          <Bar dataKey="b" name={bLabel} fill={COLOURS.b} isAnimationActive={false}>
-            <ErrorBar dataKey="bErr" width={4} stroke={COLOURS.tour} direction="y" />
+          <Bar dataKey="b" name={bLabel} fill={`url(#${patternId(0)})`} isAnimationActive={false}>
+            <ErrorBar dataKey="bErr" width={4} stroke={COLOURS.you} direction="y" />
           </Bar>
         </BarChart>
       </ResponsiveContainer>
@@ -135,11 +137,11 @@ export function SessionsChart({ rows }: { rows: SessionRow[] }) {
   return (
     <div className="h-56 w-full" role="img" aria-label="Strokes gained per session; above zero is better than the tour average">
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
+        <BarChart {...figureChart} data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
           {grid}
-          <XAxis dataKey="label" tick={{ fontSize: 12 }} minTickGap={12} />
-          <YAxis width={44} tick={{ fontSize: 12 }} />
-          <ReferenceLine y={0} stroke="rgb(19 27 46 / 0.6)" />
+          <XAxis dataKey="label" tick={tickStyle} minTickGap={12} />
+          <YAxis width={44} tick={tickStyle} />
+          <ReferenceLine y={0} stroke={COLOURS.you} />
           <Tooltip formatter={(v) => (typeof v === "number" ? `${v > 0 ? "+" : ""}${v.toFixed(2)} strokes` : "–")} labelFormatter={(l, p) => `${l} · ${(p?.[0]?.payload as SessionRow | undefined)?.putts ?? 0} putts`} />
           <Bar dataKey="strokesGained" name="Strokes gained" isAnimationActive={false}>
             {rows.map((r) => (
