@@ -178,6 +178,9 @@ test("after one visit the app opens offline: a read is worked out, three putts a
 });
 
 test("the manifest names Borrowline with its own icons, and the worker keeps no API answer but the logging screens'", async () => {
+  // The Content-Security-Policy lets the worker run (the first test proves it registers under it).
+  const page = await fetch(`${server.url}/read`);
+  expect(page.headers.get("content-security-policy")).toMatch(/worker-src 'self'/);
   const manifest = await (await fetch(`${server.url}/manifest.webmanifest`)).json();
   expect(manifest).toMatchObject({ name: "Borrowline", short_name: "Borrowline", start_url: "/", display: "standalone" });
   const sizes = (manifest.icons as { sizes: string; type: string }[]).map((i) => `${i.sizes} ${i.type}`);
