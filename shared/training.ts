@@ -12,41 +12,46 @@
  * The true read is the physics model's read at the target pace of 0.45 m past (common practice).
  */
 import { flatPuttLengthM as flatLength, rollingDecelFromStimp, simulateRoll, solveRead, type BreakDirection } from "../physics";
-import { metresToHoleWidths } from "./units";
+import { longUnitLabel, metresToHoleWidths, toLongUnit, type UnitSystem } from "./units";
 
-export const TRAINING_LEVEL_IDS = ["gentle", "club", "testing"] as const;
+export const TRAINING_LEVEL_IDS = ["gentle", "club", "testing", "by-eye"] as const;
 export type TrainingLevelId = (typeof TRAINING_LEVEL_IDS)[number];
 
 export type Range = readonly [min: number, max: number];
 export type TrainingLevel = {
   readonly id: TrainingLevelId;
   readonly label: string;
-  readonly description: string;
   readonly distanceM: Range;
   readonly slopePct: Range;
   readonly stimpFt: Range;
+  /**
+   * False for a level read from the picture alone: the slope and the fall line are not given as numbers or words
+   * until the line is revealed (the player sees only the 3D green, its shading and contours).
+   */
+  readonly slopeGiven: boolean;
 };
 
 /** The ranges each level draws its putts from (inclusive). Our own grading, not a published one. */
 export const TRAINING_LEVELS: Readonly<Record<TrainingLevelId, TrainingLevel>> = {
-  gentle: {
-    id: "gentle",
-    label: "Gentle",
-    description: "1–2 % slopes, 1–4 m putts",
-    distanceM: [1, 4],
-    slopePct: [1, 2],
-    stimpFt: [9, 11],
-  },
-  club: { id: "club", label: "Club", description: "1–3 % slopes, 2–8 m putts", distanceM: [2, 8], slopePct: [1, 3], stimpFt: [8.5, 11.5] },
-  testing: {
-    id: "testing",
-    label: "Testing",
-    description: "2–4 % slopes, 3–12 m putts",
-    distanceM: [3, 12],
-    slopePct: [2, 4],
-    stimpFt: [9, 12.5],
-  },
+  gentle: { id: "gentle", label: "Gentle", distanceM: [1, 4], slopePct: [1, 2], stimpFt: [9, 11], slopeGiven: true },
+  club: { id: "club", label: "Club", distanceM: [2, 8], slopePct: [1, 3], stimpFt: [8.5, 11.5], slopeGiven: true },
+  testing: { id: "testing", label: "Testing", distanceM: [3, 12], slopePct: [2, 4], stimpFt: [9, 12.5], slopeGiven: true },
+  "by-eye": { id: "by-eye", label: "By eye", distanceM: [2, 8], slopePct: [1, 3], stimpFt: [8.5, 11.5], slopeGiven: false },
 };
+
+/** Putt lengths of a range in the user's units, rounded to whole feet or metres: "7–26 ft", "2–8 m". */
+function lengthRangeWords([min, max]: Range, units: UnitSystem): string {
+  const f = (m: number) => Math.round(toLongUnit(m, units));
+  return `${f(min)}–${f(max)} ${longUnitLabel(units)}`;
+}
+
+/** What a level hands out, in the user's units ("1–3 % slopes, 7–26 ft putts"). */
+export function levelDescription(level: TrainingLevelId, units: UnitSystem): string {
+  const l = TRAINING_LEVELS[level];
+  const lengths = `${lengthRangeWords(l.distanceM, units)} putts`;
+  if (!l.slopeGiven) return `${lengths}; slope and fall line read from the green itself`;
+  return `${l.slopePct[0]}–${l.slopePct[1]} % slopes, ${lengths}`;
+}
 
 /** The pace the true read is solved for: 0.45 m past the hole if it missed (common practice). */
 export const TARGET_ROLL_PAST_M = 0.45;

@@ -696,9 +696,10 @@ const rows: Row[] = [
   {
     route: "POST /api/training/attempts",
     target: "own history",
+    // Not the putt P1 was scored on in the setup: a second scored read of one putt is a 409 (training.test.ts).
     body: () => ({
       level: "club",
-      putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
+      putt: { distanceM: 3.3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
       guess: { aimOffsetM: -0.1, flatPuttLengthM: 3.4 },
     }),
     expect: SIGNED_IN(201),

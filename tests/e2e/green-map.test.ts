@@ -73,6 +73,13 @@ test("a player uploads the saddle through the UI, taps the ball and the hole, an
     await page.getByTestId("surface-map").waitFor();
     const summary = page.getByRole("region", { name: "The height map" });
     expect(await summary.textContent()).toMatch(/25 × 25 heights/);
+    // Slope as equal ticks coloured by steepness (a saddle has several bands), keyed in the legend; no arrows.
+    const ticks = page.locator('[data-testid="slope-ticks"] > g');
+    expect(await ticks.count()).toBeGreaterThan(10);
+    const bands = await ticks.evaluateAll((gs) => new Set(gs.map((g) => g.getAttribute("data-band"))).size);
+    expect(bands).toBeGreaterThanOrEqual(2);
+    expect(await page.getByTestId("surface-map").locator("marker").count()).toBe(0);
+    await page.getByRole("list", { name: "Slope colours" }).first().waitFor();
 
     await tapMap(page, 4, 3);
     await expect.poll(() => page.getByTestId("placement").textContent()).toMatch(/^Ball 4\.0 m east, 3\.0 m north · hole not placed/);

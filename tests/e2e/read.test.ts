@@ -96,7 +96,7 @@ test("a slope too steep for the green speed is answered as 'would not stop', not
   }
 });
 
-test("the break chart shows a table of 10 distances by 12 directions, on a phone and on a desktop", async () => {
+test("the break chart shows the aim-spot picture first and a table of 10 distances by 12 directions, on a phone and on a desktop", async () => {
   for (const [viewport, name] of [
     [DESKTOP, "desktop"],
     [PHONE, "phone"],
@@ -105,6 +105,18 @@ test("the break chart shows a table of 10 distances by 12 directions, on a phone
     try {
       const { page } = browser;
       await page.goto(`${server.url}/chart?s=2&st=10&rp=0.4318`);
+      const picture = page.getByRole("img", { name: /Aim spots all round the hole/ });
+      await picture.locator("g[data-ring]").first().waitFor();
+      expect(await picture.locator("g[data-ring]").count()).toBe(5);
+      // Every word drawn in the picture is at least 12 px tall on screen, and the picture fits the page.
+      const type = await picture.evaluate((svg) => {
+        const scale = svg.getBoundingClientRect().width / 360;
+        return { smallest: Math.min(...[...svg.querySelectorAll("text")].map((t) => Number(t.getAttribute("font-size")) * scale)) };
+      });
+      expect(type.smallest).toBeGreaterThanOrEqual(12);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+      // No card words: the old "yardage book" offer is gone.
+      expect(await page.getByText(/yardage/i).count()).toBe(0);
       const table = page.getByRole("table");
       await table.waitFor();
       expect(await table.locator("tbody tr").count()).toBe(10);

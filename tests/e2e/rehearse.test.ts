@@ -138,6 +138,120 @@ test("moving the pace from dying to firm changes the aim: a dying ball needs mor
   }
 });
 
+/** The scene labels on screen (visible ones only), as rectangles. */
+async function labelRects(page: Page) {
+  return page.evaluate(() =>
+    [...document.querySelectorAll<HTMLElement>("[data-scene-label]")]
+      .filter((el) => getComputedStyle(el).visibility === "visible")
+      .map((el) => {
+        const r = el.getBoundingClientRect();
+        return { id: el.dataset.sceneLabel!, text: el.textContent ?? "", left: r.left, top: r.top, right: r.right, bottom: r.bottom };
+      }),
+  );
+}
+
+function intersecting(rects: Awaited<ReturnType<typeof labelRects>>) {
+  const out: string[] = [];
+  for (let i = 0; i < rects.length; i++) {
+    for (let j = i + 1; j < rects.length; j++) {
+      const a = rects[i]!;
+      const b = rects[j]!;
+      if (a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom) out.push(`${a.text} × ${b.text}`);
+    }
+  }
+  return out;
+}
+
+/** Pixels of the dying (warm yellow) and firm (deep blue) lines' colours on the canvas. */
+async function lineColourPixels(page: Page) {
+  return page.evaluate(async () => {
+    const canvas = document.querySelector("canvas")!;
+    const img = new Image();
+    img.src = canvas.toDataURL("image/png");
+    await img.decode();
+    const c = document.createElement("canvas");
+    c.width = img.width;
+    c.height = img.height;
+    const ctx = c.getContext("2d")!;
+    ctx.drawImage(img, 0, 0);
+    const d = ctx.getImageData(0, 0, c.width, c.height).data;
+    let yellow = 0;
+    let blue = 0;
+    for (let i = 0; i < d.length; i += 4) {
+      const [r, g, b] = [d[i]!, d[i + 1]!, d[i + 2]!];
+      if (Math.abs(r - 0xf5) < 30 && Math.abs(g - 0xc8) < 30 && Math.abs(b - 0x42) < 40) yellow++;
+      if (Math.abs(r - 0x2f) < 30 && Math.abs(g - 0x5f) < 30 && Math.abs(b - 0xd0) < 40) blue++;
+    }
+    return { yellow, blue, dpr: window.devicePixelRatio };
+  });
+}
+
+test("on a phone the view opens behind the ball; in every camera, compare from above included, no two labels overlap and the lines stay visible", async () => {
+  const browser = await openBrowser(PHONE);
+  const { page } = browser;
+  try {
+    await page.goto(`${server.url}${SIDE_HILL}`);
+    await waitForScene(page);
+    await expect(page.getByRole("button", { name: "Behind the ball" }).getAttribute("aria-pressed")).resolves.toBe("true");
+    const seen: Record<string, string[]> = {};
+    const check = async (name: string) => {
+      await page.waitForTimeout(900);
+      const rects = await labelRects(page);
+      seen[name] = rects.map((r) => r.text);
+      expect(intersecting(rects), `${name}: ${JSON.stringify(rects)}`).toEqual([]);
+      // Labels stay inside the scene.
+      const box = (await page.locator("canvas").first().boundingBox())!;
+      for (const r of rects) {
+        expect(r.left, `${name} ${r.text}`).toBeGreaterThanOrEqual(box.x - 0.5);
+        expect(r.right, `${name} ${r.text}`).toBeLessThanOrEqual(box.x + box.width + 0.5);
+      }
+    };
+    await check("behind");
+    for (const v of ["From above", "Free view", "Behind the ball"]) {
+      await page.getByRole("button", { name: v }).click();
+      await check(v);
+    }
+    await page.getByLabel("Compare the dying and the firm line").check();
+    await check("compare from above");
+    // The three aim labels of the comparison are all shown, apart.
+    expect(seen["compare from above"]!.filter((t) => /^(Dying|Firm|Your pace)/.test(t))).toHaveLength(3);
+    // Both lines are drawn thick enough to see: each covers many pixels (a 5.5 px line over ~1.5 m of path).
+    const px = await lineColourPixels(page);
+    expect(px.yellow, JSON.stringify(px)).toBeGreaterThan(400 * px.dpr);
+    expect(px.blue, JSON.stringify(px)).toBeGreaterThan(400 * px.dpr);
+    for (const v of ["Behind the ball", "Free view"]) {
+      await page.getByRole("button", { name: v }).click();
+      await check(`compare ${v}`);
+    }
+    await screenshot(page, "rehearse-phone-compare-free");
+    expect(browser.errors.filter(unexpected)).toEqual([]);
+  } finally {
+    await browser.close();
+  }
+});
+
+test("read training's labels never overlap, before and after the reveal, in every camera", async () => {
+  const browser = await openBrowser(PHONE);
+  const { page } = browser;
+  try {
+    await page.goto(`${server.url}/train?level=club&seed=42&n=0`);
+    await waitForScene(page);
+    for (const stage of ["before", "after"]) {
+      if (stage === "after") await page.getByRole("button", { name: "Reveal the line" }).click();
+      for (const v of ["Behind the ball", "From above", "Free view"]) {
+        await page.getByRole("button", { name: v }).click();
+        await page.waitForTimeout(900);
+        const rects = await labelRects(page);
+        expect(intersecting(rects), `${stage} ${v}: ${JSON.stringify(rects)}`).toEqual([]);
+        expect(rects.some((r) => r.text.includes("Your aim")), `${stage} ${v}`).toBe(true);
+      }
+    }
+    expect(browser.errors.filter(unexpected)).toEqual([]);
+  } finally {
+    await browser.close();
+  }
+});
+
 test("without WebGL the page says so and shows the putt from above", async () => {
   const browser = await openBrowser(PHONE);
   const { page } = browser;

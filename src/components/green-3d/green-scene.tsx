@@ -17,6 +17,7 @@ import {
   type GreenShape,
   type PuttPlane,
 } from "./frame";
+import { placeLabels, type LabelBox } from "./label-layout";
 import {
   AIM_LIMIT_M,
   LINE_COLOURS,
@@ -32,6 +33,8 @@ const BALL_RADIUS_M = 0.04267 / 2;
 const HOLE_RADIUS_M = 0.054;
 const FLAGSTICK_M = 2.13;
 const EYE_HEIGHT_M = 1.6;
+/** How far behind the ball the "behind the ball" camera stands, m. */
+const BEHIND_M = 1.6;
 /** Height of the pin that marks an aim spot, m. */
 const PIN_M = 0.3;
 const SKY = "#dce6df";
@@ -67,8 +70,8 @@ export default function GreenScene(props: GreenSceneProps) {
             style={{ visibility: "hidden" }}
           >
             <span
-              className={`absolute block rounded-md px-2 py-0.5 text-xs font-semibold whitespace-nowrap select-none ${l.tone === "light" ? "bg-sand-50/90 text-ink-900" : "bg-ink-900/85 text-sand-50"}`}
-              style={LABEL_PLACEMENT[l.side]}
+              data-scene-label={l.id}
+              className={`block rounded-md px-2 py-0.5 text-xs font-semibold whitespace-nowrap select-none ${l.tone === "light" ? "bg-sand-50/90 text-ink-900" : "bg-ink-900/85 text-sand-50"}`}
             >
               {l.colour ? <span className="mr-1 inline-block size-2 rounded-full" style={{ background: l.colour }} /> : null}
               {l.text}
@@ -87,6 +90,8 @@ type SceneLabel = {
   tone: "light" | "dark";
   side: "up" | "left" | "right";
   colour?: string;
+  /** Lower goes first when labels compete for room: the player's own aim, then the others, then higher/lower. */
+  priority: number;
 };
 
 /** Words on the green: "higher" and "lower" near its rim, and each aim spot's name above its pin. */
@@ -98,8 +103,8 @@ function sceneLabels({ putt, aims, exaggeration = 1 }: GreenSceneProps): SceneLa
     const r = heightRange(shape, plane);
     const at = (p: [number, number]) => surfacePoint(shape.cx + (p[0] - shape.cx) * 0.78, shape.cy + (p[1] - shape.cy) * 0.78, plane, 0.05);
     out.push(
-      { id: "higher", at: at(r.highPoint), text: "higher", tone: "light", side: "up" },
-      { id: "lower", at: at(r.lowPoint), text: "lower", tone: "dark", side: "up" },
+      { id: "higher", at: at(r.highPoint), text: "higher", tone: "light", side: "up", priority: 2 },
+      { id: "lower", at: at(r.lowPoint), text: "lower", tone: "dark", side: "up", priority: 2 },
     );
   }
   for (const a of aims) {
@@ -110,27 +115,56 @@ function sceneLabels({ putt, aims, exaggeration = 1 }: GreenSceneProps): SceneLa
       tone: "dark",
       side: a.labelSide ?? "up",
       colour: LINE_COLOURS[a.style],
+      priority: a.style === "chosen" || a.style === "yours" ? 0 : 1,
     });
   }
-  return out;
+  return out.sort((a, b) => a.priority - b.priority);
 }
 
-/** Projects each label's anchor to the canvas every rendered frame and moves its element (refs only). */
+/** Gap between a label and its anchor, px. */
+const ANCHOR_GAP_PX = 10;
+
+/** The rectangle a label wants beside its anchor (x, y), for its side. */
+function wantedRect(side: SceneLabel["side"], x: number, y: number, w: number, h: number) {
+  if (side === "left") return { x: x - ANCHOR_GAP_PX - w, y: y - h / 2, w, h };
+  if (side === "right") return { x: x + ANCHOR_GAP_PX, y: y - h / 2, w, h };
+  return { x: x - w / 2, y: y - ANCHOR_GAP_PX - h, w, h };
+}
+
+/**
+ * Projects each label's anchor to the canvas every rendered frame, lays the labels out so none overlaps another or
+ * leaves the view (label-layout.ts), and moves their elements (refs only). A label with no clear place is hidden.
+ */
 function LabelProjector({ labels, els }: { labels: SceneLabel[]; els: RefObject<Map<string, HTMLElement>> }) {
   const v = useRef(new THREE.Vector3());
+  const sizes = useRef(new Map<string, { text: string; w: number; h: number }>());
   const invalidate = useThree((s) => s.invalidate);
   useEffect(() => invalidate(), [labels, invalidate]);
   useFrame(({ camera, size }) => {
+    const boxes: LabelBox[] = [];
     for (const l of labels) {
       const el = els.current.get(l.id);
       if (!el) continue;
       const p = v.current.set(l.at[0], l.at[1], l.at[2]).project(camera);
-      const visible = p.z < 1 && Math.abs(p.x) < 1.1 && Math.abs(p.y) < 1.1;
-      el.style.visibility = visible ? "visible" : "hidden";
-      // Kept a label's half-width inside the canvas, so a word near the rim is not cut off.
-      const x = Math.min(size.width - 40, Math.max(40, ((p.x + 1) / 2) * size.width));
-      const y = Math.min(size.height - 8, Math.max(28, ((1 - p.y) / 2) * size.height));
-      el.style.transform = `translate(${x.toFixed(1)}px, ${y.toFixed(1)}px)`;
+      if (!(p.z < 1 && Math.abs(p.x) < 1.1 && Math.abs(p.y) < 1.1)) {
+        el.style.visibility = "hidden";
+        continue;
+      }
+      // Measured once per text (a layout read), not every frame.
+      let s = sizes.current.get(l.id);
+      if (!s || s.text !== l.text || s.w === 0) {
+        const span = el.firstElementChild as HTMLElement | null;
+        s = { text: l.text, w: span?.offsetWidth ?? 0, h: span?.offsetHeight ?? 0 };
+        sizes.current.set(l.id, s);
+      }
+      boxes.push({ id: l.id, rect: wantedRect(l.side, ((p.x + 1) / 2) * size.width, ((1 - p.y) / 2) * size.height, s.w, s.h) });
+    }
+    const placement = placeLabels(boxes, size);
+    for (const b of boxes) {
+      const el = els.current.get(b.id)!;
+      const at = placement.get(b.id);
+      el.style.visibility = at ? "visible" : "hidden";
+      if (at) el.style.transform = `translate(${(b.rect.x + at.dx).toFixed(1)}px, ${(b.rect.y + at.dy).toFixed(1)}px)`;
     }
   });
   return null;
@@ -195,12 +229,7 @@ function SceneContents(props: GreenSceneProps) {
         <AimSpot key={a.id} aim={a} putt={putt} plane={plane} onGrab={onAimChange && a.style === "yours" ? startDrag : undefined} />
       ))}
       {lines.map((l) => (
-        <Line
-          key={l.id}
-          points={l.path.map(([x, y]) => surfacePoint(x, y, plane, 0.004 + (l.style === "firm" ? 0.001 : 0)))}
-          color={LINE_COLOURS[l.style]}
-          lineWidth={l.style === "yours" ? 3.5 : 4.5}
-        />
+        <PuttLine key={l.id} line={l} plane={plane} />
       ))}
       {restMarkers.map((r) => (
         <mesh key={r.id} position={surfacePoint(r.xM, r.yM, plane, BALL_RADIUS_M)}>
@@ -211,6 +240,24 @@ function SceneContents(props: GreenSceneProps) {
       <RollingBall putt={putt} plane={plane} replay={props.replay ?? null} />
       <CameraRig putt={putt} box={frameBox(putt, lines, aims)} plane={plane} view={props.view} viewKey={props.viewKey ?? 0} />
       <OrbitControls makeDefault enableDamping={false} maxPolarAngle={Math.PI / 2 - 0.05} minDistance={0.4} maxDistance={60} />
+    </>
+  );
+}
+
+/**
+ * A putt's line, drawn so it reads on a phone: a pixel-wide line (drei's `Line`, widths in CSS px whatever the
+ * distance) over a dark green casing 3 px wider, so a pale line still stands out on pale grass.
+ */
+function PuttLine({ line, plane }: { line: GreenSceneProps["lines"][number]; plane: PuttPlane }) {
+  const lift = 0.004 + (line.style === "firm" ? 0.001 : 0);
+  const points = useMemo(() => line.path.map(([x, y]) => surfacePoint(x, y, plane, lift)), [line.path, plane, lift]);
+  const width = line.style === "yours" ? 4.5 : 5.5;
+  return (
+    <>
+      {/* Opaque, so three.js draws it in the same (opaque) pass as the line, and renderOrder puts it first. */}
+      <Line points={points} color="#163a22" lineWidth={width + 3} depthWrite={false} renderOrder={1} />
+      {/* The player's own line (or the true one) on top of the others. */}
+      <Line points={points} color={LINE_COLOURS[line.style]} lineWidth={width} renderOrder={line.style === "dying" || line.style === "firm" ? 2 : 3} />
     </>
   );
 }
@@ -340,7 +387,7 @@ function AimSpot({
   const end = surfacePoint(aim.xM, putt.distanceM, plane, 0.003);
   return (
     <>
-      <Line points={[start, end]} color={colour} lineWidth={2} dashed dashSize={0.07} gapSize={0.06} transparent opacity={0.9} />
+      <Line points={[start, end]} color={colour} lineWidth={3} dashed dashSize={0.07} gapSize={0.06} transparent opacity={0.95} />
       <OnSurface x={aim.xM} y={putt.distanceM} plane={plane} lift={0.002}>
         <mesh rotation={[-Math.PI / 2, 0, 0]}>
           <ringGeometry args={[0.065, 0.1, 40]} />
@@ -435,12 +482,6 @@ function sampleAt(times: readonly number[], xs: readonly number[], ys: readonly 
   return sampled;
 }
 
-const LABEL_PLACEMENT = {
-  up: { left: 0, bottom: 10, transform: "translateX(-50%)" },
-  left: { right: 10, top: 0, transform: "translateY(-50%)" },
-  right: { left: 10, top: 0, transform: "translateY(-50%)" },
-} as const;
-
 type CameraGoal = { position: THREE.Vector3; target: THREE.Vector3 };
 
 /** The part of the green worth framing from above: ball, hole, every line and aim spot, with a margin (putt frame). */
@@ -470,7 +511,16 @@ function frameBox(putt: ScenePutt, lines: GreenSceneProps["lines"], aims: GreenS
 function cameraGoal(view: CameraView, putt: ScenePutt, box: FrameBox, plane: PuttPlane, aspect: number, fovDeg: number): CameraGoal {
   const D = putt.distanceM;
   const at = (x: number, y: number, lift: number) => new THREE.Vector3(...surfacePoint(x, y, plane, lift));
-  if (view === "behind") return { position: at(0, -1.2, EYE_HEIGHT_M), target: at(0, D, 0) };
+  if (view === "behind") {
+    // Standing behind the ball at eye height, looking along the line ball → hole, tipped down so the ball sits in
+    // the lower part of the picture and the hole, its pin and label in the upper part: within 22° below and 20°
+    // above the centre of the 50° vertical field.
+    const depressionBall = Math.atan2(EYE_HEIGHT_M, BEHIND_M);
+    const depressionHole = Math.atan2(EYE_HEIGHT_M, BEHIND_M + D);
+    const deg = Math.PI / 180;
+    const pitch = Math.min(Math.max(0.58 * depressionBall + 0.42 * depressionHole, depressionBall - 22 * deg), depressionHole + 20 * deg);
+    return { position: at(0, -BEHIND_M, EYE_HEIGHT_M), target: at(0, -BEHIND_M + EYE_HEIGHT_M / Math.tan(pitch), 0) };
+  }
   if (view === "above") {
     const half = Math.tan(((fovDeg / 2) * Math.PI) / 180);
     const cx = (box.minX + box.maxX) / 2;

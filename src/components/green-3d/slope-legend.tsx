@@ -23,6 +23,8 @@ export type SlopeLegendProps = {
   contourIntervalM: number | null;
   units: UnitSystem;
   exaggeration?: number;
+  /** Read training "by eye": the slope and fall line are not named (the key to the shading still is). */
+  slopeHidden?: boolean;
   /** False when the flat diagram stands in for the 3D view: it has no shading or contour lines to explain. */
   shaded?: boolean;
   children?: ReactNode;
@@ -35,14 +37,19 @@ export function SlopeLegend({
   units,
   exaggeration = 1,
   shaded = true,
+  slopeHidden = false,
   children,
 }: SlopeLegendProps) {
   return (
     <div className="flex flex-col gap-2 text-sm text-ink-700">
-      <p>
-        <span className="font-semibold text-ink-900">The green {fallLineWords(fallLineDeg)}</span>
-        {slopePct > 0 ? `: ${Number(slopePct.toFixed(2))} % slope, ${dropWords(slopePct, units)}.` : ": it is flat."}
-      </p>
+      {slopeHidden ? (
+        <p className="font-semibold text-ink-900">Which way and how much the green falls is yours to read from the picture.</p>
+      ) : (
+        <p>
+          <span className="font-semibold text-ink-900">The green {fallLineWords(fallLineDeg)}</span>
+          {slopePct > 0 ? `: ${Number(slopePct.toFixed(2))} % slope, ${dropWords(slopePct, units)}.` : ": it is flat."}
+        </p>
+      )}
       {shaded && slopePct > 0 ? (
         <div className="flex items-center gap-2" aria-hidden="true">
           <span className="text-xs font-medium">higher</span>

@@ -217,7 +217,7 @@ export function PuttDiagram({
             strokeWidth="2.5"
             markerEnd={`url(#${id}-arrow)`}
           />
-          <text y="34" textAnchor="middle" className="fill-sand-200 text-[11px]">
+          <text y="34" textAnchor="middle" className="fill-sand-200 text-[13.5px]">
             falls
           </text>
         </g>
@@ -227,7 +227,7 @@ export function PuttDiagram({
         <line x1="0" y1="0" x2={gridPx} y2="0" className="stroke-sand-100" strokeWidth="2" />
         <line x1="0" y1="-4" x2="0" y2="4" className="stroke-sand-100" strokeWidth="2" />
         <line x1={gridPx} y1="-4" x2={gridPx} y2="4" className="stroke-sand-100" strokeWidth="2" />
-        <text x={gridPx + 8} y="4" className="fill-sand-100 text-[11px]">
+        <text x={gridPx + 8} y="4" className="fill-sand-100 text-[13.5px]">
           {step.label}
         </text>
       </g>
@@ -238,7 +238,7 @@ export function PuttDiagram({
             const style = p.style ?? "chosen";
             return (
               <g key={`legend-${i}`} transform={`translate(0 ${i * 16})`}>
-                <text x="-30" y="4" textAnchor="end" className="fill-sand-100 text-[11px]">
+                <text x="-30" y="4" textAnchor="end" className="fill-sand-100 text-[13.5px]">
                   {p.label}
                 </text>
                 <line

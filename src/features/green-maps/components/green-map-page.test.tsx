@@ -177,3 +177,26 @@ test("a refused upload lists the server's row and column errors, and the spacing
   expect(form.get("originXM")).toBe("0");
   expect((form.get("file") as File).name).toBe("bumpy.csv");
 });
+
+test("the map draws slope as equal ticks along the fall line, coloured by steepness and keyed in the legend, with no arrows", async () => {
+  stubApi();
+  renderRoute(<GreenMapPage greenId={GREEN_ID} />, { at: "/greens/x/map" });
+  const svg = await screen.findByTestId("surface-map");
+  // The test map falls 3 cm every 3 m to the east: 1 %, the "1–2 %" band, everywhere.
+  const ticks = [...svg.querySelectorAll('[data-testid="slope-ticks"] > g')];
+  expect(ticks.length).toBeGreaterThan(10);
+  const lengths = ticks.map((g) => {
+    const l = g.querySelector("line")!;
+    const [x1, y1, x2, y2] = ["x1", "y1", "x2", "y2"].map((a) => Number(l.getAttribute(a)));
+    // The bead sits at the low (east) end.
+    const bead = g.querySelector("circle")!;
+    expect(Number(bead.getAttribute("cx"))).toBeCloseTo(Math.max(x1!, x2!), 6);
+    expect(y1!).toBeCloseTo(y2!, 6);
+    expect(g.getAttribute("data-band")).toBe("1");
+    return Math.hypot(x2! - x1!, y2! - y1!);
+  });
+  expect(Math.max(...lengths) - Math.min(...lengths)).toBeLessThan(1e-6);
+  expect(svg.querySelector("marker")).toBeNull();
+  const key = screen.getAllByRole("list", { name: "Slope colours" })[0]!;
+  expect(within(key).getAllByRole("listitem").map((li) => li.textContent)).toEqual(["under 1 %", "1–2 %", "2–3 %", "3 % or more"]);
+});

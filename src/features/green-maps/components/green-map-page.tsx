@@ -20,8 +20,8 @@ import { useGreen } from "../api/get-green";
 import { useHeightMap } from "../api/get-height-map";
 import { useSurfaceRead } from "../api/solve-on-surface";
 import { useDebouncedValue } from "../hooks/use-debounced-value";
-import { downhillArrows } from "../utils/downhill-arrows";
-import { aimPoint, roundCm } from "../utils/map-view";
+import { slopeTicks } from "../utils/slope-ticks";
+import { aimSpot, roundCm } from "../utils/map-view";
 import { surfaceSolveRequest } from "../utils/solve-request";
 import { HeightMapSummary } from "./height-map-summary";
 import { HeightMapUpload } from "./height-map-upload";
@@ -150,14 +150,14 @@ function MapWorkspace({
 
   const surface = useMemo(() => surfaceFromGrid(map), [map]);
   const raster = useMemo(() => heightRaster(map, 128, surface), [map, surface]);
-  const arrows = useMemo(() => downhillArrows(surface, raster.bounds), [surface, raster]);
+  const ticks = useMemo(() => slopeTicks(surface, raster.bounds), [surface, raster]);
   const interval = contourIntervalM(raster.maxM - raster.minM, units, 14);
 
   const { request, errors } = surfaceSolveRequest({ ball, hole, stimpText, rollPastText, units });
   const settled = useDebouncedValue(request, 300);
   const read = useSurfaceRead(greenId, settled);
   const answer = request && read.data && !read.isError ? read.data : null;
-  const aim = answer && ball && hole && answer.aimOffsetM !== null ? aimPoint(ball, hole, answer.aimOffsetM) : null;
+  const aim = answer && ball && hole && answer.aimOffsetM !== null ? aimSpot(ball, hole, answer.aimOffsetM) : null;
 
   const place = (point: [number, number]) => {
     if (placing === "ball") {
@@ -198,7 +198,7 @@ function MapWorkspace({
           <SurfaceMap
             raster={raster}
             contourIntervalM={interval}
-            arrows={arrows}
+            ticks={ticks}
             ball={ball}
             hole={hole}
             aim={aim}
@@ -288,7 +288,7 @@ function MapWorkspace({
           toolbar={<CameraButtons view={view.view} onView={(v) => setView((s) => ({ view: v, key: s.key + 1 }))} />}
         />
         <div className="flex flex-col gap-3 p-5 sm:px-7">
-          <MapLegend contourIntervalM={interval} units={units} arrows={false} />
+          <MapLegend contourIntervalM={interval} units={units} ticks={false} />
           <label className="flex min-h-11 items-center gap-3 text-sm font-medium">
             <input
               type="checkbox"

@@ -1,17 +1,18 @@
-// The green from above: height shading (lighter is higher), contour lines, arrows down the slope, and the putt — the
-// ball, the hole, the start line to the aim point and the curved line the ball rolls. A tap places the ball or the hole.
+// The green from above: height shading (lighter is higher), contour lines, slope ticks (one length, along the fall
+// line, coloured by steepness, a bead at the low end), and the putt — the
+// ball, the hole, the start line to the aim spot and the curved line the ball rolls. A tap places the ball or the hole.
 import { useId, useMemo, type MouseEvent } from "react";
 import { scaleStep } from "../../../components/putt-diagram/putt-diagram";
 import { contourLines, type HeightRaster } from "../../../components/green-3d/surface-grid";
 import type { UnitSystem } from "../../../../shared/units";
 import { mapLayout, screenToGreen } from "../utils/map-view";
 import { shadingDataUrl } from "../utils/shading-image";
-import type { DownhillArrow } from "../utils/downhill-arrows";
+import { SLOPE_BANDS, type SlopeTick } from "../utils/slope-ticks";
 
 export type SurfaceMapProps = {
   raster: HeightRaster;
   contourIntervalM: number | null;
-  arrows: DownhillArrow[];
+  ticks: SlopeTick[];
   ball: [number, number] | null;
   hole: [number, number] | null;
   aim: [number, number] | null;
@@ -29,7 +30,7 @@ const HOLE_R_M = 0.054;
 export function SurfaceMap({
   raster,
   contourIntervalM,
-  arrows,
+  ticks,
   ball,
   hole,
   aim,
@@ -71,11 +72,6 @@ export function SurfaceMap({
     >
       <title id={`${id}-t`}>{`The green from above. Tap to place the ${placing}.`}</title>
       <desc id={`${id}-d`}>{description}</desc>
-      <defs>
-        <marker id={`${id}-down`} viewBox="0 0 10 10" refX="6" refY="5" markerWidth="4" markerHeight="4" orient="auto">
-          <path d="M0 0L10 5L0 10z" className="fill-ink-950/70" />
-        </marker>
-      </defs>
       <rect width={width} height={height} rx="14" className="fill-ink-800" />
       <image
         href={image}
@@ -86,19 +82,30 @@ export function SurfaceMap({
         preserveAspectRatio="none"
       />
       {contourPath ? <path d={contourPath} fill="none" className="stroke-ink-950/45" strokeWidth="1.2" /> : null}
-      <g aria-hidden="true">
-        {arrows.map((a, i) => (
-          <line
-            key={i}
-            x1={toX(a.at[0])}
-            y1={toY(a.at[1])}
-            x2={toX(a.to[0])}
-            y2={toY(a.to[1])}
-            className="stroke-ink-950/60"
-            strokeWidth="1.6"
-            strokeLinecap="round"
-            markerEnd={`url(#${id}-down)`}
-          />
+      <g aria-hidden="true" data-testid="slope-ticks">
+        {ticks.map((t, i) => (
+          <g key={i} data-band={t.band}>
+            <line
+              x1={toX(t.from[0])}
+              y1={toY(t.from[1])}
+              x2={toX(t.to[0])}
+              y2={toY(t.to[1])}
+              stroke="#0b1120"
+              strokeOpacity="0.55"
+              strokeWidth="5"
+              strokeLinecap="round"
+            />
+            <line
+              x1={toX(t.from[0])}
+              y1={toY(t.from[1])}
+              x2={toX(t.to[0])}
+              y2={toY(t.to[1])}
+              stroke={SLOPE_BANDS[t.band]!.colour}
+              strokeWidth="2.5"
+              strokeLinecap="round"
+            />
+            <circle cx={toX(t.to[0])} cy={toY(t.to[1])} r="3.4" fill={SLOPE_BANDS[t.band]!.colour} stroke="#0b1120" strokeWidth="1.2" />
+          </g>
         ))}
       </g>
 

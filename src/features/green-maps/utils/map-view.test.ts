@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { aimPoint, mapLayout, screenToGreen } from "./map-view";
+import { aimSpot, mapLayout, screenToGreen } from "./map-view";
 
 // The saddle fixture's extent: 12 m × 12 m from the origin; and a map offset from the origin, wider than deep.
 const square = { minX: 0, maxX: 12, minY: 0, maxY: 12 };
@@ -36,11 +36,11 @@ test("a tap just outside the edge snaps onto it; one well off the map is nothing
   expect(screenToGreen(10, 10, { left: 0, top: 0, width: 0, height: 0 }, l)).toBeNull();
 });
 
-test("the aim point lies the aim offset to the golfer's right of the hole", () => {
+test("the aim spot lies the aim offset to the golfer's right of the hole", () => {
   // Putting north: the golfer's right is east.
-  expect(aimPoint([2, 1], [2, 5], 0.3)).toEqual([2.3, 5]);
+  expect(aimSpot([2, 1], [2, 5], 0.3)).toEqual([2.3, 5]);
   // Putting east: the golfer's right is south; a negative offset is left, north.
-  const p = aimPoint([0, 0], [4, 0], -0.25);
+  const p = aimSpot([0, 0], [4, 0], -0.25);
   expect(p[0]).toBeCloseTo(4, 9);
   expect(p[1]).toBeCloseTo(0.25, 9);
 });

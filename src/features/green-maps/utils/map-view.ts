@@ -61,7 +61,7 @@ export function roundCm(m: number): number {
 }
 
 /** Where the start line passes the hole: `aimOffsetM` to the golfer's right of the hole, across the line ball → hole. */
-export function aimPoint(ball: readonly [number, number], hole: readonly [number, number], aimOffsetM: number): [number, number] {
+export function aimSpot(ball: readonly [number, number], hole: readonly [number, number], aimOffsetM: number): [number, number] {
   const d = Math.hypot(hole[0] - ball[0], hole[1] - ball[1]);
   if (d === 0) return [hole[0], hole[1]];
   const ey = [(hole[0] - ball[0]) / d, (hole[1] - ball[1]) / d];

@@ -25,7 +25,7 @@ export function AnswerBar({ read, cannotStop, units, targetId }: AnswerBarProps)
     <div className="fixed inset-x-0 bottom-0 z-30 border-t border-sand-50/10 bg-ink-900 px-4 py-3 text-sand-50 shadow-[0_-4px_16px_rgb(11_17_32/0.25)] lg:hidden print:hidden">
       <div className="mx-auto flex max-w-6xl items-center gap-3">
         <div className="min-w-0 flex-1" aria-hidden="true">
-          <p className="text-[15px] leading-snug font-semibold">{cannotStop ? "This ball would not stop" : aim?.headline}</p>
+          <p className="text-base leading-snug font-semibold">{cannotStop ? "This ball would not stop" : aim?.headline}</p>
           {read && !cannotStop ? (
             <p className="truncate text-sm text-sand-200">
               {formatShort(read.rollPastM, units)} past · as a flat {formatLength(Math.max(0, read.flatPuttLengthM), units)} putt

@@ -18,6 +18,8 @@ import {
   type ExactMemory,
 } from "../utils/read-form";
 import { defaultReadValues } from "../utils/read-query";
+import { ringFallLineDegs, ringLengthsM } from "../utils/aim-ring";
+import { AimRingPicture } from "./aim-ring-picture";
 import { BreakChartTable } from "./break-chart-table";
 import { UnitsSwitch } from "./units-switch";
 
@@ -133,6 +135,11 @@ export function ChartPage() {
       }
     : null;
   const chart = useBreakChart(request);
+  // The picture asks for its own grid: five lengths, a ball from every 15° around the hole.
+  const ringRequest: ChartRequest | null = request
+    ? { ...request, distances: ringLengthsM(units), fallLineDegs: ringFallLineDegs() }
+    : null;
+  const rings = useBreakChart(ringRequest);
 
   useEffect(() => {
     if (ready && (!params.has("s") || !params.has("st") || !params.has("rp"))) {
@@ -149,7 +156,8 @@ export function ChartPage() {
 
   if (!ready) return <PageSpinner label="Getting the chart ready" />;
 
-  const caption = `Aim offset at the hole: how far left (L) or right (R) of the hole centre to start the ball. Slope ${settings.slopePct} %, Stimp ${settings.stimpFt}, finishing ${formatNumber(FIELD_SPECS.rollPast.toUnit(settings.rollPastM, units), 0)} ${fieldLimits("rollPast", units).unit} past. Assumes an even slope and a true roll.`;
+  const settingsWords = `Slope ${settings.slopePct} %, Stimp ${settings.stimpFt}, finishing ${formatNumber(FIELD_SPECS.rollPast.toUnit(settings.rollPastM, units), 0)} ${fieldLimits("rollPast", units).unit} past`;
+  const caption = `Each number is how far left or right of the hole the start line passes, at the hole's distance. Rows: putt length; columns: which way the green falls as you stand behind the ball. ${settingsWords}. Assumes an even slope and a true roll.`;
   const answer = chart.data;
 
   return (
@@ -157,14 +165,11 @@ export function ChartPage() {
       <title>Break chart · Borrowline</title>
       <PageHeader
         eyebrow="Break chart"
-        title="Aim for every length and direction"
-        description="One slope, one green speed, one pace: where to aim from close range to long putts, whichever way the green falls. Print it for the yardage book."
+        title="Where to aim, from every side of the hole"
+        description="One slope, one green speed, one pace. The picture shows the aim spots of putts of several lengths coming from all round the hole; the numbers below it can be printed."
         actions={
           <div className="flex flex-wrap items-center gap-3 print:hidden">
             <UnitsSwitch value={units} onChange={setUnits} saving={saving} />
-            <Button variant="secondary" size="sm" onClick={() => window.print()}>
-              Print
-            </Button>
           </div>
         }
       />
@@ -203,7 +208,28 @@ export function ChartPage() {
           ) : cannotStopCount(answer) > 0 ? (
             <Alert tone="info">Cells marked &ldquo;won&apos;t stop&rdquo; are putts where the ball would not come to rest.</Alert>
           ) : null}
+          <Card className="print:hidden" aria-busy={rings.isPlaceholderData || undefined}>
+            <h2 className="mb-3 text-lg font-semibold tracking-tight">Aim spots all round the hole</h2>
+            {rings.isError ? (
+              <Alert tone="error" title="Could not work out the picture">
+                {rings.error.message} The numbers below still stand.
+              </Alert>
+            ) : rings.data ? (
+              <AimRingPicture answer={rings.data} units={units} settingsWords={settingsWords} />
+            ) : (
+              <PageSpinner label="Working out the aim spots" />
+            )}
+            <p className="mt-3 text-sm text-ink-500">
+              Assumes an even, planar slope and a true-rolling ball; grain, wind and the green&apos;s own contours move real aims.
+            </p>
+          </Card>
           <Card className="print:p-0 print:shadow-none print:ring-0">
+            <div className="mb-3 flex flex-wrap items-center justify-between gap-2">
+              <h2 className="text-lg font-semibold tracking-tight">The same aims in numbers</h2>
+              <Button variant="secondary" size="sm" className="print:hidden" onClick={() => window.print()}>
+                Print the numbers
+              </Button>
+            </div>
             {chart.isPlaceholderData ? (
               <p className="mb-2 text-sm text-ink-500 print:hidden">
                 <Spinner size="sm" label="" /> Updating…

@@ -136,7 +136,7 @@ export function DirectionDial({ value, onChange, id, className, describedBy }: D
       {/* the golfer's side: the ball below the hole, the line to the hole */}
       <line x1={C} y1={C + 40} x2={C} y2={C + 10} className="stroke-sand-50/40" strokeWidth="1.5" strokeDasharray="2 5" />
       <circle cx={C} cy={C + 44} r="5" className="fill-sand-50" />
-      <text x={C} y={C + 62} textAnchor="middle" className="pointer-events-none fill-sand-200 text-[10px]">
+      <text x={C} y={C + 62} textAnchor="middle" className="pointer-events-none fill-sand-200 text-[14px]">
         ball
       </text>
 
@@ -148,7 +148,7 @@ export function DirectionDial({ value, onChange, id, className, describedBy }: D
       ].map(([a, word]) => {
         const [x, y] = polar(a as number, LABEL_R);
         return (
-          <text key={word} x={x} y={y + 4} textAnchor="middle" className="pointer-events-none fill-sand-200 text-[11px]">
+          <text key={word} x={x} y={y + 4} textAnchor="middle" className="pointer-events-none fill-sand-200 text-[14px]">
             {word}
           </text>
         );

@@ -65,13 +65,13 @@ test("the chart asks for 3–30 ft every 3 ft in feet, 1–10 m in metres, every
 });
 
 test("cells read as offset, unit and side, with 'centre' for a straight putt and 'won't stop' marked", () => {
-  expect(cellText(answer.cells[0]![1]!, "imperial")).toBe("3 in L");
-  expect(cellText(answer.cells[0]![2]!, "imperial")).toBe("3 in R");
-  expect(cellText(answer.cells[1]![1]!, "imperial")).toBe("11 in L");
-  expect(cellText(answer.cells[1]![1]!, "metric")).toBe("28 cm L");
+  expect(cellText(answer.cells[0]![1]!, "imperial")).toBe("3 in left");
+  expect(cellText(answer.cells[0]![2]!, "imperial")).toBe("3 in right");
+  expect(cellText(answer.cells[1]![1]!, "imperial")).toBe("11 in left");
+  expect(cellText(answer.cells[1]![1]!, "metric")).toBe("28 cm left");
   expect(cellText(answer.cells[0]![0]!, "metric")).toBe("centre");
   expect(cellText(answer.cells[1]![2]!, "metric")).toBe("won't stop");
-  expect(cellText({ ...answer.cells[0]![1]!, ok: true, aimOffsetM: -0.0635 } as never, "imperial")).toBe("2.5 in L");
+  expect(cellText({ ...answer.cells[0]![1]!, ok: true, aimOffsetM: -0.0635 } as never, "imperial")).toBe("2.5 in left");
 });
 
 test("the table has a row per distance and a column per direction, headed in plain words", () => {
@@ -104,6 +104,6 @@ test("cannot-stop cells are counted", () => {
 
 test("a cell whose start line is wider than 60° shows the start line, never a huge offset (issue 13: was 1576 cm R)", () => {
   const wide = { ok: true as const, distanceM: 3, fallLineDeg: 30, aimOffsetM: null, aimGiven: "start-line" as const, startLineDeg: -100.8, launchSpeedMps: 1, entrySpeedMps: 0 };
-  expect(cellText(wide, "metric")).toBe("start 101° L");
-  expect(cellText({ ...wide, startLineDeg: 91 }, "imperial")).toBe("start 91° R");
+  expect(cellText(wide, "metric")).toBe("start 101° left");
+  expect(cellText({ ...wide, startLineDeg: 91 }, "imperial")).toBe("start 91° right");
 });

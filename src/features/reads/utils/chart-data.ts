@@ -35,14 +35,14 @@ export type BreakChartAnswer = {
 /** Under a centimetre either side is "centre": nobody aims finer than that. */
 const CENTRE_M = 0.01;
 
-/** A cell as the table prints it: "11 in L", "28 cm R", "centre", or "won't stop". */
+/** A cell as the table prints it: "11 in left", "28 cm right", "centre", or "won't stop". */
 export function cellText(cell: ChartCellAnswer, units: UnitSystem): string {
   if (!cell.ok) return "won't stop";
-  if (cell.aimOffsetM === null) return `start ${Math.abs(Math.round(cell.startLineDeg))}° ${cell.startLineDeg < 0 ? "L" : "R"}`;
+  if (cell.aimOffsetM === null) return `start ${Math.abs(Math.round(cell.startLineDeg))}° ${cell.startLineDeg < 0 ? "left" : "right"}`;
   if (Math.abs(cell.aimOffsetM) < CENTRE_M) return "centre";
   const v = toShortUnit(Math.abs(cell.aimOffsetM), units);
   const shown = v < 10 ? v.toFixed(1).replace(/\.0$/, "") : String(Math.round(v));
-  return `${shown} ${shortUnitLabel(units)} ${cell.aimOffsetM < 0 ? "L" : "R"}`;
+  return `${shown} ${shortUnitLabel(units)} ${cell.aimOffsetM < 0 ? "left" : "right"}`;
 }
 
 /** A distance as a row heading: "9 ft" or "3 m". */

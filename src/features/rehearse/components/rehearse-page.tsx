@@ -60,7 +60,8 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
   const [rollPastM, setRollPastM] = useState(putt.rollPastM);
   const [compare, setCompare] = useState(false);
   const [exaggerate, setExaggerate] = useState(false);
-  const [view, setView] = useState<{ view: CameraView; key: number }>({ view: "free", key: 0 });
+  // Behind the ball at eye height first: the way a golfer sees the putt.
+  const [view, setView] = useState<{ view: CameraView; key: number }>({ view: "behind", key: 0 });
   const [replay, setReplay] = useState<Replay | null>(null);
   const green = { distanceM: putt.distanceM, slopePct: putt.slopePct, fallLineDeg: putt.fallLineDeg, stimpFt: putt.stimpFt };
   const { current, dying, firm } = useRehearseReads(green, rollPastM);

@@ -13,6 +13,8 @@ export function useCreateAttempt() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createAttempt,
+    // The page says what happened (kept, not kept, or a putt scored before), so no toast on top.
+    meta: { errorToast: false },
     onSuccess: () => queryClient.invalidateQueries({ queryKey: trainingKeys.all }),
   });
 }

@@ -30,19 +30,28 @@ function paceErrorWords(e: Ok, distanceM: number, units: UnitSystem): string {
   return `You hit it as hard as a flat ${formatLength(e.yours.flatPuttLengthM, units)} putt; it needed a flat ${formatLength(e.truth.flatPuttLengthM, units)} putt, so you were ${lengthWords(e.paceErrorM, units)} ${e.paceErrorM > 0 ? "firmer" : "softer"} than needed (${share} % of the putt's length).`;
 }
 
-/** The score and what it is made of, in words. */
-export function ResultPanel({ result, distanceM, units }: { result: Ok; distanceM: number; units: UnitSystem }) {
+/**
+ * The score and what it is made of, in words. `scored` false (a second read of a putt whose line was seen): no
+ * score, the same account of the roll.
+ */
+export function ResultPanel({ result, distanceM, units, scored = true }: { result: Ok; distanceM: number; units: UnitSystem; scored?: boolean }) {
   return (
     <section aria-labelledby="training-result" className="flex flex-col gap-3 rounded-(--radius-card) bg-ink-900 p-4 text-sand-50 sm:p-5">
-      <div className="flex items-baseline gap-3">
+      {scored ? (
+        <div className="flex items-baseline gap-3">
+          <h2 id="training-result" className="text-sm font-semibold tracking-wide text-coral-300 uppercase">
+            Score
+          </h2>
+          <p className="text-4xl font-semibold tabular-nums" aria-label={`Score ${result.score} out of 100`}>
+            {result.score}
+            <span className="text-lg font-normal text-sand-200"> / 100</span>
+          </p>
+        </div>
+      ) : (
         <h2 id="training-result" className="text-sm font-semibold tracking-wide text-coral-300 uppercase">
-          Score
+          Practice read · not scored
         </h2>
-        <p className="text-4xl font-semibold tabular-nums" aria-label={`Score ${result.score} out of 100`}>
-          {result.score}
-          <span className="text-lg font-normal text-sand-200"> / 100</span>
-        </p>
-      </div>
+      )}
       <p className="text-lg font-medium">{finishWords(result, units)}</p>
       <ul className="flex flex-col gap-1.5 text-sand-100">
         <li>{aimErrorWords(result, units)}</li>

@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useState, type KeyboardEvent } from "react";
 import { useSearchParams } from "react-router";
 import clsx from "clsx";
-import { TRAINING_LEVELS, TRAINING_LEVEL_IDS, evaluateAttempt, type Evaluation, type TrainingLevelId } from "../../../../shared/training";
+import { TRAINING_LEVELS, TRAINING_LEVEL_IDS, evaluateAttempt, levelDescription, type Evaluation, type TrainingLevelId } from "../../../../shared/training";
 import { formatLength, fromShortUnit, type UnitSystem } from "../../../../shared/units";
 import { CameraButtons } from "../../../components/green-3d/camera-buttons";
 import { contourIntervalM, greenShape, heightRange } from "../../../components/green-3d/frame";
@@ -11,6 +11,7 @@ import type { CameraView, Replay, SceneAim, SceneLine } from "../../../component
 import { SlopeLegend } from "../../../components/green-3d/slope-legend";
 import { aimWords, fallLineWords } from "../../../components/green-3d/words";
 import { Alert, Button, Card, PageHeader, PageSpinner } from "../../../components/ui";
+import { isApiError } from "../../../lib/api-client";
 import { useMe } from "../../auth/api/get-me";
 import { useCreateAttempt } from "../api/create-attempt";
 import { newSeed, roundPutt } from "../utils/putt-generator";
@@ -52,7 +53,7 @@ export function TrainPage() {
         title="Read it, then see the line"
         description="A putt on a green you have not seen. Set where you would start the ball and how firmly you would hit it, then reveal the true line and your score."
       />
-      <LevelPicker level={level} onChange={(l) => setParams(roundQuery(l, seed ?? newSeed(), 0))} />
+      <LevelPicker level={level} units={units} onChange={(l) => setParams(roundQuery(l, newSeed(), 0))} />
       {seed === null ? (
         <PageSpinner label="Choosing a putt" />
       ) : (
@@ -74,7 +75,8 @@ export function TrainPage() {
   );
 }
 
-function LevelPicker({ level, onChange }: { level: TrainingLevelId; onChange: (l: TrainingLevelId) => void }) {
+// A new level starts a new round: two levels with the same ranges would otherwise hand out the same putts.
+function LevelPicker({ level, units, onChange }: { level: TrainingLevelId; units: UnitSystem; onChange: (l: TrainingLevelId) => void }) {
   return (
     <fieldset className="mb-5">
       <legend className="mb-2 text-sm font-medium text-ink-800">Level</legend>
@@ -98,7 +100,7 @@ function LevelPicker({ level, onChange }: { level: TrainingLevelId; onChange: (l
                 className="sr-only"
               />
               <span className="font-medium text-ink-900">{l.label}</span>
-              <span className="text-xs text-ink-500">{l.description}</span>
+              <span className="text-xs text-ink-500">{levelDescription(id, units)}</span>
             </label>
           );
         })}
@@ -122,6 +124,8 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
   const [aimOffsetM, setAim] = useState(0);
   const [flatPuttLengthM, setFlatPutt] = useState(() => Math.round(putt.distanceM * 20) / 20);
   const [result, setResult] = useState<Evaluation | null>(null);
+  // Once the line has been revealed, further reads of this putt are practice: shown, never scored or kept.
+  const [practice, setPractice] = useState(false);
   const [replay, setReplay] = useState<Replay | null>(null);
   const [view, setView] = useState<{ view: CameraView; key: number }>({ view: "behind", key: 0 });
   const [exaggerate, setExaggerate] = useState(false);
@@ -141,12 +145,13 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
     const ev = evaluateAttempt(putt, guess);
     setResult(ev);
     if (ev.ok) setReplay({ key: Date.now(), rate: 1, ...ev.yours.samples, holeTimeS: ev.yours.holeTimeS });
-    if (ev.ok && signedIn) save.mutate({ level, putt, guess });
+    if (ev.ok && signedIn && !practice) save.mutate({ level, putt, guess });
   };
   const watchAgain = (rate: number) => {
     if (result?.ok) setReplay({ key: Date.now(), rate, ...result.yours.samples, holeTimeS: result.yours.holeTimeS });
   };
   const tryAgain = () => {
+    setPractice(true);
     setResult(null);
     setReplay(null);
     save.reset();
@@ -160,6 +165,11 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
   };
 
   const ok = result?.ok ? result : null;
+  // The server keeps one scored read per putt: a putt scored before (a reopened round link) is practice too.
+  const scoredBefore = save.error !== null && isApiError(save.error) && save.error.status === 409;
+  const notScored = practice || scoredBefore;
+  // "By eye": slope and fall line are read from the picture; numbers and words about them wait for the reveal.
+  const slopeShown = TRAINING_LEVELS[level].slopeGiven || revealed;
   const lines: SceneLine[] = [];
   const aims: SceneAim[] = [];
   if (ok) {
@@ -181,11 +191,22 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
         </h2>
         <dl className="mt-2 grid grid-cols-2 gap-x-3 gap-y-1 sm:grid-cols-4">
           <Fact term="Distance" value={formatLength(putt.distanceM, units)} />
-          <Fact term="Slope" value={`${putt.slopePct} %`} />
           <Fact term="Stimp" value={`${putt.stimpFt} ft`} />
-          <Fact term="Fall line" value={`${putt.fallLineDeg}°`} />
+          {slopeShown ? (
+            <>
+              <Fact term="Slope" value={`${putt.slopePct} %`} />
+              <Fact term="Fall line" value={`${putt.fallLineDeg}°`} />
+            </>
+          ) : null}
         </dl>
-        <p className="mt-2 text-ink-700">The green {fallLineWords(putt.fallLineDeg)}.</p>
+        {slopeShown ? (
+          <p className="mt-2 text-ink-700">The green {fallLineWords(putt.fallLineDeg)}.</p>
+        ) : (
+          <p className="mt-2 text-ink-700">
+            Read the slope from the green itself: its shading, its contour lines and how it tilts as you turn the camera. The numbers
+            come with the line.
+          </p>
+        )}
       </Card>
       <div
         tabIndex={0}
@@ -207,7 +228,7 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
           viewKey={view.key}
           replay={replay}
           onAimChange={revealed ? undefined : (x) => setAim(clampAim(x))}
-          label={`Training putt: ${formatLength(putt.distanceM, units)}, the green ${fallLineWords(putt.fallLineDeg)}; your aim ${aimWords(aimOffsetM, units)}.`}
+          label={`Training putt: ${formatLength(putt.distanceM, units)}, ${slopeShown ? `the green ${fallLineWords(putt.fallLineDeg)}` : "the slope to be read from the picture"}; your aim ${aimWords(aimOffsetM, units)}.`}
           toolbar={<CameraButtons view={view.view} onView={(v) => setView((s) => ({ view: v, key: s.key + 1 }))} />}
         />
       </div>
@@ -224,15 +245,21 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
           <FlatPuttControl flatPuttLengthM={flatPuttLengthM} distanceM={putt.distanceM} units={units} disabled={revealed} onChange={setFlatPutt} />
           {!revealed ? (
             <Button variant="accent" size="lg" onClick={reveal}>
-              Reveal the line
+              {practice ? "Reveal the line (not scored)" : "Reveal the line"}
             </Button>
           ) : null}
         </Card>
         {result && !result.ok ? <Alert tone="warning">{result.message}</Alert> : null}
         {ok ? (
           <>
-            <ResultPanel result={ok} distanceM={putt.distanceM} units={units} />
-            {signedIn ? (
+            <ResultPanel result={ok} distanceM={putt.distanceM} units={units} scored={!notScored} />
+            {notScored ? (
+              <p role="status" className="text-sm text-ink-600">
+                {practice
+                  ? "A second read of a putt whose line you have seen is practice: it is not scored or kept."
+                  : "You were scored on this putt before and have seen its line, so this read is practice: it is not scored or kept."}
+              </p>
+            ) : signedIn ? (
               <p role="status" className="text-sm text-ink-600">
                 {save.isPending
                   ? "Keeping this read in your history…"
@@ -251,7 +278,7 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
                 </Button>
               ) : null}
               <Button variant="ghost" onClick={tryAgain}>
-                Read it again
+                Read it again (practice, not scored)
               </Button>
             </div>
           </>
@@ -273,6 +300,7 @@ function TrainingRound({ level, seed, n, units, signedIn, onNext, onNewRound }: 
 
       <Card padded={false} className="p-4 lg:col-start-1 lg:row-start-3">
         <SlopeLegend
+          slopeHidden={!slopeShown}
           slopePct={putt.slopePct}
           fallLineDeg={putt.fallLineDeg}
           contourIntervalM={interval}
