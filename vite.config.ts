@@ -2,6 +2,8 @@ import { defineConfig } from "vite";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
 import { compression, defineAlgorithm } from "vite-plugin-compression2";
+import { VitePWA } from "vite-plugin-pwa";
+import { API_CACHE, OFFLINE_API_URL } from "./src/lib/offline-cache";
 
 // The Express server runs Vite in middleware mode during development, so no proxy
 // is configured here and `server.hmr` keeps its default.
@@ -10,6 +12,55 @@ export default defineConfig({
   plugins: [
     react(),
     tailwindcss(),
+    // Installable and usable with no signal (issue 14): a web app manifest and a Workbox service worker that
+    // precaches the built app (after the first page has loaded: registration waits for the load event), serves
+    // index.html for every page offline, and keeps a few API answers network-first (src/lib/offline-cache.ts).
+    // registerType "prompt": a new version waits until the person taps Reload (src/app/update-prompt.tsx).
+    VitePWA({
+      registerType: "prompt",
+      injectRegister: false,
+      manifest: {
+        name: "Borrowline",
+        short_name: "Borrowline",
+        description: "Putting and green-reading calculator and practice trainer for golfers and their coaches.",
+        start_url: "/",
+        scope: "/",
+        display: "standalone",
+        background_color: "#fbf7ef",
+        theme_color: "#131d33",
+        icons: [
+          { src: "/icon-192.png", sizes: "192x192", type: "image/png" },
+          { src: "/icon-512.png", sizes: "512x512", type: "image/png" },
+          { src: "/icon-maskable-512.png", sizes: "512x512", type: "image/png", purpose: "maskable" },
+          { src: "/favicon.svg", sizes: "any", type: "image/svg+xml" },
+        ],
+      },
+      workbox: {
+        // The brotli/gzip copies beside each asset are for the server, not the cache.
+        globPatterns: ["**/*.{js,css,html,svg,png,woff2,webmanifest}"],
+        // The three.js chunk is large; it is fetched in the background after the first page, never on its way.
+        maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
+        navigateFallback: "/index.html",
+        navigateFallbackDenylist: [/^\/api\//],
+        cleanupOutdatedCaches: true,
+        // The first worker takes over the open page at once (there is no older version to wait for), so the API
+        // answers the golfer fetches from then on are kept for offline use. A new version still waits for "Reload".
+        clientsClaim: true,
+        runtimeCaching: [
+          {
+            urlPattern: OFFLINE_API_URL,
+            handler: "NetworkFirst",
+            method: "GET",
+            options: {
+              cacheName: API_CACHE,
+              networkTimeoutSeconds: 6,
+              expiration: { maxEntries: 300, maxAgeSeconds: 14 * 24 * 3600 },
+              cacheableResponse: { statuses: [200] },
+            },
+          },
+        ],
+      },
+    }),
     compression({
       include: /\.(js|mjs|css|html|json|svg|txt|map)$/,
       algorithms: [defineAlgorithm("brotliCompress"), defineAlgorithm("gzip", { level: 9 })],

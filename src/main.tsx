@@ -8,6 +8,7 @@ import "@fontsource/lexend/700.css";
 import "./index.css";
 import { AppProvider } from "./app/provider";
 import { AppRouter } from "./app/router";
+import { ServiceWorker } from "./app/service-worker";
 
 const container = document.getElementById("root");
 if (!container) throw new Error("Missing #root element in index.html");
@@ -16,6 +17,7 @@ createRoot(container).render(
   <StrictMode>
     <AppProvider>
       <AppRouter />
+      <ServiceWorker />
     </AppProvider>
   </StrictMode>,
 );

@@ -2,6 +2,7 @@
 // SI units in every numeric column (metres, m/s); Stimp in feet as the trade quotes it.
 import { sql } from "drizzle-orm";
 import {
+  type AnyPgColumn,
   boolean,
   date,
   doublePrecision,
@@ -42,9 +43,11 @@ export const greens = pgTable(
     name: text("name").notNull(),
     locationNote: text("location_note"),
     heightMap: jsonb("height_map"),
+    /** Shared with this squad (its players see it, log on it and read on its map); null: the owner's alone. */
+    squadId: uuid("squad_id").references((): AnyPgColumn => squads.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
-  (t) => [index("greens_owner_idx").on(t.ownerId)],
+  (t) => [index("greens_owner_idx").on(t.ownerId), index("greens_squad_idx").on(t.squadId)],
 );
 
 export const stimpReadings = pgTable(

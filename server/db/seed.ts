@@ -68,6 +68,8 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
 
   const [squad] = await db.insert(squads).values({ coachId, ...DEMO_SQUAD, createdAt: at(DEMO_WEEKS * 7 + 20, 9) }).returning();
   await db.insert(squadMembers).values(playerIds.map((playerId, i) => ({ squadId: squad!.id, playerId, joinedAt: at(firstSessionDaysAgo(i) + 2, 19) })));
+  // The club's practice green is the squad's: its juniors see it, log on it and read on its map (issue 14).
+  await db.update(greens).set({ squadId: squad!.id }).where(eq(greens.id, green!.id));
   await db.insert(ladders).values(DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l, createdAt: at(DEMO_WEEKS * 7 + 19, 20), updatedAt: at(DEMO_WEEKS * 7 + 19, 20) })));
 
   for (const [i, p] of DEMO_PLAYERS.entries()) {

@@ -1,4 +1,5 @@
-import { ERROR_CODES, type ErrorCode } from "../../shared/errors";
+import { ERROR_CODES, type ApiErrorBody, type ErrorCode } from "../../shared/errors";
+import { cannotStopBody } from "../../shared/read-answers";
 
 /** Thrown anywhere in a handler; the error middleware writes the JSON body once. */
 export class HttpError extends Error {
@@ -26,13 +27,14 @@ export const unprocessable = (message: string, fields?: Record<string, string>) 
 
 /**
  * The 422 of a ball that cannot stop, the same for the planar and the surface read: the physics message, the field
- * to change, and `details.reason: "cannot-stop"` with the steepest stoppable slope (%) as a number.
+ * to change, and `details.reason: "cannot-stop"` with the steepest stoppable slope (%) as a number
+ * (`cannotStopBody` in shared/read-answers.ts, which the browser uses offline too).
  */
 export const cannotStopError = (message: string, field: string, stimpFt: number, maxStoppableSlopePct: number) =>
-  new HttpError(
-    422,
-    ERROR_CODES.unprocessable,
-    message,
-    { [field]: `too steep to stop a ball at Stimp ${stimpFt} ft (steepest: ${maxStoppableSlopePct.toFixed(1)} %)` },
-    { reason: "cannot-stop", maxStoppableSlopePct: Number(maxStoppableSlopePct.toFixed(3)) },
-  );
+  httpErrorOf(422, cannotStopBody(message, field, stimpFt, maxStoppableSlopePct));
+
+/** An HttpError carrying an error body built elsewhere (shared code that builds the same body for the browser). */
+export function httpErrorOf(status: number, body: ApiErrorBody): HttpError {
+  const { code, message, fields, details } = body.error;
+  return new HttpError(status, code as ErrorCode, message, fields, details);
+}

@@ -36,11 +36,6 @@ export function readableBy(viewer: SessionUser, playerColumn: AnyPgColumn): SQL 
   return eq(playerColumn, viewer.id);
 }
 
-/** Greens a player may log a session on: their own, and their coaches' (a squad practises on its coach's green). */
-export function usableGreenCondition(viewerId: string, ownerColumn: AnyPgColumn): SQL {
-  return sql`(${ownerColumn} = ${viewerId} or ${ownerColumn} in (select ${squads.coachId} from ${squads} inner join ${squadMembers} on ${squadMembers.squadId} = ${squads.id} where ${squadMembers.playerId} = ${viewerId}))`;
-}
-
 /** SQL condition: the row's player column is, right now, a member of one of `coachId`'s squads (leaving ends a coach's access). */
 export function inSquadsOf(coachId: string, playerColumn: AnyPgColumn): SQL {
   return sql`${playerColumn} in (select ${squadMembers.playerId} from ${squadMembers} inner join ${squads} on ${squads.id} = ${squadMembers.squadId} where ${squads.coachId} = ${coachId})`;

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { multilineText, plainText } from "./text";
-import { isoDateSchema } from "./common";
+import { idSchema, isoDateSchema } from "./common";
 
 /** Stimp readings accepted, ft: the USGA survey's slowest category is 4′6″; tournament greens reach 14+. */
 export const STIMP_LIMITS = { minFt: 3, maxFt: 16 } as const;
@@ -68,10 +68,20 @@ export type StimpReading = {
   note: string | null;
 };
 
+/** PUT /api/greens/:id/squad: share the green with one of the coach's squads, or (null) keep it to oneself. */
+export const greenShareSchema = z.object({ squadId: idSchema.nullable() }).strict();
+export type GreenShare = z.infer<typeof greenShareSchema>;
+
 export type GreenSummary = {
   id: string;
   name: string;
   locationNote: string | null;
+  /** The squad it is shared with (its players see it, log sessions on it and read on its map); null: the owner's alone. */
+  squad: { id: string; name: string } | null;
+  /** Who keeps it (edits it, adds Stimp readings, shares it). */
+  ownerName: string;
+  /** True for the owner: the only one who edits it, adds readings, uploads its map or shares it. */
+  mine: boolean;
   /** The latest reading's Stimp (by measuredOn, then by when it was entered); null without readings. */
   currentStimpFt: number | null;
   createdAt: string;

@@ -72,6 +72,7 @@ export const apiPaths = {
   trainingAttempts: "/api/training/attempts",
   // practice log and make rates (issue 5)
   green: (id: string) => `/api/greens/${encodeURIComponent(id)}`,
+  greenSquad: (id: string) => `/api/greens/${encodeURIComponent(id)}/squad`,
   greenStimpReadings: (id: string) => `/api/greens/${encodeURIComponent(id)}/stimp-readings`,
   greenStimpReading: (id: string, readingId: string) => `/api/greens/${encodeURIComponent(id)}/stimp-readings/${encodeURIComponent(readingId)}`,
   sessions: "/api/sessions",

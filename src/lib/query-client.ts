@@ -1,4 +1,4 @@
-import { MutationCache, QueryCache, QueryClient } from "@tanstack/react-query";
+import { MutationCache, onlineManager, QueryCache, QueryClient } from "@tanstack/react-query";
 import { toast } from "sonner";
 import { ApiError, isApiError } from "./api-client";
 
@@ -45,8 +45,19 @@ export function createQueryClient(): QueryClient {
         staleTime: 30_000,
         retry: shouldRetry,
         refetchOnWindowFocus: true,
+        // Try once even offline: the service worker may have the answer (src/lib/offline-cache.ts); retries wait
+        // for the connection.
+        networkMode: "offlineFirst",
       },
       mutations: { retry: false },
     },
   });
+}
+
+/**
+ * TanStack Query assumes it is online until an "offline" event: a page opened with no signal would never hear one.
+ * A browser that says it is offline is right (it is "online" that can be wrong), so start from that.
+ */
+export function startOnlineState(): void {
+  if (typeof navigator !== "undefined" && navigator.onLine === false) onlineManager.setOnline(false);
 }

@@ -2,8 +2,8 @@
 // Personas: signed out; P1, a player in squad S1 of coach C1; P2, a player in squad S2 of coach C2; C1; C2;
 // an admin. Expected statuses follow the product brief's roles table and the handlers: a player reads
 // only their own practice; a coach also reads (never writes) the practice of the players in their own
-// squads; an admin reads any practice and manages any squad or ladder; greens, saved reads and training
-// history are their owner's alone. Every request is also checked for leaks: a response never carries a
+// squads; an admin reads any practice and manages any squad or ladder; saved reads and training history are
+// their owner's alone; a green is its owner's, and the players and coach of the squad it is shared with read it. Every request is also checked for leaks: a response never carries a
 // marker (an id or a distinctive text) of data the persona may not see, a refused request answers the
 // error shape without the ids from its path, and it changes nothing (the database fingerprint, and the
 // resource read back by its owner). A route missing from the table fails the first test.
@@ -133,6 +133,12 @@ const fresh = {
   putt: async () => (await ok(clients.p1.post(`/api/sessions/${fx.scratchSession}/putts`, { distanceM: 2, holed: true }))).id as string,
   round: async () => (await ok(clients.p1.post("/api/rounds", { date: "2026-05-02", notes: "throwaway" }))).id as string,
   read: async () => (await ok(clients.p1.post("/api/reads", { read: sideHill, label: "throwaway" }))).id as string,
+  /** A green of C1's with a reading, not shared yet. */
+  coachGreen: async () => {
+    const id = (await ok(clients.c1.post("/api/greens", { name: "Throwaway coach green" }))).id as string;
+    await ok(clients.c1.post(`/api/greens/${id}/stimp-readings`, { measuredOn: "2026-05-01", stimpFt: 10 }));
+    return id;
+  },
   green: async (withMap = false) => {
     const id = (await ok(clients.p1.post("/api/greens", { name: "Throwaway green" }))).id as string;
     if (withMap) await ok(clients.p1.put(`/api/greens/${id}/height-map`, plane), 200);
@@ -195,12 +201,14 @@ beforeAll(async () => {
     )
   ).id;
 
-  // C1: a ladder assigned to P1, who has played a putt of it; a green of C1's with a height map (P1 practises on it).
+  // C1: a ladder assigned to P1, who has played a putt of it; a green of C1's with a height map, shared with S1 (P1 practises on it).
   const l1 = await createLadder(c1.client, { ...THREE_RUNGS, name: "secret-ladder-C1" });
   const a1 = (await ok(c1.client.post(`/api/ladders/${l1}/assignments`, { playerIds: [p1.id] }))).assignments[0].id;
   await ok(p1.client.post(`/api/assignments/${a1}/putts`, { holed: true }));
   const coachGreen = (await ok(c1.client.post("/api/greens", { name: "Coach green" }))).id;
   await ok(c1.client.put(`/api/greens/${coachGreen}/height-map`, plane), 200);
+  await ok(c1.client.post(`/api/greens/${coachGreen}/stimp-readings`, { measuredOn: "2026-04-01", stimpFt: 10 }));
+  await ok(c1.client.put(`/api/greens/${coachGreen}/squad`, { squadId: s1 }), 200);
   // A pending invitation on a squad of no interest: its public preview shows the squad's name to anyone with the token.
   const inviteSquad = await createSquad(c1.client, "Invite squad");
   const inviteEmail = uniqueEmail("invitee");
@@ -518,7 +526,8 @@ const rows: Row[] = [
   { route: "GET /api/admin/audit", target: "the audit list", expect: ADMIN_ONLY(200) },
   { route: "GET /api/admin/coaching", target: "every coach's squads and ladders", expect: ADMIN_ONLY(200), reveals: "s1Name" },
 
-  // Greens: the owner's alone — neither P1's coach nor an admin reads them (greens.handlers.ts greenOf).
+  // Greens: P1's own green is P1's alone — neither P1's coach nor an admin reads it (lib/green-access.ts); a
+  // green shared with a squad has its own test below.
   { route: "GET /api/greens", target: "own greens", expect: SIGNED_IN(200), reveals: "p1GreenNote" },
   { route: "POST /api/greens", target: "own greens", body: () => ({ name: "Mine" }), expect: SIGNED_IN(201) },
   { route: "GET /api/greens/:id", target: "P1's green", params: () => ({ id: fx.green }), expect: OWNER_ONLY(200), reveals: "p1GreenNote" },
@@ -555,6 +564,16 @@ const rows: Row[] = [
     },
     expect: OWNER_ONLY(204),
     readBack: (p) => ({ as: "p1", path: `/api/greens/${p.id}` }),
+  },
+
+  // Sharing a green with a squad: a coach's, for their own green and their own squad (greens.handlers.ts shareGreen).
+  {
+    route: "PUT /api/greens/:id/squad",
+    target: "C1's green (fresh), shared into S1",
+    params: async () => ({ id: await fresh.coachGreen() }),
+    body: () => ({ squadId: fx.s1 }),
+    expect: { anon: 401, p1: 403, p2: 403, c1: 200, c2: 404, admin: 404 },
+    readBack: (p) => ({ as: "c1", path: `/api/greens/${p.id}` }),
   },
 
   // Height maps: the owner writes; the owner and the players of the owner's squads read (not the owner's coach, not an admin).
@@ -790,13 +809,41 @@ test("ids in bodies and queries: another's green, squad or ladder cannot be used
   const filtered = await p1.get(`/api/putts?sessionId=${fx.p2Session}`);
   expect(filtered.status).toBe(200);
   expect(filtered.body.items).toEqual([]);
-  // A squad player practises on their coach's green and reads its height map, but may not change it.
+  // A squad player practises on the green their coach shared with the squad and reads its height map, but may not change it.
   expect((await p1.post("/api/sessions", { date: "2026-05-06", greenId: fx.coachGreen })).status).toBe(201);
   expect((await p1.get(`/api/greens/${fx.coachGreen}/height-map`)).status).toBe(200);
   expect((await p2.get(`/api/greens/${fx.coachGreen}/height-map`)).status).toBe(404);
-  expect((await p1.delete(`/api/greens/${fx.coachGreen}/height-map`)).status).toBe(404);
-  expect((await p1.put(`/api/greens/${fx.coachGreen}/height-map`, plane)).status).toBe(404);
+  expect((await p1.delete(`/api/greens/${fx.coachGreen}/height-map`)).status).toBe(403);
+  expect((await p1.put(`/api/greens/${fx.coachGreen}/height-map`, plane)).status).toBe(403);
   expect((await clients.c1.get(`/api/greens/${fx.coachGreen}/height-map`)).status).toBe(200);
+  // A green of the coach's that is not shared stays the coach's alone.
+  const unshared = await fresh.coachGreen();
+  expect((await p1.post("/api/sessions", { date: "2026-05-06", greenId: unshared })).status).toBe(400);
+  expect((await p1.get(`/api/greens/${unshared}`)).status).toBe(404);
+  // C2 cannot share C1's green, nor C1 share into C2's squad.
+  expect((await c2.put(`/api/greens/${unshared}/squad`, { squadId: fx.s2 })).status).toBe(404);
+  expect((await clients.c1.put(`/api/greens/${unshared}/squad`, { squadId: fx.s2 })).status).toBe(400);
+});
+
+test("a green shared with S1: its players and coach see it; only its owner (C1) changes it; nobody else finds it", async () => {
+  const see = { anon: 401, p2: 404, c2: 404, p1: 200, c1: 200, admin: 404 } satisfies Expect;
+  const change = { anon: 401, p2: 404, c2: 404, p1: 403, c1: 200, admin: 404 } satisfies Expect;
+  const id = fx.coachGreen;
+  for (const who of PERSONAS) {
+    const where = `as ${who}`;
+    expect((await clients[who].get(`/api/greens/${id}`)).status, `GET green ${where}`).toBe(see[who]);
+    expect((await clients[who].get(`/api/greens/${id}/height-map`)).status, `GET height map ${where}`).toBe(see[who]);
+    expect((await clients[who].post(`/api/greens/${id}/reads/solve`, { ball: [1, 1], hole: [1, 3], stimpFt: 10 })).status, `solve ${where}`).toBe(see[who]);
+    const listed = (await clients[who].get("/api/greens")).body?.items?.some((g: { id: string }) => g.id === id) ?? false;
+    expect(listed, `listed ${where}`).toBe(see[who] === 200);
+    if (who === "c1") continue;
+    const before = await fingerprint();
+    expect((await clients[who].patch(`/api/greens/${id}`, { name: "Taken over" })).status, `PATCH ${where}`).toBe(change[who]);
+    expect((await clients[who].post(`/api/greens/${id}/stimp-readings`, { measuredOn: "2026-05-02", stimpFt: 8 })).status, `reading ${where}`).toBe(change[who]);
+    expect((await clients[who].delete(`/api/greens/${id}`)).status, `DELETE ${where}`).toBe(change[who]);
+    expect(await fingerprint(), `${where}: a refused change changed the database`).toBe(before);
+  }
+  expect((await clients.c1.patch(`/api/greens/${id}`, { locationNote: "By the clubhouse" })).status).toBe(200);
 });
 
 test("users and roles are the admin's: better-auth's admin endpoints refuse players and coaches", async () => {

@@ -1,6 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, expect, test } from "vitest";
+import { eq } from "drizzle-orm";
 import { greens, squadMembers, squads } from "../../server/db/schema";
 import { signedUpClient } from "../factories/users";
 import type { HttpClient } from "../setup/http";
@@ -127,12 +128,15 @@ test("the height map belongs to the green's owner: another user gets 404 on ever
   expect((await other.client.post(`/api/greens/${id}/reads/solve`, { ball: [1, 1], hole: [1, 3], stimpFt: 10 })).status).toBe(404);
   expect((await owner.client.get("/api/greens/not-a-uuid/height-map")).status).toBe(400);
   expect((await put(owner.client, "not-a-uuid", { kind: "grid", spacingM: 1, heightsM: [[0, 0], [0, 0]] })).status).toBe(400);
-  // A player in the owner's squad may read the map and solve on it, but not change it.
+  // A player in the owner's squad reads the map and solves on it once the green is shared with that squad (not
+  // before: a coach's own greens stay theirs), but does not change it.
   const [squad] = await server.database.db.insert(squads).values({ coachId: owner.id, name: "Green squad" }).returning({ id: squads.id });
   await server.database.db.insert(squadMembers).values({ squadId: squad!.id, playerId: other.id });
+  expect((await other.client.get(`/api/greens/${id}/height-map`)).status).toBe(404);
+  await server.database.db.update(greens).set({ squadId: squad!.id }).where(eq(greens.id, id));
   expect((await other.client.get(`/api/greens/${id}/height-map`)).status).toBe(200);
   expect((await other.client.post(`/api/greens/${id}/reads/solve`, { ball: [1, 1], hole: [1, 3], stimpFt: 10 })).status).toBe(200);
-  expect((await other.client.delete(`/api/greens/${id}/height-map`)).status).toBe(404);
+  expect((await other.client.delete(`/api/greens/${id}/height-map`)).status).toBe(403);
 });
 
 test("POST /api/greens/:id/reads/solve on a planar map equals POST /api/reads/solve to 1 mm", async () => {

@@ -97,3 +97,15 @@ function wilson(made: number, n: number): { lo: number; hi: number } {
   const half = (z / (1 + (z * z) / n)) * Math.sqrt((p * (1 - p)) / n + (z * z) / (4 * n * n));
   return { lo: centre - half, hi: centre + half };
 }
+
+test("the demo's Top green is the squad's: a junior sees it (shared by the coach), reads on it and cannot change it", async () => {
+  const junior = new HttpClient(server.url);
+  expect((await junior.post("/api/auth/sign-in/email", { email: DEMO_PLAYERS[0].email, password: DEMO_PASSWORD })).status).toBe(200);
+  const list = await junior.get("/api/greens");
+  const top = (list.body.items as { id: string; name: string; mine: boolean; ownerName: string; squad: { name: string } | null }[]).find((g) => g.name === "Top green");
+  expect(top).toMatchObject({ mine: false, ownerName: DEMO_COACH.name, squad: { name: expect.any(String) } });
+  const green = await junior.get(`/api/greens/${top!.id}`);
+  expect(green.body.readings.length).toBeGreaterThan(0);
+  expect((await junior.post("/api/sessions", { date: new Date().toISOString().slice(0, 10), greenId: top!.id })).status).toBe(201);
+  expect((await junior.patch(`/api/greens/${top!.id}`, { name: "Mine" })).status).toBe(403);
+});

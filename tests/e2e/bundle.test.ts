@@ -124,6 +124,8 @@ test("in Chromium: JavaScript sent for / and /read ≤ 200 KiB, /stats (signed i
     const cdp = await context.newCDPSession(page);
     await cdp.send("Network.enable");
     await cdp.send("Network.setCacheDisabled", { cacheDisabled: true });
+    // Measure what a first visit sends: the service worker installed by the first page would serve the later ones.
+    await cdp.send("Network.setBypassServiceWorker", { bypass: true });
     const urls = new Map<string, string>();
     let bytes = 0;
     let jsBytes = 0;

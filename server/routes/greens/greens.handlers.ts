@@ -4,14 +4,16 @@ import { stimpFromTwoWays } from "../../../physics";
 import {
   greenInputSchema,
   greenPatchSchema,
+  greenShareSchema,
   STIMP_LIMITS,
   stimpReadingInputSchema,
   type Green,
   type GreenSummary,
 } from "../../../shared/schemas/greens";
 import type { Db } from "../../db/client";
-import { greens, stimpReadings } from "../../db/schema";
-import { notFound, unprocessable } from "../../lib/http-error";
+import { greens, squads, stimpReadings, user } from "../../db/schema";
+import { ownGreenOr403, visibleGreen } from "../../lib/green-access";
+import { badRequest, notFound, unprocessable } from "../../lib/http-error";
 import { pathId } from "../../lib/path-params";
 import { currentUser } from "../../middleware/session";
 import { body } from "../../middleware/validate";
@@ -26,22 +28,49 @@ const summaryColumns = {
   locationNote: greens.locationNote,
   currentStimpFt: currentStimp,
   createdAt: greens.createdAt,
+  ownerId: greens.ownerId,
+  ownerName: user.name,
+  squadId: squads.id,
+  squadName: squads.name,
 };
 
-function toSummary(row: { id: string; name: string; locationNote: string | null; currentStimpFt: number | null; createdAt: Date }): GreenSummary {
-  return { ...row, currentStimpFt: row.currentStimpFt === null ? null : Number(row.currentStimpFt), createdAt: row.createdAt.toISOString() };
+type SummaryRow = {
+  id: string;
+  name: string;
+  locationNote: string | null;
+  currentStimpFt: number | null;
+  createdAt: Date;
+  ownerId: string;
+  ownerName: string;
+  squadId: string | null;
+  squadName: string | null;
+};
+
+function toSummary(row: SummaryRow, meId: string): GreenSummary {
+  const { ownerId, squadId, squadName, ...rest } = row;
+  return {
+    ...rest,
+    currentStimpFt: row.currentStimpFt === null ? null : Number(row.currentStimpFt),
+    createdAt: row.createdAt.toISOString(),
+    squad: squadId && squadName !== null ? { id: squadId, name: squadName } : null,
+    mine: ownerId === meId,
+  };
 }
 
-/** The owner's green with its readings (newest first), or a 404. */
-async function greenOf(db: Db, ownerId: string, id: string): Promise<Green> {
-  const [row] = await db.select(summaryColumns).from(greens).where(and(eq(greens.id, id), eq(greens.ownerId, ownerId)));
+/** Greens with their owner's name and the squad they are shared with. */
+const selectGreens = (db: Db) =>
+  db.select(summaryColumns).from(greens).innerJoin(user, eq(user.id, greens.ownerId)).leftJoin(squads, eq(squads.id, greens.squadId));
+
+/** A green I may see (mine, or shared with a squad of mine) with its readings (newest first), or a 404. */
+async function greenOf(db: Db, meId: string, id: string): Promise<Green> {
+  const [row] = await selectGreens(db).where(and(eq(greens.id, id), visibleGreen(meId)));
   if (!row) throw notFound("That green");
   const readings = await db
     .select({ id: stimpReadings.id, measuredOn: stimpReadings.measuredOn, stimpFt: stimpReadings.stimpFt, upFt: stimpReadings.upFt, downFt: stimpReadings.downFt, note: stimpReadings.note })
     .from(stimpReadings)
     .where(eq(stimpReadings.greenId, id))
     .orderBy(desc(stimpReadings.measuredOn), desc(stimpReadings.createdAt));
-  return { ...toSummary(row), readings };
+  return { ...toSummary(row, meId), readings };
 }
 
 const greenId = (req: { params: Record<string, string | string[] | undefined> }) => pathId(req);
@@ -49,8 +78,8 @@ const greenId = (req: { params: Record<string, string | string[] | undefined> })
 export function listGreens(db: Db): RequestHandler {
   return async (req, res) => {
     const me = currentUser(req);
-    const rows = await db.select(summaryColumns).from(greens).where(eq(greens.ownerId, me.id)).orderBy(asc(greens.name), asc(greens.createdAt));
-    res.json({ items: rows.map(toSummary) });
+    const rows = await selectGreens(db).where(visibleGreen(me.id)).orderBy(asc(greens.name), asc(greens.createdAt));
+    res.json({ items: rows.map((r) => toSummary(r, me.id)) });
   };
 }
 
@@ -74,6 +103,7 @@ export function updateGreen(db: Db): RequestHandler {
     const me = currentUser(req);
     const id = greenId(req);
     const patch = body(req, greenPatchSchema);
+    await ownGreenOr403(db, me.id, id);
     const updated = await db
       .update(greens)
       .set({ ...(patch.name !== undefined ? { name: patch.name } : {}), ...(patch.locationNote !== undefined ? { locationNote: patch.locationNote } : {}) })
@@ -87,6 +117,7 @@ export function updateGreen(db: Db): RequestHandler {
 export function deleteGreen(db: Db): RequestHandler {
   return async (req, res) => {
     const me = currentUser(req);
+    await ownGreenOr403(db, me.id, greenId(req));
     // Sessions on this green keep their putts; their greenId becomes null (ON DELETE SET NULL).
     const gone = await db.delete(greens).where(and(eq(greens.id, greenId(req)), eq(greens.ownerId, me.id))).returning({ id: greens.id });
     if (gone.length === 0) throw notFound("That green");
@@ -99,7 +130,8 @@ export function addStimpReading(db: Db): RequestHandler {
     const me = currentUser(req);
     const id = greenId(req);
     const input = body(req, stimpReadingInputSchema);
-    await greenOf(db, me.id, id);
+    // The owner keeps the green's record; a player notes the day's Stimp on their own session instead.
+    await ownGreenOr403(db, me.id, id);
     let stimpFt = input.stimpFt;
     if (stimpFt === undefined) {
       // Two-way reading on a slope: Brede's harmonic-mean correction (physics owns the formula).
@@ -128,9 +160,28 @@ export function deleteStimpReading(db: Db): RequestHandler {
     const me = currentUser(req);
     const id = greenId(req);
     const readingId = pathId(req, "readingId");
-    await greenOf(db, me.id, id);
+    await ownGreenOr403(db, me.id, id);
     const gone = await db.delete(stimpReadings).where(and(eq(stimpReadings.id, readingId), eq(stimpReadings.greenId, id))).returning({ id: stimpReadings.id });
     if (gone.length === 0) throw notFound("That reading");
     res.status(204).end();
+  };
+}
+
+/**
+ * PUT /api/greens/:id/squad: the owner shares the green with one of the squads they coach, or takes it back
+ * (squadId null). A squad that is not theirs is a 400 naming squadId (as a green that is not theirs is for a session).
+ */
+export function shareGreen(db: Db): RequestHandler {
+  return async (req, res) => {
+    const me = currentUser(req);
+    const id = greenId(req);
+    const { squadId } = body(req, greenShareSchema);
+    await ownGreenOr403(db, me.id, id);
+    if (squadId !== null) {
+      const [squad] = await db.select({ id: squads.id }).from(squads).where(and(eq(squads.id, squadId), eq(squads.coachId, me.id)));
+      if (!squad) throw badRequest("The request body is not valid.", { squadId: "No squad you coach has this id" });
+    }
+    await db.update(greens).set({ squadId }).where(and(eq(greens.id, id), eq(greens.ownerId, me.id)));
+    res.json(await greenOf(db, me.id, id));
   };
 }

@@ -1,5 +1,5 @@
 import type { RequestHandler } from "express";
-import { and, eq, sql, type SQL } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { maxStoppableSlopePct, solveReadOnSurface, surfaceFromGrid, type SurfaceRead } from "../../../physics";
 import { gridFromSpotHeights, parseHeightGridCsv, parseSpotHeightsCsv, summarizeHeightMap, validateHeightMap, type Checked } from "../../../shared/height-map";
 import { idSchema } from "../../../shared/schemas/common";
@@ -12,24 +12,18 @@ import {
 } from "../../../shared/schemas/height-map";
 import type { ReadResponse } from "../../../shared/schemas/reads";
 import type { Db } from "../../db/client";
-import { greens, squadMembers, squads } from "../../db/schema";
+import { greens } from "../../db/schema";
+import { ownGreenOr403, visibleGreen } from "../../lib/green-access";
 import { csvText } from "../../lib/csv";
 import { badRequest, cannotStopError, notFound, unprocessable } from "../../lib/http-error";
 import { currentUser } from "../../middleware/session";
 import { body, parseOrThrow } from "../../middleware/validate";
 
-/** Greens whose height map I may read and solve on: my own, and my coaches' (a squad practises on its coach's green). */
-function readableGreen(meId: string): SQL {
-  return sql`(${greens.ownerId} = ${meId} or ${greens.ownerId} in (select ${squads.coachId} from ${squads} inner join ${squadMembers} on ${squadMembers.squadId} = ${squads.id} where ${squadMembers.playerId} = ${meId}))`;
-}
-
-/** 404 unless the green exists and is mine (checked in the query: another's id is simply not found). */
+/** 404 unless I may see the green, 403 unless it is mine: only its owner changes its map (lib/green-access.ts). */
 export function requireOwnGreen(db: Db): RequestHandler {
   return async (req, _res, next) => {
     const me = currentUser(req);
-    const id = parseOrThrow(idSchema, req.params.id, "id");
-    const [green] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, id), eq(greens.ownerId, me.id)));
-    if (!green) throw notFound("That green");
+    await ownGreenOr403(db, me.id, parseOrThrow(idSchema, req.params.id, "id"));
     next();
   };
 }
@@ -65,7 +59,7 @@ export function putHeightMap(db: Db): RequestHandler {
 
 async function storedMap(db: Db, meId: string, rawId: unknown): Promise<StoredHeightMap> {
   const id = parseOrThrow(idSchema, rawId, "id");
-  const [row] = await db.select({ heightMap: greens.heightMap }).from(greens).where(and(eq(greens.id, id), readableGreen(meId)));
+  const [row] = await db.select({ heightMap: greens.heightMap }).from(greens).where(and(eq(greens.id, id), visibleGreen(meId)));
   if (!row) throw notFound("That green");
   if (row.heightMap == null) throw notFound("That green's height map");
   return row.heightMap as StoredHeightMap;

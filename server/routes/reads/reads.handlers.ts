@@ -1,45 +1,23 @@
 import type { RequestHandler } from "express";
 import { and, desc, eq } from "drizzle-orm";
-import { breakChart, solveRead, type Read } from "../../../physics";
+import { answerChart, answerRead, toReadResponse } from "../../../shared/read-answers";
 import { idSchema } from "../../../shared/schemas/common";
 import { chartRequestSchema, readRequestSchema, saveReadSchema, type ReadResponse } from "../../../shared/schemas/reads";
 import type { Db } from "../../db/client";
+import { visibleGreen } from "../../lib/green-access";
 import { greens, savedReads } from "../../db/schema";
-import { cannotStopError, notFound } from "../../lib/http-error";
+import { httpErrorOf, notFound } from "../../lib/http-error";
 import { currentUser } from "../../middleware/session";
 import { body, parseOrThrow } from "../../middleware/validate";
 
-export function toResponse(read: Read): ReadResponse {
-  const { launchSpeedMps, startLineDeg, aimOffsetM, aimGiven, aimNote, entrySpeedMps, rollPastM, flatPuttLengthM, breaks, capture, path, model } = read;
-  return {
-    launchSpeedMps,
-    startLineDeg,
-    aimOffsetM,
-    aimGiven,
-    aimNote,
-    entrySpeedMps,
-    rollPastM,
-    flatPuttLengthM,
-    breaks,
-    capture: { holed: capture.holed, outcome: capture.outcome, maxCaptureSpeedMps: capture.maxCaptureSpeedMps, marginMps: capture.marginMps },
-    path,
-    model: {
-      name: model.name,
-      v0Mps: model.v0Mps,
-      rollingDecelMps2: model.rollingDecelMps2,
-      gravityDecelMps2: model.gravityDecelMps2,
-      maxStoppableSlopePct: model.maxStoppableSlopePct,
-    },
-  };
-}
+/** The read in the API's shape (shared with the browser, which builds the same answer offline). */
+export const toResponse = toReadResponse;
 
 /** Solves a read or throws the 422 a golfer can act on ("this ball cannot stop here"). */
 export function solveOrThrow(input: ReturnType<typeof readRequestSchema.parse>): ReadResponse {
-  const result = solveRead(input);
-  if (!result.ok) {
-    throw cannotStopError(result.message, "slopePct", input.stimpFt, result.model.maxStoppableSlopePct);
-  }
-  return toResponse(result.read);
+  const answer = answerRead(input);
+  if (!answer.ok) throw httpErrorOf(422, answer.error);
+  return answer.response;
 }
 
 export const solve: RequestHandler = (req, res) => {
@@ -47,18 +25,7 @@ export const solve: RequestHandler = (req, res) => {
 };
 
 export const chart: RequestHandler = (req, res) => {
-  const input = body(req, chartRequestSchema);
-  const result = breakChart({ slopePct: input.slopePct, stimpFt: input.stimpFt, pace: input.pace, distancesM: input.distances, fallLineDegs: input.fallLineDegs });
-  res.json({
-    slopePct: input.slopePct,
-    stimpFt: input.stimpFt,
-    pace: input.pace,
-    distances: result.distancesM,
-    fallLineDegs: result.fallLineDegs,
-    canStop: result.canStop,
-    cells: result.cells,
-    model: { name: result.model.name, maxStoppableSlopePct: result.model.maxStoppableSlopePct, rollingDecelMps2: result.model.rollingDecelMps2 },
-  });
+  res.json(answerChart(body(req, chartRequestSchema)));
 };
 
 export function saveRead(db: Db): RequestHandler {
@@ -66,7 +33,7 @@ export function saveRead(db: Db): RequestHandler {
     const me = currentUser(req);
     const input = body(req, saveReadSchema);
     if (input.greenId) {
-      const [green] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, input.greenId), eq(greens.ownerId, me.id)));
+      const [green] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, input.greenId), visibleGreen(me.id)));
       if (!green) throw notFound("That green");
     }
     const result = solveOrThrow(input.read);

@@ -10,7 +10,8 @@ import {
 import type { Db } from "../../db/client";
 import { greens, practiceSessions, putts, stimpReadings } from "../../db/schema";
 import { badRequest, notFound } from "../../lib/http-error";
-import { readableBy, targetPlayerId, usableGreenCondition } from "../../lib/player-access";
+import { visibleGreen } from "../../lib/green-access";
+import { readableBy, targetPlayerId } from "../../lib/player-access";
 import { pathId } from "../../lib/path-params";
 import { currentUser } from "../../middleware/session";
 import { body, query } from "../../middleware/validate";
@@ -68,10 +69,10 @@ export async function readableSession(db: Db, viewer: Parameters<typeof readable
   return toItem(row);
 }
 
-/** greenId must be the player's own green or a green of one of their coaches; 400 otherwise. */
+/** greenId must be the player's own green or one shared with a squad of theirs; 400 otherwise. */
 async function checkGreen(db: Db, playerId: string, greenId: string): Promise<void> {
-  const [g] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, greenId), usableGreenCondition(playerId, greens.ownerId)));
-  if (!g) throw badRequest("The request body is not valid.", { greenId: "No green of yours or your coach's has this id" });
+  const [g] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, greenId), visibleGreen(playerId)));
+  if (!g) throw badRequest("The request body is not valid.", { greenId: "No green of yours or of your squad has this id" });
 }
 
 /** The green's Stimp on a date: its latest reading on or before that date; null without one. */

@@ -3,6 +3,7 @@ import { useNavigate } from "react-router";
 import { toast } from "sonner";
 import { authClient } from "../../../lib/auth-client";
 import { paths } from "../../../config/paths";
+import { clearOfflineApiCache } from "../../../lib/offline-cache";
 import { authKeys } from "../api/keys";
 import { describeAuthError } from "../utils/auth-errors";
 
@@ -18,6 +19,8 @@ export function useSignOut() {
       queryClient.setQueryData(authKeys.me(), null);
       // Nothing fetched for the previous account may linger in the cache.
       queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.all[0] });
+      // Nor in the answers the service worker kept for offline use.
+      await clearOfflineApiCache();
       await queryClient.invalidateQueries({ queryKey: authKeys.all });
       await navigate(paths.home.href());
       toast.success("You are signed out.");

@@ -18,7 +18,7 @@ const me = {
   user: { id: "u1", name: "Ivo", email: "ivo@example.com", role: "player", emailVerified: true },
   preferences: { units: "metric" },
 };
-const green = { id: GREEN_ID, name: "Top green", locationNote: null, currentStimpFt: 9.5, createdAt: "2026-01-01T00:00:00Z", readings: [] };
+const green = { id: GREEN_ID, name: "Top green", locationNote: null, currentStimpFt: 9.5, createdAt: "2026-01-01T00:00:00Z", squad: null, ownerName: "Test Golfer", mine: true, readings: [] };
 // A 12 m × 12 m plane falling to the east, 5 × 5 heights 3 m apart, origin at (0, 0).
 const heightsM = Array.from({ length: 5 }, () => [0.12, 0.09, 0.06, 0.03, 0]);
 const heightMap = {

@@ -66,6 +66,8 @@ export function GreenMapPage({ greenId }: { greenId: string }) {
   }
   const name = green.data?.name ?? "Green";
   const stimpFt = green.data?.currentStimpFt ?? null;
+  // A green shared with the player's squad: read on it, but only its owner uploads or deletes the map.
+  const canEdit = green.data?.mine ?? false;
 
   return (
     <>
@@ -76,7 +78,9 @@ export function GreenMapPage({ greenId }: { greenId: string }) {
         description={
           map.data
             ? "Tap where the ball lies and where the hole is cut; the read is rolled on this green's own surface."
-            : "Upload the green's height map to read putts on its real surface, bumps and all."
+            : canEdit
+              ? "Upload the green's height map to read putts on its real surface, bumps and all."
+              : `No height map yet: ${green.data?.ownerName ?? "the person who keeps this green"} can upload one.`
         }
         actions={
           <ButtonLink to={paths.green.href(greenId)} variant="secondary" size="sm">
@@ -85,8 +89,8 @@ export function GreenMapPage({ greenId }: { greenId: string }) {
         }
       />
       {map.data ? (
-        <MapWorkspace key={mapIdentity(map.data)} greenId={greenId} map={map.data} units={units} greenStimpFt={stimpFt} />
-      ) : (
+        <MapWorkspace key={mapIdentity(map.data)} greenId={greenId} map={map.data} units={units} greenStimpFt={stimpFt} canEdit={canEdit} />
+      ) : !canEdit ? null : (
         <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)]">
           <Card>
             <HeightMapUpload greenId={greenId} replacing={false} />
@@ -129,11 +133,13 @@ function MapWorkspace({
   map,
   units,
   greenStimpFt,
+  canEdit,
 }: {
   greenId: string;
   map: HeightMapResponse;
   units: UnitSystem;
   greenStimpFt: number | null;
+  canEdit: boolean;
 }) {
   const [ball, setBall] = useState<[number, number] | null>(null);
   const [hole, setHole] = useState<[number, number] | null>(null);
@@ -299,11 +305,13 @@ function MapWorkspace({
 
       <div className="grid items-start gap-6 lg:grid-cols-2">
         <Card>
-          <HeightMapSummary greenId={greenId} summary={map} units={units} />
+          <HeightMapSummary greenId={greenId} summary={map} units={units} canEdit={canEdit} />
         </Card>
-        <Card>
-          <HeightMapUpload greenId={greenId} replacing />
-        </Card>
+        {canEdit ? (
+          <Card>
+            <HeightMapUpload greenId={greenId} replacing />
+          </Card>
+        ) : null}
       </div>
     </div>
   );

@@ -8,8 +8,8 @@ function signedShort(m: number, units: UnitSystem): string {
   return `${m < -0.0005 ? "−" : ""}${formatShort(m, units)}`;
 }
 
-/** Size, spacing, height range and the steepest grade of the stored map, and a two-step delete. */
-export function HeightMapSummary({ greenId, summary, units }: { greenId: string; summary: Summary; units: UnitSystem }) {
+/** Size, spacing, height range and the steepest grade of the stored map, and (for the green's owner) a two-step delete. */
+export function HeightMapSummary({ greenId, summary, units, canEdit = true }: { greenId: string; summary: Summary; units: UnitSystem; canEdit?: boolean }) {
   const remove = useDeleteHeightMap(greenId);
   const [confirming, setConfirming] = useState(false);
   return (
@@ -35,7 +35,7 @@ export function HeightMapSummary({ greenId, summary, units }: { greenId: string;
         <dt className="text-ink-600">From</dt>
         <dd>{summary.source === "spots" ? `${summary.spotCount ?? "Some"} spot heights, filled in between` : "A grid of heights"}</dd>
       </dl>
-      {confirming ? (
+      {!canEdit ? null : confirming ? (
         <div className="flex flex-wrap items-center gap-2" role="group" aria-label="Delete the height map?">
           <span className="text-sm font-medium">Delete this map? Reads on it go too.</span>
           <Button

@@ -6,6 +6,8 @@ export const practiceKeys = {
   all: ["practice"] as const,
   greens: () => [...practiceKeys.all, "greens"] as const,
   green: (id: string) => [...practiceKeys.greens(), id] as const,
+  /** The squads a coach may share a green with. */
+  coachedSquads: () => [...practiceKeys.all, "coached-squads"] as const,
   sessions: () => [...practiceKeys.all, "sessions"] as const,
   sessionList: (params: SessionListParams) => [...practiceKeys.sessions(), "list", params] as const,
   session: (id: string) => [...practiceKeys.sessions(), "one", id] as const,

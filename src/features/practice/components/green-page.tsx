@@ -1,27 +1,18 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate, stimpText } from "../../../../shared/format";
 import { useState } from "react";
 import { useNavigate } from "react-router";
 import type { Green, StimpReading } from "../../../../shared/schemas/greens";
 import { STIMP_LIMITS } from "../../../../shared/schemas/greens";
-import {
-  Alert,
-  Button,
-  ButtonLink,
-  Card,
-  CardTitle,
-  ChipGroup,
-  ConfirmDialog,
-  InputField,
-  PageHeader,
-  PageSpinner,
-} from "../../../components/ui";
+import { Alert, Button, ButtonLink, Card, CardTitle, ChipGroup, ConfirmDialog, InputField, PageHeader, PageSpinner, SelectField } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { errorMessage } from "../../../lib/query-client";
 import { useAddStimpReading } from "../api/add-stimp-reading";
 import { useDeleteGreen } from "../api/delete-green";
 import { useDeleteStimpReading } from "../api/delete-stimp-reading";
+import { useCoachedSquads } from "../api/get-coached-squads";
 import { useGreen } from "../api/get-green";
+import { useShareGreen } from "../api/share-green";
 import { useUpdateGreen } from "../api/update-green";
 import { useUnits } from "../../auth/hooks/use-units";
 import { todayIso } from "../utils/dates";
@@ -162,12 +153,17 @@ function ReadingForm({ greenId }: { greenId: string }) {
   );
 }
 
-function ReadingsList({ green }: { green: Green }) {
+function ReadingsList({ green, canEdit }: { green: Green; canEdit: boolean }) {
   const { units } = useUnits();
   const remove = useDeleteStimpReading(green.id);
   const [confirm, setConfirm] = useState<StimpReading | null>(null);
-  if (green.readings.length === 0)
-    return <p className="text-ink-500">No readings yet. Add one below; it becomes the green’s speed for new sessions.</p>;
+  if (green.readings.length === 0) {
+    return (
+      <p className="text-ink-500">
+        {canEdit ? "No readings yet. Add one below; it becomes the green’s speed for new sessions." : `No readings yet. ${green.ownerName} keeps this green’s readings.`}
+      </p>
+    );
+  }
   return (
     <>
       <ul className="flex flex-col gap-2" aria-label="Stimp readings, newest first">
@@ -185,14 +181,16 @@ function ReadingsList({ green }: { green: Green }) {
                   : " · level spot"}
               </p>
             </div>
-            <button
-              type="button"
-              onClick={() => setConfirm(r)}
-              className="min-h-11 rounded-lg px-3 text-sm font-medium text-bad-600 hover:bg-bad-50"
-              aria-label={`Delete the reading of ${formatDate(r.measuredOn)}`}
-            >
-              Delete
-            </button>
+            {canEdit ? (
+              <button
+                type="button"
+                onClick={() => setConfirm(r)}
+                className="min-h-11 rounded-lg px-3 text-sm font-medium text-bad-600 hover:bg-bad-50"
+                aria-label={`Delete the reading of ${formatDate(r.measuredOn)}`}
+              >
+                Delete
+              </button>
+            ) : null}
           </li>
         ))}
       </ul>
@@ -212,8 +210,66 @@ function ReadingsList({ green }: { green: Green }) {
   );
 }
 
-/** One green: rename or delete it, its dated Stimp readings, and the Stimp helper. */
-export function GreenPage({ greenId }: { greenId: string }) {
+/** The owner (a coach) shares the green with one of their squads, or keeps it to themselves. */
+function ShareCard({ green }: { green: Green }) {
+  const squads = useCoachedSquads(true);
+  const share = useShareGreen(green.id);
+  const [choice, setChoice] = useState(green.squad?.id ?? "");
+  const fields = isApiError(share.error) ? share.error.fields : {};
+  const list = squads.data?.squads ?? [];
+  const changed = choice !== (green.squad?.id ?? "");
+  return (
+    <Card>
+      <CardTitle>Who practises on it</CardTitle>
+      <p className="mt-2 text-sm text-ink-600">
+        {green.squad
+          ? `Shared with ${green.squad.name}: its players see this green and its readings, log sessions on it and read on its height map. Only you change it.`
+          : "Only you see this green. Share it with a squad so its players can log sessions on it and read on its height map."}
+      </p>
+      {squads.isPending ? <p className="mt-3 text-sm text-ink-500">Loading your squads…</p> : null}
+      {squads.isError ? (
+        <Alert tone="error" className="mt-3">
+          {errorMessage(squads.error)}
+        </Alert>
+      ) : null}
+      {squads.data && list.length === 0 && !green.squad ? <p className="mt-3 text-sm text-ink-500">You have no squad yet to share it with.</p> : null}
+      {squads.data && (list.length > 0 || green.squad) ? (
+        <form
+          aria-label="Share the green"
+          noValidate
+          className="mt-4 grid items-start gap-3 sm:grid-cols-[minmax(0,20rem)_auto]"
+          onSubmit={(e) => {
+            e.preventDefault();
+            share.mutate({ squadId: choice === "" ? null : choice });
+          }}
+        >
+          <SelectField
+            label="Shared with"
+            options={[{ value: "", label: "Nobody (only me)" }, ...list.map((q) => ({ value: q.id, label: q.name }))]}
+            value={choice}
+            onChange={(e) => {
+              setChoice(e.target.value);
+              share.reset();
+            }}
+            error={fields.squadId}
+          />
+          <Button type="submit" disabled={!changed} loading={share.isPending} loadingText="Saving…" className="sm:mt-7 sm:justify-self-start">
+            {choice === "" && green.squad ? "Stop sharing" : "Share"}
+          </Button>
+          {share.isError && !fields.squadId ? <Alert tone="error" className="sm:col-span-2">{errorMessage(share.error)}</Alert> : null}
+          {share.isSuccess && !changed ? (
+            <Alert tone="success" className="sm:col-span-2">
+              {green.squad ? `${green.squad.name} can practise on it now.` : "This green is yours alone again."}
+            </Alert>
+          ) : null}
+        </form>
+      ) : null}
+    </Card>
+  );
+}
+
+/** One green: rename, share or delete it (its owner), its dated Stimp readings, and the Stimp helper. */
+export function GreenPage({ greenId, canShare = false }: { greenId: string; canShare?: boolean }) {
   const green = useGreen(greenId);
   const remove = useDeleteGreen();
   const navigate = useNavigate();
@@ -250,7 +306,8 @@ export function GreenPage({ greenId }: { greenId: string }) {
           title={g.name}
           description={[
             g.locationNote,
-            g.currentStimpFt !== null ? `Stimp ${g.currentStimpFt.toFixed(1)} ft (latest reading)` : "No Stimp reading yet",
+            g.currentStimpFt !== null ? `${stimpText(g.currentStimpFt)} ft (latest reading)` : "No Stimp reading yet",
+            g.mine ? null : `Shared with ${g.squad?.name ?? "your squad"} by ${g.ownerName}`,
           ]
             .filter(Boolean)
             .join(" · ")}
@@ -259,12 +316,16 @@ export function GreenPage({ greenId }: { greenId: string }) {
               <ButtonLink to={paths.greenMap.href(g.id)} variant="secondary" size="sm">
                 Height map and reads
               </ButtonLink>
-              <Button variant="secondary" size="sm" onClick={() => setRenaming(true)}>
-                Rename
-              </Button>
-              <Button variant="ghost" size="sm" className="text-bad-600" onClick={() => setConfirm(true)}>
-                Delete
-              </Button>
+              {g.mine ? (
+                <>
+                  <Button variant="secondary" size="sm" onClick={() => setRenaming(true)}>
+                    Rename
+                  </Button>
+                  <Button variant="ghost" size="sm" className="text-bad-600" onClick={() => setConfirm(true)}>
+                    Delete
+                  </Button>
+                </>
+              ) : null}
             </>
           }
         />
@@ -273,9 +334,16 @@ export function GreenPage({ greenId }: { greenId: string }) {
         <h2 id="readings-heading" className="text-xl font-semibold tracking-tight">
           Stimp readings
         </h2>
-        <ReadingsList green={g} />
+        <ReadingsList green={g} canEdit={g.mine} />
       </section>
-      <ReadingForm greenId={g.id} />
+      {g.mine ? (
+        <ReadingForm greenId={g.id} />
+      ) : (
+        <Alert tone="info">
+          {g.ownerName} keeps this green: only they rename it, add Stimp readings or change its height map. Note the speed you measure today on your session.
+        </Alert>
+      )}
+      {g.mine && canShare ? <ShareCard green={g} /> : null}
       <ButtonLink to={paths.greens.href()} variant="ghost" className="self-start">
         All greens
       </ButtonLink>

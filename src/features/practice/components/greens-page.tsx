@@ -71,17 +71,13 @@ function NewGreenForm() {
   );
 }
 
-/** The player's greens with their current Stimp; add one here, open one to rename it or add readings. */
+/** The player's greens and those shared with their squads, with their current Stimp; add one here, open one to rename it or add readings. */
 export function GreensPage() {
   const greens = useGreens();
   return (
     <div className="flex flex-col gap-6">
       <title>Greens · Borrowline</title>
-      <PageHeader
-        eyebrow="Practice log"
-        title="Greens"
-        description="The putting surfaces you practise on, with their measured speed. A session on a green starts from its latest Stimp."
-      />
+      <PageHeader eyebrow="Practice log" title="Greens" description="The putting surfaces you practise on, yours and your squad’s, with their measured speed. A session on a green starts from its latest Stimp." />
       {greens.isPending ? <PageSpinner label="Loading your greens" /> : null}
       {greens.isError ? (
         <Alert tone="error" title="Could not load your greens">
@@ -90,7 +86,7 @@ export function GreensPage() {
       ) : null}
       {greens.data && greens.data.items.length === 0 ? (
         <EmptyState title="No greens yet">
-          Add the practice green you use most; measure its speed with a Stimpmeter when you can.
+          Add the practice green you use most; measure its speed with a Stimpmeter when you can. A green your coach shares with your squad shows here too.
         </EmptyState>
       ) : null}
       {greens.data && greens.data.items.length > 0 ? (
@@ -101,7 +97,10 @@ export function GreensPage() {
                 to={paths.green.href(g.id)}
                 className="flex min-h-24 flex-col justify-between gap-2 rounded-(--radius-card) bg-sand-50 p-4 ring-1 ring-ink-900/10 transition-colors hover:ring-ink-900/30 focus-visible:outline-3 focus-visible:outline-coral-500"
               >
-                <span className="text-lg font-semibold">{g.name}</span>
+                <span className="flex flex-col gap-0.5">
+                  <span className="text-lg font-semibold">{g.name}</span>
+                  {g.squad ? <span className="text-sm text-ink-600">{g.mine ? `Shared with ${g.squad.name}` : `Shared with ${g.squad.name} by ${g.ownerName}`}</span> : null}
+                </span>
                 <span className="flex items-baseline justify-between gap-2 text-sm text-ink-500">
                   <span className="truncate">{g.locationNote ?? `Added ${formatDate(g.createdAt.slice(0, 10))}`}</span>
                   <span className="shrink-0 font-medium text-ink-800">

@@ -31,23 +31,10 @@ const formSchema = z.object({
 });
 type FormValues = z.infer<typeof formSchema>;
 
-/** Greens of recent sessions that are not the player's own (a coach's green), newest first, once each. */
-export function otherGreens(sessions: ReadonlyArray<{ greenId: string | null; greenName: string | null }>, ownIds: ReadonlyArray<string>): { id: string; name: string }[] {
-  const seen = new Set(ownIds);
-  const out: { id: string; name: string }[] = [];
-  for (const s of sessions) {
-    if (!s.greenId || !s.greenName || seen.has(s.greenId)) continue;
-    seen.add(s.greenId);
-    out.push({ id: s.greenId, name: s.greenName });
-  }
-  return out;
-}
-
 /** Start a session: the day, the green (its latest Stimp is the default), conditions, tags and notes. */
 export function StartSessionForm() {
   const greens = useGreens();
-  // A squad player also practises on their coach's greens: GET /api/greens lists only their own, so the greens of
-  // recent sessions are offered too (the server fills in such a green's Stimp for the day).
+  // GET /api/greens lists the player's own greens and those shared with their squads; the latest session's is the likely one.
   const recent = useSessions({ page: 1, pageSize: 50, sort: "-date" });
   const create = useCreateSession();
   const navigate = useNavigate();
@@ -67,7 +54,8 @@ export function StartSessionForm() {
   }, [greenId, greens.data, setValue]);
 
   // The green of the latest session (or a single own green) is the likely one: pick it.
-  const likely = recent.data?.items.find((x) => x.greenId)?.greenId ?? (greens.data?.items.length === 1 ? greens.data.items[0]!.id : null);
+  const listed = new Set(greens.data?.items.map((g) => g.id) ?? []);
+  const likely = recent.data?.items.find((x) => x.greenId && listed.has(x.greenId))?.greenId ?? (greens.data?.items.length === 1 ? greens.data.items[0]!.id : null);
   useEffect(() => {
     if (likely && getValues("greenId") === "") setValue("greenId", likely);
   }, [likely, getValues, setValue]);
@@ -90,13 +78,14 @@ export function StartSessionForm() {
 
   const fieldErrors = isApiError(create.error) ? create.error.fields : {};
   const own = greens.data?.items ?? [];
-  const others = otherGreens(recent.data?.items ?? [], own.map((g) => g.id));
   const greenOptions = [
     { value: "", label: greens.isPending ? "Loading greens…" : "No particular green" },
-    ...own.map((g) => ({ value: g.id, label: g.currentStimpFt != null ? `${g.name} (${stimpText(g.currentStimpFt)})` : g.name })),
-    ...others.map((g) => ({ value: g.id, label: `${g.name} (from your sessions)` })),
+    ...own.map((g) => {
+      // A squad's green names its squad first: on a phone the end of a long option is cut off (the Stimp field shows it).
+      const name = g.mine || !g.squad ? g.name : `${g.name}, ${g.squad.name}`;
+      return { value: g.id, label: g.currentStimpFt != null ? `${name} (${stimpText(g.currentStimpFt)})` : name };
+    }),
   ];
-  const chosenIsOther = others.some((g) => g.id === greenId);
 
   return (
     <Card>
@@ -110,7 +99,7 @@ export function StartSessionForm() {
             options={greenOptions}
             error={fieldErrors.greenId}
             hint={
-              greens.data && own.length === 0 && others.length === 0 ? (
+              greens.data && own.length === 0 ? (
                 <>
                   No greens yet. <TextLink to={paths.greens.href()}>Add one</TextLink> to keep its Stimp.
                 </>
@@ -126,7 +115,7 @@ export function StartSessionForm() {
             hint={
               // On a phone the hint would push "Start logging" below the fold; it is a refinement, not a step.
               <span className="hidden sm:inline">
-                {chosenIsOther ? "Leave it empty to use the green’s own latest reading." : greenId ? "The green’s latest reading; change it if you measured today." : "Optional"}
+                {greenId ? "The green’s latest reading; change it if you measured today." : "Optional"}
               </span>
             }
             error={formState.errors.stimp?.message ?? fieldErrors.stimpFt}

@@ -4,12 +4,20 @@ import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import type { BreakChartAnswer } from "../utils/chart-data";
 import { readsKeys } from "./keys";
+import { answerableHere } from "./solve-read";
 
 export type BreakChartResponse = BreakChartAnswer & { slopePct: number; stimpFt: number; model: { maxStoppableSlopePct: number } };
 
 /** POST /api/reads/chart: aim offsets over distances × fall-line directions (at most 400 cells). */
-export function getBreakChart(input: ChartRequest, signal?: AbortSignal): Promise<BreakChartResponse> {
-  return api.post<BreakChartResponse>(apiPaths.readsChart, input, { signal });
+export async function getBreakChart(input: ChartRequest, signal?: AbortSignal): Promise<BreakChartResponse> {
+  try {
+    return await api.post<BreakChartResponse>(apiPaths.readsChart, input, { signal });
+  } catch (error) {
+    // No signal: the chart is worked out in the browser (the same physics).
+    if (!answerableHere(error)) throw error;
+    const { chartOffline } = await import("../utils/offline-answers");
+    return chartOffline(input);
+  }
 }
 
 export function breakChartQueryOptions(input: ChartRequest | null) {

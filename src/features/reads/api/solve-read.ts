@@ -1,12 +1,26 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
 import type { ReadRequest, ReadResponse } from "../../../../shared/schemas/reads";
 import { apiPaths } from "../../../config/paths";
-import { api } from "../../../lib/api-client";
+import { api, isApiError } from "../../../lib/api-client";
 import { readsKeys } from "./keys";
 
-/** POST /api/reads/solve. A 422 means the ball cannot stop on that slope at that Stimp (an answer, not a fault). */
-export function solveRead(input: ReadRequest, signal?: AbortSignal): Promise<ReadResponse> {
-  return api.post<ReadResponse>(apiPaths.readsSolve, input, { signal });
+/**
+ * POST /api/reads/solve. A 422 means the ball cannot stop on that slope at that Stimp (an answer, not a fault).
+ * Without the server (no signal, a server fault, a rate limit) the browser works the same answer out itself.
+ */
+export async function solveRead(input: ReadRequest, signal?: AbortSignal): Promise<ReadResponse> {
+  try {
+    return await api.post<ReadResponse>(apiPaths.readsSolve, input, { signal });
+  } catch (error) {
+    if (!answerableHere(error)) throw error;
+    const { readOffline } = await import("../utils/offline-answers");
+    return readOffline(input);
+  }
+}
+
+/** Failures the browser can answer for the server: the same physics runs here. */
+export function answerableHere(error: unknown): boolean {
+  return isApiError(error) && (error.status === 0 || error.status === 429 || error.status >= 500);
 }
 
 export function solveReadQueryOptions(input: ReadRequest | null) {
