@@ -82,7 +82,8 @@ test("a coach creates a squad and invites a player by e-mail; the player follows
 
   // The coach sees the player in the squad.
   await c.reload();
-  await c.getByRole("link", { name: PLAYER.name }).waitFor();
+  // The member list and the squad overview table both link the player (the table once its figures arrive).
+  await c.getByRole("link", { name: PLAYER.name }).first().waitFor();
   await c.getByText("Joined", { exact: true }).waitFor();
   await screenshot(c, "coaching-squad-member-desktop");
 

@@ -3,7 +3,7 @@ import { useSearchParams } from "react-router";
 // The live preview while the dial is dragged is computed in the browser with the physics engine itself (about a
 // millisecond a read), so the line follows the finger at 60 fps; the answer the page commits to always comes from
 // POST /api/reads/solve through TanStack Query once the dial is let go or typing pauses.
-import { solveRead as solveReadInBrowser } from "../../../../physics";
+import { solveRead as solveReadInBrowser } from "../../../../physics/solve-read";
 import type { ReadRequest, ReadResponse } from "../../../../shared/schemas/reads";
 import type { UnitSystem } from "../../../../shared/units";
 import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner, TextLink } from "../../../components/ui";
