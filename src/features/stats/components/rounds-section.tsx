@@ -14,7 +14,7 @@ export function RoundsSection({ params }: { params: PlayerRange }) {
   const items = rounds.data.items.filter((r) => r.totals.holes > 0);
   if (items.length === 0) return <p className="text-ink-500">No rounds logged in this period.</p>;
   return (
-    <TableScroller label="Strokes gained per round">
+    <TableScroller label="Table of strokes gained per round">
       <table className="w-full border-collapse bg-white text-left text-sm">
         <caption className="sr-only">Strokes gained per round</caption>
         <thead className="bg-ink-50 text-ink-700">
