@@ -5,6 +5,10 @@ import react from "@vitejs/plugin-react";
 // that drive Debian's Chromium through playwright-core against a real server.
 export default defineConfig({
   test: {
+    // Two files at a time (vitest otherwise keeps one core free, which on CI's two cores runs the unit files one by
+    // one): most API files wait on servers, child processes and the disk, so two overlap well. The browser project
+    // still runs its files one at a time (fileParallelism: false).
+    maxWorkers: 2,
     projects: [
       {
         plugins: [react()],
