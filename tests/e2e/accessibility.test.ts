@@ -7,8 +7,7 @@ import type { Page } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { DEMO_ADMIN, DEMO_COACH, DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
 import type { TestServer } from "../setup/server";
-import { DESKTOP, PHONE, openBrowser, type Browser } from "./harness";
-import { startAppServer } from "./harness";
+import { DESKTOP, PHONE, openBrowser, type Browser, startAppServer, signInWithForm } from "./harness";
 
 let server: TestServer;
 beforeAll(async () => {
@@ -49,14 +48,6 @@ const COACH: Visit[] = [
   { from: "/greens", link: /^\/greens\/[0-9a-f-]{36}$/, then: /\/map$/ } as Visit,
 ];
 const ADMIN: Visit[] = ["/admin", "/admin/coaching", "/admin/audit", "/dev/mailbox"];
-
-async function signIn(b: Browser, email: string) {
-  await b.page.goto(`${server.url}/sign-in`);
-  await b.page.getByLabel("E-mail").fill(email);
-  await b.page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await b.page.getByRole("button", { name: "Sign in" }).click();
-  await b.page.getByText("Signed in as").first().waitFor({ state: "attached" });
-}
 
 async function settle(page: Page) {
   await page.locator("main h1").first().waitFor();
@@ -135,7 +126,7 @@ for (const { size, viewport, people } of RUNS) {
     for (const [email, visits] of people) {
       const b = await openBrowser(viewport);
       try {
-        await signIn(b, email);
+        await signInWithForm(b.page, server.url, email, DEMO_PASSWORD);
         if (visits === PLAYER) await logRound(b.page);
         found.push(...(await violations(b, visits, unreached)).map((v) => `${email} ${v}`));
       } finally {

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
-import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer } from "./harness";
+import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, allowingStatus } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -58,7 +58,5 @@ test("on a phone the menu opens with the keyboard and shows the account", async 
   }
 });
 
-/** A signed-out visitor's /api/me probe answers 401; Chromium logs that as a failed resource. */
-function unexpected(message: string): boolean {
-  return !/Failed to load resource: the server responded with a status of 401/.test(message);
-}
+/** Expected refusals (Chromium logs each as a failed resource); any other console error fails the test. */
+const unexpected = allowingStatus(401);

@@ -1,7 +1,7 @@
 // Coaching in Chromium, two people side by side: a coach (desk) and a player (phone), each in a browser of their own.
 import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";
-import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, type Browser } from "./harness";
+import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, type Browser, allowingStatus } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -26,10 +26,8 @@ afterAll(async () => {
   await server?.stop();
 });
 
-/** A signed-out visitor's /api/me probe answers 401; Chromium logs that as a failed resource. */
-function unexpected(message: string): boolean {
-  return !/Failed to load resource: the server responded with a status of 401/.test(message);
-}
+/** Expected refusals (Chromium logs each as a failed resource); any other console error fails the test. */
+const unexpected = allowingStatus(401);
 
 async function signUpCoach(page: Page) {
   await page.goto(`${server.url}/sign-up`);

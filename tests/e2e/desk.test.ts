@@ -4,7 +4,7 @@ import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { DEMO_ADMIN, DEMO_COACH, DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
 import type { TestServer } from "../setup/server";
-import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, type Browser } from "./harness";
+import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, type Browser, allowingStatus, signInWithForm } from "./harness";
 
 let server: TestServer;
 const browsers: Browser[] = [];
@@ -20,17 +20,12 @@ afterAll(async () => {
 async function signedIn(who: { email: string }, viewport = DESKTOP): Promise<Browser> {
   const b = await openBrowser(viewport);
   browsers.push(b);
-  await b.page.goto(`${server.url}/sign-in`);
-  await b.page.getByLabel("E-mail").fill(who.email);
-  await b.page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await b.page.getByRole("button", { name: "Sign in" }).click();
-  // On a phone the account menu is folded away: the text is there, not visible.
-  await b.page.getByText("Signed in as").first().waitFor({ state: "attached" });
+  await signInWithForm(b.page, server.url, who.email, DEMO_PASSWORD);
   return b;
 }
 
-/** A signed-out probe answers 401, which Chromium logs as a failed resource; anything else is a real error. */
-const realErrors = (b: Browser) => b.errors.filter((m) => !/status of 401/.test(m));
+/** Console errors but Chromium's line for a 401 (a refused request some steps expect). */
+const realErrors = (b: Browser) => b.errors.filter(allowingStatus(401));
 
 /** The element is fully inside the first screen of the page (no scrolling). */
 async function aboveTheFold(page: Page, name: string | RegExp, role: "button" | "link" = "button") {

@@ -1,11 +1,10 @@
 // A coach shares a green with a squad from the green's page; the squad's player sees it, with who shared it, in
 // their greens and in the session's green picker (issue 14). Screenshots at phone and desk size.
 import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Page } from "playwright-core";
 import { coachWithSquad } from "../factories/coaching";
 import { TEST_PASSWORD } from "../factories/users";
 import type { TestServer } from "../setup/server";
-import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer } from "./harness";
+import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, signInWithApi } from "./harness";
 
 let server: TestServer;
 beforeAll(async () => {
@@ -15,21 +14,6 @@ afterAll(async () => {
   await server?.stop();
 });
 
-async function signIn(page: Page, email: string) {
-  await page.goto(`${server.url}/`);
-  await page.evaluate(
-    async ([e, p]) => {
-      const res = await fetch("/api/auth/sign-in/email", {
-        method: "POST",
-        headers: { "Content-Type": "application/json" },
-        body: JSON.stringify({ email: e, password: p }),
-      });
-      if (!res.ok) throw new Error(`sign-in ${res.status}`);
-    },
-    [email, TEST_PASSWORD] as const,
-  );
-}
-
 test("a coach shares a green with the squad; the player sees it in their greens and the session picker, read-only", async () => {
   const { coach, members } = await coachWithSquad(server, 1);
   const player = members[0]!;
@@ -38,7 +22,7 @@ test("a coach shares a green with the squad; the player sees it in their greens 
 
   const desk = await openBrowser(DESKTOP);
   try {
-    await signIn(desk.page, coach.email);
+    await signInWithApi(desk.page, server.url, coach.email, TEST_PASSWORD);
     await desk.page.goto(`${server.url}/greens/${green}`);
     const select = desk.page.getByRole("combobox", { name: "Shared with" });
     await select.waitFor();
@@ -52,7 +36,7 @@ test("a coach shares a green with the squad; the player sees it in their greens 
   }
   const phone = await openBrowser(PHONE);
   try {
-    await signIn(phone.page, coach.email);
+    await signInWithApi(phone.page, server.url, coach.email, TEST_PASSWORD);
     await phone.page.goto(`${server.url}/greens/${green}`);
     await phone.page.getByRole("combobox", { name: "Shared with" }).waitFor();
     await screenshot(phone.page, "green-share-phone");
@@ -66,7 +50,7 @@ test("a coach shares a green with the squad; the player sees it in their greens 
   ] as const) {
     const b = await openBrowser(viewport);
     try {
-      await signIn(b.page, player.email);
+      await signInWithApi(b.page, server.url, player.email, TEST_PASSWORD);
       await b.page.goto(`${server.url}/greens`);
       const card = b.page.getByRole("list", { name: "Your greens" }).getByRole("link", { name: /Club green/ });
       await card.waitFor();

@@ -55,3 +55,38 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   await page.screenshot({ path: file, fullPage: true });
   return file;
 }
+
+/**
+ * A filter for `browser.errors`: drops Chromium's "Failed to load resource" line for the given statuses, which a
+ * test expects (a wrong password's 401, a putt that cannot stop's 422); every other error stays.
+ */
+export function allowingStatus(...statuses: number[]): (message: string) => boolean {
+  const expected = new RegExp(`Failed to load resource: the server responded with a status of (${statuses.join("|")})\\b`);
+  return (message) => !expected.test(message);
+}
+
+/** Signs the page in through the API (the session cookie lands in the browser), for tests about other things. */
+export async function signInWithApi(page: Page, baseUrl: string, email: string, password: string): Promise<void> {
+  await page.goto(`${baseUrl}/`);
+  await page.evaluate(
+    async ([e, p]) => {
+      const res = await fetch("/api/auth/sign-in/email", {
+        method: "POST",
+        headers: { "Content-Type": "application/json" },
+        body: JSON.stringify({ email: e, password: p }),
+      });
+      if (!res.ok) throw new Error(`sign-in ${res.status}`);
+    },
+    [email, password] as const,
+  );
+}
+
+/** Signs the page in through the sign-in form, as a golfer would, and waits for the account line. */
+export async function signInWithForm(page: Page, baseUrl: string, email: string, password: string): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  // On a phone the account menu is folded away: the text is there, not visible.
+  await page.getByText("Signed in as").first().waitFor({ state: "attached" });
+}

@@ -10,7 +10,7 @@ import type { BrowserContext, Page } from "playwright-core";
 import { coachWithSquad, createLadder } from "../factories/coaching";
 import { TEST_PASSWORD } from "../factories/users";
 import type { TestServer } from "../setup/server";
-import { PHONE, openBrowser, screenshot, startAppServer } from "./harness";
+import { PHONE, openBrowser, screenshot, startAppServer, signInWithApi } from "./harness";
 import { serveBuiltClient } from "../../server/frontend";
 import { startTestServer } from "../setup/server";
 
@@ -48,21 +48,6 @@ function signal(context: BrowserContext, target: TestServer) {
       await context.setOffline(false);
     },
   };
-}
-
-async function signIn(page: Page, baseUrl: string, email: string) {
-  await page.goto(`${baseUrl}/`);
-  await page.evaluate(
-    async ([e, p]) => {
-      const res = await fetch("/api/auth/sign-in/email", {
-        method: "POST",
-        headers: { "Content-Type": "application/json" },
-        body: JSON.stringify({ email: e, password: p }),
-      });
-      if (!res.ok) throw new Error(`sign-in ${res.status}`);
-    },
-    [email, TEST_PASSWORD] as const,
-  );
 }
 
 /** The service worker controls the page: the app shell is precached and API answers are kept from now on. */
@@ -103,7 +88,7 @@ test("after one visit the app opens offline: a read is worked out, three putts a
   const net = signal(context, server);
   try {
     // The first visit, signed in: the worker installs and takes over; the golfer opens the screens they will use.
-    await signIn(page, server.url, player.email);
+    await signInWithApi(page, server.url, player.email, TEST_PASSWORD);
     await controlled(page);
     await page.goto(`${server.url}/practice/${sessionId}`);
     await page.getByRole("button", { name: "Holed", exact: true }).waitFor();

@@ -3,7 +3,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import type { Locator, Page } from "playwright-core";
-import { PHONE, SHOTS_DIR, openBrowser, screenshot, startAppServer } from "./harness";
+import { PHONE, SHOTS_DIR, openBrowser, screenshot, startAppServer, allowingStatus } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -14,10 +14,8 @@ afterAll(async () => {
   await server?.stop();
 });
 
-/** A signed-out visitor's /api/me probe answers 401; Chromium logs that as a failed resource. */
-function unexpected(message: string): boolean {
-  return !/Failed to load resource: the server responded with a status of (401|422)/.test(message);
-}
+/** Expected refusals (Chromium logs each as a failed resource); any other console error fails the test. */
+const unexpected = allowingStatus(401, 422);
 
 async function panelShot(locator: Locator, name: string) {
   fs.mkdirSync(SHOTS_DIR, { recursive: true });

@@ -2,7 +2,7 @@
 // fall line, Stimp and pace), followed by clicking as a golfer would.
 import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";
-import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer } from "./harness";
+import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, allowingStatus } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -13,9 +13,8 @@ afterAll(async () => {
   await server?.stop();
 });
 
-function unexpected(message: string): boolean {
-  return !/Failed to load resource: the server responded with a status of (401|422)/.test(message);
-}
+/** Expected refusals (Chromium logs each as a failed resource); any other console error fails the test. */
+const unexpected = allowingStatus(401, 422);
 
 type Read = Record<"d" | "s" | "f" | "st", number> & ({ rp: number } | { es: number });
 

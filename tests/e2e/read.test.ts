@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
 import path from "node:path";
 import type { Locator } from "playwright-core";
-import { DESKTOP, PHONE, SHOTS_DIR, openBrowser, screenshot, startAppServer } from "./harness";
+import { DESKTOP, PHONE, SHOTS_DIR, openBrowser, screenshot, startAppServer, allowingStatus } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -17,10 +17,8 @@ async function panelShot(locator: Locator, name: string) {
   await locator.screenshot({ path: path.join(SHOTS_DIR, `${name}.png`) });
 }
 
-/** A signed-out visitor's /api/me probe answers 401; Chromium logs that as a failed resource. */
-function unexpected(message: string): boolean {
-  return !/Failed to load resource: the server responded with a status of 401/.test(message);
-}
+/** Expected refusals (Chromium logs each as a failed resource); any other console error fails the test. */
+const unexpected = allowingStatus(401);
 
 test("a signed-out golfer reads a putt on a phone, and the same link in a fresh browser shows the same read", async () => {
   const phone = await openBrowser(PHONE);

@@ -16,7 +16,7 @@ import { useShareGreen } from "../api/share-green";
 import { useUpdateGreen } from "../api/update-green";
 import { useUnits } from "../../auth/hooks/use-units";
 import { todayIso } from "../utils/dates";
-import { formatRoll, formatStimp } from "../utils/stimp";
+import { formatRoll, stimpFeetAndInches } from "../utils/stimp";
 import { STIMP_CAUTION, StimpHelper } from "./stimp-helper";
 
 function RenameForm({ green, onDone }: { green: Green; onDone: () => void }) {
@@ -71,7 +71,7 @@ function ReadingForm({ greenId }: { greenId: string }) {
   const done = (g: Green) => {
     setStimp("");
     setEntry((n) => n + 1);
-    setSaved(`Saved ${g.readings[0] ? formatStimp(g.readings[0].stimpFt) : ""} for ${formatDate(measuredOn)}.`);
+    setSaved(`Saved ${g.readings[0] ? stimpFeetAndInches(g.readings[0].stimpFt) : ""} for ${formatDate(measuredOn)}.`);
   };
 
   return (
@@ -171,7 +171,7 @@ function ReadingsList({ green, canEdit }: { green: Green; canEdit: boolean }) {
           <li key={r.id} className="flex items-center gap-3 rounded-xl bg-white px-4 py-3 ring-1 ring-ink-900/5">
             <div className="min-w-0 flex-1">
               <p className="font-medium">
-                {formatStimp(r.stimpFt)}
+                {stimpFeetAndInches(r.stimpFt)}
                 {i === 0 ? <span className="ml-2 rounded-full bg-ok-50 px-2 py-0.5 text-xs font-medium text-ok-800">current</span> : null}
               </p>
               <p className="text-sm text-ink-500">
@@ -203,7 +203,7 @@ function ReadingsList({ green, canEdit }: { green: Green; canEdit: boolean }) {
         onConfirm={() => confirm && remove.mutate(confirm.id, { onSettled: () => setConfirm(null) })}
       >
         {confirm
-          ? `${formatStimp(confirm.stimpFt)} measured ${formatDate(confirm.measuredOn)}. Sessions already logged keep their Stimp.`
+          ? `${stimpFeetAndInches(confirm.stimpFt)} measured ${formatDate(confirm.measuredOn)}. Sessions already logged keep their Stimp.`
           : null}
       </ConfirmDialog>
     </>

@@ -1,5 +1,4 @@
-import { formatDate } from "../../../../shared/format";
-import { stimpText } from "../../../../shared/format";
+import { formatDate, stimpText } from "../../../../shared/format";
 import { useEffect, useMemo, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import clsx from "clsx";

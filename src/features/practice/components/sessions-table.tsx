@@ -1,5 +1,4 @@
-import { formatDate } from "../../../../shared/format";
-import { formatStimp } from "../../../../shared/format";
+import { formatDate, formatStimp } from "../../../../shared/format";
 import { useMemo, useState } from "react";
 import {
   getCoreRowModel,

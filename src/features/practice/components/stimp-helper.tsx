@@ -1,8 +1,8 @@
-import { formatStimp as formatStimpFt } from "../../../../shared/format";
+import { formatStimp } from "../../../../shared/format";
 import { useState } from "react";
 import type { UnitSystem } from "../../../../shared/units";
 import { Alert, Button, InputField } from "../../../components/ui";
-import { formatRoll, formatStimp, rollFt, twoWayStimp, type RollText } from "../utils/stimp";
+import { formatRoll, stimpFeetAndInches, rollFt, twoWayStimp, type RollText } from "../utils/stimp";
 
 export const STIMP_CAUTION = "Measure green speed only where the course allows it and off the line of play.";
 
@@ -79,7 +79,7 @@ export function StimpHelper({ units, onSave, saving = false }: StimpHelperProps)
           <>
             <p className="text-sm text-sand-200">Corrected Stimp</p>
             <p className="text-3xl font-semibold tabular-nums" data-testid="corrected-stimp">
-              {formatStimp(result.stimpFt)}
+              {stimpFeetAndInches(result.stimpFt)}
             </p>
             <p className="mt-1 text-sm text-sand-200">
               From {formatRoll(result.upFt, units)} up and {formatRoll(result.downFt, units)} down; a plain average would say {result.plainAverageFt.toFixed(1)} ft.
@@ -91,7 +91,7 @@ export function StimpHelper({ units, onSave, saving = false }: StimpHelperProps)
       </div>
       <Alert tone="warning">{STIMP_CAUTION}</Alert>
       <Button variant="primary" disabled={!result.ok} loading={saving} loadingText="Saving…" onClick={() => result.ok && onSave({ upFt: result.upFt, downFt: result.downFt })} className="sm:self-start">
-        {result.ok ? `Save ${formatStimpFt(result.stimpFt)} ft` : "Save the reading"}
+        {result.ok ? `Save ${formatStimp(result.stimpFt)} ft` : "Save the reading"}
       </Button>
     </div>
   );

@@ -1,6 +1,6 @@
 import { expect, test } from "vitest";
 import { BREDE_1990 } from "../../../../tests/fixtures/physics-references";
-import { formatStimp, rollFt, twoWayStimp } from "./stimp";
+import { stimpFeetAndInches, rollFt, twoWayStimp } from "./stimp";
 
 test("Brede's worked example: down 981 cm, up 185 cm gives 10.2 ft where the plain average says 19.1 ft", () => {
   // A. D. Brede, "Measuring Green Speed on Sloped Putting Greens", USGA Green Section Record 28(6):10–12, 1990 [published formula, secondary example].
@@ -28,6 +28,6 @@ test("the same roll both ways is the flat reading; swapped directions and imposs
   expect(twoWayStimp(12, 8)).toMatchObject({ ok: false, reason: expect.stringMatching(/which is which/) });
   expect(twoWayStimp(1.5, 2)).toMatchObject({ ok: false, reason: expect.stringMatching(/outside 3–16 ft/) });
   expect(twoWayStimp(null, 9)).toMatchObject({ ok: false });
-  expect(formatStimp(10.21)).toBe("10.2 ft (10 ft 2 in)");
-  expect(formatStimp(9.5)).toBe("9.5 ft (9 ft 6 in)");
+  expect(stimpFeetAndInches(10.21)).toBe("10.2 ft (10 ft 2 in)");
+  expect(stimpFeetAndInches(9.5)).toBe("9.5 ft (9 ft 6 in)");
 });

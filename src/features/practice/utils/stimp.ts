@@ -24,7 +24,7 @@ export function rollFt(roll: RollText, units: UnitSystem): number | null {
 }
 
 /** "10.2 ft (10 ft 2 in)": Stimp as the trade writes it, with feet and inches beside it. */
-export function formatStimp(ft: number): string {
+export function stimpFeetAndInches(ft: number): string {
   // Feet and inches of the rounded figure, so the two never disagree (10.2 ft is 10 ft 2 in, not 10 ft 3 in).
   const totalIn = Math.round(Number(ft.toFixed(1)) * 12);
   const whole = Math.floor(totalIn / 12);

@@ -21,14 +21,6 @@ import { CHART_GRID, ROLE_COLOURS, patternId, seriesLook } from "../../../lib/ch
 import { ChartPatterns, legendProps, seriesDot, tickStyle, figureChart } from "../../../components/charts/chart-parts";
 import type { CompareRow, MakeRateRow, SessionRow, TrendRow, TrendSeries } from "../utils/chart-data";
 
-const COLOURS = {
-  you: ROLE_COLOURS.you,
-  band: ROLE_COLOURS.band,
-  tour: ROLE_COLOURS.tour,
-  gain: ROLE_COLOURS.gain,
-  loss: ROLE_COLOURS.loss,
-};
-
 const grid = <CartesianGrid stroke={CHART_GRID} vertical={false} />;
 const percentAxis = <YAxis domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} unit=" %" width={52} tick={tickStyle} />;
 const pct = (v: unknown) => (typeof v === "number" ? `${v.toFixed(1)} %` : "–");
@@ -53,10 +45,10 @@ export function MakeRateChart({ rows, tourSource, rateLabel = "Your make rate" }
               }}
             />
             <Legend verticalAlign="top" height={28} {...legendProps} />
-            <Area type="linear" dataKey="range" name="95 % interval" legendType="rect" stroke="none" fill={COLOURS.band} fillOpacity={0.3} connectNulls={false} isAnimationActive={false} />
-            <Line type="linear" dataKey="tour" name="Tour one-putt rate" legendType="triangle" stroke={COLOURS.tour} strokeWidth={2} strokeDasharray="6 4" dot={seriesDot(1, 40)} isAnimationActive={false} />
-            <Line type="linear" dataKey="rate" name={rateLabel} legendType="circle" stroke={COLOURS.you} strokeWidth={2.5} dot={seriesDot(0, 56)} connectNulls={false} isAnimationActive={false}>
-              <ErrorBar dataKey="err" width={6} stroke={COLOURS.you} strokeWidth={1.5} direction="y" />
+            <Area type="linear" dataKey="range" name="95 % interval" legendType="rect" stroke="none" fill={ROLE_COLOURS.band} fillOpacity={0.3} connectNulls={false} isAnimationActive={false} />
+            <Line type="linear" dataKey="tour" name="Tour one-putt rate" legendType="triangle" stroke={ROLE_COLOURS.tour} strokeWidth={2} strokeDasharray="6 4" dot={seriesDot(1, 40)} isAnimationActive={false} />
+            <Line type="linear" dataKey="rate" name={rateLabel} legendType="circle" stroke={ROLE_COLOURS.you} strokeWidth={2.5} dot={seriesDot(0, 56)} connectNulls={false} isAnimationActive={false}>
+              <ErrorBar dataKey="err" width={6} stroke={ROLE_COLOURS.you} strokeWidth={1.5} direction="y" />
             </Line>
           </ComposedChart>
         </ResponsiveContainer>
@@ -121,10 +113,10 @@ export function CompareChart({ rows, aLabel, bLabel }: CompareChartProps) {
           <Legend verticalAlign="top" height={28} {...legendProps} />
           <ChartPatterns />
           <Bar dataKey="a" name={aLabel} fill={`url(#${patternId(1)})`} isAnimationActive={false}>
-            <ErrorBar dataKey="aErr" width={4} stroke={COLOURS.you} direction="y" />
+            <ErrorBar dataKey="aErr" width={4} stroke={ROLE_COLOURS.you} direction="y" />
           </Bar>
           <Bar dataKey="b" name={bLabel} fill={`url(#${patternId(0)})`} isAnimationActive={false}>
-            <ErrorBar dataKey="bErr" width={4} stroke={COLOURS.you} direction="y" />
+            <ErrorBar dataKey="bErr" width={4} stroke={ROLE_COLOURS.you} direction="y" />
           </Bar>
         </BarChart>
       </ResponsiveContainer>
@@ -141,11 +133,11 @@ export function SessionsChart({ rows }: { rows: SessionRow[] }) {
           {grid}
           <XAxis dataKey="label" tick={tickStyle} minTickGap={12} />
           <YAxis width={44} tick={tickStyle} />
-          <ReferenceLine y={0} stroke={COLOURS.you} />
+          <ReferenceLine y={0} stroke={ROLE_COLOURS.you} />
           <Tooltip formatter={(v) => (typeof v === "number" ? `${v > 0 ? "+" : ""}${v.toFixed(2)} strokes` : "–")} labelFormatter={(l, p) => `${l} · ${(p?.[0]?.payload as SessionRow | undefined)?.putts ?? 0} putts`} />
           <Bar dataKey="strokesGained" name="Strokes gained" isAnimationActive={false}>
             {rows.map((r) => (
-              <Cell key={r.sessionId} fill={r.strokesGained >= 0 ? COLOURS.gain : COLOURS.loss} />
+              <Cell key={r.sessionId} fill={r.strokesGained >= 0 ? ROLE_COLOURS.gain : ROLE_COLOURS.loss} />
             ))}
           </Bar>
         </BarChart>
