@@ -92,7 +92,7 @@ export function stillReading(
   while (first > 0 && last - samples[first - 1]!.t <= rules.windowS) first--;
   const window = samples.slice(first);
   if (window.length < rules.minSamples) return null;
-  const sum = [0, 0, 0];
+  const sum: [number, number, number] = [0, 0, 0];
   let gx = 0;
   let gy = 0;
   let gxx = 0;
@@ -111,8 +111,8 @@ export function stillReading(
   const variance = Math.max(0, gxx / n - (gx / n) ** 2) + Math.max(0, gyy / n - (gy / n) ** 2);
   const spreadPct = 100 * Math.sqrt(variance);
   if (spreadPct > rules.maxSpreadPct) return null;
-  const norm = Math.hypot(sum[0]!, sum[1]!, sum[2]!);
-  return { up: [sum[0]! / norm, sum[1]! / norm, sum[2]! / norm], samples: n, spanS: last - window[0]!.t, spreadPct };
+  const norm = Math.hypot(sum[0], sum[1], sum[2]);
+  return { up: [sum[0] / norm, sum[1] / norm, sum[2] / norm], samples: n, spanS: last - window[0]!.t, spreadPct };
 }
 
 /** The result of a reading and a second one with the phone turned half a turn on the same spot. */
