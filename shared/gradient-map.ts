@@ -97,7 +97,7 @@ export function heightsFromGradients(grid: WalkedGrid): RebuiltSurface {
 }
 
 /** The stored height map of a walk: its south-west spot at the origin (the first spot walked), rows north to south. */
-export function walkedHeightMap(grid: WalkedGrid, rebuilt: RebuiltSurface): Pick<StoredHeightMap, "spacingM" | "originM" | "heightsM"> {
+export function walkedHeightMap(grid: Pick<WalkedGrid, "spacingM">, rebuilt: RebuiltSurface): Pick<StoredHeightMap, "spacingM" | "originM" | "heightsM"> {
   return { spacingM: grid.spacingM, originM: [0, 0], heightsM: rebuilt.heightsM };
 }
 

@@ -4,13 +4,9 @@ import { TiltSensor } from "../../lib/tilt-sensor";
 
 /** One TiltSensor for the component's life, stopped when it unmounts. */
 export function useTiltSensor(): TiltSensor {
-  const ref = useRef<TiltSensor | null>(null);
-  ref.current ??= new TiltSensor();
-  useEffect(() => {
-    const sensor = ref.current!;
-    return () => sensor.stop();
-  }, []);
-  return ref.current;
+  const [sensor] = useState(() => new TiltSensor());
+  useEffect(() => () => sensor.stop(), [sensor]);
+  return sensor;
 }
 
 /** The slope under the phone right now, refreshed at most five times a second (for "now reading 2.1 %"). */
