@@ -149,9 +149,9 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
           reads the slope in two seconds. On the map, north is toward your mark.
         </p>
         <div className="grid grid-cols-3 gap-3">
-          <InputField label="Spots across" inputMode="numeric" value={text.nx} onChange={(e) => setText((t) => ({ ...t, nx: e.target.value }))} error={setupErrors.nx} />
+          <InputField label="Across" hint="Spots a row" inputMode="numeric" value={text.nx} onChange={(e) => setText((t) => ({ ...t, nx: e.target.value }))} error={setupErrors.nx} />
           <InputField label="Rows" hint="Toward the mark" inputMode="numeric" value={text.ny} onChange={(e) => setText((t) => ({ ...t, ny: e.target.value }))} error={setupErrors.ny} />
-          <InputField label="Apart (m)" inputMode="decimal" value={text.spacing} onChange={(e) => setText((t) => ({ ...t, spacing: e.target.value }))} error={setupErrors.spacing} />
+          <InputField label="Apart (m)" hint="A pace or two" inputMode="decimal" value={text.spacing} onChange={(e) => setText((t) => ({ ...t, spacing: e.target.value }))} error={setupErrors.spacing} />
         </div>
         {problem ? (
           <Alert tone="info" title="No measurement">
@@ -277,7 +277,7 @@ function WalkGrid({
                 const suspect = res !== undefined && res > SUSPECT_RESIDUAL_PCT;
                 const label = g ? `${slopeAndFallLine(g).slopePct.toFixed(1)} %` : k === current ? "here" : "·";
                 const cell = clsx(
-                  "flex h-11 min-w-11 flex-col items-center justify-center rounded-lg border-2 px-1 tabular-nums",
+                  "flex h-12 min-w-14 flex-col items-center justify-center rounded-lg border-2 px-1 tabular-nums",
                   k === current ? "border-coral-500 bg-coral-50 font-semibold" : g ? "border-ink-900/20 bg-white" : "border-dashed border-ink-900/20",
                   suspect && "border-bad-600 bg-bad-50 text-bad-800",
                 );
