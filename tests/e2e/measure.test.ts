@@ -3,6 +3,7 @@
 // browser with no sensor is told so.
 import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";
+import { AxeBuilder } from "@axe-core/playwright";
 import { DESKTOP, PHONE, allowingStatus, openBrowser, screenshot, startAppServer } from "./harness";
 import type { TestServer } from "../setup/server";
 
@@ -43,6 +44,11 @@ async function installFeeder(page: Page) {
     }, 20);
   });
 }
+/** axe-core on the panel in its working state (the pages themselves are in accessibility.test.ts). */
+async function axeViolations(page: Page, selector: string): Promise<string[]> {
+  const result = await new AxeBuilder({ page: page as never }).include(selector).analyze();
+  return result.violations.map((v) => `${v.id} (${v.impact}) × ${v.nodes.length}: ${v.nodes[0]?.target.join(" ")}`);
+}
 const feed = (page: Page, v: V3, handled = true) => page.evaluate(([vec, h]) => (window as any).__feed(vec, h), [v, handled ? HANDLING : null] as const);
 
 test("measure on the green: 2.0 % falling right with a 0.3° sensor tilt fills the read form with 2.0 % and 90° after the half turn; a desk says it has no sensor", async () => {
@@ -59,6 +65,7 @@ test("measure on the green: 2.0 % falling right with a 0.3° sensor tilt fills t
     await feed(page, lying(-0.02, 0), false);
     await page.getByText("Step 2 of 2").waitFor();
     await screenshot(page, "measure-phone-step2");
+    expect(await axeViolations(page, 'section[aria-label="Measure on the green"]')).toEqual([]);
     // Half a turn on the same spot: the ground's gradient flips in the phone's frame; the sensor's tilt does not.
     await feed(page, lying(0.02, 0));
     const result = page.getByTestId("measured");
@@ -121,12 +128,16 @@ test("map this green: a 3 × 3 walk with synthetic readings is saved as the gree
     await feed(page, lying(-gx, -gy));
     for (let k = 2; k <= 9; k++) {
       await page.getByRole("heading", { name: `Spot ${k} of 9` }).waitFor();
-      if (k === 5) await screenshot(page, "walk-phone-spot5");
+      if (k === 5) {
+        await screenshot(page, "walk-phone-spot5");
+        expect(await axeViolations(page, "#map-by-walking")).toEqual([]);
+      }
       await feed(page, lying(gx, gy));
     }
     await page.getByRole("heading", { name: "The walked map" }).waitFor();
     expect(await page.getByText("no spot disagrees with its neighbours").count()).toBe(1);
     await screenshot(page, "walk-phone-review");
+    expect(await axeViolations(page, "#map-by-walking")).toEqual([]);
     await page.getByRole("button", { name: "Save as this green's height map" }).click();
     await page.getByTestId("surface-map").waitFor();
     expect(await page.getByRole("region", { name: "The height map" }).textContent()).toMatch(/Walked with a phone: 9 spots/);

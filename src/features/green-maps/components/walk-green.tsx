@@ -294,8 +294,9 @@ function WalkGrid({
                         {res !== undefined ? <span className="text-[11px] text-ink-500">±{res.toFixed(1)}</span> : null}
                       </button>
                     ) : (
-                      <div className={cell} aria-label={`${spotWords(k, grid.nx)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}>
-                        {label}
+                      <div className={cell}>
+                        <span aria-hidden="true">{label}</span>
+                        <span className="sr-only">{`${spotWords(k, grid.nx)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}</span>
                       </div>
                     )}
                   </td>
