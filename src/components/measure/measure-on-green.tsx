@@ -150,7 +150,7 @@ export function MeasureOnGreen({
           </Button>
         ) : null}
         <Button type="button" size="sm" variant="ghost" onClick={close}>
-          {phase.kind === "done" ? "Close" : "Cancel"}
+          {phase.kind === "done" || phase.kind === "problem" ? "Close" : "Cancel"}
         </Button>
       </div>
     </section>
