@@ -38,6 +38,8 @@ export const heightGridInputSchema = z
     spacingM: spacingMSchema,
     originM: point("originM").default([0, 0]),
     heightsM: z.array(z.array(num("height")), { message: "heightsM is an array of rows of heights (m)" }),
+    /** True when the heights were rebuilt from slopes measured with a phone at every node ("map this green"). */
+    walked: z.boolean({ message: "walked is true or false" }).default(false),
   })
   .strict();
 
@@ -73,7 +75,8 @@ export type StoredHeightMap = {
   spacingM: number;
   originM: [number, number];
   heightsM: number[][];
-  source: "grid" | "spots";
+  /** "walked": rebuilt from phone slope readings at every node (spotCount of them). */
+  source: "grid" | "spots" | "walked";
   spotCount: number | null;
 };
 
@@ -88,7 +91,8 @@ export type HeightMapSummary = {
   maxHeightM: number;
   /** Steepest grade between neighbouring nodes, %. */
   maxSlopePct: number;
-  source: "grid" | "spots";
+  /** "walked": rebuilt from phone slope readings at every node (spotCount of them). */
+  source: "grid" | "spots" | "walked";
   spotCount: number | null;
 };
 

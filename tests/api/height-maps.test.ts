@@ -201,3 +201,24 @@ test("POST /api/greens/:id/reads/solve on a surface too steep to stop answers th
   expect(onMap.body.error.details).toEqual(planar.body.error.details);
   expect(onMap.body.error.details.maxStoppableSlopePct).toBeCloseTo(7.86, 1);
 });
+
+test("PUT /api/greens/:id/height-map with walked: true stores a walked map (source and spot count); a bad walked flag is a 400 that stores nothing", async () => {
+  const a = await signedUpClient(server);
+  const id = await greenOf(a.id);
+  const heightsM = [
+    [0.02, 0.02, 0.02],
+    [0, 0, 0],
+    [-0.02, -0.02, -0.02],
+  ];
+  const bad = await put(a.client, id, { kind: "grid", spacingM: 2, heightsM, walked: "yes" });
+  expect(bad.status).toBe(400);
+  expect(bad.body.error.fields).toHaveProperty("walked");
+  expect((await a.client.get(`/api/greens/${id}/height-map`)).status).toBe(404);
+  const res = await put(a.client, id, { kind: "grid", spacingM: 2, heightsM, walked: true });
+  expect(res.status).toBe(200);
+  expect(res.body).toMatchObject({ nx: 3, ny: 3, source: "walked", spotCount: 9, widthM: 4, depthM: 4 });
+  // 0.02 m over 2 m between rows: 1 % (hand-computed).
+  expect(res.body.maxSlopePct).toBeCloseTo(1, 9);
+  const plain = await put(a.client, id, { kind: "grid", spacingM: 2, heightsM });
+  expect(plain.body).toMatchObject({ source: "grid", spotCount: null });
+});

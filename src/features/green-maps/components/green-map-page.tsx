@@ -30,6 +30,7 @@ import { HeightMapUpload } from "./height-map-upload";
 import { MapLegend } from "./map-legend";
 import { SurfaceMap } from "./surface-map";
 import { SurfaceReadAnswer } from "./surface-read-answer";
+import { WalkGreen } from "./walk-green";
 
 const EXAGGERATION = 5;
 
@@ -79,7 +80,7 @@ export function GreenMapPage({ greenId }: { greenId: string }) {
           map.data
             ? "Tap where the ball lies and where the hole is cut; the read is rolled on this green's own surface."
             : canEdit
-              ? "Upload the green's height map to read putts on its real surface, bumps and all."
+              ? "Walk the green with your phone, or upload a surveyed height map, to read putts on its real surface, bumps and all."
               : `No height map yet: ${green.data?.ownerName ?? "the person who keeps this green"} can upload one.`
         }
         actions={
@@ -91,13 +92,18 @@ export function GreenMapPage({ greenId }: { greenId: string }) {
       {map.data ? (
         <MapWorkspace key={mapIdentity(map.data)} greenId={greenId} map={map.data} units={units} greenStimpFt={stimpFt} canEdit={canEdit} />
       ) : !canEdit ? null : (
-        <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)]">
-          <Card>
-            <HeightMapUpload greenId={greenId} replacing={false} />
+        <div className="flex flex-col gap-6">
+          <Card id="map-by-walking">
+            <WalkGreen greenId={greenId} replacing={false} />
           </Card>
-          <Card>
-            <CsvHelp />
-          </Card>
+          <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)]">
+            <Card>
+              <HeightMapUpload greenId={greenId} replacing={false} />
+            </Card>
+            <Card>
+              <CsvHelp />
+            </Card>
+          </div>
         </div>
       )}
     </>
@@ -313,6 +319,11 @@ function MapWorkspace({
           </Card>
         ) : null}
       </div>
+      {canEdit ? (
+        <Card id="map-by-walking">
+          <WalkGreen greenId={greenId} replacing />
+        </Card>
+      ) : null}
     </div>
   );
 }

@@ -33,7 +33,13 @@ export function HeightMapSummary({ greenId, summary, units, canEdit = true }: { 
         <dt className="text-ink-600">Steepest</dt>
         <dd>{summary.maxSlopePct.toFixed(1)} % between neighbouring heights</dd>
         <dt className="text-ink-600">From</dt>
-        <dd>{summary.source === "spots" ? `${summary.spotCount ?? "Some"} spot heights, filled in between` : "A grid of heights"}</dd>
+        <dd>
+          {summary.source === "spots"
+            ? `${summary.spotCount ?? "Some"} spot heights, filled in between`
+            : summary.source === "walked"
+              ? `Walked with a phone: ${summary.spotCount ?? "several"} spots, heights from their slopes`
+              : "A grid of heights"}
+        </dd>
       </dl>
       {!canEdit ? null : confirming ? (
         <div className="flex flex-wrap items-center gap-2" role="group" aria-label="Delete the height map?">

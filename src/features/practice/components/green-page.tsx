@@ -317,6 +317,11 @@ export function GreenPage({ greenId, canShare = false }: { greenId: string; canS
                 Height map and reads
               </ButtonLink>
               {g.mine ? (
+                <ButtonLink to={`${paths.greenMap.href(g.id)}#map-by-walking`} variant="secondary" size="sm">
+                  Map this green
+                </ButtonLink>
+              ) : null}
+              {g.mine ? (
                 <>
                   <Button variant="secondary" size="sm" onClick={() => setRenaming(true)}>
                     Rename

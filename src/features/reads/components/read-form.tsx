@@ -21,6 +21,7 @@ import {
 } from "../utils/read-form";
 import { encodeReadQuery, type ReadValues } from "../../../lib/read-url";
 import { DirectionDial } from "./direction-dial";
+import { MeasureOnGreen, type Measured } from "../../../components/measure/measure-on-green";
 
 /** The eight named directions placed as the golfer sees them: away (downhill) on top, toward them below, the hole in the middle. */
 const PICKER_LAYOUT: ReadonlyArray<number | null> = [315, 0, 45, 270, null, 90, 225, 180, 135];
@@ -142,6 +143,17 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
     if (isValid()) commit();
   };
 
+  // Measured with the phone: both fields take the exact values (shown rounded) and the read is worked out at once.
+  const setMeasured = (m: Measured) => {
+    const slopeText = formatNumber(m.slopePct, 1);
+    const fallText = formatNumber(m.fallLineDeg, 0);
+    memory.current = { ...memory.current, slope: { text: slopeText, si: m.slopePct }, fallLine: { text: fallText, si: normaliseDeg(m.fallLineDeg) } };
+    setValue("slope", slopeText, { shouldValidate: true, shouldDirty: true, shouldTouch: true });
+    setValue("fallLine", fallText, { shouldValidate: true, shouldDirty: true, shouldTouch: true });
+    debounced.cancel();
+    if (isValid()) commit();
+  };
+
   const paceMode = watched.paceMode ?? "rollPast";
   const fallLineText = watched.fallLine ?? "";
   const dialDeg = parseNumber(fallLineText);
@@ -197,6 +209,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
           {...register("rollPast")}
         />
       </div>
+      <MeasureOnGreen onMeasured={setMeasured} />
 
       <section aria-labelledby={`${ids.dial}-h`} className="flex flex-col gap-4">
         <div>

@@ -15,6 +15,7 @@ import { isApiError } from "../../../lib/api-client";
 import { useMe } from "../../auth/api/get-me";
 import { useCreateAttempt } from "../api/create-attempt";
 import { newSeed, roundPutt } from "../utils/putt-generator";
+import { EyeCheck } from "./eye-check";
 import { HistorySection } from "./history-section";
 import { AimControl, FlatPuttControl, aimRangeM } from "./read-controls";
 import { ResultPanel } from "./result-panel";
@@ -68,6 +69,7 @@ export function TrainPage() {
           onNewRound={() => setParams(roundQuery(level, newSeed(), 0))}
         />
       )}
+      <EyeCheck />
       <div className="mt-8">
         <HistorySection signedIn={Boolean(me.data)} />
       </div>
