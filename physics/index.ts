@@ -100,15 +100,20 @@ export {
   type LoggedPutt,
 } from "./dispersion";
 export { surfaceFromGrid, type HeightGrid, type HeightSurface } from "./height-surface";
+export { simulateRollOnSurface, type SurfaceNoRest, type SurfaceRoll, type SurfaceRollInput, type SurfaceRollResult } from "./surface-roll";
+export { solveReadOnSurface, type NoSurfaceRead, type SurfaceRead, type SurfaceReadInput, type SurfaceReadResult } from "./surface-read";
 export {
-  simulateRollOnSurface,
-  solveReadOnSurface,
-  type NoSurfaceRead,
-  type SurfaceNoRest,
-  type SurfaceRead,
-  type SurfaceReadInput,
-  type SurfaceReadResult,
-  type SurfaceRoll,
-  type SurfaceRollInput,
-  type SurfaceRollResult,
-} from "./surface-roll";
+  accelerationInto,
+  closedFormApplies,
+  forceRhs,
+  forcesFor,
+  gravityAlongSurface,
+  gravityDecelOnGrade,
+  newBallState,
+  planeGround,
+  rollingResistance,
+  type BallState,
+  type Force,
+  type ForceInputs,
+  type Ground,
+} from "./forces";

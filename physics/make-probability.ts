@@ -299,7 +299,8 @@ function prepare(input: MakeProbabilityInput): ({ ok: true; field: PlanarRollFie
   if (!(secondPuttM >= 0) || !Number.isFinite(secondPuttM)) throw new RangeError(`secondPuttM must be ≥ 0 (got ${secondPuttM})`);
   const green = resolveGreen(input);
   if (!stopsInPractice(green)) return cannotStop(describeModel(green));
-  if (green.model.resistanceSpeedFactor !== null) throw new RangeError("makeProbability needs the constant-resistance model (closed-form rolls)");
+  // The Monte Carlo rolls in closed form: only the forces the closed form models exactly (physics/forces/).
+  if (!green.closedForm) throw new RangeError("makeProbability needs the constant-resistance model (closed-form rolls)");
   const field = planarRollField(green);
   const keep = Math.min(input.samples, Math.max(0, Math.floor(input.finishesKept ?? 100)));
   const dispersion = { angleDeg, pace, readSlopePct, greenLateralM };

@@ -45,7 +45,7 @@ export interface PlanarRollField {
  * @example planarRollField(resolveGreen({ slopePct: 2, fallLineDeg: 90, stimpFt: 10 })).k // ≈ 3.92
  */
 export function planarRollField(green: Green): PlanarRollField {
-  const key = `${green.gravityDecelMps2}|${green.rollingDecelMps2}|${green.fallLine[0]}|${green.fallLine[1]}|${green.model.resistanceSpeedFactor === null}`;
+  const key = `${green.gravityDecelMps2}|${green.rollingDecelMps2}|${green.fallLine[0]}|${green.fallLine[1]}|${green.closedForm}`;
   const hit = fieldCache.get(key);
   if (hit !== undefined) return hit;
   const field = buildField(green);
@@ -58,7 +58,7 @@ export function planarRollField(green: Green): PlanarRollField {
 const fieldCache = new Map<string, PlanarRollField>();
 
 function buildField(green: Green): PlanarRollField {
-  if (green.model.resistanceSpeedFactor !== null) throw new RangeError("planarRollField: the closed form needs constant rolling resistance");
+  if (!green.closedForm) throw new RangeError("planarRollField: the closed form needs the closed-form forces (gravity on a plane, constant rolling resistance)");
   if (!stopsInPractice(green)) throw new RangeError("planarRollField: the ball cannot stop on this green (check stopsInPractice first)");
   const ag = green.gravityDecelMps2;
   const ar = green.rollingDecelMps2;

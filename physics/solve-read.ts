@@ -41,7 +41,7 @@ export function solveRead(input: ReadInput): ReadResult {
   const green = resolveGreen({ ...input, fallLineDeg: fold.canonicalDeg });
   const model = describeModel(resolveGreen(input));
   if (!stopsInPractice(green)) return cannotStop(model);
-  if (green.model.resistanceSpeedFactor !== null) return solveReadDirect(input);
+  if (!green.closedForm) return solveReadDirect(input);
   const D = input.distanceM;
   const phi = (fold.canonicalDeg * Math.PI) / 180;
   const ar = green.rollingDecelMps2;
