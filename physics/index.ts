@@ -56,16 +56,9 @@ export {
   type PaceSweepInput,
 } from "./break-chart";
 export { rollRhs, STATE } from "./roll";
-export {
-  PlanarPath,
-  newPlanarRollOut,
-  planarRollField,
-  rollClosedForm,
-  rollPlanarInto,
-  type PlanarRoll,
-  type PlanarRollField,
-  type PlanarRollOut,
-} from "./planar-roll";
+export { PlanarPath, planarRollField, type PlanarRollField } from "./planar-path";
+export { newPlanarRollOut, rollPlanarInto, type PlanarRollOut } from "./planar-roll";
+export { rollClosedForm, type PlanarRoll } from "./closed-form-roll";
 export { standardNormals, type UniformRandom } from "./normal-deviates";
 export {
   DEFAULT_BEST_PACE_GRID_M,
