@@ -5,6 +5,7 @@
 // fallLineDeg clockwise from ball→hole seen from above (0 = downhill putt, 90 = falls to the right).
 // Scene (three.js, right-handed, y up): scene x = putt x, scene y = height, scene z = −putt y. A camera behind the
 // ball looking down −z then has the golfer's right on its right.
+import { inchesToMetres } from "../../../shared/units";
 
 export type PuttPlane = {
   slopePct: number;
@@ -88,7 +89,7 @@ export function heightRange(
 }
 
 const METRIC_INTERVALS_M = [0.005, 0.01, 0.02, 0.05, 0.1, 0.2, 0.5];
-const IMPERIAL_INTERVALS_M = [0.25, 0.5, 1, 2, 4, 8, 16].map((inches) => inches * 0.0254);
+const IMPERIAL_INTERVALS_M = [0.25, 0.5, 1, 2, 4, 8, 16].map(inchesToMetres);
 
 /**
  * Height between contour lines, m: the smallest round step (cm or inches) that draws at most `maxLines` lines
