@@ -1,10 +1,12 @@
 // A player's start-line and pace dispersion estimated from their logged putts (Bayesian, on a grid), with a weak
 // prior for club golfers that dominates while the log is thin.
+// Over 300 lines on purpose: one estimator (data preparation, the posterior on a zooming grid and its summaries)
+// whose private pieces have no other caller.
 import { erf } from "mathjs";
 import { ballDropTimeS } from "./capture";
 import { HOLE_RADIUS_M } from "./constants";
 import { DEFAULT_GREEN_LATERAL_M, DEFAULT_READ_ERROR_SLOPE_PCT, greenLateralSigmaM, readSensitivity } from "./make-probability";
-import { rollingDecelFromStimp } from "./roll-model";
+import { DEFAULT_ROLL_MODEL, rollingDecelFromStimp } from "./forces";
 
 /**
  * One logged putt: distance (m), holed, the side a miss finished on (seen by the golfer) and its signed length
@@ -229,7 +231,7 @@ function prepareData(putts: readonly LoggedPutt[], defaultStimp: number, readSlo
   const cache = new Map<string, { angleDeg: number; pace: number }>();
   for (const p of putts) {
     const stimp = p.stimpFt != null && Number.isFinite(p.stimpFt) && p.stimpFt > 0 ? p.stimpFt : defaultStimp;
-    const ar = rollingDecelFromStimp(stimp);
+    const ar = rollingDecelFromStimp(stimp, DEFAULT_ROLL_MODEL);
     const D = p.distanceM;
     const m = p.missLengthM;
     const sided = p.missSide === "left" || p.missSide === "right";

@@ -56,16 +56,9 @@ export {
   type PaceSweepInput,
 } from "./break-chart";
 export { rollRhs, STATE } from "./roll";
-export {
-  PlanarPath,
-  newPlanarRollOut,
-  planarRollField,
-  rollClosedForm,
-  rollPlanarInto,
-  type PlanarRoll,
-  type PlanarRollField,
-  type PlanarRollOut,
-} from "./planar-roll";
+export { PlanarPath, planarRollField, type PlanarRollField } from "./planar-path";
+export { newPlanarRollOut, rollPlanarInto, type PlanarRollOut } from "./planar-roll";
+export { rollClosedForm, type PlanarRoll } from "./closed-form-roll";
 export { standardNormals, type UniformRandom } from "./normal-deviates";
 export {
   DEFAULT_BEST_PACE_GRID_M,
@@ -100,15 +93,20 @@ export {
   type LoggedPutt,
 } from "./dispersion";
 export { surfaceFromGrid, type HeightGrid, type HeightSurface } from "./height-surface";
+export { simulateRollOnSurface, type SurfaceNoRest, type SurfaceRoll, type SurfaceRollInput, type SurfaceRollResult } from "./surface-roll";
+export { solveReadOnSurface, type NoSurfaceRead, type SurfaceRead, type SurfaceReadInput, type SurfaceReadResult } from "./surface-read";
 export {
-  simulateRollOnSurface,
-  solveReadOnSurface,
-  type NoSurfaceRead,
-  type SurfaceNoRest,
-  type SurfaceRead,
-  type SurfaceReadInput,
-  type SurfaceReadResult,
-  type SurfaceRoll,
-  type SurfaceRollInput,
-  type SurfaceRollResult,
-} from "./surface-roll";
+  accelerationInto,
+  closedFormApplies,
+  forceRhs,
+  forcesFor,
+  gravityAlongSurface,
+  gravityDecelOnGrade,
+  newBallState,
+  planeGround,
+  rollingResistance,
+  type BallState,
+  type Force,
+  type ForceInputs,
+  type Ground,
+} from "./forces";

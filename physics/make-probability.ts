@@ -1,8 +1,11 @@
 // A player's make probability for a read (Monte Carlo over their start-line and pace dispersion), and the pace
 // that makes the most putts while keeping long second putts rare: "your best pace".
+// Over 300 lines on purpose: the Monte Carlo loop, the best-pace search and their tallies share private types and
+// helpers (Sim, Tally, simulatePace); split apart they would have to be exported for one caller each.
 import { HOLE_RADIUS_M } from "./constants";
 import { standardNormals, type UniformRandom } from "./normal-deviates";
-import { newPlanarRollOut, planarRollField, rollPlanarInto, type PlanarRollField } from "./planar-roll";
+import { planarRollField, type PlanarRollField } from "./planar-path";
+import { newPlanarRollOut, rollPlanarInto } from "./planar-roll";
 import { describeModel, resolveGreen, stopsInPractice } from "./roll-model";
 import { cannotStop, validateReadInput, type CannotStop, type ReadInput } from "./read-types";
 import { solveRead } from "./solve-read";
@@ -299,7 +302,8 @@ function prepare(input: MakeProbabilityInput): ({ ok: true; field: PlanarRollFie
   if (!(secondPuttM >= 0) || !Number.isFinite(secondPuttM)) throw new RangeError(`secondPuttM must be ≥ 0 (got ${secondPuttM})`);
   const green = resolveGreen(input);
   if (!stopsInPractice(green)) return cannotStop(describeModel(green));
-  if (green.model.resistanceSpeedFactor !== null) throw new RangeError("makeProbability needs the constant-resistance model (closed-form rolls)");
+  // The Monte Carlo rolls in closed form: only the forces the closed form models exactly (physics/forces/).
+  if (!green.closedForm) throw new RangeError("makeProbability needs the constant-resistance model (closed-form rolls)");
   const field = planarRollField(green);
   const keep = Math.min(input.samples, Math.max(0, Math.floor(input.finishesKept ?? 100)));
   const dispersion = { angleDeg, pace, readSlopePct, greenLateralM };

@@ -1,37 +1,20 @@
-// The rolling model: its named parameters, Stimp calibration and the green's accelerations.
-import { FOOT_M, GRAVITY_MPS2, SOLID_SPHERE_INERTIA_RATIO, STIMP_EXIT_SPEED_MPS } from "./constants";
+// The rolling model: a planar green resolved into the forces' accelerations (physics/forces/), stopping and summaries.
+import {
+  DEFAULT_ROLL_MODEL,
+  closedFormApplies,
+  forcesFor,
+  gravityDecelOnGrade,
+  planeGround,
+  rollingDecelFromStimp as decelFromStimp,
+  type Force,
+  type ForceInputs,
+  type Ground,
+  type RollModel,
+} from "./forces";
+import { requireFinite, requirePositive } from "./validate";
 
-/**
- * Named, documented parameters of the rolling model, so that a richer model can replace any of them.
- * - `stimpExitSpeedMps` v0: ball speed leaving the Stimpmeter (USGA booklet; 6 ft/s).
- * - `inertiaRatio` I/(mR²): 2/5 for a uniform solid sphere; gravity along the slope is g·sinθ/(1 + I/(mR²)).
- * - `gravityMps2`: g.
- * - `resistanceSpeedFactor`: multiplies the Stimp-calibrated rolling deceleration as a function of speed; `null`
- *   means constant resistance (the default). Only the constant model is homogeneous (see `solveRead`); a
- *   speed-dependent factor should also keep `factor(0) > 0`.
- * @example const model: RollModel = { ...DEFAULT_ROLL_MODEL, inertiaRatio: 0.38 };
- */
-export interface RollModel {
-  readonly name: string;
-  readonly stimpExitSpeedMps: number;
-  readonly inertiaRatio: number;
-  readonly gravityMps2: number;
-  readonly resistanceSpeedFactor: ((speedMps: number) => number) | null;
-}
-
-/**
- * Default model: true-rolling solid sphere on a plane, constant rolling resistance calibrated from the Stimp
- * (a_r = v0²/(2S), derived from constant deceleration; Brede 1990 relies on the same assumption), gravity
- * a_g = (5/7)·g·sinθ (textbook rigid-body mechanics; Penner, "The physics of putting", Can. J. Phys. 2002).
- * @example DEFAULT_ROLL_MODEL.stimpExitSpeedMps // 1.8288
- */
-export const DEFAULT_ROLL_MODEL: RollModel = Object.freeze({
-  name: "rolling-sphere-constant-resistance",
-  stimpExitSpeedMps: STIMP_EXIT_SPEED_MPS,
-  inertiaRatio: SOLID_SPHERE_INERTIA_RATIO,
-  gravityMps2: GRAVITY_MPS2,
-  resistanceSpeedFactor: null,
-});
+export { DEFAULT_ROLL_MODEL, type RollModel } from "./forces";
+export { requireFinite, requirePositive } from "./validate";
 
 /**
  * Rolling-resistance deceleration from a Stimp reading, m/s²: a_r = v0²/(2·S) with S in metres (constant
@@ -39,20 +22,19 @@ export const DEFAULT_ROLL_MODEL: RollModel = Object.freeze({
  * @example rollingDecelFromStimp(10) // ≈ 0.5486 m/s²
  */
 export function rollingDecelFromStimp(stimpFt: number, model: RollModel = DEFAULT_ROLL_MODEL): number {
-  requirePositive("stimpFt", stimpFt);
-  return (model.stimpExitSpeedMps * model.stimpExitSpeedMps) / (2 * stimpFt * FOOT_M);
+  return decelFromStimp(stimpFt, model);
 }
 
 /**
  * Gravity deceleration along the fall line for a ball rolling without slipping, m/s²:
- * a_g = g·sinθ/(1 + I/(mR²)), θ = atan(slopePct/100); (5/7)·g·sinθ for a solid sphere (textbook mechanics).
+ * a_g = g·sinθ/(1 + I/(mR²)), θ = atan(slopePct/100); (5/7)·g·sinθ for a solid sphere (textbook mechanics). The
+ * gravity force's own magnitude (forces/gravity.ts) on a plane.
  * @example gravityDecelFromSlope(2) // ≈ 0.1400 m/s²
  */
 export function gravityDecelFromSlope(slopePct: number, model: RollModel = DEFAULT_ROLL_MODEL): number {
   requireFinite("slopePct", slopePct);
   if (slopePct < 0) throw new RangeError(`slopePct must be ≥ 0 (got ${slopePct}); use fallLineDeg for direction`);
-  const theta = Math.atan(slopePct / 100);
-  return (model.gravityMps2 * Math.sin(theta)) / (1 + model.inertiaRatio);
+  return gravityDecelOnGrade(slopePct / 100, model);
 }
 
 /**
@@ -78,14 +60,17 @@ export interface Green {
   readonly rollingDecelMps2: number;
   readonly fallLine: readonly [number, number];
   readonly model: RollModel;
+  /** The plane as ground for the forces (∇h = −(slope/100)·d̂), and the forces acting (physics/forces/). */
+  readonly ground: Ground;
+  readonly forces: readonly Force[];
+  /** Every force is one the planar closed form models exactly (else the solvers integrate). */
+  readonly closedForm: boolean;
 }
 
-/** The green inputs every public function takes. */
-export interface GreenInput {
+/** The green inputs every public function takes: the plane, and the forces' inputs (Stimp, model, …). */
+export interface GreenInput extends ForceInputs {
   readonly slopePct: number;
   readonly fallLineDeg: number;
-  readonly stimpFt: number;
-  readonly model?: RollModel;
 }
 
 /**
@@ -97,14 +82,19 @@ export function resolveGreen(input: GreenInput): Green {
   const model = input.model ?? DEFAULT_ROLL_MODEL;
   requireFinite("fallLineDeg", input.fallLineDeg);
   const phi = (input.fallLineDeg * Math.PI) / 180;
+  const fallLine: [number, number] = [Math.sin(phi), Math.cos(phi)];
+  const forces = forcesFor(input);
   return {
     slopePct: input.slopePct,
     fallLineDeg: input.fallLineDeg,
     stimpFt: input.stimpFt,
     gravityDecelMps2: gravityDecelFromSlope(input.slopePct, model),
     rollingDecelMps2: rollingDecelFromStimp(input.stimpFt, model),
-    fallLine: [Math.sin(phi), Math.cos(phi)],
+    fallLine,
     model,
+    ground: planeGround(input.slopePct, fallLine),
+    forces,
+    closedForm: closedFormApplies(forces),
   };
 }
 
@@ -150,17 +140,6 @@ export function maxStoppableSlopePct(stimpFt: number, model: RollModel = DEFAULT
   const sinTheta = (rollingDecelFromStimp(stimpFt, model) * (1 + model.inertiaRatio)) / model.gravityMps2;
   if (sinTheta >= 1) return Number.POSITIVE_INFINITY;
   return 100 * Math.tan(Math.asin(sinTheta));
-}
-
-/** Throws a RangeError unless `value` is a finite number. */
-export function requireFinite(name: string, value: number): void {
-  if (!Number.isFinite(value)) throw new RangeError(`${name} must be a finite number (got ${value})`);
-}
-
-/** Throws a RangeError unless `value` is finite and > 0. */
-export function requirePositive(name: string, value: number): void {
-  requireFinite(name, value);
-  if (value <= 0) throw new RangeError(`${name} must be > 0 (got ${value})`);
 }
 
 /** The model and green figures reported beside every result. */

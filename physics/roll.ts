@@ -1,4 +1,5 @@
-// The ball's equation of motion on a plane and one forward roll to rest, with its events.
+// The planar integrator: one forward roll to rest on a plane with its events (odex); the forces are physics/forces/.
+import { forceRhs } from "./forces";
 import { integrateWithEvents, type IntegrationStats, type OdeEvent } from "./integrate";
 import { rollingDecelAt, type Green } from "./roll-model";
 
@@ -13,23 +14,13 @@ export const STATE = { x: 0, y: 1, vx: 2, vy: 3, t: 4, s: 5 } as const;
 export const STOP_SPEED_FRACTION = 1e-4;
 
 /**
- * Right-hand side of the equation of motion dv/dt = a_g·d̂ − a_r(|v|)·v̂ (point-mass rolling sphere on a plane;
- * see roll-model.ts for the sources of a_g and a_r), written in τ: dv/dτ = (a_g|v|d̂ − a_r v)/v_ref,
- * dp/dτ = |v|v/v_ref, dt/dτ = |v|/v_ref, ds/dτ = |v|²/v_ref. Array state, usable by any integrator.
+ * Right-hand side of the equation of motion on a resolved planar green: the shared force sum (physics/forces/,
+ * dv/dt = a_g·d̂ − a_r(|v|)·v̂ for the default forces) written in τ, dv/dτ = |v|·a/v_ref, dp/dτ = |v|v/v_ref,
+ * dt/dτ = |v|/v_ref, ds/dτ = |v|²/v_ref. Array state, usable by any integrator.
  * @example rollRhs(green, 1)(0, [0, 0, 0, 1, 0, 0]) // [0, 1, a_g·dx, a_g·dy − a_r, 1, 1]
  */
 export function rollRhs(green: Green, refSpeedMps: number): (tau: number, y: number[]) => number[] {
-  const ag = green.gravityDecelMps2;
-  const [dx, dy] = green.fallLine;
-  const inv = 1 / refSpeedMps;
-  return (_tau, y) => {
-    const vx = y[2]!;
-    const vy = y[3]!;
-    const sp = Math.sqrt(vx * vx + vy * vy);
-    const ar = rollingDecelAt(green, sp);
-    const w = sp * inv;
-    return [vx * w, vy * w, (ag * sp * dx - ar * vx) * inv, (ag * sp * dy - ar * vy) * inv, w, sp * w];
-  };
+  return forceRhs(green.ground, green.forces, refSpeedMps);
 }
 
 /** A point of a roll: position (m), velocity (m/s), time (s) and path length from launch (m). */

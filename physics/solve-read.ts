@@ -1,7 +1,7 @@
 // The inverse read: launch speed and start line whose path passes through the hole centre at a given pace.
 import { captureAtRim, type RimCrossing } from "./capture";
 import { HOLE_RADIUS_M } from "./constants";
-import { PlanarPath, planarRollField, type PlanarRollField } from "./planar-roll";
+import { PlanarPath, planarRollField, type PlanarRollField } from "./planar-path";
 import { brentRoot } from "./root-find";
 import { stopsInPractice, describeModel, resolveGreen, type Green } from "./roll-model";
 import { solveReadDirect } from "./solve-read-direct";
@@ -41,7 +41,7 @@ export function solveRead(input: ReadInput): ReadResult {
   const green = resolveGreen({ ...input, fallLineDeg: fold.canonicalDeg });
   const model = describeModel(resolveGreen(input));
   if (!stopsInPractice(green)) return cannotStop(model);
-  if (green.model.resistanceSpeedFactor !== null) return solveReadDirect(input);
+  if (!green.closedForm) return solveReadDirect(input);
   const D = input.distanceM;
   const phi = (fold.canonicalDeg * Math.PI) / 180;
   const ar = green.rollingDecelMps2;

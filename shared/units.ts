@@ -5,8 +5,10 @@
 export const UNIT_SYSTEMS = ["imperial", "metric"] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
-/** International foot (exact by definition, 1959). */
-export const METRES_PER_FOOT = 0.3048;
+import { FOOT_M } from "../physics/constants";
+
+/** International foot (exact by definition, 1959): physics/constants.ts's FOOT_M, the one source. */
+export const METRES_PER_FOOT = FOOT_M;
 export const METRES_PER_INCH = 0.0254;
 /** Hole diameter from the Rules of Golf, Definitions "Hole": 4.25 in = 107.95 mm. */
 export const HOLE_DIAMETER_M = 4.25 * METRES_PER_INCH;

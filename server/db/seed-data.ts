@@ -1,4 +1,5 @@
 // The invented demo scenario of the product brief: no real person, club or course.
+import { FOOT_M } from "../../physics/constants";
 import type { LadderInput } from "../../shared/schemas/ladders";
 
 export const DEMO_PASSWORD = "larkspur-demo";
@@ -26,7 +27,6 @@ export const DEMO_GREEN = {
 
 export const DEMO_SQUAD = { name: "Larkspur juniors", description: "Saturday-morning junior squad at Larkspur Heath." };
 
-const FT = 0.3048;
 
 export const DEMO_LADDERS: LadderInput[] = [
   {
@@ -34,7 +34,7 @@ export const DEMO_LADDERS: LadderInput[] = [
     description: "Short putts that must be holed: three feet up to nine, every rung pass before moving back.",
     failRule: "drop-one",
     rungs: [3, 4, 5, 6, 7, 8, 9].map((ft) => ({
-      distanceM: Math.round(ft * FT * 100) / 100,
+      distanceM: Math.round(ft * FOOT_M * 100) / 100,
       balls: 5,
       passRule: ft <= 5 ? { kind: "in-a-row" as const, count: 3 } : { kind: "make" as const, made: 3 },
     })),
@@ -44,7 +44,7 @@ export const DEMO_LADDERS: LadderInput[] = [
     description: "Long putts for pace: hole one of six to move on, and leave every miss inside a putter length.",
     failRule: "repeat",
     rungs: [15, 20, 25].map((ft) => ({
-      distanceM: Math.round(ft * FT * 100) / 100,
+      distanceM: Math.round(ft * FOOT_M * 100) / 100,
       balls: 6,
       passRule: { kind: "make" as const, made: 1 },
       note: "Judge the pace: every miss should finish within a putter length past the hole",

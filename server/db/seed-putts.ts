@@ -1,10 +1,9 @@
 // The demo juniors' practice putts, rolled by the physics model: each putt is one simulated stroke (start line and
 // pace from the junior's dispersion that week, the read error and the green's imperfection of the make-probability
 // model) on the practice green's gentle slope, recorded as a practice log records it.
-import { simulatePuttOutcomes } from "../../physics";
+import { FOOT_M, simulatePuttOutcomes } from "../../physics";
 import type { DEMO_PLAYERS } from "./seed-data";
 
-const FT = 0.3048;
 export const DEMO_WEEKS = 6;
 export const DEMO_SESSION_DAYS = [1, 4] as const;
 export const DEMO_PUTTS_PER_SESSION = 24;
@@ -47,7 +46,7 @@ export function demoSessions(player: (typeof DEMO_PLAYERS)[number], rand: () => 
       for (let k = 0; k < DEMO_PUTTS_PER_SESSION; k++) {
         const ft = DISTANCES_FT[Math.floor(rand() * DISTANCES_FT.length)]!;
         const breakType = BREAK_TYPES[Math.floor(rand() * BREAK_TYPES.length)]!;
-        const distanceM = ft * FT;
+        const distanceM = ft * FOOT_M;
         const r = simulatePuttOutcomes({
           distanceM,
           slopePct: breakType === "straight" ? 0 : SLOPE_PCT,

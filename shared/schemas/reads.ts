@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { DEFAULT_ROLL_PAST_M } from "../../physics/constants";
 import { plainText } from "./text";
 
 /** Limits of the public read API (issue-agreed ranges; a flat-green Stimp of 4–16 ft covers real greens). */
@@ -20,8 +21,8 @@ const within = (name: keyof typeof READ_LIMITS, unit: string) => {
     .max(max, `${name} must be at most ${max} ${unit}`);
 };
 
-/** Default pace: about 17 in (0.45 m) past the hole if it missed — common practice for a makeable pace. */
-export const DEFAULT_ROLL_PAST_M = 0.45;
+/** Default pace: about 17 in (0.45 m) past the hole if it missed — common practice (physics/constants.ts, the one source). */
+export { DEFAULT_ROLL_PAST_M };
 
 export const paceSchema = z.union([
   z.object({ rollPastM: within("rollPastM", "m") }).strict(),

@@ -5,6 +5,7 @@
 // fallLineDeg clockwise from ball→hole seen from above (0 = downhill putt, 90 = falls to the right).
 // Scene (three.js, right-handed, y up): scene x = putt x, scene y = height, scene z = −putt y. A camera behind the
 // ball looking down −z then has the golfer's right on its right.
+import { inchesToMetres } from "../../../shared/units";
 
 export type PuttPlane = {
   slopePct: number;
@@ -88,7 +89,7 @@ export function heightRange(
 }
 
 const METRIC_INTERVALS_M = [0.005, 0.01, 0.02, 0.05, 0.1, 0.2, 0.5];
-const IMPERIAL_INTERVALS_M = [0.25, 0.5, 1, 2, 4, 8, 16].map((inches) => inches * 0.0254);
+const IMPERIAL_INTERVALS_M = [0.25, 0.5, 1, 2, 4, 8, 16].map(inchesToMetres);
 
 /**
  * Height between contour lines, m: the smallest round step (cm or inches) that draws at most `maxLines` lines
@@ -133,23 +134,37 @@ export function contourSegments(
   return out;
 }
 
-/** Linear interpolation of a timed path at time t (clamped to its ends). `hint` speeds up monotone playback. */
+/** A point of a timed path and the index of the sample before it (the next call's hint). */
+export type TimedSample = { x: number; y: number; index: number };
+
+/**
+ * Linear interpolation of a timed path at time t (clamped to its ends). `hint` speeds up monotone playback; `out`
+ * (the replay's frame loop passes one) is written and returned, so a frame allocates nothing.
+ */
 export function sampleAtTime(
   times: readonly number[],
   xs: readonly number[],
   ys: readonly number[],
   t: number,
   hint = 0,
-): { x: number; y: number; index: number } {
+  out: TimedSample = { x: 0, y: 0, index: 0 },
+): TimedSample {
   const n = times.length;
-  if (n === 0) return { x: 0, y: 0, index: 0 };
-  if (t <= times[0]!) return { x: xs[0]!, y: ys[0]!, index: 0 };
-  if (t >= times[n - 1]!) return { x: xs[n - 1]!, y: ys[n - 1]!, index: n - 1 };
+  if (n === 0) return write(out, 0, 0, 0);
+  if (t <= times[0]!) return write(out, xs[0]!, ys[0]!, 0);
+  if (t >= times[n - 1]!) return write(out, xs[n - 1]!, ys[n - 1]!, n - 1);
   let i = Math.min(Math.max(hint, 0), n - 2);
   if (times[i]! > t) i = 0;
   while (i < n - 2 && times[i + 1]! < t) i++;
   const t0 = times[i]!;
   const t1 = times[i + 1]!;
   const f = t1 > t0 ? (t - t0) / (t1 - t0) : 0;
-  return { x: xs[i]! + f * (xs[i + 1]! - xs[i]!), y: ys[i]! + f * (ys[i + 1]! - ys[i]!), index: i };
+  return write(out, xs[i]! + f * (xs[i + 1]! - xs[i]!), ys[i]! + f * (ys[i + 1]! - ys[i]!), i);
+}
+
+function write(out: TimedSample, x: number, y: number, index: number): TimedSample {
+  out.x = x;
+  out.y = y;
+  out.index = index;
+  return out;
 }

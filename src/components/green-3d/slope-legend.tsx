@@ -1,11 +1,11 @@
 // The key to our slope cue: height shading (lighter is higher) and contour lines a stated step apart.
 import type { ReactNode } from "react";
-import type { UnitSystem } from "../../../shared/units";
+import { METRES_PER_INCH, type UnitSystem } from "../../../shared/units";
 import { fallLineWords } from "./words";
 
 function stepWords(m: number, units: UnitSystem): string {
   if (units === "imperial") {
-    const inches = m / 0.0254;
+    const inches = m / METRES_PER_INCH;
     return `${Number(inches.toFixed(2))} in`;
   }
   const cm = m * 100;

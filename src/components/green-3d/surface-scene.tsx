@@ -8,14 +8,10 @@ import * as THREE from "three";
 import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
 import { surfaceFromGrid } from "../../../physics";
 import { contourLines, greenToScene, heightRaster, surfaceMesh, type HeightRaster } from "./surface-grid";
+import { BALL_RADIUS_M, EYE_HEIGHT_M, FLAGSTICK_M, HOLE_RADIUS_M, SKY } from "./scene-constants";
 import { LINE_COLOURS } from "./scene-types";
 import type { SurfaceSceneProps } from "./surface-types";
 
-const BALL_RADIUS_M = 0.04267 / 2;
-const HOLE_RADIUS_M = 0.054;
-const FLAGSTICK_M = 2.13;
-const EYE_HEIGHT_M = 1.6;
-const SKY = "#dce6df";
 
 export default function SurfaceScene(props: SurfaceSceneProps) {
   return (

@@ -13,7 +13,7 @@ import { Alert, Button, Card, PageHeader, TextLink } from "../../../components/u
 import { paths } from "../../../config/paths";
 import type { ReadKey } from "../../../lib/read-url";
 import { useUnits } from "../../auth/hooks/use-units";
-import { replayOf, useRehearseReads } from "../hooks/use-rehearse-reads";
+import { greenOf, replayOf, useRehearseReads } from "../hooks/use-rehearse-reads";
 import { decodeRehearse, encodeRehearse, type RehearsePutt } from "../utils/rehearse-putt";
 import { PaceControl } from "./pace-control";
 import { PuttEditor } from "./putt-editor";
@@ -85,7 +85,8 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
   // Behind the ball at eye height first: the way a golfer sees the putt.
   const [view, setView] = useState<{ view: CameraView; key: number }>({ view: "behind", key: 0 });
   const [replay, setReplay] = useState<Replay | null>(null);
-  const green = { distanceM: putt.distanceM, slopePct: putt.slopePct, fallLineDeg: putt.fallLineDeg, stimpFt: putt.stimpFt };
+  // The read input passed on whole (to the physics and the 3D view): a field added to the read schema reaches both.
+  const green = useMemo(() => greenOf(putt), [putt]);
   const { current, dying, firm } = useRehearseReads(green, rollPastM);
   const webgl = useWebGL();
 

@@ -1,10 +1,12 @@
 // The putt on the rehearse page: a read with its pace as a roll-past (the pace control's own scale). Its URL is
 // the one read codec (src/lib/read-url.ts), so a read, a chart and rehearse link to each other unchanged.
 import { solveRead } from "../../../../physics/solve-read";
+import type { ReadRequest } from "../../../../shared/schemas/reads";
 import type { UnitSystem } from "../../../../shared/units";
 import { decodeReadQueryChecked, encodeReadQuery, type ReadKey, type ReadValues } from "../../../lib/read-url";
 
-export type RehearsePutt = { distanceM: number; slopePct: number; fallLineDeg: number; stimpFt: number; rollPastM: number };
+/** The read input of the shared schema with its pace as a roll-past (a field added to the schema is part of it). */
+export type RehearsePutt = Omit<ReadRequest, "pace"> & { rollPastM: number };
 
 /** The pace control runs from dying (0) to firm (1.5 m past). */
 export const ROLL_PAST_RANGE_M = { min: 0, max: 1.5 } as const;
