@@ -18,6 +18,8 @@ export type AppConfig = {
   /** Origins whose pages may make signed-in changes (BASE_URL's, or localhost and 127.0.0.1 on the port). */
   trustedOrigins?: string[];
   rateLimits: RateLimits;
+  /** Parse every API answer against its route's response schema (server/lib/route.ts); off in production (cost). */
+  checkResponses?: boolean;
   /** Serves the client: built files in production, Vite middleware in development. */
   frontend?: (app: Express) => void;
 };

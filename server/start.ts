@@ -140,6 +140,7 @@ export async function start(options: StartOptions): Promise<Running> {
         baseUrl,
         links,
         devCsp: env.NODE_ENV === "development",
+        checkResponses: env.NODE_ENV !== "production",
         trustProxy: env.TRUST_PROXY === "1",
         trustedOrigins,
         rateLimits: { ...DEFAULT_RATE_LIMITS, ...options.rateLimits },

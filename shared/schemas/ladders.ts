@@ -41,15 +41,22 @@ export const ladderInputSchema = z
 export type LadderInput = z.infer<typeof ladderInputSchema>;
 
 /** A ladder as the API answers it: the coach's own (ownerId set) or one of Borrowline's built-in ones. */
-export type Ladder = LadderInput & {
-  id: string;
-  builtIn: boolean;
-  ownerId: string | null;
+/** A ladder as the API answers it: the coach's own (ownerId set) or one of Borrowline's built-in ones. */
+export const ladderSchema = z.object({
+  id: z.string(),
+  builtIn: z.boolean(),
+  ownerId: z.string().nullable(),
   /** In a library list: the owner's name (an admin sees every coach's ladders). */
-  ownerName?: string;
-  createdAt: string | null;
-  updatedAt: string | null;
-};
+  ownerName: z.string().optional(),
+  name: z.string(),
+  description: z.string().optional(),
+  failRule: z.enum(FAIL_RULES),
+  rungs: z.array(rungSchema),
+  createdAt: z.string().nullable(),
+  updatedAt: z.string().nullable(),
+});
+export type Ladder = z.output<typeof ladderSchema>;
+export const ladderListSchema = z.object({ ladders: z.array(ladderSchema) });
 
 /** POST /api/ladders/:id/copy: an optional new name (default: the original's, with " (copy)" for one's own). */
 export const ladderCopySchema = z.object({ name: plainText(80, 1, "Give the ladder a name").optional() }).strict();

@@ -1,5 +1,4 @@
 import { exportMetres, exportStimp } from "../../../shared/format";
-import type { RequestHandler } from "express";
 import { setImmediate } from "node:timers/promises";
 import { and, asc, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
@@ -26,7 +25,8 @@ import { csvText, parseCsv, toCsv, unguard } from "../../lib/csv";
 import { badRequest } from "../../lib/http-error";
 import { targetPlayerId } from "../../lib/player-access";
 import { currentUser } from "../../middleware/session";
-import { body, query, zodFields } from "../../middleware/validate";
+import { zodFields } from "../../middleware/validate";
+import { reply, type Ctx } from "../../lib/route";
 import { ERROR_CODES } from "../../../shared/errors";
 
 const PREVIEW_ROWS = 10;
@@ -36,7 +36,11 @@ async function unitsOf(db: Db, userId: string): Promise<UnitSystem> {
   return p?.units === "metric" ? "metric" : "imperial";
 }
 
-const norm = (h: string) => h.toLowerCase().replace(/[^a-z0-9]+/g, " ").trim();
+const norm = (h: string) =>
+  h
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, " ")
+    .trim();
 
 /** Header words we recognise (our own export's names first), for the suggested mapping. */
 const HEADER_HINTS: { key: keyof CsvMapping; pattern: RegExp }[] = [
@@ -57,7 +61,8 @@ export function suggestMapping(headers: string[], units: UnitSystem): Partial<Cs
     const hint = HEADER_HINTS.find((x) => x.pattern.test(n) && out[x.key] === undefined);
     if (!hint) continue;
     (out as Record<string, string>)[hint.key] = h;
-    if (hint.key === "distance") out.distanceUnit = / (ft|feet)$/.test(n) ? "ft" : / (m|metres|meters)$/.test(n) ? "m" : units === "imperial" ? "ft" : "m";
+    if (hint.key === "distance")
+      out.distanceUnit = / (ft|feet)$/.test(n) ? "ft" : / (m|metres|meters)$/.test(n) ? "m" : units === "imperial" ? "ft" : "m";
     if (hint.key === "missLength") {
       const u = n.match(/ (m|cm|ft|in|inches)$/)?.[1];
       if (u) out.missLengthUnit = u === "inches" ? "in" : (u as CsvMapping["missLengthUnit"]);
@@ -66,8 +71,8 @@ export function suggestMapping(headers: string[], units: UnitSystem): Partial<Cs
   return out;
 }
 
-export function previewCsv(db: Db): RequestHandler {
-  return async (req, res) => {
+export function previewCsv(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const csv = parseCsv(csvText(req.file));
     const preview: CsvPreview = {
@@ -77,16 +82,38 @@ export function previewCsv(db: Db): RequestHandler {
       delimiter: csv.delimiter,
       suggestedMapping: suggestMapping(csv.headers, await unitsOf(db, me.id)),
     };
-    res.json(preview);
+    return preview;
   };
 }
 
 // ---- import -----------------------------------------------------------------------------------
 
-const HOLED_WORDS: Record<string, boolean> = { true: true, yes: true, y: true, "1": true, holed: true, made: true, make: true, in: true, false: false, no: false, n: false, "0": false, missed: false, miss: false, out: false };
+const HOLED_WORDS: Record<string, boolean> = {
+  true: true,
+  yes: true,
+  y: true,
+  "1": true,
+  holed: true,
+  made: true,
+  make: true,
+  in: true,
+  false: false,
+  no: false,
+  n: false,
+  "0": false,
+  missed: false,
+  miss: false,
+  out: false,
+};
 const SIDE_WORDS: Record<string, "left" | "right"> = { left: "left", l: "left", right: "right", r: "right" };
 /** Maps the API's field names back to the mapping's, so row errors name what the user mapped. */
-const FIELD_OF: Record<string, keyof CsvMapping> = { distanceM: "distance", holed: "holed", missSide: "missSide", missLengthM: "missLength", breakType: "breakType" };
+const FIELD_OF: Record<string, keyof CsvMapping> = {
+  distanceM: "distance",
+  holed: "holed",
+  missSide: "missSide",
+  missLengthM: "missLength",
+  breakType: "breakType",
+};
 
 const csvPuttSchema = puttFieldsSchema.superRefine(holedHasNoMiss);
 const greenNameSchema = plainText(80);
@@ -98,11 +125,16 @@ function parseNumber(cell: string): number | null {
   return Number(t);
 }
 
-function convertRow(cells: string[], col: Record<string, number>, m: CsvMapping): { putt?: CsvPutt; errors: { field: string; message: string }[] } {
+function convertRow(
+  cells: string[],
+  col: Record<string, number>,
+  m: CsvMapping,
+): { putt?: CsvPutt; errors: { field: string; message: string }[] } {
   const errors: { field: string; message: string }[] = [];
   const cell = (key: keyof CsvMapping) => (col[key] === undefined ? "" : unguard((cells[col[key]!] ?? "").trim()));
   const date = cell("date");
-  if (!isoDateSchema.safeParse(date).success) errors.push({ field: "date", message: date === "" ? "missing date" : `"${date}" is not a date as YYYY-MM-DD` });
+  if (!isoDateSchema.safeParse(date).success)
+    errors.push({ field: "date", message: date === "" ? "missing date" : `"${date}" is not a date as YYYY-MM-DD` });
   const rawDistance = parseNumber(cell("distance"));
   if (rawDistance === null) errors.push({ field: "distance", message: `"${cell("distance")}" is not a number` });
   const holedWord = cell("holed").toLowerCase();
@@ -114,15 +146,30 @@ function convertRow(cells: string[], col: Record<string, number>, m: CsvMapping)
   const lengthCell = cell("missLength");
   const rawLength = lengthCell === "" ? null : parseNumber(lengthCell);
   if (lengthCell !== "" && rawLength === null) errors.push({ field: "missLength", message: `"${lengthCell}" is not a number` });
-  const breakWord = cell("breakType").toLowerCase().replace(/[\s_]+/g, "-");
-  const breakType = breakWord === "" ? null : (BREAK_TYPES as readonly string[]).includes(breakWord) ? (breakWord as (typeof BREAK_TYPES)[number]) : undefined;
-  if (breakType === undefined) errors.push({ field: "breakType", message: `"${cell("breakType")}" is not one of ${BREAK_TYPES.join(", ")}` });
+  const breakWord = cell("breakType")
+    .toLowerCase()
+    .replace(/[\s_]+/g, "-");
+  const breakType =
+    breakWord === ""
+      ? null
+      : (BREAK_TYPES as readonly string[]).includes(breakWord)
+        ? (breakWord as (typeof BREAK_TYPES)[number])
+        : undefined;
+  if (breakType === undefined)
+    errors.push({ field: "breakType", message: `"${cell("breakType")}" is not one of ${BREAK_TYPES.join(", ")}` });
   const greenCheck = greenNameSchema.safeParse(cell("green"));
   if (!greenCheck.success) errors.push({ field: "green", message: greenCheck.error.issues[0]?.message ?? "not a green name" });
   if (errors.length > 0) return { errors };
 
   const shortUnit = m.missLengthUnit ?? m.distanceUnit;
-  const lengthM = rawLength === null ? null : shortUnit === "m" ? rawLength : shortUnit === "ft" ? rawLength * METRES_PER_FOOT : fromShortUnit(rawLength, shortUnit === "in" ? "imperial" : "metric");
+  const lengthM =
+    rawLength === null
+      ? null
+      : shortUnit === "m"
+        ? rawLength
+        : shortUnit === "ft"
+          ? rawLength * METRES_PER_FOOT
+          : fromShortUnit(rawLength, shortUnit === "in" ? "imperial" : "metric");
   const candidate = {
     distanceM: fromLongUnit(rawDistance!, m.distanceUnit === "ft" ? "imperial" : "metric"),
     holed: holed!,
@@ -149,7 +196,9 @@ function readMapping(raw: string, headers: string[]): { mapping: CsvMapping; col
   }
   const parsed = csvMappingSchema.safeParse(json);
   if (!parsed.success) {
-    const fields = Object.fromEntries(Object.entries(zodFields(parsed.error)).map(([k, v]) => [k === "body" ? "mapping" : `mapping.${k}`, v]));
+    const fields = Object.fromEntries(
+      Object.entries(zodFields(parsed.error)).map(([k, v]) => [k === "body" ? "mapping" : `mapping.${k}`, v]),
+    );
     throw badRequest("The mapping is not valid.", fields);
   }
   const mapping = parsed.data;
@@ -175,7 +224,10 @@ export const PENDING_IMPORT_TAG = "csv-import-pending";
 
 /** Sessions left pending by an import that never finished (the server died mid-import): removed at start-up. */
 export async function discardUnfinishedImports(db: Db): Promise<number> {
-  const gone = await db.delete(practiceSessions).where(sql`${practiceSessions.tags} ? ${PENDING_IMPORT_TAG}`).returning({ id: practiceSessions.id });
+  const gone = await db
+    .delete(practiceSessions)
+    .where(sql`${practiceSessions.tags} ? ${PENDING_IMPORT_TAG}`)
+    .returning({ id: practiceSessions.id });
   return gone.length;
 }
 
@@ -190,10 +242,10 @@ export async function discardUnfinishedImports(db: Db): Promise<number> {
  * other request). All-or-nothing still holds: the import's sessions carry a pending tag until the last chunk is
  * in, an error deletes what was written, and a server that dies mid-import drops its pending sessions at start.
  */
-export function importCsv(db: Db, logger?: Logger): RequestHandler {
-  return async (req, res) => {
+export function importCsv(db: Db, logger?: Logger) {
+  return async ({ req, body }: Ctx<z.infer<typeof csvImportFieldsSchema>>) => {
     const me = currentUser(req);
-    const fields = body(req, csvImportFieldsSchema);
+    const fields = body;
     const csv = parseCsv(csvText(req.file));
     const { mapping, col } = readMapping(fields.mapping, csv.headers);
     const errors: CsvRowError[] = [];
@@ -217,15 +269,18 @@ export function importCsv(db: Db, logger?: Logger): RequestHandler {
     const skipInvalid = fields.skipInvalid === "true";
     if (errors.length > 0 && !skipInvalid) {
       const bad = new Set(errors.map((e) => e.row)).size;
-      res.status(422).json({
-        error: { code: ERROR_CODES.unprocessable, message: `${bad} row(s) have errors; nothing was imported. Fix them, or import with skipInvalid=true to store only the valid rows.`, fields: { file: `${bad} invalid row(s)` } },
+      return reply(422, {
+        error: {
+          code: ERROR_CODES.unprocessable,
+          message: `${bad} row(s) have errors; nothing was imported. Fix them, or import with skipInvalid=true to store only the valid rows.`,
+          fields: { file: `${bad} invalid row(s)` },
+        },
         imported: 0,
         sessionsCreated: 0,
         greensCreated: 0,
         skipped: bad,
         errors,
       });
-      return;
     }
 
     const groups = new Map<string, CsvPutt[]>();
@@ -265,13 +320,27 @@ export function importCsv(db: Db, logger?: Logger): RequestHandler {
               const first = part.group[0]!;
               const [s] = await tx
                 .insert(practiceSessions)
-                .values({ playerId: me.id, date: first.date, greenId: first.greenName ? greenIds.get(first.greenName.toLowerCase())! : null, tags: ["csv-import", PENDING_IMPORT_TAG] })
+                .values({
+                  playerId: me.id,
+                  date: first.date,
+                  greenId: first.greenName ? greenIds.get(first.greenName.toLowerCase())! : null,
+                  tags: ["csv-import", PENDING_IMPORT_TAG],
+                })
                 .returning({ id: practiceSessions.id });
               part.sessionId = s!.id;
               createdSessions.push(s!.id);
             }
             for (const p of part.group.slice(part.from, part.to)) {
-              rows.push({ sessionId: part.sessionId, playerId: me.id, distanceM: p.distanceM, holed: p.holed, missSide: p.missSide ?? null, missLengthM: p.missLengthM ?? null, breakType: p.breakType ?? null, createdAt: new Date(base + written + rows.length) });
+              rows.push({
+                sessionId: part.sessionId,
+                playerId: me.id,
+                distanceM: p.distanceM,
+                holed: p.holed,
+                missSide: p.missSide ?? null,
+                missLengthM: p.missLengthM ?? null,
+                breakType: p.breakType ?? null,
+                createdAt: new Date(base + written + rows.length),
+              });
             }
           }
           if (rows.length > 0) await tx.insert(putts).values(rows);
@@ -282,7 +351,7 @@ export function importCsv(db: Db, logger?: Logger): RequestHandler {
       };
       for (const group of groups.values()) {
         let sessionId: string | undefined;
-        for (let from = 0; from < group.length; ) {
+        for (let from = 0; from < group.length;) {
           const to = Math.min(group.length, from + WRITE_CHUNK - chunkSize);
           const part = { group, sessionId, from, to };
           chunk.push(part);
@@ -296,27 +365,41 @@ export function importCsv(db: Db, logger?: Logger): RequestHandler {
       }
       await flush();
       // The last chunk is in: the import becomes whole in one statement.
-      await db.update(practiceSessions).set({ tags: ["csv-import"] }).where(inArray(practiceSessions.id, createdSessions));
+      await db
+        .update(practiceSessions)
+        .set({ tags: ["csv-import"] })
+        .where(inArray(practiceSessions.id, createdSessions));
     } catch (err) {
       // All-or-nothing: take back what this import wrote (putts go with their sessions).
-      if (createdSessions.length > 0) await db.delete(practiceSessions).where(inArray(practiceSessions.id, createdSessions)).catch(() => {});
-      if (createdGreens.length > 0) await db.delete(greens).where(inArray(greens.id, createdGreens)).catch(() => {});
+      if (createdSessions.length > 0)
+        await db
+          .delete(practiceSessions)
+          .where(inArray(practiceSessions.id, createdSessions))
+          .catch(() => {});
+      if (createdGreens.length > 0)
+        await db
+          .delete(greens)
+          .where(inArray(greens.id, createdGreens))
+          .catch(() => {});
       throw err;
     }
     // A big write: refresh the planner's statistics now rather than at the next scheduled check.
     await analyzeStale(db, logger).catch((err: unknown) => logger?.warn({ err }, "planner statistics refresh failed"));
-    const out: CsvImportResult = { imported: good.length, sessionsCreated: groups.size, greensCreated: createdGreens.length, skipped: new Set(errors.map((e) => e.row)).size, errors };
-    res.status(200).json(out);
+    const out: CsvImportResult = {
+      imported: good.length,
+      sessionsCreated: groups.size,
+      greensCreated: createdGreens.length,
+      skipped: new Set(errors.map((e) => e.row)).size,
+      errors,
+    };
+    return out;
   };
 }
 
 // ---- export -----------------------------------------------------------------------------------
 
-function attachment(res: Parameters<RequestHandler>[1], name: string, csv: string): void {
-  res.setHeader("Content-Type", "text/csv; charset=utf-8");
-  res.setHeader("Content-Disposition", `attachment; filename="${name}"`);
-  res.send(csv);
-}
+/** A CSV download as the route answers it (lib/route.ts writes the headers). */
+const attachment = (filename: string, csv: string) => ({ filename, csv });
 
 function exportFilter(playerId: string, q: { from?: string; to?: string }): SQL {
   const where: SQL[] = [eq(practiceSessions.playerId, playerId)];
@@ -325,16 +408,36 @@ function exportFilter(playerId: string, q: { from?: string; to?: string }): SQL 
   return and(...where)!;
 }
 
-export const PUTT_EXPORT_COLUMNS = ["date", "green", "distance_m", "holed", "miss_side", "miss_length_m", "break_type", "session_id", "putt_id"];
+export const PUTT_EXPORT_COLUMNS = [
+  "date",
+  "green",
+  "distance_m",
+  "holed",
+  "miss_side",
+  "miss_length_m",
+  "break_type",
+  "session_id",
+  "putt_id",
+];
 export const SESSION_EXPORT_COLUMNS = ["date", "green", "stimp_ft", "conditions", "tags", "notes", "putts", "holed", "session_id"];
 
-export function exportPutts(db: Db): RequestHandler {
-  return async (req, res) => {
+export function exportPutts(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof csvExportQuerySchema>>) => {
     const viewer = currentUser(req);
-    const q = query(req, csvExportQuerySchema);
+    const q = query;
     const playerId = await targetPlayerId(db, viewer, q.playerId);
     const rows = await db
-      .select({ date: practiceSessions.date, green: greens.name, distanceM: putts.distanceM, holed: putts.holed, missSide: putts.missSide, missLengthM: putts.missLengthM, breakType: putts.breakType, sessionId: putts.sessionId, id: putts.id })
+      .select({
+        date: practiceSessions.date,
+        green: greens.name,
+        distanceM: putts.distanceM,
+        holed: putts.holed,
+        missSide: putts.missSide,
+        missLengthM: putts.missLengthM,
+        breakType: putts.breakType,
+        sessionId: putts.sessionId,
+        id: putts.id,
+      })
       .from(putts)
       .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
       .leftJoin(greens, eq(greens.id, practiceSessions.greenId))
@@ -342,16 +445,26 @@ export function exportPutts(db: Db): RequestHandler {
       .orderBy(asc(practiceSessions.date), asc(putts.createdAt), asc(putts.id));
     const csv = toCsv(
       PUTT_EXPORT_COLUMNS,
-      rows.map((r) => [r.date, r.green, exportMetres(r.distanceM), r.holed, r.missSide, r.missLengthM === null ? null : exportMetres(r.missLengthM), r.breakType, r.sessionId, r.id]),
+      rows.map((r) => [
+        r.date,
+        r.green,
+        exportMetres(r.distanceM),
+        r.holed,
+        r.missSide,
+        r.missLengthM === null ? null : exportMetres(r.missLengthM),
+        r.breakType,
+        r.sessionId,
+        r.id,
+      ]),
     );
-    attachment(res, `borrowline-putts-${new Date().toISOString().slice(0, 10)}.csv`, csv);
+    return attachment(`borrowline-putts-${new Date().toISOString().slice(0, 10)}.csv`, csv);
   };
 }
 
-export function exportSessions(db: Db): RequestHandler {
-  return async (req, res) => {
+export function exportSessions(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof csvExportQuerySchema>>) => {
     const viewer = currentUser(req);
-    const q = query(req, csvExportQuerySchema);
+    const q = query;
     const playerId = await targetPlayerId(db, viewer, q.playerId);
     const rows = await db
       .select({
@@ -371,9 +484,18 @@ export function exportSessions(db: Db): RequestHandler {
       .orderBy(asc(practiceSessions.date), asc(practiceSessions.createdAt));
     const csv = toCsv(
       SESSION_EXPORT_COLUMNS,
-      rows.map((r) => [r.date, r.green, r.stimpFt === null ? null : exportStimp(r.stimpFt), r.conditions, r.tags.join("; "), r.notes, Number(r.putts), Number(r.holed), r.id]),
+      rows.map((r) => [
+        r.date,
+        r.green,
+        r.stimpFt === null ? null : exportStimp(r.stimpFt),
+        r.conditions,
+        r.tags.join("; "),
+        r.notes,
+        Number(r.putts),
+        Number(r.holed),
+        r.id,
+      ]),
     );
-    attachment(res, `borrowline-sessions-${new Date().toISOString().slice(0, 10)}.csv`, csv);
+    return attachment(`borrowline-sessions-${new Date().toISOString().slice(0, 10)}.csv`, csv);
   };
 }
-
