@@ -50,7 +50,8 @@ test("capture is judged where the ball's centre crosses the hole's edge, not at 
   const ode = simulateRoll(input);
   const fast = rollClosedForm(input);
   if (!ode.ok || !fast.ok) throw new Error("must stop");
-  const rimSpeed = Math.sqrt(centre * centre + 2 * ar * 0.054);
+  // r_h = 4¼ in ÷ 2 = 0.053975 m (Rules of Golf, Definitions, "Hole"; docs/sources.md).
+  const rimSpeed = Math.sqrt(centre * centre + 2 * ar * ((4.25 * 0.0254) / 2));
   expect(rimSpeed).toBeGreaterThan(maxCaptureSpeedMps(0));
   expect(ode.roll.closestApproach.speedMps).toBeLessThan(maxCaptureSpeedMps(0));
   expect(ode.roll.rim!.speedMps).toBeCloseTo(rimSpeed, 4);

@@ -11,7 +11,7 @@ import { lockDataDir } from "./db/lock";
 import { analyzeStale, scheduleMaintenance } from "./db/maintenance";
 import { migrate } from "./db/migrate";
 import { seedDemo } from "./db/seed";
-import { discardUnfinishedImports } from "./routes/csv/csv.handlers";
+import { discardUnfinishedImports } from "./routes/csv/csv-import.handlers";
 import type { Env } from "./env";
 import { ERROR_CODES, type ApiErrorBody } from "../shared/errors";
 import { createLogger } from "./lib/logger";

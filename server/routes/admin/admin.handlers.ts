@@ -166,7 +166,7 @@ export function sendPasswordReset({ auth, database }: AppDeps) {
 }
 
 export function listAudit(db: Db) {
-  return async ({ req, query }: Ctx<unknown, z.infer<typeof adminAuditQuerySchema>>) => {
+  return async ({ query }: Ctx<unknown, z.infer<typeof adminAuditQuerySchema>>) => {
     const { page } = query;
     const [rows, [total]] = await Promise.all([
       db

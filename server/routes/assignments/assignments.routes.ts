@@ -5,7 +5,7 @@ import {
   ladderPuttInputSchema,
 } from "../../../shared/schemas/assignments";
 import type { RouterDeps } from "../../deps";
-import { defineRoute, noContent } from "../../lib/route";
+import { defineRoute } from "../../lib/route";
 import { requireRole, requireUser } from "../../middleware/session";
 import { addLadderPutt, createAssignments, getAssignment, listMyAssignments, undoLastLadderPutt } from "./assignments.handlers";
 

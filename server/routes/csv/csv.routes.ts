@@ -4,7 +4,8 @@ import { csvUpload } from "../../lib/csv";
 import { csvFile, defineRoute } from "../../lib/route";
 import { limiter } from "../../middleware/rate-limit";
 import { currentUser, requireUser } from "../../middleware/session";
-import { exportPutts, exportSessions, importCsv, previewCsv } from "./csv.handlers";
+import { exportPutts, exportSessions } from "./csv-export.handlers";
+import { importCsv, previewCsv } from "./csv-import.handlers";
 
 export function csvRoutes({ database, config, logger }: AppDeps) {
   const db = database.db;

@@ -20,7 +20,7 @@ import {
 } from "../../../shared/schemas/make-probability";
 import type { Db } from "../../db/client";
 import { practiceSessions, putts } from "../../db/schema";
-import { notFound, unprocessable } from "../../lib/http-error";
+import { cannotStopError, notFound } from "../../lib/http-error";
 import { targetPlayerId } from "../../lib/player-access";
 import { currentUser, type SessionUser } from "../../middleware/session";
 import type { Ctx } from "../../lib/route";
@@ -161,9 +161,7 @@ export function postMakeProbability(db: Db) {
       secondPuttM: 1,
     });
     if (!result.ok) {
-      throw unprocessable(result.message, {
-        "read.slopePct": `too steep to stop a ball at Stimp ${input.read.stimpFt} ft (steepest: ${result.model.maxStoppableSlopePct.toFixed(1)} %)`,
-      });
+      throw cannotStopError(result.message, "read.slopePct", input.read.stimpFt, result.model.maxStoppableSlopePct);
     }
     const { best, requested, curve, secondPuttRiskMax } = result.result;
     const response: MakeProbabilityResponse = {

@@ -230,8 +230,10 @@ test("a 422 is shown as 'would not stop' with the steepest stoppable slope, not 
     json(422, {
       error: {
         code: "UNPROCESSABLE",
-        message: "A ball cannot stop on this green: … the steepest stoppable slope at this Stimp is 7.9 %.",
-        fields: { slopePct: "too steep to stop a ball at Stimp 10 ft (steepest: 7.9 %)" },
+        // The number travels in details (as cannotStopBody sends it), not in the words: the page must not parse prose.
+        message: "A ball cannot stop on this green.",
+        fields: { slopePct: "too steep to stop a ball at Stimp 10 ft" },
+        details: { reason: "cannot-stop", maxStoppableSlopePct: 7.86 },
       },
     }),
   );

@@ -120,15 +120,6 @@ function formatPct(n: number): string {
   return String(Math.round(n * 10) / 10);
 }
 
-/** The steepest stoppable slope out of the API's 422 wording ("… (steepest: 7.9 %)" or "… is 7.9 %."). */
-export function steepestFromMessage(...texts: Array<string | undefined>): number | undefined {
-  for (const t of texts) {
-    const m = t?.match(/steepest[^0-9]*(\d+(?:\.\d+)?)\s*%/i);
-    if (m?.[1]) return Number(m[1]);
-  }
-  return undefined;
-}
-
 /** One line describing a read's inputs: "10 ft, 2 % falls to the right, Stimp 10". */
 export function readInputSummary(distanceM: number, slopePct: number, direction: string, stimpFt: number, units: UnitSystem): string {
   return `${formatLength(distanceM, units)}, ${formatPct(slopePct)} % ${direction}, ${stimpText(stimpFt)}`;
