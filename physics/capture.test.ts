@@ -1,6 +1,14 @@
 import { expect, test } from "vitest";
 import { EFFECTIVE_HOLE_WIDTH, HOLMES_1991 } from "../tests/fixtures/physics-references";
-import { ballDropTimeS, captureOutcome, effectiveHoleWidthM, maxCaptureSpeedMps, rollClosedForm, rollingDecelFromStimp, simulateRoll } from "./index";
+import {
+  ballDropTimeS,
+  captureOutcome,
+  effectiveHoleWidthM,
+  maxCaptureSpeedMps,
+  rollClosedForm,
+  rollingDecelFromStimp,
+  simulateRoll,
+} from "./index";
 
 test("capture speeds of Holmes's criterion: 1.636 m/s centred, 1.52 at 20 mm, 1.10 at 40 mm, 0.62 at 50 mm (derived from Holmes 1991; docs/sources.md)", () => {
   for (const p of HOLMES_1991.points) {

@@ -60,6 +60,5 @@ export const DEFAULT_RATE_LIMITS: RateLimits = {
   imports: { windowMs: 60_000, limit: 6 },
 };
 
-
 /** What routers get: the app's deps plus the e-mail limiters every mailing route shares. */
 export type RouterDeps = AppDeps & { mail: MailLimiters };

@@ -19,7 +19,17 @@ test("only plain decimals are numbers (no hex, exponents or words)", () => {
 
 test("a row converts feet and inches to metres (1 ft = 0.3048 m, 1 in = 0.0254 m, by definition) and groups by date and green", () => {
   const { mapping, col } = readMapping(
-    JSON.stringify({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side", missLength: "Leave (in)", missLengthUnit: "in", breakType: "Break", green: "Green" }),
+    JSON.stringify({
+      date: "Date",
+      distance: "Distance (ft)",
+      distanceUnit: "ft",
+      holed: "Made",
+      missSide: "Side",
+      missLength: "Leave (in)",
+      missLengthUnit: "in",
+      breakType: "Break",
+      green: "Green",
+    }),
     headers,
   );
   const out = convertRow(["2026-03-01", "10", "no", "L", "-18", "left to right", "Home"], col, mapping);
@@ -31,7 +41,10 @@ test("a row converts feet and inches to metres (1 ft = 0.3048 m, 1 in = 0.0254 m
 });
 
 test("a bad row names each bad field; a holed putt with a miss side is refused", () => {
-  const { mapping, col } = readMapping(JSON.stringify({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side" }), headers);
+  const { mapping, col } = readMapping(
+    JSON.stringify({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side" }),
+    headers,
+  );
   const bad = convertRow(["01/03/2026", "ten", "maybe", "up", "", "", ""], col, mapping);
   expect(bad.errors.map((e) => e.field).sort()).toEqual(["date", "distance", "holed", "missSide"]);
   const holedWithSide = convertRow(["2026-03-01", "5", "yes", "left", "", "", ""], col, mapping);

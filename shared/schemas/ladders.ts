@@ -13,6 +13,23 @@ export const passRuleSchema = z.discriminatedUnion("kind", [
 ]);
 export type PassRule = z.infer<typeof passRuleSchema>;
 
+/** Holed balls a pass rule asks for. Every use of a rule's kind switches exhaustively: a new kind fails to compile. */
+export function holedToPass(rule: PassRule): number {
+  switch (rule.kind) {
+    case "make":
+      return rule.made;
+    case "in-a-row":
+      return rule.count;
+    default:
+      return unknownRule(rule);
+  }
+}
+
+/** The `default` of an exhaustive switch over pass rules: unreachable while every kind has its case. */
+export function unknownRule(rule: never): never {
+  throw new Error(`Unknown pass rule ${JSON.stringify(rule)}`);
+}
+
 export const rungSchema = z
   .object({
     distanceM: z.number().finite().min(0.3).max(30),
@@ -23,7 +40,7 @@ export const rungSchema = z
   })
   .strict()
   .superRefine((rung, ctx) => {
-    const need = rung.passRule.kind === "make" ? rung.passRule.made : rung.passRule.count;
+    const need = holedToPass(rung.passRule);
     if (need > rung.balls) {
       ctx.addIssue({ code: "custom", path: ["passRule"], message: `Needs ${need} holed but the rung has only ${rung.balls} balls` });
     }

@@ -32,7 +32,11 @@ test("every route Express serves under /api is in the route table with a zod res
 });
 
 test("the check refuses a field the schema does not describe (a database row's owner id) and a wrong type", () => {
-  const def = { method: "post" as const, path: "/things", response: z.object({ id: z.string(), items: z.array(z.object({ n: z.number() })) }) };
+  const def = {
+    method: "post" as const,
+    path: "/things",
+    response: z.object({ id: z.string(), items: z.array(z.object({ n: z.number() })) }),
+  };
   expect(() => checkResponse(def, { id: "a", items: [{ n: 1 }] })).not.toThrow();
   expect(() => checkResponse(def, { id: "a", userId: "u1", items: [] })).toThrow(/userId/);
   expect(() => checkResponse(def, { id: "a", items: [{ n: 1, secret: "x" }] })).toThrow(/items\.0\.secret/);
@@ -55,9 +59,16 @@ test("real answers of the route table match their response schemas", async () =>
   const read = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 };
   const green = (await ok(p.post("/api/greens", { name: "Contract green" }))).id as string;
   await ok(p.post(`/api/greens/${green}/stimp-readings`, { measuredOn: "2026-04-01", stimpFt: 9.5 }));
-  await ok(p.put(`/api/greens/${green}/height-map`, { kind: "grid", spacingM: 1, heightsM: Array.from({ length: 5 }, () => [0, 0.01, 0.02, 0.03, 0.04]) }));
+  await ok(
+    p.put(`/api/greens/${green}/height-map`, {
+      kind: "grid",
+      spacingM: 1,
+      heightsM: Array.from({ length: 5 }, () => [0, 0.01, 0.02, 0.03, 0.04]),
+    }),
+  );
   const session = (await ok(p.post("/api/sessions", { date: "2026-05-01", greenId: green }))).id as string;
-  const putt = (await ok(p.post(`/api/sessions/${session}/putts`, { distanceM: 3, holed: false, missSide: "left", missLengthM: 0.4 }))).id as string;
+  const putt = (await ok(p.post(`/api/sessions/${session}/putts`, { distanceM: 3, holed: false, missSide: "left", missLengthM: 0.4 })))
+    .id as string;
   const round = (await ok(p.post("/api/rounds", { date: "2026-05-04", holes: [{ holeNumber: 1, firstPuttM: 4, putts: 2 }] }))).id as string;
   const ladder = await createLadder(c, THREE_RUNGS);
   const assignment = (await ok(c.post(`/api/ladders/${ladder}/assignments`, { playerIds: [player.id] }))).assignments[0].id as string;
@@ -121,7 +132,10 @@ test("real answers of the route table match their response schemas", async () =>
 
 test("POST /api/reads answers the saved read, never the database row (no owner id)", async () => {
   const { members } = await coachWithSquad(server, 1);
-  const res = await members[0]!.client.post("/api/reads", { read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 }, label: "mine" });
+  const res = await members[0]!.client.post("/api/reads", {
+    read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
+    label: "mine",
+  });
   expect(res.status).toBe(201);
   expect(res.body).not.toHaveProperty("userId");
   expect(Object.keys(res.body).sort()).toEqual(["createdAt", "greenId", "greenName", "id", "input", "label", "result"]);

@@ -53,17 +53,15 @@ export function createRound(db: Db) {
         .values({ playerId: me.id, date: input.date, course: input.course ?? null, notes: input.notes ?? null })
         .returning({ id: rounds.id });
       if (input.holes.length > 0) {
-        await tx
-          .insert(roundHoles)
-          .values(
-            input.holes.map((h) => ({
-              roundId: r!.id,
-              holeNumber: h.holeNumber,
-              firstPuttM: h.firstPuttM ?? 0,
-              putts: h.putts,
-              leftAfterFirstM: h.leftAfterFirstM ?? null,
-            })),
-          );
+        await tx.insert(roundHoles).values(
+          input.holes.map((h) => ({
+            roundId: r!.id,
+            holeNumber: h.holeNumber,
+            firstPuttM: h.firstPuttM ?? 0,
+            putts: h.putts,
+            leftAfterFirstM: h.leftAfterFirstM ?? null,
+          })),
+        );
       }
       return r!.id;
     });

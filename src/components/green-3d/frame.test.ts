@@ -8,7 +8,6 @@ import {
   heightAtM,
   heightRange,
   puttToScene,
-  sampleAtTime,
   sceneToPutt,
   surfaceNormal,
   surfacePoint,
@@ -127,16 +126,4 @@ test("contour lines run across the fall line, at equal height along each, inside
     for (const [x, y] of [s.from, s.to]) expect(((x - shape.cx) / shape.a) ** 2 + ((y - shape.cy) / shape.b) ** 2).toBeCloseTo(1, 9);
   }
   expect(contourSegments(shape, { slopePct: 0, fallLineDeg: 0 }, 0.02)).toEqual([]);
-});
-
-test("sampleAtTime interpolates a timed path and clamps at its ends", () => {
-  const times = [0, 1, 2];
-  const xs = [0, 1, 1];
-  const ys = [0, 2, 4];
-  expect(sampleAtTime(times, xs, ys, 0.5)).toMatchObject({ x: 0.5, y: 1 });
-  expect(sampleAtTime(times, xs, ys, 1.5, 1)).toMatchObject({ x: 1, y: 3 });
-  expect(sampleAtTime(times, xs, ys, -1)).toMatchObject({ x: 0, y: 0 });
-  expect(sampleAtTime(times, xs, ys, 9)).toMatchObject({ x: 1, y: 4 });
-  // A stale hint ahead of t is not trusted.
-  expect(sampleAtTime(times, xs, ys, 0.25, 1)).toMatchObject({ x: 0.25, y: 0.5 });
 });

@@ -132,24 +132,3 @@ export function contourSegments(
   }
   return out;
 }
-
-/** Linear interpolation of a timed path at time t (clamped to its ends). `hint` speeds up monotone playback. */
-export function sampleAtTime(
-  times: readonly number[],
-  xs: readonly number[],
-  ys: readonly number[],
-  t: number,
-  hint = 0,
-): { x: number; y: number; index: number } {
-  const n = times.length;
-  if (n === 0) return { x: 0, y: 0, index: 0 };
-  if (t <= times[0]!) return { x: xs[0]!, y: ys[0]!, index: 0 };
-  if (t >= times[n - 1]!) return { x: xs[n - 1]!, y: ys[n - 1]!, index: n - 1 };
-  let i = Math.min(Math.max(hint, 0), n - 2);
-  if (times[i]! > t) i = 0;
-  while (i < n - 2 && times[i + 1]! < t) i++;
-  const t0 = times[i]!;
-  const t1 = times[i + 1]!;
-  const f = t1 > t0 ? (t - t0) / (t1 - t0) : 0;
-  return { x: xs[i]! + f * (xs[i + 1]! - xs[i]!), y: ys[i]! + f * (ys[i + 1]! - ys[i]!), index: i };
-}

@@ -79,7 +79,11 @@ const ONLY_JUST_MPS = 0.25;
  * The ball at the hole in a golfer's words (capture model: Holmes 1991, see docs/sources.md): a stopped ball is
  * said in words, never "0.00 m/s"; a rolling one in the user's speed unit (ft/s in feet and inches).
  */
-export function captureWords(entrySpeedMps: number, capture: CaptureSummary, units: UnitSystem): { entry: string; verdict: string; tone: "ok" | "warn" } {
+export function captureWords(
+  entrySpeedMps: number,
+  capture: CaptureSummary,
+  units: UnitSystem,
+): { entry: string; verdict: string; tone: "ok" | "warn" } {
   const limit = formatSpeed(capture.maxCaptureSpeedMps, units);
   if (entrySpeedMps < STOPPED_AT_HOLE_MPS) {
     return capture.outcome === "miss"
