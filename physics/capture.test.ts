@@ -1,6 +1,14 @@
 import { expect, test } from "vitest";
 import { EFFECTIVE_HOLE_WIDTH, HOLMES_1991 } from "../tests/fixtures/physics-references";
-import { ballDropTimeS, captureOutcome, effectiveHoleWidthM, maxCaptureSpeedMps, rollClosedForm, rollingDecelFromStimp, simulateRoll } from "./index";
+import {
+  ballDropTimeS,
+  captureOutcome,
+  effectiveHoleWidthM,
+  maxCaptureSpeedMps,
+  rollClosedForm,
+  rollingDecelFromStimp,
+  simulateRoll,
+} from "./index";
 
 test("capture speeds of Holmes's criterion: 1.636 m/s centred, 1.52 at 20 mm, 1.10 at 40 mm, 0.62 at 50 mm (derived from Holmes 1991; docs/sources.md)", () => {
   for (const p of HOLMES_1991.points) {
@@ -50,7 +58,8 @@ test("capture is judged where the ball's centre crosses the hole's edge, not at 
   const ode = simulateRoll(input);
   const fast = rollClosedForm(input);
   if (!ode.ok || !fast.ok) throw new Error("must stop");
-  const rimSpeed = Math.sqrt(centre * centre + 2 * ar * 0.054);
+  // r_h = 4¼ in ÷ 2 = 0.053975 m (Rules of Golf, Definitions, "Hole"; docs/sources.md).
+  const rimSpeed = Math.sqrt(centre * centre + 2 * ar * ((4.25 * 0.0254) / 2));
   expect(rimSpeed).toBeGreaterThan(maxCaptureSpeedMps(0));
   expect(ode.roll.closestApproach.speedMps).toBeLessThan(maxCaptureSpeedMps(0));
   expect(ode.roll.rim!.speedMps).toBeCloseTo(rimSpeed, 4);

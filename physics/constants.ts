@@ -28,12 +28,13 @@ export const BALL_RADIUS_M = BALL_DIAMETER_M / 2;
 export const BALL_MASS_KG = 0.04593;
 
 /**
- * Hole diameter, m: 4¼ in = 108 mm (Rules of Golf, Definitions, "Hole").
- * @example HOLE_DIAMETER_M // 0.108
+ * Hole diameter, m: 4¼ in = 4.25 × 0.0254 m = 107.95 mm exactly (Rules of Golf, Definitions, "Hole";
+ * docs/sources.md). The one value of it: shared/units.ts re-exports this one.
+ * @example HOLE_DIAMETER_M // 0.10795
  */
-export const HOLE_DIAMETER_M = 0.108;
+export const HOLE_DIAMETER_M = 4.25 * 0.0254;
 
-/** Hole radius, m (half of {@link HOLE_DIAMETER_M}). @example HOLE_RADIUS_M // 0.054 */
+/** Hole radius, m (half of {@link HOLE_DIAMETER_M}). @example HOLE_RADIUS_M // 0.053975 */
 export const HOLE_RADIUS_M = HOLE_DIAMETER_M / 2;
 
 /**

@@ -11,7 +11,7 @@ import { authBodyGuard, reshapeAuthError, requireJsonBody, sameOriginWrites, typ
 import { limiter, mailLimiters, withStore } from "./middleware/rate-limit";
 import { forbidden } from "./lib/http-error";
 import { loadSession } from "./middleware/session";
-import { apiRouters } from "./routes";
+import { apiRouter, apiRoutes } from "./routes";
 
 const JSON_LIMIT = "100kb";
 
@@ -23,7 +23,10 @@ const UPLOAD_ROUTES: UploadRoute[] = [
 
 export function createApp(appDeps: AppDeps): Express {
   // Every limiter made from config.rateLimits gets the shared store (PostgreSQL) when there is one.
-  const deps: AppDeps = { ...appDeps, config: { ...appDeps.config, rateLimits: withStore(appDeps.config.rateLimits, appDeps.rateLimitStore) } };
+  const deps: AppDeps = {
+    ...appDeps,
+    config: { ...appDeps.config, rateLimits: withStore(appDeps.config.rateLimits, appDeps.rateLimitStore) },
+  };
   const { auth, logger, config } = deps;
   const app = express();
   app.disable("x-powered-by");
@@ -68,12 +71,19 @@ export function createApp(appDeps: AppDeps): Express {
   // better-auth reads the parsed body, and its errors are rewritten to our shape.
   app.use("/api/auth", requireJsonBody(), express.json({ limit: JSON_LIMIT, strict: true }), authBodyGuard);
   const authLimiter = limiter(config.rateLimits.auth, "sign-in");
-  const limitedAuthPaths = ["/api/auth/sign-in/email", "/api/auth/sign-up/email", "/api/auth/request-password-reset", "/api/auth/reset-password"];
+  const limitedAuthPaths = [
+    "/api/auth/sign-in/email",
+    "/api/auth/sign-up/email",
+    "/api/auth/request-password-reset",
+    "/api/auth/reset-password",
+  ];
   app.use(limitedAuthPaths, authLimiter);
   const mailingAuthPaths = ["/api/auth/sign-up/email", "/api/auth/send-verification-email", "/api/auth/request-password-reset"];
   app.post(mailingAuthPaths, mail.byClientAddress, mail.byRecipient);
   // Admin changes go through /api/admin (audited, with the self-protection rules), never straight to the plugin.
-  app.post("/api/auth/admin/{*any}", (_req, _res, next) => next(forbidden("Use the admin screens (/api/admin) for this; every admin action is recorded there.")));
+  app.post("/api/auth/admin/{*any}", (_req, _res, next) =>
+    next(forbidden("Use the admin screens (/api/admin) for this; every admin action is recorded there.")),
+  );
   const authHandler = toNodeHandler(async (request: Request) => reshapeAuthError(await auth.handler(request)));
   app.all("/api/auth/{*any}", authHandler as RequestHandler);
   app.use("/api/auth", errorHandler(logger));
@@ -82,7 +92,10 @@ export function createApp(appDeps: AppDeps): Express {
   api.use(requireJsonBody(UPLOAD_ROUTES));
   api.use(express.json({ limit: JSON_LIMIT, strict: true }));
   api.use(loadSession(auth));
-  for (const router of apiRouters({ ...deps, mail })) api.use(router);
+  const routes = apiRoutes({ ...deps, mail });
+  // The route table with its schemas, for tests that walk every route (tests/api/contract.test.ts).
+  app.locals.apiRoutes = routes;
+  api.use(apiRouter(routes, config.checkResponses ?? true));
   api.use(apiNotFound);
   api.use(errorHandler(logger));
   app.use("/api", api);

@@ -68,7 +68,13 @@ export function createAuth({ db, secret, baseUrl, trustedOrigins, links, mailer,
       revokeSessionsOnPasswordReset: true,
       sendResetPassword: async ({ user, url }, request) => {
         await send(
-          linkMail(user.email, "Reset your Borrowline password", `Someone asked to reset the password for ${user.email}.`, "Choose a new password", linkFor(url, request)),
+          linkMail(
+            user.email,
+            "Reset your Borrowline password",
+            `Someone asked to reset the password for ${user.email}.`,
+            "Choose a new password",
+            linkFor(url, request),
+          ),
         );
       },
     },
@@ -77,7 +83,13 @@ export function createAuth({ db, secret, baseUrl, trustedOrigins, links, mailer,
       autoSignInAfterVerification: true,
       sendVerificationEmail: async ({ user, url }, request) => {
         await send(
-          linkMail(user.email, "Confirm your e-mail for Borrowline", `Welcome to Borrowline, ${user.name}. Please confirm this is your e-mail address.`, "Confirm my e-mail", linkFor(url, request)),
+          linkMail(
+            user.email,
+            "Confirm your e-mail for Borrowline",
+            `Welcome to Borrowline, ${user.name}. Please confirm this is your e-mail address.`,
+            "Confirm my e-mail",
+            linkFor(url, request),
+          ),
         );
       },
     },

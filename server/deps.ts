@@ -18,6 +18,8 @@ export type AppConfig = {
   /** Origins whose pages may make signed-in changes (BASE_URL's, or localhost and 127.0.0.1 on the port). */
   trustedOrigins?: string[];
   rateLimits: RateLimits;
+  /** Parse every API answer against its route's response schema (server/lib/route.ts); off in production (cost). */
+  checkResponses?: boolean;
   /** Serves the client: built files in production, Vite middleware in development. */
   frontend?: (app: Express) => void;
 };
@@ -57,7 +59,6 @@ export const DEFAULT_RATE_LIMITS: RateLimits = {
   mailPerClientAddress: { windowMs: 60 * 60_000, limit: 30 },
   imports: { windowMs: 60_000, limit: 6 },
 };
-
 
 /** What routers get: the app's deps plus the e-mail limiters every mailing route shares. */
 export type RouterDeps = AppDeps & { mail: MailLimiters };

@@ -9,7 +9,10 @@ const envSchema = z.object({
   DATA_DIR: z.string().default("./data"),
   DATABASE_URL: z.string().optional(),
   /** PGlite's buffer pool (PostgreSQL's shared_buffers); 32MB keeps a fresh server under 400 MB RSS. */
-  PGLITE_SHARED_BUFFERS: z.string().regex(/^\d+(kB|MB|GB)$/).default("32MB"),
+  PGLITE_SHARED_BUFFERS: z
+    .string()
+    .regex(/^\d+(kB|MB|GB)$/)
+    .default("32MB"),
   /** PostgreSQL cancels a statement that runs longer (the request answers 503). PGlite cannot interrupt one. */
   DB_STATEMENT_TIMEOUT_MS: z.coerce.number().int().min(0).default(10_000),
   SEED: z.enum(["0", "1"]).default("1"),

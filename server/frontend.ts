@@ -23,7 +23,9 @@ export function serveBuiltClient(distDir = path.join(root, "dist")) {
         serveStatic: { immutable: true, maxAge: "1y", fallthrough: false },
       }),
     );
-    app.use(expressStaticGzip(distDir, { enableBrotli: true, orderPreference: ["br", "gzip"], index: false, serveStatic: { index: false } }));
+    app.use(
+      expressStaticGzip(distDir, { enableBrotli: true, orderPreference: ["br", "gzip"], index: false, serveStatic: { index: false } }),
+    );
     app.get("/{*any}", (_req, res) => {
       res.setHeader("Cache-Control", "no-cache");
       res.sendFile(indexHtml);

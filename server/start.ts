@@ -11,7 +11,7 @@ import { lockDataDir } from "./db/lock";
 import { analyzeStale, scheduleMaintenance } from "./db/maintenance";
 import { migrate } from "./db/migrate";
 import { seedDemo } from "./db/seed";
-import { discardUnfinishedImports } from "./routes/csv/csv.handlers";
+import { discardUnfinishedImports } from "./routes/csv/csv-import.handlers";
 import type { Env } from "./env";
 import { ERROR_CODES, type ApiErrorBody } from "../shared/errors";
 import { createLogger } from "./lib/logger";
@@ -40,7 +40,12 @@ export type StartOptions = {
 /** The answer to any request before the app is attached: try again in a second. */
 function notReady(res: http.ServerResponse): void {
   const body: ApiErrorBody = { error: { code: ERROR_CODES.unavailable, message: "Borrowline is starting. Try again in a moment." } };
-  res.writeHead(503, { "content-type": "application/json; charset=utf-8", "retry-after": "1", "cache-control": "no-store", connection: "close" });
+  res.writeHead(503, {
+    "content-type": "application/json; charset=utf-8",
+    "retry-after": "1",
+    "cache-control": "no-store",
+    connection: "close",
+  });
   res.end(JSON.stringify(body));
 }
 
@@ -90,7 +95,9 @@ export async function start(options: StartOptions): Promise<Running> {
 
     // A first-ever start builds the new database in a short-lived child process (its memory is returned when it ends).
     if (dataDirOnDisk && !options.pgliteLoad && pgliteDirIsNew(pgliteDir)) await createPgliteDir(pgliteDir, env.PGLITE_SHARED_BUFFERS);
-    const database: Database = env.DATABASE_URL ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS) : await openPglite(pgliteDir, options.pgliteLoad, env.PGLITE_SHARED_BUFFERS);
+    const database: Database = env.DATABASE_URL
+      ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS)
+      : await openPglite(pgliteDir, options.pgliteLoad, env.PGLITE_SHARED_BUFFERS);
     releases.unshift(() => database.close());
     await migrate(database);
     // Files written before this version (or by a CLI under a looser umask) are made private too.
@@ -114,7 +121,11 @@ export async function start(options: StartOptions): Promise<Running> {
 
     const baseUrl = env.BASE_URL ?? `http://localhost:${port}`;
     const trustedOrigins = env.BASE_URL ? [new URL(env.BASE_URL).origin] : localOrigins(env.HOST, port);
-    const links: LinkOrigins = { fixed: env.BASE_URL ? new URL(env.BASE_URL).origin : undefined, fallback: new URL(baseUrl).origin, trusted: trustedOrigins };
+    const links: LinkOrigins = {
+      fixed: env.BASE_URL ? new URL(env.BASE_URL).origin : undefined,
+      fallback: new URL(baseUrl).origin,
+      trusted: trustedOrigins,
+    };
     if (env.BASE_URL) logger.info({ links: links.fixed }, `Links in e-mail point at ${links.fixed} (BASE_URL)`);
     else
       logger.info(
@@ -140,6 +151,7 @@ export async function start(options: StartOptions): Promise<Running> {
         baseUrl,
         links,
         devCsp: env.NODE_ENV === "development",
+        checkResponses: env.NODE_ENV !== "production",
         trustProxy: env.TRUST_PROXY === "1",
         trustedOrigins,
         rateLimits: { ...DEFAULT_RATE_LIMITS, ...options.rateLimits },

@@ -10,6 +10,16 @@ export type ApiErrorBody = {
   };
 };
 
+/**
+ * The steepest stoppable slope (%) a "cannot stop" 422 carries in `error.details`, or undefined for any other
+ * answer. Clients read the number, never the English message.
+ */
+export function maxStoppableSlopeOf(body: unknown): number | undefined {
+  const details = (body as Partial<ApiErrorBody> | null | undefined)?.error?.details;
+  const value = details?.reason === "cannot-stop" ? details.maxStoppableSlopePct : undefined;
+  return typeof value === "number" && Number.isFinite(value) ? value : undefined;
+}
+
 export const ERROR_CODES = {
   badRequest: "bad_request",
   unauthenticated: "unauthenticated",

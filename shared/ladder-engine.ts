@@ -1,6 +1,6 @@
 // The pass-rule engine: where a player stands on a ladder, as a pure fold over putt outcomes.
 // No clock, no I/O; the server replays the stored putts of an assignment through `replay`.
-import type { FailRule, PassRule } from "./schemas/ladders";
+import { unknownRule, type FailRule, type PassRule } from "./schemas/ladders";
 
 export type EngineRung = { distanceM: number; balls: number; passRule: PassRule };
 export type EngineLadder = { failRule: FailRule; rungs: readonly EngineRung[] };
@@ -41,15 +41,19 @@ export type LadderProgress = {
 /** What a rung attempt has come to: decided as soon as no later ball can change it, else null. */
 export function rungVerdict(rule: PassRule, balls: number, ballsTaken: number, holed: number, streak: number): RungVerdict | null {
   const left = balls - ballsTaken;
-  if (rule.kind === "make") {
-    if (holed >= rule.made) return "passed";
-    if (holed + left < rule.made) return "failed";
-    return null;
+  switch (rule.kind) {
+    case "make":
+      if (holed >= rule.made) return "passed";
+      if (holed + left < rule.made) return "failed";
+      return null;
+    case "in-a-row":
+      if (streak >= rule.count) return "passed";
+      // The longest run still possible continues the current one through every ball left.
+      if (streak + left < rule.count) return "failed";
+      return null;
+    default:
+      return unknownRule(rule);
   }
-  if (streak >= rule.count) return "passed";
-  // The longest run still possible continues the current one through every ball left.
-  if (streak + left < rule.count) return "failed";
-  return null;
 }
 
 /** Where a failed attempt at `rungIndex` sends the player. */

@@ -85,8 +85,8 @@ export function answerChart(input: ChartRequest) {
     slopePct: input.slopePct,
     stimpFt: input.stimpFt,
     pace: input.pace,
-    distances: result.distancesM,
-    fallLineDegs: result.fallLineDegs,
+    distances: [...result.distancesM],
+    fallLineDegs: [...result.fallLineDegs],
     canStop: result.canStop,
     cells: result.cells,
     model: {

@@ -1,4 +1,8 @@
-/** Roles and the policy map: the server enforces it; the client only uses it to hide UI. */
+/**
+ * Roles. Who may do what is decided on the server, per route: requireRole(...) in each <resource>.routes.ts, and
+ * ownership or squad membership in the handler's query (lib/player-access.ts, lib/green-access.ts). No second
+ * policy table: the route declarations are the policy (tests/api/authorization-matrix.test.ts checks them).
+ */
 export const ROLES = ["player", "coach", "admin"] as const;
 export type Role = (typeof ROLES)[number];
 
@@ -6,20 +10,6 @@ export type Role = (typeof ROLES)[number];
 export const SIGN_UP_ROLES = ["player", "coach"] as const satisfies readonly Role[];
 export type SignUpRole = (typeof SIGN_UP_ROLES)[number];
 
-export const PERMISSIONS = {
-  "reads:save": ["player", "coach", "admin"],
-  "practice:own": ["player", "coach", "admin"],
-  "squads:manage": ["coach", "admin"],
-  "ladders:manage": ["coach", "admin"],
-  "users:manage": ["admin"],
-} as const satisfies Record<string, readonly Role[]>;
-export type Permission = keyof typeof PERMISSIONS;
-
 export function isRole(value: unknown): value is Role {
   return typeof value === "string" && (ROLES as readonly string[]).includes(value);
-}
-
-export function can(role: Role | null | undefined, permission: Permission): boolean {
-  if (!role) return false;
-  return (PERMISSIONS[permission] as readonly Role[]).includes(role);
 }

@@ -31,7 +31,12 @@ export type Database = {
  */
 function pgliteStartParams(sharedBuffers: string): string[] {
   const defaults = ["--single", "-F", "-O", "-j", "-c", "search_path=public", "-c", "exit_on_error=false", "-c", "log_checkpoints=false"];
-  const noParallel = ["max_worker_processes", "max_parallel_workers", "max_parallel_workers_per_gather", "max_parallel_maintenance_workers"].flatMap((k) => ["-c", `${k}=0`]);
+  const noParallel = [
+    "max_worker_processes",
+    "max_parallel_workers",
+    "max_parallel_workers_per_gather",
+    "max_parallel_maintenance_workers",
+  ].flatMap((k) => ["-c", `${k}=0`]);
   return [...defaults, ...noParallel, "-c", "io_method=sync", "-c", `shared_buffers=${sharedBuffers}`];
 }
 
@@ -44,7 +49,11 @@ export async function openPglite(dataDir: string, load?: Blob, sharedBuffers = "
 
 /** statementTimeoutMs: PostgreSQL cancels longer statements (SQLSTATE 57014), so one slow query cannot hold a connection. */
 export async function openPostgres(url: string, statementTimeoutMs = 0): Promise<Database> {
-  const pool = new pg.Pool({ connectionString: url, max: 10, ...(statementTimeoutMs > 0 ? { statement_timeout: statementTimeoutMs } : {}) });
+  const pool = new pg.Pool({
+    connectionString: url,
+    max: 10,
+    ...(statementTimeoutMs > 0 ? { statement_timeout: statementTimeoutMs } : {}),
+  });
   const db = drizzlePg(pool, { schema }) as unknown as Db;
   return { db, kind: "postgres", url, close: () => pool.end() };
 }
@@ -72,7 +81,9 @@ export async function createPgliteDir(dir: string, sharedBuffers = "32MB"): Prom
     child.stderr.setEncoding("utf8").on("data", (s: string) => (stderr += s));
     child.once("error", reject);
     child.once("exit", (code, signal) =>
-      code === 0 ? resolve() : reject(new Error(`building the new database in ${building} failed (${signal ?? `exit ${code}`}): ${stderr.trim()}`)),
+      code === 0
+        ? resolve()
+        : reject(new Error(`building the new database in ${building} failed (${signal ?? `exit ${code}`}): ${stderr.trim()}`)),
     );
   });
   if (fs.existsSync(dir)) fs.rmdirSync(dir); // only an empty folder (left by an older start) is replaced; anything else stops here

@@ -14,7 +14,9 @@ beforeAll(async () => {
 afterAll(() => database.close());
 
 async function reltuples(table: string): Promise<number> {
-  const res = (await database.db.execute(sql`select reltuples::float8 as n from pg_class where relname = ${table}`)) as unknown as { rows: { n: number }[] };
+  const res = (await database.db.execute(sql`select reltuples::float8 as n from pg_class where relname = ${table}`)) as unknown as {
+    rows: { n: number }[];
+  };
   return Number(res.rows[0]!.n);
 }
 
@@ -32,7 +34,9 @@ test("a freshly migrated database has never-analysed tables; analyzeStale analys
 test("a table that grew by more than a tenth is analysed again, with its new row count", async () => {
   await analyzeStale(database.db);
   await database.db.execute(sql`insert into "user"(id, name, email) values ('grow', 'Grow', 'grow@borrowline.example')`);
-  await database.db.execute(sql`insert into practice_sessions(id, player_id, date) values ('00000000-0000-4000-8000-000000000001', 'grow', '2026-11-30')`);
+  await database.db.execute(
+    sql`insert into practice_sessions(id, player_id, date) values ('00000000-0000-4000-8000-000000000001', 'grow', '2026-11-30')`,
+  );
   await database.db.execute(
     sql`insert into putts(session_id, player_id, distance_m, holed) select '00000000-0000-4000-8000-000000000001', 'grow', 1 + i % 9, i % 2 = 0 from generate_series(1, 20000) i`,
   );

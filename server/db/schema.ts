@@ -90,7 +90,10 @@ export const practiceSessions = pgTable(
     greenId: uuid("green_id").references(() => greens.id, { onDelete: "set null" }),
     stimpFt: doublePrecision("stimp_ft"),
     conditions: text("conditions"),
-    tags: jsonb("tags").$type<string[]>().notNull().default(sql`'[]'::jsonb`),
+    tags: jsonb("tags")
+      .$type<string[]>()
+      .notNull()
+      .default(sql`'[]'::jsonb`),
     notes: text("notes"),
     createdAt: createdAt(),
   },

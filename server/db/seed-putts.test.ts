@@ -66,7 +66,7 @@ test("back-test: the make probability fitted on earlier sessions predicts the la
       if (ok) inside++;
       const ft = (m: number | null) => (m === null ? "+" : `${Math.round(m / 0.3048)}`);
       rows.push(
-        `${player.name.padEnd(12)} ${`${ft(band.fromM)}–${ft(band.toM)} ft`.padEnd(10)} n ${String(b.n).padStart(3)}  logged ${(100 * b.made / b.n).toFixed(0).padStart(3)} %  ` +
+        `${player.name.padEnd(12)} ${`${ft(band.fromM)}–${ft(band.toM)} ft`.padEnd(10)} n ${String(b.n).padStart(3)}  logged ${((100 * b.made) / b.n).toFixed(0).padStart(3)} %  ` +
           `Wilson ${(100 * lo).toFixed(0)}–${(100 * hi).toFixed(0)} %  predicted ${(100 * predicted).toFixed(0).padStart(3)} %  ${ok ? "inside" : "OUTSIDE"}` +
           `  (fit ${dispersion.angleDeg.toFixed(2)}°, ${dispersion.pace.toFixed(3)})`,
       );

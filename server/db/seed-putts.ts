@@ -11,7 +11,13 @@ export const DEMO_PUTTS_PER_SESSION = 24;
 const DISTANCES_FT = [3, 3, 4, 4, 5, 5, 6, 6, 8, 8, 10, 12, 15, 20, 25, 30];
 const BREAK_TYPES = ["uphill", "downhill", "left-to-right", "right-to-left", "straight"] as const;
 /** Fall line (deg, clockwise from ball→hole) for each recorded break type; "straight" putts are on the flat. */
-const FALL_LINE_DEG: Record<(typeof BREAK_TYPES)[number], number> = { uphill: 180, downhill: 0, "left-to-right": 90, "right-to-left": 270, straight: 0 };
+const FALL_LINE_DEG: Record<(typeof BREAK_TYPES)[number], number> = {
+  uphill: 180,
+  downhill: 0,
+  "left-to-right": 90,
+  "right-to-left": 270,
+  straight: 0,
+};
 /** The practice green's slope where the juniors putt, % ("mostly 1.5–2.5 %"; the gentler end for practice). */
 const SLOPE_PCT = 1.5;
 

@@ -10,7 +10,6 @@ import { seedCoaching } from "./seed-coaching";
 import { DEMO_ADMIN, DEMO_COACH, DEMO_GREEN, DEMO_LADDERS, DEMO_PASSWORD, DEMO_PLAYERS, DEMO_SQUAD } from "./seed-data";
 import { DEMO_WEEKS, demoSessions, demoStimpFt } from "./seed-putts";
 
-
 /**
  * Creates a verified account directly (no sign-up e-mail), with better-auth's own password hashing,
  * in the rows its e-mail/password sign-in reads. Used by the seed and the create-admin command.
@@ -33,7 +32,9 @@ export async function createAccount(
     accountType: role === "coach" ? "coach" : "player",
     ...(createdAt ? { createdAt, updatedAt: createdAt } : {}),
   });
-  await db.insert(account).values({ id: crypto.randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
+  await db
+    .insert(account)
+    .values({ id: crypto.randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
   return id;
 }
 
@@ -58,19 +59,32 @@ export async function seedDemo(db: Db, logger: Logger): Promise<void> {
   await createAccount(db, DEMO_ADMIN, "admin", DEMO_PASSWORD, at(DEMO_WEEKS * 7 + 30, 10));
   const coachId = await createAccount(db, DEMO_COACH, "coach", DEMO_PASSWORD, at(DEMO_WEEKS * 7 + 21, 17));
   const playerIds: string[] = [];
-  for (const [i, p] of DEMO_PLAYERS.entries()) playerIds.push(await createAccount(db, p, "player", DEMO_PASSWORD, at(firstSessionDaysAgo(i) + 4 + i, 18)));
+  for (const [i, p] of DEMO_PLAYERS.entries())
+    playerIds.push(await createAccount(db, p, "player", DEMO_PASSWORD, at(firstSessionDaysAgo(i) + 4 + i, 18)));
 
-  const [green] = await db.insert(greens).values({ ownerId: coachId, name: DEMO_GREEN.name, locationNote: DEMO_GREEN.locationNote }).returning();
+  const [green] = await db
+    .insert(greens)
+    .values({ ownerId: coachId, name: DEMO_GREEN.name, locationNote: DEMO_GREEN.locationNote })
+    .returning();
   await db.insert(stimpReadings).values([
     { greenId: green!.id, measuredOn: isoDaysAgo(DEMO_WEEKS * 7), stimpFt: demoStimpFt(0), note: "After rain, slower" },
     { greenId: green!.id, measuredOn: isoDaysAgo(7), stimpFt: DEMO_GREEN.stimpFt },
   ]);
 
-  const [squad] = await db.insert(squads).values({ coachId, ...DEMO_SQUAD, createdAt: at(DEMO_WEEKS * 7 + 20, 9) }).returning();
-  await db.insert(squadMembers).values(playerIds.map((playerId, i) => ({ squadId: squad!.id, playerId, joinedAt: at(firstSessionDaysAgo(i) + 2, 19) })));
+  const [squad] = await db
+    .insert(squads)
+    .values({ coachId, ...DEMO_SQUAD, createdAt: at(DEMO_WEEKS * 7 + 20, 9) })
+    .returning();
+  await db
+    .insert(squadMembers)
+    .values(playerIds.map((playerId, i) => ({ squadId: squad!.id, playerId, joinedAt: at(firstSessionDaysAgo(i) + 2, 19) })));
   // The club's practice green is the squad's: its juniors see it, log on it and read on its map (issue 14).
   await db.update(greens).set({ squadId: squad!.id }).where(eq(greens.id, green!.id));
-  await db.insert(ladders).values(DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l, createdAt: at(DEMO_WEEKS * 7 + 19, 20), updatedAt: at(DEMO_WEEKS * 7 + 19, 20) })));
+  await db
+    .insert(ladders)
+    .values(
+      DEMO_LADDERS.map((l) => ({ ownerId: coachId, ...l, createdAt: at(DEMO_WEEKS * 7 + 19, 20), updatedAt: at(DEMO_WEEKS * 7 + 19, 20) })),
+    );
 
   for (const [i, p] of DEMO_PLAYERS.entries()) {
     const playerId = playerIds[i]!;

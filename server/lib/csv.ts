@@ -24,9 +24,12 @@ export const csvUpload: RequestHandler = (req, res, next) => {
     if (!err) return next();
     if (err instanceof multer.MulterError) {
       if (err.code === "LIMIT_FILE_SIZE") {
-        return next(new HttpError(413, ERROR_CODES.tooLarge, `The file is larger than ${CSV_MAX_BYTES / 1024 / 1024} MB.`, { file: "at most 1 MB" }));
+        return next(
+          new HttpError(413, ERROR_CODES.tooLarge, `The file is larger than ${CSV_MAX_BYTES / 1024 / 1024} MB.`, { file: "at most 1 MB" }),
+        );
       }
-      if (err.code === "LIMIT_UNEXPECTED_FILE") return next(badRequest("Send one file, in the field file.", { [err.field ?? "file"]: "unexpected file field" }));
+      if (err.code === "LIMIT_UNEXPECTED_FILE")
+        return next(badRequest("Send one file, in the field file.", { [err.field ?? "file"]: "unexpected file field" }));
       return next(badRequest("The upload could not be read.", { [err.field ?? "file"]: err.message }));
     }
     next(badRequest("The upload could not be read.", { file: "malformed multipart body" }));

@@ -30,5 +30,13 @@ export function keepInInbox(db: Db): (mail: ReceivedMail) => Promise<void> {
 /** The inbox, newest first. */
 export async function readInbox(db: Db): Promise<InboxMessage[]> {
   const rows = await db.select().from(devMail).orderBy(desc(devMail.receivedAt), desc(devMail.id)).limit(DEV_INBOX_KEPT);
-  return rows.map((r) => ({ id: r.id, from: r.fromAddress, to: r.toAddresses, subject: r.subject, text: r.text, html: r.html, receivedAt: r.receivedAt.toISOString() }));
+  return rows.map((r) => ({
+    id: r.id,
+    from: r.fromAddress,
+    to: r.toAddresses,
+    subject: r.subject,
+    text: r.text,
+    html: r.html,
+    receivedAt: r.receivedAt.toISOString(),
+  }));
 }

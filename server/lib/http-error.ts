@@ -16,8 +16,7 @@ export class HttpError extends Error {
   }
 }
 
-export const badRequest = (message: string, fields?: Record<string, string>) =>
-  new HttpError(400, ERROR_CODES.badRequest, message, fields);
+export const badRequest = (message: string, fields?: Record<string, string>) => new HttpError(400, ERROR_CODES.badRequest, message, fields);
 export const unauthenticated = () => new HttpError(401, ERROR_CODES.unauthenticated, "Sign in to do this.");
 export const forbidden = (message = "Your role does not allow this.") => new HttpError(403, ERROR_CODES.forbidden, message);
 export const notFound = (what = "That") => new HttpError(404, ERROR_CODES.notFound, `${what} was not found.`);

@@ -9,7 +9,11 @@ import type { RateLimitStoreFactory } from "../middleware/rate-limit";
 
 type PgStore = Store & { pool?: { end: () => Promise<void> } };
 
-export function postgresRateLimits(databaseUrl: string): { store: RateLimitStoreFactory; ready: () => Promise<void>; close: () => Promise<void> } {
+export function postgresRateLimits(databaseUrl: string): {
+  store: RateLimitStoreFactory;
+  ready: () => Promise<void>;
+  close: () => Promise<void>;
+} {
   const stores: PgStore[] = [];
   // A small pool per limiter: each makes one short query per request it counts.
   const config = { connectionString: databaseUrl, max: 2 };

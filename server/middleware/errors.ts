@@ -4,7 +4,9 @@ import { HttpError } from "../lib/http-error";
 import type { Logger } from "../lib/logger";
 
 export const apiNotFound: RequestHandler = (req, res) => {
-  const body: ApiErrorBody = { error: { code: ERROR_CODES.notFound, message: `No API route ${req.method} ${req.originalUrl.split("?")[0]}.` } };
+  const body: ApiErrorBody = {
+    error: { code: ERROR_CODES.notFound, message: `No API route ${req.method} ${req.originalUrl.split("?")[0]}.` },
+  };
   res.status(404).json(body);
 };
 
@@ -27,7 +29,12 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (err instanceof HttpError) {
       status = err.status;
       body = {
-        error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}), ...(err.details ? { details: err.details } : {}) },
+        error: {
+          code: err.code,
+          message: err.message,
+          ...(err.fields ? { fields: err.fields } : {}),
+          ...(err.details ? { details: err.details } : {}),
+        },
       };
     } else if (isStatementTimeout(err)) {
       // The statement ran past DB_STATEMENT_TIMEOUT_MS and was cancelled: the database is free again; try later.
@@ -36,7 +43,9 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       body = { error: { code: ERROR_CODES.timeout, message: "The database took too long to answer. Try again in a moment." } };
     } else if (e?.type === "entity.parse.failed") {
       status = 400;
-      body = { error: { code: ERROR_CODES.badRequest, message: "The request body is not valid JSON.", fields: { body: "malformed JSON" } } };
+      body = {
+        error: { code: ERROR_CODES.badRequest, message: "The request body is not valid JSON.", fields: { body: "malformed JSON" } },
+      };
     } else if (e?.type === "entity.too.large") {
       status = 413;
       body = { error: { code: ERROR_CODES.tooLarge, message: "The request body is too large." } };

@@ -25,7 +25,9 @@ export function sameOriginWrites(trustedOrigins: string[]): RequestHandler {
     throw new HttpError(
       403,
       ERROR_CODES.forbidden,
-      origin === undefined ? "A signed-in change must say where it comes from (Origin header)." : "Changes are accepted only from Borrowline's own pages.",
+      origin === undefined
+        ? "A signed-in change must say where it comes from (Origin header)."
+        : "Changes are accepted only from Borrowline's own pages.",
     );
   };
 }
@@ -131,7 +133,11 @@ export async function reshapeAuthError(response: Response): Promise<Response> {
     404: [ERROR_CODES.notFound, "Not found."],
     429: [ERROR_CODES.tooManyRequests, "Too many requests. Try again in a moment."],
   };
-  const [code, message] = fallback[response.status] ?? (response.status >= 500 ? [ERROR_CODES.internal, "Something went wrong on our side."] : [ERROR_CODES.badRequest, "The request could not be handled."]);
+  const [code, message] =
+    fallback[response.status] ??
+    (response.status >= 500
+      ? [ERROR_CODES.internal, "Something went wrong on our side."]
+      : [ERROR_CODES.badRequest, "The request could not be handled."]);
   const body: ApiErrorBody = {
     error: {
       code: typeof raw.code === "string" && raw.code ? raw.code.toLowerCase() : code,

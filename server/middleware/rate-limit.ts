@@ -58,7 +58,11 @@ export type MailLimiters = { byRecipient: RequestHandler; byAccount: RequestHand
  * One set of limiters for every route that sends e-mail, so a recipient's count is shared by verification,
  * password-reset and invitation mail alike.
  */
-export function mailLimiters(limits: { perRecipient: RateLimitConfig; perAccount: RateLimitConfig; perClientAddress: RateLimitConfig }): MailLimiters {
+export function mailLimiters(limits: {
+  perRecipient: RateLimitConfig;
+  perAccount: RateLimitConfig;
+  perClientAddress: RateLimitConfig;
+}): MailLimiters {
   return {
     byRecipient: limiter(limits.perRecipient, "e-mail", recipient),
     byAccount: limiter(limits.perAccount, "e-mail", account),
@@ -67,7 +71,10 @@ export function mailLimiters(limits: { perRecipient: RateLimitConfig; perAccount
 }
 
 /** The same limits with `store` set on each (createApp uses it, so every route's limiter shares the store). */
-export function withStore<T extends { [name: string]: RateLimitConfig | undefined }>(limits: T, store: RateLimitStoreFactory | undefined): T {
+export function withStore<T extends { [name: string]: RateLimitConfig | undefined }>(
+  limits: T,
+  store: RateLimitStoreFactory | undefined,
+): T {
   if (!store) return limits;
   return Object.fromEntries(Object.entries(limits).map(([k, v]) => [k, v && { ...v, store }])) as T;
 }

@@ -1,6 +1,8 @@
-// Every resource router, in one list. A new resource adds one line here.
+// The route table: every resource's routes, in one list. A new resource adds one line here; a route is declared
+// with its schemas by defineRoute (server/lib/route.ts) in its resource's <resource>.routes.ts.
 import type { Router } from "express";
 import type { RouterDeps } from "../deps";
+import { routerOf, type RouteDef } from "../lib/route";
 import { assignmentRoutes } from "./assignments/assignments.routes";
 import { coachRoutes } from "./coach/coach.routes";
 import { csvRoutes } from "./csv/csv.routes";
@@ -22,24 +24,33 @@ import { sessionsRoutes } from "./sessions/sessions.routes";
 import { statsRoutes } from "./stats/stats.routes";
 import { trainingRoutes } from "./training/training.routes";
 
-export function apiRouters(deps: RouterDeps): Router[] {
-  const routers = [healthRoutes(deps), meRoutes(deps), readsRoutes(deps)];
-  routers.push(squadRoutes(deps));
-  routers.push(invitationRoutes(deps));
-  routers.push(ladderRoutes(deps));
-  routers.push(assignmentRoutes(deps));
-  routers.push(coachRoutes(deps));
-  routers.push(greensRoutes(deps));
-  routers.push(sessionsRoutes(deps));
-  routers.push(puttsRoutes(deps));
-  routers.push(roundsRoutes(deps));
-  routers.push(statsRoutes(deps));
-  routers.push(csvRoutes(deps));
-  routers.push(trainingRoutes(deps));
-  routers.push(makeProbabilityRoutes(deps));
-  routers.push(heightMapRoutes(deps));
-  routers.push(notesRoutes(deps));
-  routers.push(adminRoutes(deps));
-  if (deps.smtpFake) routers.push(devRoutes(deps));
-  return routers;
+/** Every /api route with its schemas (paths below /api), in the order Express matches them. */
+export function apiRoutes(deps: RouterDeps): RouteDef[] {
+  return [
+    ...healthRoutes(deps),
+    ...meRoutes(deps),
+    ...readsRoutes(deps),
+    ...squadRoutes(deps),
+    ...invitationRoutes(deps),
+    ...ladderRoutes(deps),
+    ...assignmentRoutes(deps),
+    ...coachRoutes(deps),
+    ...greensRoutes(deps),
+    ...sessionsRoutes(deps),
+    ...puttsRoutes(deps),
+    ...roundsRoutes(deps),
+    ...statsRoutes(deps),
+    ...csvRoutes(deps),
+    ...trainingRoutes(deps),
+    ...makeProbabilityRoutes(deps),
+    ...heightMapRoutes(deps),
+    ...notesRoutes(deps),
+    ...adminRoutes(deps),
+    ...(deps.smtpFake ? devRoutes(deps) : []),
+  ];
+}
+
+/** One router for the table. Outside production every answer is checked against its schema (lib/route.ts). */
+export function apiRouter(routes: RouteDef[], checkResponses: boolean): Router {
+  return routerOf(routes, { checkResponses });
 }

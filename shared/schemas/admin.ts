@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { timestampSchema } from "./common";
 import { SIGN_UP_ROLES } from "../roles";
 import { ROLES } from "../roles";
 import { plainText } from "./text";
@@ -23,26 +24,42 @@ export const adminAuditQuerySchema = z.object({ page: z.coerce.number().int().mi
 export const ADMIN_ACTIONS = ["role.set", "user.ban", "user.unban", "sessions.revoke", "password-reset.send"] as const;
 export type AdminAction = (typeof ADMIN_ACTIONS)[number];
 
-export type AdminUser = {
-  id: string;
-  name: string;
-  email: string;
-  role: string;
-  emailVerified: boolean;
-  banned: boolean;
-  banReason: string | null;
-  createdAt: string;
-};
-export type AdminUsers = { users: AdminUser[]; total: number; page: number; pageSize: number };
-export type AuditEntry = {
-  id: string;
-  actor: { id: string; email: string };
-  action: AdminAction;
-  target: { id: string | null; email: string | null };
-  detail: Record<string, unknown> | null;
-  createdAt: string;
-};
-export type AdminCoaching = {
-  squads: { id: string; name: string; owner: { id: string; name: string; email: string }; members: number; createdAt: string }[];
-  ladders: { id: string; name: string; owner: { id: string; name: string; email: string }; rungs: number; createdAt: string }[];
-};
+export const adminUserSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  email: z.string(),
+  role: z.string(),
+  emailVerified: z.boolean(),
+  banned: z.boolean(),
+  banReason: z.string().nullable(),
+  createdAt: timestampSchema,
+});
+export type AdminUser = z.output<typeof adminUserSchema>;
+export const adminUsersSchema = z.object({
+  users: z.array(adminUserSchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
+});
+export type AdminUsers = z.output<typeof adminUsersSchema>;
+export const auditEntrySchema = z.object({
+  id: z.string(),
+  actor: z.object({ id: z.string(), email: z.string() }),
+  action: z.enum(ADMIN_ACTIONS),
+  target: z.object({ id: z.string().nullable(), email: z.string().nullable() }),
+  detail: z.record(z.string(), z.unknown()).nullable(),
+  createdAt: timestampSchema,
+});
+export type AuditEntry = z.output<typeof auditEntrySchema>;
+export const auditPageSchema = z.object({
+  entries: z.array(auditEntrySchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
+});
+const owner = z.object({ id: z.string(), name: z.string(), email: z.string() });
+export const adminCoachingSchema = z.object({
+  squads: z.array(z.object({ id: z.string(), name: z.string(), owner, members: z.number().int(), createdAt: timestampSchema })),
+  ladders: z.array(z.object({ id: z.string(), name: z.string(), owner, rungs: z.number().int(), createdAt: timestampSchema })),
+});
+export type AdminCoaching = z.output<typeof adminCoachingSchema>;

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { multilineText, plainText } from "./text";
-import { idSchema, isoDateSchema } from "./common";
+import { idSchema, isoDateSchema, timestampSchema } from "./common";
 
 /** Stimp readings accepted, ft: the USGA survey's slowest category is 4′6″; tournament greens reach 14+. */
 export const STIMP_LIMITS = { minFt: 3, maxFt: 16 } as const;
@@ -59,31 +59,36 @@ export const stimpReadingInputSchema = z
   });
 export type StimpReadingInput = z.infer<typeof stimpReadingInputSchema>;
 
-export type StimpReading = {
-  id: string;
-  measuredOn: string;
-  stimpFt: number;
-  upFt: number | null;
-  downFt: number | null;
-  note: string | null;
-};
+export const stimpReadingSchema = z.object({
+  id: z.string(),
+  measuredOn: z.string(),
+  stimpFt: z.number(),
+  upFt: z.number().nullable(),
+  downFt: z.number().nullable(),
+  note: z.string().nullable(),
+});
+export type StimpReading = z.output<typeof stimpReadingSchema>;
 
 /** PUT /api/greens/:id/squad: share the green with one of the coach's squads, or (null) keep it to oneself. */
 export const greenShareSchema = z.object({ squadId: idSchema.nullable() }).strict();
 export type GreenShare = z.infer<typeof greenShareSchema>;
 
-export type GreenSummary = {
-  id: string;
-  name: string;
-  locationNote: string | null;
+export const greenSummarySchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  locationNote: z.string().nullable(),
   /** The squad it is shared with (its players see it, log sessions on it and read on its map); null: the owner's alone. */
-  squad: { id: string; name: string } | null;
+  squad: z.object({ id: z.string(), name: z.string() }).nullable(),
   /** Who keeps it (edits it, adds Stimp readings, shares it). */
-  ownerName: string;
+  ownerName: z.string(),
   /** True for the owner: the only one who edits it, adds readings, uploads its map or shares it. */
-  mine: boolean;
+  mine: z.boolean(),
   /** The latest reading's Stimp (by measuredOn, then by when it was entered); null without readings. */
-  currentStimpFt: number | null;
-  createdAt: string;
-};
-export type Green = GreenSummary & { readings: StimpReading[] };
+  currentStimpFt: z.number().nullable(),
+  createdAt: timestampSchema,
+});
+export type GreenSummary = z.output<typeof greenSummarySchema>;
+export const greenSchema = greenSummarySchema.extend({ readings: z.array(stimpReadingSchema) });
+export type Green = z.output<typeof greenSchema>;
+export const greenListSchema = z.object({ items: z.array(greenSummarySchema) });
+export type GreenList = z.output<typeof greenListSchema>;

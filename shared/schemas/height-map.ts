@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { paceSchema, DEFAULT_ROLL_PAST_M, READ_LIMITS } from "./reads";
+import { paceSchema, DEFAULT_ROLL_PAST_M, READ_LIMITS, readResponseSchema } from "./reads";
 
 /**
  * Limits of a height map. A green is rarely over 50 m across; 40 000 nodes is 200 × 200 (0.25 m spacing over
@@ -24,9 +24,12 @@ export const spacingMSchema = num("spacingM")
   .max(HEIGHT_MAP_LIMITS.spacingM.max, `spacingM must be at most ${HEIGHT_MAP_LIMITS.spacingM.max} m`);
 
 const coordinate = (name: string) =>
-  num(name).min(-HEIGHT_MAP_LIMITS.originM.maxAbs, `${name} is too far out`).max(HEIGHT_MAP_LIMITS.originM.maxAbs, `${name} is too far out`);
+  num(name)
+    .min(-HEIGHT_MAP_LIMITS.originM.maxAbs, `${name} is too far out`)
+    .max(HEIGHT_MAP_LIMITS.originM.maxAbs, `${name} is too far out`);
 
-const point = (name: string) => z.tuple([coordinate(`${name}[0] (x)`), coordinate(`${name}[1] (y)`)], { message: `${name} is [x, y] in metres` });
+const point = (name: string) =>
+  z.tuple([coordinate(`${name}[0] (x)`), coordinate(`${name}[1] (y)`)], { message: `${name} is [x, y] in metres` });
 
 /**
  * A grid of heights (m), rows north to south as a map is read: `heightsM[0]` is the north edge, the last row the
@@ -80,23 +83,29 @@ export type StoredHeightMap = {
   spotCount: number | null;
 };
 
-export type HeightMapSummary = {
-  nx: number;
-  ny: number;
-  spacingM: number;
-  originM: [number, number];
-  widthM: number;
-  depthM: number;
-  minHeightM: number;
-  maxHeightM: number;
-  /** Steepest grade between neighbouring nodes, %. */
-  maxSlopePct: number;
-  /** "walked": rebuilt from phone slope readings at every node (spotCount of them). */
-  source: "grid" | "spots" | "walked";
-  spotCount: number | null;
-};
+const xy = z.tuple([z.number(), z.number()]);
 
-export type HeightMapResponse = HeightMapSummary & { heightsM: number[][] };
+/** PUT /api/greens/:id/height-map: what was stored, without the heights. */
+export const heightMapSummarySchema = z.object({
+  nx: z.number().int(),
+  ny: z.number().int(),
+  spacingM: z.number(),
+  originM: xy,
+  widthM: z.number(),
+  depthM: z.number(),
+  minHeightM: z.number(),
+  maxHeightM: z.number(),
+  /** Steepest grade between neighbouring nodes, %. */
+  maxSlopePct: z.number(),
+  /** "walked": rebuilt from phone slope readings at every node (spotCount of them). */
+  source: z.enum(["grid", "spots", "walked"]),
+  spotCount: z.number().int().nullable(),
+});
+export type HeightMapSummary = z.output<typeof heightMapSummarySchema>;
+
+/** GET /api/greens/:id/height-map: the summary and the heights, rows north to south. */
+export const heightMapResponseSchema = heightMapSummarySchema.extend({ heightsM: z.array(z.array(z.number())) });
+export type HeightMapResponse = z.output<typeof heightMapResponseSchema>;
 
 export const surfaceSolveSchema = z
   .object({
@@ -109,3 +118,15 @@ export const surfaceSolveSchema = z
   })
   .strict();
 export type SurfaceSolveRequest = z.infer<typeof surfaceSolveSchema>;
+
+/** POST /api/greens/:id/reads/solve: the read API's shape, `path` in the green's frame, plus the surface's own fields. */
+export const surfaceReadResponseSchema = readResponseSchema.extend({
+  /** The same line in the putt frame (ball at 0,0, hole at 0,D). */
+  puttFramePath: z.array(xy),
+  restM: xy,
+  distanceM: z.number(),
+  /** The plane of the mean slope along the putt: what a planar read would assume. */
+  meanPlane: z.object({ slopePct: z.number(), fallLineDeg: z.number() }),
+  diagnostics: z.object({ method: z.enum(["surface-newton", "surface-bracketed"]), iterations: z.number(), integrations: z.number() }),
+});
+export type SurfaceReadResponse = z.output<typeof surfaceReadResponseSchema>;

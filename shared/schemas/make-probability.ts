@@ -61,77 +61,98 @@ export const makeProbabilityRequestSchema = z
 export type MakeProbabilityRequest = z.infer<typeof makeProbabilityRequestSchema>;
 
 /** The read at one pace, and how it plays for this player. Probabilities in [0, 1]. */
-export type PaceResult = {
-  rollPastM: number;
-  makeProbability: number;
+const paceResultFields = {
+  rollPastM: z.number(),
+  makeProbability: z.number(),
   /** Monte Carlo standard error of makeProbability, √(p(1 − p)/samples). */
-  makeProbabilityStandardError: number;
+  makeProbabilityStandardError: z.number(),
   /** A miss that leaves more than 1 m to the hole centre. */
-  secondPuttOver1mProbability: number;
+  secondPuttOver1mProbability: z.number(),
   /** aimOffsetM is null beyond a 60° start line (the start line is the answer then). */
-  read: { aimOffsetM: number | null; startLineDeg: number; launchSpeedMps: number; entrySpeedMps: number };
+  read: z.object({ aimOffsetM: z.number().nullable(), startLineDeg: z.number(), launchSpeedMps: z.number(), entrySpeedMps: z.number() }),
 };
+export const paceResultSchema = z.object(paceResultFields);
+export type PaceResult = z.output<typeof paceResultSchema>;
 
-export type MakeProbabilityResponse = {
+export const makeProbabilityResponseSchema = z.object({
   /** At the read's own pace (= defaultPace.makeProbability). */
-  makeProbability: number;
-  makeProbabilityStandardError: number;
-  secondPuttOver1mProbability: number;
+  makeProbability: z.number(),
+  makeProbabilityStandardError: z.number(),
+  secondPuttOver1mProbability: z.number(),
   /** Rest points [x, y] (m, putt frame: ball at 0,0, hole at 0,D) of the first 100 simulated putts; holed → the hole. */
-  finishes: [number, number][];
-  finishHoled: boolean[];
+  finishes: z.array(z.tuple([z.number(), z.number()])),
+  finishHoled: z.array(z.boolean()),
   /** Where misses finished: fractions of all simulated putts, and distances (m) left to the hole centre. */
-  misses: {
-    missProbability: number;
-    shortProbability: number;
-    longProbability: number;
-    leftProbability: number;
-    rightProbability: number;
-    lipOutProbability: number;
-    meanLeaveM: number;
-    medianLeaveM: number;
-    p90LeaveM: number;
-  };
+  misses: z.object({
+    missProbability: z.number(),
+    shortProbability: z.number(),
+    longProbability: z.number(),
+    leftProbability: z.number(),
+    rightProbability: z.number(),
+    lipOutProbability: z.number(),
+    meanLeaveM: z.number(),
+    medianLeaveM: z.number(),
+    p90LeaveM: z.number(),
+  }),
   /** The most makes with P(second putt > 1 m) ≤ secondPuttRiskMax; if no pace meets it, the safest (meetsRiskLimit false). */
-  bestPace: PaceResult & { meetsRiskLimit: boolean };
-  defaultPace: PaceResult;
+  bestPace: z.object({ ...paceResultFields, meetsRiskLimit: z.boolean() }),
+  defaultPace: paceResultSchema,
   /** The scan behind bestPace (fewer samples per pace): for a chart of make and risk against roll-past. */
-  paceCurve: { rollPastM: number; makeProbability: number; secondPuttOver1mProbability: number }[];
-  dispersion: Required<Dispersion> & { source: "request" | "my-putts"; putts: number | null; usedPrior: boolean | null };
+  paceCurve: z.array(z.object({ rollPastM: z.number(), makeProbability: z.number(), secondPuttOver1mProbability: z.number() })),
+  dispersion: z.object({
+    angleDeg: z.number(),
+    pace: z.number(),
+    readSlopePct: z.number(),
+    greenLateralM: z.number(),
+    source: z.enum(["request", "my-putts"]),
+    putts: z.number().int().nullable(),
+    usedPrior: z.boolean().nullable(),
+  }),
   /**
    * The player's own logged make rate at about this length (0.8–1.25 × the distance), with its Wilson 95 % interval,
    * and whether these odds fall outside it; null without a signed-in player's log. `why` says why odds and log may
    * differ (the odds are for this read's slope and pace; the log has no slopes).
    */
-  logged: {
-    fromM: number;
-    toM: number;
-    attempts: number;
-    made: number;
-    rate: number | null;
-    ci95: [number, number] | null;
-    oddsOutside: boolean;
-    why: string;
-  } | null;
-  seed: number;
-  samples: number;
-  secondPuttRiskMax: number;
-};
+  logged: z
+    .object({
+      fromM: z.number(),
+      toM: z.number(),
+      attempts: z.number().int(),
+      made: z.number().int(),
+      rate: z.number().nullable(),
+      ci95: z.tuple([z.number(), z.number()]).nullable(),
+      oddsOutside: z.boolean(),
+      why: z.string(),
+    })
+    .nullable(),
+  seed: z.number(),
+  samples: z.number().int(),
+  secondPuttRiskMax: z.number(),
+});
+export type MakeProbabilityResponse = z.output<typeof makeProbabilityResponseSchema>;
 
 export const dispersionQuerySchema = z.object({ playerId: z.string().trim().min(1).max(64).optional() }).strict();
 
-export type Interval = { estimate: number; lo: number; hi: number };
+const intervalSchema = z.object({ estimate: z.number(), lo: z.number(), hi: z.number() });
+export type Interval = z.output<typeof intervalSchema>;
 
-export type DispersionResponse = {
+export const dispersionResponseSchema = z.object({
   /** Start-line σ, degrees: posterior median and 95 % credible interval. */
-  angleDeg: Interval;
+  angleDeg: intervalSchema,
   /** Pace σ: of ln(actual ÷ intended roll length). */
-  pace: Interval;
+  pace: intervalSchema,
   /** The habitual roll-past your misses imply, m. */
-  rollPastM: Interval;
-  putts: number;
-  prior: { angleDeg: number; pace: number; angleDegRange: [number, number]; paceRange: [number, number]; why: string };
+  rollPastM: intervalSchema,
+  putts: z.number().int(),
+  prior: z.object({
+    angleDeg: z.number(),
+    pace: z.number(),
+    angleDegRange: z.tuple([z.number(), z.number()]),
+    paceRange: z.tuple([z.number(), z.number()]),
+    why: z.string(),
+  }),
   /** Share of the information that is still the prior's, per σ (0 … 1). */
-  priorWeight: { angleDeg: number; pace: number };
-  usedPrior: boolean;
-};
+  priorWeight: z.object({ angleDeg: z.number(), pace: z.number() }),
+  usedPrior: z.boolean(),
+});
+export type DispersionResponse = z.output<typeof dispersionResponseSchema>;

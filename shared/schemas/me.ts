@@ -22,3 +22,7 @@ export type Me = z.infer<typeof meSchema>;
 /** GET /api/me when nobody is signed in: a 200 that says so (a page asking "who is here?" is not an error). */
 export const signedOutMeSchema = z.object({ user: z.null(), preferences: z.null() }).strict();
 export type SignedOutMe = z.infer<typeof signedOutMeSchema>;
+/** GET /api/me: who is signed in, or nobody. */
+export const meResponseSchema = z.union([meSchema, signedOutMeSchema]);
+export type MeResponse = z.output<typeof meResponseSchema>;
+export type MeUser = Me["user"];

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { timestampSchema } from "./common";
 import { text } from "./text";
 
 export const NOTE_MAX = 2000;
@@ -9,4 +10,12 @@ export const noteInputSchema = z
   .strict();
 export type NoteInput = z.infer<typeof noteInputSchema>;
 
-export type PlayerNote = { id: string; playerId: string; author: { id: string; name: string }; body: string; createdAt: string };
+export const playerNoteSchema = z.object({
+  id: z.string(),
+  playerId: z.string(),
+  author: z.object({ id: z.string(), name: z.string() }),
+  body: z.string(),
+  createdAt: timestampSchema,
+});
+export type PlayerNote = z.output<typeof playerNoteSchema>;
+export const playerNoteListSchema = z.object({ notes: z.array(playerNoteSchema) });

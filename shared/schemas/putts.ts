@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { plainText } from "./text";
-import { idSchema } from "./common";
+import { idSchema, timestampSchema } from "./common";
 import { dateRangeFields, fromNotAfterTo, pageFields, playerIdSchema } from "./sessions";
 
 export const BREAK_TYPES = ["uphill", "downhill", "left-to-right", "right-to-left", "straight"] as const;
@@ -40,10 +40,7 @@ export const puttFieldsSchema = z
   })
   .strict();
 
-export const puttInputSchema = puttFieldsSchema
-  .extend({ clientId: idSchema.optional() })
-  .strict()
-  .superRefine(holedHasNoMiss);
+export const puttInputSchema = puttFieldsSchema.extend({ clientId: idSchema.optional() }).strict().superRefine(holedHasNoMiss);
 export type PuttInput = z.infer<typeof puttInputSchema>;
 
 export const PUTT_SORTS = ["date", "-date", "distance", "-distance", "createdAt", "-createdAt"] as const;
@@ -53,7 +50,10 @@ export const puttListQuerySchema = z
     ...pageFields(200, 50),
     ...dateRangeFields,
     sort: z.enum(PUTT_SORTS).default("-date"),
-    holed: z.enum(["true", "false"]).transform((v) => v === "true").optional(),
+    holed: z
+      .enum(["true", "false"])
+      .transform((v) => v === "true")
+      .optional(),
     breakType: z.enum(BREAK_TYPES).optional(),
     sessionId: idSchema.optional(),
     minM: z.coerce.number().finite().min(0).max(60).optional(),
@@ -63,22 +63,31 @@ export const puttListQuerySchema = z
   .strict()
   .superRefine((v, ctx) => {
     fromNotAfterTo(v, ctx);
-    if (v.minM !== undefined && v.maxM !== undefined && v.minM > v.maxM) ctx.addIssue({ code: "custom", path: ["maxM"], message: "maxM must not be below minM" });
+    if (v.minM !== undefined && v.maxM !== undefined && v.minM > v.maxM)
+      ctx.addIssue({ code: "custom", path: ["maxM"], message: "maxM must not be below minM" });
   });
 export type PuttListQuery = z.infer<typeof puttListQuerySchema>;
 
-export type Putt = {
-  id: string;
-  sessionId: string;
-  date: string;
-  distanceM: number;
-  holed: boolean;
-  missSide: MissSide | null;
-  missLengthM: number | null;
-  breakType: BreakType | null;
-  clientId: string | null;
-  createdAt: string;
-};
+export const puttSchema = z.object({
+  id: z.string(),
+  sessionId: z.string(),
+  date: z.string(),
+  distanceM: z.number(),
+  holed: z.boolean(),
+  missSide: z.enum(MISS_SIDES).nullable(),
+  missLengthM: z.number().nullable(),
+  breakType: z.enum(BREAK_TYPES).nullable(),
+  clientId: z.string().nullable(),
+  createdAt: timestampSchema,
+});
+export type Putt = z.output<typeof puttSchema>;
+export const puttListSchema = z.object({ items: z.array(puttSchema) });
+export const puttPageSchema = z.object({
+  items: z.array(puttSchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
+});
 
 // ---- CSV import of putts -------------------------------------------------------------------------
 
@@ -121,18 +130,26 @@ export const csvExportQuerySchema = z
   .strict()
   .superRefine(fromNotAfterTo);
 
-export type CsvRowError = { row: number; line: number; field: string; message: string };
-export type CsvImportResult = {
-  imported: number;
-  sessionsCreated: number;
-  greensCreated: number;
-  skipped: number;
-  errors: CsvRowError[];
-};
-export type CsvPreview = {
-  headers: string[];
-  rows: string[][];
-  rowCount: number;
-  delimiter: string;
-  suggestedMapping: Partial<CsvMapping>;
-};
+export const csvRowErrorSchema = z.object({ row: z.number().int(), line: z.number().int(), field: z.string(), message: z.string() });
+export type CsvRowError = z.output<typeof csvRowErrorSchema>;
+export const csvImportResultSchema = z.object({
+  imported: z.number().int(),
+  sessionsCreated: z.number().int(),
+  greensCreated: z.number().int(),
+  skipped: z.number().int(),
+  errors: z.array(csvRowErrorSchema),
+});
+export type CsvImportResult = z.output<typeof csvImportResultSchema>;
+/** The 422 of an all-or-nothing import with bad rows: the error shape and the result (nothing imported). */
+export const csvImportRefusedSchema = csvImportResultSchema.extend({
+  error: z.object({ code: z.string(), message: z.string(), fields: z.record(z.string(), z.string()) }),
+});
+export const csvImportResponseSchema = z.union([csvImportResultSchema, csvImportRefusedSchema]);
+export const csvPreviewSchema = z.object({
+  headers: z.array(z.string()),
+  rows: z.array(z.array(z.string())),
+  rowCount: z.number().int(),
+  delimiter: z.string(),
+  suggestedMapping: csvMappingSchema.partial(),
+});
+export type CsvPreview = z.output<typeof csvPreviewSchema>;

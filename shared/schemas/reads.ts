@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { DEFAULT_ROLL_PAST_M } from "../../physics/constants";
+import { timestampSchema } from "./common";
 import { plainText } from "./text";
 
 /** Limits of the public read API (issue-agreed ranges; a flat-green Stimp of 4–16 ft covers real greens). */
@@ -43,23 +44,54 @@ export type ReadRequest = z.infer<typeof readRequestSchema>;
 
 export const BREAK_DIRECTIONS = ["left-to-right", "right-to-left", "none"] as const;
 
-export type ReadResponse = {
-  launchSpeedMps: number;
-  startLineDeg: number;
+const pointSchema = z.tuple([z.number(), z.number()]);
+export const readModelSchema = z.object({
+  name: z.string(),
+  v0Mps: z.number(),
+  rollingDecelMps2: z.number(),
+  gravityDecelMps2: z.number(),
+  maxStoppableSlopePct: z.number(),
+});
+
+/** POST /api/reads/solve (and the browser's offline answer, shared/read-answers.ts). */
+export const readResponseSchema = z.object({
+  launchSpeedMps: z.number(),
+  startLineDeg: z.number(),
   /** D·tan(start line), m (+ = right); null when the start line is wider than 60° (`aimGiven: "start-line"`). */
-  aimOffsetM: number | null;
+  aimOffsetM: z.number().nullable(),
   /** "offset": the aim is given beside the hole; "start-line": only the start line, with `aimNote` in words. */
-  aimGiven: "offset" | "start-line";
-  aimNote: string | null;
-  entrySpeedMps: number;
-  rollPastM: number;
+  aimGiven: z.enum(["offset", "start-line"]),
+  aimNote: z.string().nullable(),
+  entrySpeedMps: z.number(),
+  rollPastM: z.number(),
   /** Length of a flat putt (same Stimp) needing the same launch speed with the same roll-past, m. */
-  flatPuttLengthM: number;
-  breaks: (typeof BREAK_DIRECTIONS)[number];
-  capture: { holed: boolean; outcome: "holed" | "lip-out" | "miss"; maxCaptureSpeedMps: number; marginMps: number };
-  path: [number, number][];
-  model: { name: string; v0Mps: number; rollingDecelMps2: number; gravityDecelMps2: number; maxStoppableSlopePct: number };
-};
+  flatPuttLengthM: z.number(),
+  breaks: z.enum(BREAK_DIRECTIONS),
+  capture: z.object({
+    holed: z.boolean(),
+    outcome: z.enum(["holed", "lip-out", "miss"]),
+    maxCaptureSpeedMps: z.number(),
+    marginMps: z.number(),
+  }),
+  path: z.array(pointSchema),
+  model: readModelSchema,
+});
+export type ReadResponse = z.output<typeof readResponseSchema>;
+
+/** A saved read as the API answers it (never the database row: no owner id). */
+export const savedReadSchema = z.object({
+  id: z.string(),
+  label: z.string().nullable(),
+  greenId: z.string().nullable(),
+  greenName: z.string().nullable(),
+  input: readRequestSchema,
+  /** The answer without its drawn path. */
+  result: readResponseSchema.omit({ path: true }),
+  createdAt: timestampSchema,
+});
+export type SavedRead = z.output<typeof savedReadSchema>;
+export const savedReadListSchema = z.object({ items: z.array(savedReadSchema) });
+export type SavedReadList = z.output<typeof savedReadListSchema>;
 
 export const saveReadSchema = z
   .object({
@@ -84,7 +116,40 @@ export const chartRequestSchema = z
   .superRefine((v, ctx) => {
     const cells = v.distances.length * v.fallLineDegs.length;
     if (cells > MAX_CHART_CELLS) {
-      ctx.addIssue({ code: "custom", path: ["distances"], message: `At most ${MAX_CHART_CELLS} cells (distances × fallLineDegs); asked for ${cells}` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["distances"],
+        message: `At most ${MAX_CHART_CELLS} cells (distances × fallLineDegs); asked for ${cells}`,
+      });
     }
   });
 export type ChartRequest = z.infer<typeof chartRequestSchema>;
+
+const chartCellSchema = z.discriminatedUnion("ok", [
+  z.object({
+    ok: z.literal(true),
+    distanceM: z.number(),
+    fallLineDeg: z.number(),
+    /** Null beyond a 60° start line: the cell then gives the start line only. */
+    aimOffsetM: z.number().nullable(),
+    aimGiven: z.enum(["offset", "start-line"]),
+    startLineDeg: z.number(),
+    launchSpeedMps: z.number(),
+    entrySpeedMps: z.number(),
+  }),
+  z.object({ ok: z.literal(false), distanceM: z.number(), fallLineDeg: z.number(), reason: z.literal("cannot-stop") }),
+]);
+export type ChartCellAnswer = z.output<typeof chartCellSchema>;
+
+/** POST /api/reads/chart: `cells[i][j]` is distance i, fall line j. */
+export const chartResponseSchema = z.object({
+  slopePct: z.number(),
+  stimpFt: z.number(),
+  pace: paceSchema,
+  distances: z.array(z.number()),
+  fallLineDegs: z.array(z.number()),
+  canStop: z.boolean(),
+  cells: z.array(z.array(chartCellSchema)),
+  model: z.object({ name: z.string(), maxStoppableSlopePct: z.number(), rollingDecelMps2: z.number() }),
+});
+export type ChartResponse = z.output<typeof chartResponseSchema>;

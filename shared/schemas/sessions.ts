@@ -28,9 +28,7 @@ const sessionFields = {
   notes: multilineText(2000).nullish(),
 };
 
-export const sessionInputSchema = z
-  .object({ ...sessionFields, tags: sessionFields.tags.default([]) })
-  .strict();
+export const sessionInputSchema = z.object({ ...sessionFields, tags: sessionFields.tags.default([]) }).strict();
 export type SessionInput = z.infer<typeof sessionInputSchema>;
 
 export const sessionPatchSchema = z
@@ -60,20 +58,25 @@ export const sessionListQuerySchema = z
   .superRefine(fromNotAfterTo);
 export type SessionListQuery = z.infer<typeof sessionListQuerySchema>;
 
-export type SessionItem = {
-  id: string;
-  playerId: string;
-  date: string;
-  greenId: string | null;
-  greenName: string | null;
-  stimpFt: number | null;
-  conditions: string | null;
-  tags: string[];
-  notes: string | null;
-  putts: number;
-  holed: number;
+export const sessionItemSchema = z.object({
+  id: z.string(),
+  playerId: z.string(),
+  date: z.string(),
+  greenId: z.string().nullable(),
+  greenName: z.string().nullable(),
+  stimpFt: z.number().nullable(),
+  conditions: z.string().nullable(),
+  tags: z.array(z.string()),
+  notes: z.string().nullable(),
+  putts: z.number().int(),
+  holed: z.number().int(),
   /** holed / putts; null for a session without putts. */
-  makeRate: number | null;
-};
+  makeRate: z.number().nullable(),
+});
+export type SessionItem = z.output<typeof sessionItemSchema>;
 
+/** A page of a list: `items` and where it sits in the whole. */
+export const pageOf = <T extends z.ZodType>(item: T) =>
+  z.object({ items: z.array(item), total: z.number().int(), page: z.number().int(), pageSize: z.number().int() });
 export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
+export const sessionPageSchema = pageOf(sessionItemSchema);

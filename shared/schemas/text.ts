@@ -30,7 +30,9 @@ export function textProblem(s: string, multiline = false): string | null {
   if (s.includes("\u0000")) return "The NUL character is not allowed";
   if (LONE_SURROGATE.test(s)) return "Not valid Unicode text (a lone surrogate)";
   if ((multiline ? CONTROL_EXCEPT_NEWLINES : CONTROL).test(s)) {
-    return multiline ? "Control characters other than new lines are not allowed" : "Control characters (new lines included) are not allowed";
+    return multiline
+      ? "Control characters other than new lines are not allowed"
+      : "Control characters (new lines included) are not allowed";
   }
   if (BIDI_CONTROL.test(s)) return "Text-direction override characters are not allowed";
   return null;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { timestampSchema } from "./common";
 import { READ_LIMITS } from "./reads";
 import { TRAINING_LEVEL_IDS, puttFitsLevel, type TrueRead } from "../training";
 
@@ -57,27 +58,38 @@ export const listAttemptsQuerySchema = z.object({
     .default(50),
 });
 
-export type TrainingAttempt = {
-  id: string;
-  level: z.infer<typeof trainingLevelSchema>;
-  putt: z.infer<typeof trainingPuttSchema>;
-  guess: z.infer<typeof trainingGuessSchema>;
-  score: number;
-  aimErrorM: number;
-  paceErrorM: number;
-  createdAt: string;
-};
+export const trainingAttemptSchema = z.object({
+  id: z.string(),
+  level: trainingLevelSchema,
+  putt: trainingPuttSchema,
+  guess: trainingGuessSchema,
+  score: z.number(),
+  aimErrorM: z.number(),
+  paceErrorM: z.number(),
+  createdAt: timestampSchema,
+});
+export type TrainingAttempt = z.output<typeof trainingAttemptSchema>;
 
-export type CreateAttemptResponse = TrainingAttempt & {
-  truth: Omit<TrueRead, "path">;
-  yours: {
-    startLineDeg: number;
-    launchSpeedMps: number;
-    flatPuttLengthM: number;
-    holed: boolean;
-    outcome: "holed" | "lip-out" | "miss";
-    restM: [number, number];
-  };
-};
+export const createAttemptResponseSchema = trainingAttemptSchema.extend({
+  truth: z.object({
+    aimOffsetM: z.number(),
+    startLineDeg: z.number(),
+    launchSpeedMps: z.number(),
+    rollPastM: z.number(),
+    flatPuttLengthM: z.number(),
+    entrySpeedMps: z.number(),
+    breaks: z.enum(["left-to-right", "right-to-left", "none"]),
+  }) satisfies z.ZodType<Omit<TrueRead, "path">>,
+  yours: z.object({
+    startLineDeg: z.number(),
+    launchSpeedMps: z.number(),
+    flatPuttLengthM: z.number(),
+    holed: z.boolean(),
+    outcome: z.enum(["holed", "lip-out", "miss"]),
+    restM: z.tuple([z.number(), z.number()]),
+  }),
+});
+export type CreateAttemptResponse = z.output<typeof createAttemptResponseSchema>;
 
-export type AttemptList = { items: TrainingAttempt[] };
+export const attemptListSchema = z.object({ items: z.array(trainingAttemptSchema) });
+export type AttemptList = z.output<typeof attemptListSchema>;

@@ -22,12 +22,27 @@ test("a band includes its lower edge and excludes its upper edge", () => {
 });
 
 test("the default bands are 0-3 … 30+ ft and 0-1 … 10+ m", () => {
-  const ft = bandsFromEdges(DEFAULT_BAND_EDGES_M.imperial).map((b) => [b.fromM / METRES_PER_FOOT, b.toM === null ? null : b.toM / METRES_PER_FOOT]);
+  const ft = bandsFromEdges(DEFAULT_BAND_EDGES_M.imperial).map((b) => [
+    b.fromM / METRES_PER_FOOT,
+    b.toM === null ? null : b.toM / METRES_PER_FOOT,
+  ]);
   expect(ft.map(([a, b]) => [Math.round(a!), b === null || b === undefined ? null : Math.round(b)])).toEqual([
-    [0, 3], [3, 6], [6, 10], [10, 15], [15, 20], [20, 30], [30, null],
+    [0, 3],
+    [3, 6],
+    [6, 10],
+    [10, 15],
+    [15, 20],
+    [20, 30],
+    [30, null],
   ]);
   expect(bandsFromEdges(DEFAULT_BAND_EDGES_M.metric).map((b) => [b.fromM, b.toM])).toEqual([
-    [0, 1], [1, 2], [2, 3], [3, 5], [5, 7], [7, 10], [10, null],
+    [0, 1],
+    [1, 2],
+    [2, 3],
+    [3, 5],
+    [5, 7],
+    [7, 10],
+    [10, null],
   ]);
   // A 10 ft putt stored as 10 × 0.3048 m lands in 10-15 ft, not 6-10 ft.
   expect(bandIndex(10 * METRES_PER_FOOT, DEFAULT_BAND_EDGES_M.imperial)).toBe(3);
@@ -40,7 +55,9 @@ test("edges that are not strictly increasing or not positive are refused", () =>
 });
 
 describe("band assignment properties", () => {
-  const edgesArb = fc.uniqueArray(fc.double({ min: 0.05, max: 60, noNaN: true }), { minLength: 1, maxLength: 12 }).map((a) => [...a].sort((x, y) => x - y));
+  const edgesArb = fc
+    .uniqueArray(fc.double({ min: 0.05, max: 60, noNaN: true }), { minLength: 1, maxLength: 12 })
+    .map((a) => [...a].sort((x, y) => x - y));
 
   test("every distance falls in exactly one band, the one whose bounds contain it", () => {
     fc.assert(

@@ -9,8 +9,7 @@ export type BaselineSeries = { label: string; source: string; firmness: "publish
 
 export const TOUR_ONE_PUTT_RATE: BaselineSeries = {
   label: "Tour one-putt rate by distance",
-  source:
-    'M. Broadie, "Every Shot Counts", 2014 (PGA TOUR one-putt percentage by distance; secondary, attributed to the book)',
+  source: 'M. Broadie, "Every Shot Counts", 2014 (PGA TOUR one-putt percentage by distance; secondary, attributed to the book)',
   firmness: "secondary",
   points: [
     { distanceFt: 2, value: 0.99 },

@@ -15,6 +15,9 @@ test("a round's strokes gained is the sum over putted holes of E(first putt) −
   const t = roundTotals(holes);
   expect(t).toMatchObject({ holes: 4, putts: 6, onePutts: 1, threePutts: 1, longFirstPutts: 1, longLagsOutside1m: 1 });
   expect(t.strokesGained).toBeCloseTo(0.5 + (2.0 - 3) + (1.04 - 2), 1);
-  expect(t.strokesGained).toBeCloseTo(holes.reduce((s, h) => s + (valueHole(h).strokesGained ?? 0), 0), 12);
+  expect(t.strokesGained).toBeCloseTo(
+    holes.reduce((s, h) => s + (valueHole(h).strokesGained ?? 0), 0),
+    12,
+  );
   expect(valueHole(holes[3]!)).toMatchObject({ expectedPutts: null, strokesGained: null });
 });

@@ -13,7 +13,16 @@ export function valueHole(h: HoleRow): RoundHole {
 
 /** Round totals: putts, one- and three-putts (3 or more), expected putts and strokes gained, long lags. */
 export function roundTotals(holes: readonly HoleRow[]): RoundTotals {
-  const t: RoundTotals = { holes: holes.length, putts: 0, onePutts: 0, threePutts: 0, expectedPutts: 0, strokesGained: 0, longFirstPutts: 0, longLagsOutside1m: 0 };
+  const t: RoundTotals = {
+    holes: holes.length,
+    putts: 0,
+    onePutts: 0,
+    threePutts: 0,
+    expectedPutts: 0,
+    strokesGained: 0,
+    longFirstPutts: 0,
+    longLagsOutside1m: 0,
+  };
   for (const h of holes) {
     const v = valueHole(h);
     t.putts += h.putts;

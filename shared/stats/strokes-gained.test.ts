@@ -47,7 +47,15 @@ test("lags from 6 m that finish more than 1 m away are counted outside three-put
     { distanceM: 9, holed: false, missLengthM: null },
     { distanceM: 2, holed: true, missLengthM: null },
   ]);
-  expect(s).toMatchObject({ putts: 4, holed: 1, longPutts: 3, longPuttsKnown: 2, longLagsOutside1m: 1, longLagOutsideShare: 0.5, leavesAssumed: 1 });
+  expect(s).toMatchObject({
+    putts: 4,
+    holed: 1,
+    longPutts: 3,
+    longPuttsKnown: 2,
+    longLagsOutside1m: 1,
+    longLagOutsideShare: 0.5,
+    leavesAssumed: 1,
+  });
 });
 
 describe("strokes gained properties", () => {
@@ -62,7 +70,11 @@ describe("strokes gained properties", () => {
   });
 
   test("a session's SG is the sum of its putts' SG", () => {
-    const putt = fc.record({ distanceM: fc.double({ min: 0.1, max: 60, noNaN: true }), holed: fc.boolean(), missLengthM: fc.option(fc.double({ min: -10, max: 10, noNaN: true })) });
+    const putt = fc.record({
+      distanceM: fc.double({ min: 0.1, max: 60, noNaN: true }),
+      holed: fc.boolean(),
+      missLengthM: fc.option(fc.double({ min: -10, max: 10, noNaN: true })),
+    });
     fc.assert(
       fc.property(fc.array(putt, { maxLength: 40 }), (ps) => {
         const sum = ps.reduce((acc, p) => acc + practicePuttValue(p).strokesGained, 0);

@@ -17,7 +17,7 @@ afterEach(() => {
 function renderAt(path: string) {
   vi.stubGlobal("fetch", vi.fn(fakeFetch({ "/api/me": { status: 401, body: { error: { code: "UNAUTHORIZED", message: "Sign in" } } } })));
   const queryClient = createTestQueryClient();
-  const router = createMemoryRouter(createAppRoutes(queryClient), { initialEntries: [path] });
+  const router = createMemoryRouter(createAppRoutes(), { initialEntries: [path] });
   render(
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />

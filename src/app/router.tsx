@@ -1,5 +1,4 @@
 import { useMemo } from "react";
-import { useQueryClient, type QueryClient } from "@tanstack/react-query";
 import { createBrowserRouter, RouterProvider, type RouteObject } from "react-router";
 import { PageSpinner } from "../components/ui";
 import { paths } from "../config/paths";
@@ -10,7 +9,7 @@ import { NotFoundRoute, RootErrorBoundary, RouteErrorBoundary } from "./routes/e
 // `ErrorBoundary`). Heavy pages (the 3D green, charts) stay out of the first download this way.
 // To add a page: create src/app/routes/<name>.tsx exporting `Component`, register it below with its
 // path from src/config/paths.ts, and add a nav item in src/app/nav.ts.
-export function createAppRoutes(_queryClient: QueryClient): RouteObject[] {
+export function createAppRoutes(): RouteObject[] {
   return [
     {
       path: paths.home.path,
@@ -69,7 +68,6 @@ export function createAppRoutes(_queryClient: QueryClient): RouteObject[] {
 }
 
 export function AppRouter() {
-  const queryClient = useQueryClient();
-  const router = useMemo(() => createBrowserRouter(createAppRoutes(queryClient)), [queryClient]);
+  const router = useMemo(() => createBrowserRouter(createAppRoutes()), []);
   return <RouterProvider router={router} />;
 }

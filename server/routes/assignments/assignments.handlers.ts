@@ -1,4 +1,4 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, asc, desc, eq, inArray, or, type SQL } from "drizzle-orm";
 import { ERROR_CODES } from "../../../shared/errors";
 import { replay, step } from "../../../shared/ladder-engine";
@@ -11,7 +11,8 @@ import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error"
 import { linkBase } from "../../lib/link-origin";
 import { linkMail } from "../../lib/mailer";
 import { currentUser, type SessionUser } from "../../middleware/session";
-import { body, parseOrThrow } from "../../middleware/validate";
+import { parseOrThrow } from "../../middleware/validate";
+import { reply, type Ctx } from "../../lib/route";
 import { findLadder } from "../ladders/ladders.handlers";
 import { inSquadsOf } from "../../lib/player-access";
 import { findOwnSquad, squadsOfPlayers } from "../squads/squad-access";
@@ -23,12 +24,12 @@ type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
  * Gives a ladder to players of the coach's own squads: listed by id, or every member of one squad.
  * Each assignment keeps a copy of the ladder as it is now; each player gets an e-mail with a link.
  */
-export function createAssignments({ database, mailer, config, logger }: AppDeps): RequestHandler {
+export function createAssignments({ database, mailer, config, logger }: AppDeps) {
   const db = database.db;
-  return async (req, res) => {
+  return async ({ req, body }: Ctx<z.infer<typeof assignInputSchema>>) => {
     const me = currentUser(req);
     const ladder = await findLadder(db, me, parseOrThrow(idSchema, req.params.id, "id"));
-    const input = body(req, assignInputSchema);
+    const input = body;
 
     let targets: { playerId: string; squadId: string }[];
     if (input.squadId) {
@@ -92,7 +93,13 @@ export function createAssignments({ database, mailer, config, logger }: AppDeps)
         "Take it to the practice green and log each putt; your progress is saved as you go.";
       try {
         await mailer.send(
-          linkMail(to, `You have a new ladder: ${ladder.name}`, intro, "Open the ladder", `${linkBase(config.links, req)}/ladders/run/${row.id}`),
+          linkMail(
+            to,
+            `You have a new ladder: ${ladder.name}`,
+            intro,
+            "Open the ladder",
+            `${linkBase(config.links, req)}/ladders/run/${row.id}`,
+          ),
         );
       } catch (err) {
         // The assignment stands: the player also finds it in the app.
@@ -100,15 +107,15 @@ export function createAssignments({ database, mailer, config, logger }: AppDeps)
       }
     }
     const views = await assignmentViews(db, rows);
-    res.status(201).json({ assignments: views.map(withoutPutts) });
+    return { assignments: views.map(withoutPutts) };
   };
 }
 
-export function listMyAssignments(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listMyAssignments(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const rows = (await assignmentRows(db, eq(ladderAssignments.playerId, me.id))).reverse();
-    res.json({ assignments: (await assignmentViews(db, rows)).map(withoutPutts) });
+    return { assignments: (await assignmentViews(db, rows)).map(withoutPutts) };
   };
 }
 
@@ -128,14 +135,14 @@ function readableBy(db: Db, me: SessionUser): SQL | undefined {
   );
 }
 
-export function getAssignment(db: Db): RequestHandler {
-  return async (req, res) => {
+export function getAssignment(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const id = parseOrThrow(idSchema, req.params.id, "id");
     const rows = await assignmentRows(db, and(eq(ladderAssignments.id, id), readableBy(db, me)));
     if (rows.length === 0) throw notFound("Assignment");
     const [view] = await assignmentViews(db, rows, true);
-    res.json(view);
+    return view!;
   };
 }
 
@@ -176,9 +183,9 @@ async function sessionForToday(tx: Tx, assignment: typeof ladderAssignments.$inf
   return created!.id;
 }
 
-async function answerWith(db: Db, res: Parameters<RequestHandler>[1], id: string, status: number) {
+async function answerWith(db: Db, id: string, status: number) {
   const [view] = await assignmentViews(db, await assignmentRows(db, eq(ladderAssignments.id, id)), true);
-  res.status(status).json(view);
+  return reply(status, view!);
 }
 
 /**
@@ -186,10 +193,10 @@ async function answerWith(db: Db, res: Parameters<RequestHandler>[1], id: string
  * rung index), then the progress is replayed from all the assignment's putts. A retried request with the
  * same clientId is stored once and answers 200 with the current state.
  */
-export function addLadderPutt(db: Db): RequestHandler {
-  return async (req, res) => {
+export function addLadderPutt(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof ladderPuttInputSchema>>) => {
     const me = currentUser(req);
-    const input = body(req, ladderPuttInputSchema);
+    const input = body;
     const { id, created } = await db.transaction(async (tx) => {
       const a = await lockOwnAssignment(tx, me, req.params.id);
       if (input.clientId) {
@@ -238,13 +245,13 @@ export function addLadderPutt(db: Db): RequestHandler {
         .where(eq(ladderAssignments.id, a.id));
       return { id: a.id, created: true };
     });
-    await answerWith(db, res, id, created ? 201 : 200);
+    return answerWith(db, id, created ? 201 : 200);
   };
 }
 
 /** Takes back the latest putt of the assignment (also from the practice log); a completed ladder reopens. */
-export function undoLastLadderPutt(db: Db): RequestHandler {
-  return async (req, res) => {
+export function undoLastLadderPutt(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const id = await db.transaction(async (tx) => {
       const a = await lockOwnAssignment(tx, me, req.params.id);
@@ -271,6 +278,6 @@ export function undoLastLadderPutt(db: Db): RequestHandler {
         .where(eq(ladderAssignments.id, a.id));
       return a.id;
     });
-    await answerWith(db, res, id, 200);
+    return answerWith(db, id, 200);
   };
 }

@@ -1,4 +1,4 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, eq, inArray } from "drizzle-orm";
 import { idSchema } from "../../../shared/schemas/common";
 import { squadOverviewQuerySchema, userIdSchema } from "../../../shared/schemas/squads";
@@ -8,7 +8,8 @@ import { toCsv } from "../../lib/csv";
 import { notFound } from "../../lib/http-error";
 import { inSquadsOf } from "../../lib/player-access";
 import { currentUser } from "../../middleware/session";
-import { parseOrThrow, query } from "../../middleware/validate";
+import { parseOrThrow } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 import { assignmentRows, assignmentViews, summaryOf, withoutPutts } from "../assignments/assignment-view";
 import { findOwnSquad, ownedBy, squadsOfPlayers } from "../squads/squad-access";
 import { overviewCsvRows, squadOverview } from "./squad-overview";
@@ -17,8 +18,8 @@ import { overviewCsvRows, squadOverview } from "./squad-overview";
  * Every player in the coach's squads with the state of each ladder this coach gave them. Players in
  * no squad of this coach do not appear (an admin sees every squad).
  */
-export function listCoachedPlayers(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listCoachedPlayers(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const members = await db
       .select({ id: user.id, name: user.name, email: user.email, squadId: squads.id, squadName: squads.name })
@@ -39,15 +40,15 @@ export function listCoachedPlayers(db: Db): RequestHandler {
         ? []
         : await assignmentRows(db, and(inArray(ladderAssignments.playerId, ids), ownedBy(ladderAssignments.assignedBy, me)));
     const summaries = (await assignmentViews(db, rows)).map(summaryOf);
-    res.json({
+    return {
       players: [...players.values()].map((p) => ({ ...p, assignments: summaries.filter((s) => s.player.id === p.id).reverse() })),
-    });
+    };
   };
 }
 
 /** One player of the coach's squads, read-only: their squads (with this coach) and ladder history. */
-export function getCoachedPlayer(db: Db): RequestHandler {
-  return async (req, res) => {
+export function getCoachedPlayer(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const playerId = parseOrThrow(userIdSchema, req.params.playerId, "playerId");
     const memberships = (await squadsOfPlayers(db, me, [playerId])).get(playerId);
@@ -55,45 +56,50 @@ export function getCoachedPlayer(db: Db): RequestHandler {
     const [player] = await db.select({ id: user.id, name: user.name, email: user.email }).from(user).where(eq(user.id, playerId));
     const rows = await assignmentRows(db, and(eq(ladderAssignments.playerId, playerId), ownedBy(ladderAssignments.assignedBy, me)));
     const views = (await assignmentViews(db, rows)).map(withoutPutts).reverse();
-    res.json({
+    return {
       player: player!,
       squads: memberships.map((s) => ({ id: s.id, name: s.name, joinedAt: s.joinedAt.toISOString() })),
       assignments: views,
-    });
+    };
   };
 }
 
-export function listSquadAssignments(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listSquadAssignments(db: Db) {
+  return async ({ req }: Ctx) => {
     const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
     // Players who have left the squad (and every other squad of its coach) are no longer shown.
-    const rows = await assignmentRows(db, and(eq(ladderAssignments.squadId, squad.id), inSquadsOf(squad.coachId, ladderAssignments.playerId)));
+    const rows = await assignmentRows(
+      db,
+      and(eq(ladderAssignments.squadId, squad.id), inSquadsOf(squad.coachId, ladderAssignments.playerId)),
+    );
     const summaries = (await assignmentViews(db, rows)).map(summaryOf).reverse();
-    res.json({ squad: { id: squad.id, name: squad.name }, assignments: summaries });
+    return { squad: { id: squad.id, name: squad.name }, assignments: summaries };
   };
 }
 
 /** The squad at a glance (squad-overview.ts): a coach's own squad, or any for an admin. */
-export function getSquadOverview(db: Db): RequestHandler {
-  return async (req, res) => {
+export function getSquadOverview(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof squadOverviewQuerySchema>>) => {
     const me = currentUser(req);
     const squad = await findOwnSquad(db, me, parseOrThrow(idSchema, req.params.id, "id"));
-    const { days } = query(req, squadOverviewQuerySchema);
-    res.json(await squadOverview(db, me, squad, days));
+    const { days } = query;
+    return await squadOverview(db, me, squad, days);
   };
 }
 
 /** The same overview as a CSV file (the project's CSV helper guards formula-like text cells). */
-export function exportSquadOverview(db: Db): RequestHandler {
-  return async (req, res) => {
+export function exportSquadOverview(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof squadOverviewQuerySchema>>) => {
     const me = currentUser(req);
     const squad = await findOwnSquad(db, me, parseOrThrow(idSchema, req.params.id, "id"));
-    const { days } = query(req, squadOverviewQuerySchema);
+    const { days } = query;
     const [prefs] = await db.select({ units: userPreferences.units }).from(userPreferences).where(eq(userPreferences.userId, me.id));
     const { fields, data } = overviewCsvRows(await squadOverview(db, me, squad, days), prefs?.units === "metric" ? "metric" : "imperial");
-    const name = squad.name.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").toLowerCase() || "squad";
-    res.type("text/csv; charset=utf-8");
-    res.attachment(`borrowline-${name}-overview.csv`);
-    res.send(toCsv(fields, data));
+    const name =
+      squad.name
+        .replace(/[^A-Za-z0-9]+/g, "-")
+        .replace(/^-|-$/g, "")
+        .toLowerCase() || "squad";
+    return { filename: `borrowline-${name}-overview.csv`, csv: toCsv(fields, data) };
   };
 }

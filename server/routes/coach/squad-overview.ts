@@ -15,7 +15,13 @@ import { ownedBy } from "../squads/squad-access";
 const addDays = (iso: string, days: number) => new Date(Date.parse(`${iso}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 const rate = (made: number, attempts: number) => ({ attempts, made, rate: attempts === 0 ? null : made / attempts });
 
-export async function squadOverview(db: Db, viewer: SessionUser, squad: { id: string; name: string }, days: number, now = new Date()): Promise<SquadOverview> {
+export async function squadOverview(
+  db: Db,
+  viewer: SessionUser,
+  squad: { id: string; name: string },
+  days: number,
+  now = new Date(),
+): Promise<SquadOverview> {
   const today = now.toISOString().slice(0, 10);
   const recentFrom = addDays(today, -(days - 1));
   const [prefs] = await db.select({ units: userPreferences.units }).from(userPreferences).where(eq(userPreferences.userId, viewer.id));
@@ -34,14 +40,26 @@ export async function squadOverview(db: Db, viewer: SessionUser, squad: { id: st
     ids.length === 0
       ? []
       : await db
-          .select({ playerId: putts.playerId, sessionId: putts.sessionId, date: practiceSessions.date, distanceM: putts.distanceM, holed: putts.holed, missLengthM: putts.missLengthM })
+          .select({
+            playerId: putts.playerId,
+            sessionId: putts.sessionId,
+            date: practiceSessions.date,
+            distanceM: putts.distanceM,
+            holed: putts.holed,
+            missLengthM: putts.missLengthM,
+          })
           .from(putts)
           .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
           .where(inArray(putts.playerId, ids));
   const assignments =
     ids.length === 0
       ? []
-      : (await assignmentViews(db, await assignmentRows(db, and(inArray(ladderAssignments.playerId, ids), ownedBy(ladderAssignments.assignedBy, viewer))))).map(summaryOf);
+      : (
+          await assignmentViews(
+            db,
+            await assignmentRows(db, and(inArray(ladderAssignments.playerId, ids), ownedBy(ladderAssignments.assignedBy, viewer))),
+          )
+        ).map(summaryOf);
 
   const players: SquadOverviewPlayer[] = [];
   for (const m of members) {
@@ -60,13 +78,29 @@ export async function squadOverview(db: Db, viewer: SessionUser, squad: { id: st
     const sr = summarisePutts(recent);
     const sp = summarisePutts(past);
     const counts = new Map(
-      (await periodCounts(db, { playerId: m.id, source: "practice", a: { from: "1900-01-01", to: addDays(recentFrom, -1) }, b: { from: recentFrom, to: today } }, edges)).map((c) => [c.band, c]),
+      (
+        await periodCounts(
+          db,
+          {
+            playerId: m.id,
+            source: "practice",
+            a: { from: "1900-01-01", to: addDays(recentFrom, -1) },
+            b: { from: recentFrom, to: today },
+          },
+          edges,
+        )
+      ).map((c) => [c.band, c]),
     );
     const ladders = assignments.filter((a) => a.player.id === m.id);
     const latest = ladders.at(-1);
     players.push({
       ...m,
-      recent: { sessions: recentSessions.size, putts: sr.putts, strokesGainedPerPutt: sr.putts === 0 ? null : sr.strokesGained / sr.putts, lastSession },
+      recent: {
+        sessions: recentSessions.size,
+        putts: sr.putts,
+        strokesGainedPerPutt: sr.putts === 0 ? null : sr.strokesGained / sr.putts,
+        lastSession,
+      },
       past: { putts: sp.putts, strokesGainedPerPutt: sp.putts === 0 ? null : sp.strokesGained / sp.putts },
       bands: bands.map((_, i) => {
         const c = counts.get(i);
@@ -76,17 +110,33 @@ export async function squadOverview(db: Db, viewer: SessionUser, squad: { id: st
         active: ladders.filter((a) => a.status !== "completed").length,
         completed: ladders.filter((a) => a.status === "completed").length,
         overdue: ladders.filter((a) => a.overdue).length,
-        latest: latest ? { name: latest.ladderName, status: latest.status, overdue: latest.overdue, rungReached: latest.rungReached, rungsTotal: latest.rungsTotal } : null,
+        latest: latest
+          ? {
+              name: latest.ladderName,
+              status: latest.status,
+              overdue: latest.overdue,
+              rungReached: latest.rungReached,
+              rungsTotal: latest.rungsTotal,
+            }
+          : null,
       },
     });
   }
-  return { squad: { id: squad.id, name: squad.name }, days, recentFrom, today, bands: bands.map((b) => ({ fromM: b.fromM, toM: b.toM })), players };
+  return {
+    squad: { id: squad.id, name: squad.name },
+    days,
+    recentFrom,
+    today,
+    bands: bands.map((b) => ({ fromM: b.fromM, toM: b.toM })),
+    players,
+  };
 }
 
 /** The overview as spreadsheet rows (one per player); text cells go through the CSV helper's formula guard. */
 export function overviewCsvRows(o: SquadOverview, units: "metric" | "imperial"): { fields: string[]; data: (string | number | null)[][] } {
   const len = (m: number) => (units === "metric" ? `${Number(m.toFixed(1))} m` : `${Math.round(m / METRES_PER_FOOT)} ft`);
-  const bandName = (b: { fromM: number; toM: number | null }) => (b.toM === null ? `${len(b.fromM)} and over` : `${len(b.fromM)} to ${len(b.toM)}`);
+  const bandName = (b: { fromM: number; toM: number | null }) =>
+    b.toM === null ? `${len(b.fromM)} and over` : `${len(b.fromM)} to ${len(b.toM)}`;
   const pct = (r: { rate: number | null }) => (r.rate === null ? null : Math.round(r.rate * 1000) / 10);
   const sg = (v: number | null) => (v === null ? null : Math.round(v * 1000) / 1000);
   const fields = [
@@ -115,7 +165,9 @@ export function overviewCsvRows(o: SquadOverview, units: "metric" | "imperial"):
     p.ladders.active,
     p.ladders.completed,
     p.ladders.overdue,
-    p.ladders.latest ? `${p.ladders.latest.name} (rung ${p.ladders.latest.rungReached} of ${p.ladders.latest.rungsTotal}, ${p.ladders.latest.overdue ? "overdue" : p.ladders.latest.status})` : null,
+    p.ladders.latest
+      ? `${p.ladders.latest.name} (rung ${p.ladders.latest.rungReached} of ${p.ladders.latest.rungsTotal}, ${p.ladders.latest.overdue ? "overdue" : p.ladders.latest.status})`
+      : null,
   ]);
   return { fields, data };
 }

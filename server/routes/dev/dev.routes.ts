@@ -1,6 +1,7 @@
-import { Router } from "express";
+import { devMailListSchema } from "../../../shared/schemas/system";
 import type { AppDeps } from "../../deps";
 import { readInbox } from "../../lib/dev-inbox";
+import { defineRoute } from "../../lib/route";
 import { requireRole } from "../../middleware/session";
 
 /**
@@ -9,9 +10,9 @@ import { requireRole } from "../../middleware/session";
  * every server shows the same mailbox.
  */
 export function devRoutes({ database }: AppDeps) {
-  const router = Router();
-  router.get("/dev/mail", requireRole("admin"), async (_req, res) => {
-    res.json({ messages: await readInbox(database.db) });
-  });
-  return router;
+  return [
+    defineRoute({ method: "get", path: "/dev/mail", use: [requireRole("admin")], response: devMailListSchema }, async () => ({
+      messages: await readInbox(database.db),
+    })),
+  ];
 }

@@ -1,12 +1,13 @@
-import { Router } from "express";
 import { sql } from "drizzle-orm";
+import { healthSchema } from "../../../shared/schemas/system";
 import type { AppDeps } from "../../deps";
+import { defineRoute } from "../../lib/route";
 
 export function healthRoutes({ database }: AppDeps) {
-  const router = Router();
-  router.get("/health", async (_req, res) => {
-    await database.db.execute(sql`select 1`);
-    res.json({ ok: true, db: database.kind });
-  });
-  return router;
+  return [
+    defineRoute({ method: "get", path: "/health", response: healthSchema }, async () => {
+      await database.db.execute(sql`select 1`);
+      return { ok: true as const, db: database.kind };
+    }),
+  ];
 }

@@ -1,10 +1,15 @@
-import { Router, type RequestHandler } from "express";
-import { surfaceSolveSchema } from "../../../shared/schemas/height-map";
+import type { RequestHandler } from "express";
+import {
+  heightMapResponseSchema,
+  heightMapSummarySchema,
+  surfaceReadResponseSchema,
+  surfaceSolveSchema,
+} from "../../../shared/schemas/height-map";
 import type { AppDeps } from "../../deps";
 import { csvUpload } from "../../lib/csv";
+import { defineRoute, noContent } from "../../lib/route";
 import { limiter } from "../../middleware/rate-limit";
 import { requireUser } from "../../middleware/session";
-import { validateBody } from "../../middleware/validate";
 import { deleteHeightMap, getHeightMap, putHeightMap, requireOwnGreen, solveOnSurface } from "./height-maps.handlers";
 
 /** multer only for a multipart upload; a JSON body is already parsed by express.json. */
@@ -13,12 +18,32 @@ const csvIfMultipart: RequestHandler = (req, res, next) => (req.is("multipart/fo
 /** A green's height map (owner writes; owner and the squad it is shared with read) and reads solved on its surface. */
 export function heightMapRoutes({ database, config }: AppDeps) {
   const db = database.db;
-  const router = Router();
   const readLimit = limiter(config.rateLimits.reads, "read");
-  // Ownership is checked before multer reads the upload.
-  router.put("/greens/:id/height-map", requireUser, requireOwnGreen(db), csvIfMultipart, putHeightMap(db));
-  router.get("/greens/:id/height-map", requireUser, getHeightMap(db));
-  router.delete("/greens/:id/height-map", requireUser, requireOwnGreen(db), deleteHeightMap(db));
-  router.post("/greens/:id/reads/solve", requireUser, readLimit, validateBody(surfaceSolveSchema), solveOnSurface(db));
-  return router;
+  return [
+    // Ownership is checked before multer reads the upload; the body (CSV form or JSON) is parsed by the handler.
+    defineRoute(
+      {
+        method: "put",
+        path: "/greens/:id/height-map",
+        use: [requireUser, requireOwnGreen(db), csvIfMultipart],
+        response: heightMapSummarySchema,
+      },
+      putHeightMap(db),
+    ),
+    defineRoute({ method: "get", path: "/greens/:id/height-map", use: [requireUser], response: heightMapResponseSchema }, getHeightMap(db)),
+    defineRoute(
+      { method: "delete", path: "/greens/:id/height-map", use: [requireUser, requireOwnGreen(db)], response: noContent },
+      deleteHeightMap(db),
+    ),
+    defineRoute(
+      {
+        method: "post",
+        path: "/greens/:id/reads/solve",
+        use: [requireUser, readLimit],
+        body: surfaceSolveSchema,
+        response: surfaceReadResponseSchema,
+      },
+      solveOnSurface(db),
+    ),
+  ];
 }

@@ -1,5 +1,5 @@
+import type { z } from "zod";
 import crypto from "node:crypto";
-import type { RequestHandler } from "express";
 import { and, desc, eq, gt, ne, or, sql } from "drizzle-orm";
 import { ERROR_CODES } from "../../../shared/errors";
 import { idSchema } from "../../../shared/schemas/common";
@@ -17,7 +17,8 @@ import { conflict, forbidden, HttpError, notFound } from "../../lib/http-error";
 import { linkBase } from "../../lib/link-origin";
 import { linkMail } from "../../lib/mailer";
 import { currentUser } from "../../middleware/session";
-import { body, parseOrThrow } from "../../middleware/validate";
+import { parseOrThrow } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 import { findOwnSquad, ownedBy } from "../squads/squad-access";
 
 export const INVITATION_DAYS = 14;
@@ -91,22 +92,17 @@ async function sendInvitation({ database, mailer, logger }: AppDeps, squad: Squa
     .update(invitations)
     .set({ status: "revoked" })
     .where(
-      and(
-        eq(invitations.squadId, squad.id),
-        eq(invitations.email, email),
-        eq(invitations.status, "pending"),
-        ne(invitations.id, row!.id),
-      ),
+      and(eq(invitations.squadId, squad.id), eq(invitations.email, email), eq(invitations.status, "pending"), ne(invitations.id, row!.id)),
     );
   return { invitation: invitationView(row!), link: shareLink };
 }
 
-export function createInvitation(deps: AppDeps): RequestHandler {
+export function createInvitation(deps: AppDeps) {
   const db = deps.database.db;
-  return async (req, res) => {
+  return async ({ req, body }: Ctx<z.infer<typeof invitationInputSchema>>) => {
     const me = currentUser(req);
     const squad = await findOwnSquad(db, me, parseOrThrow(idSchema, req.params.id, "id"));
-    const { email } = body(req, invitationInputSchema);
+    const { email } = body;
 
     const [member] = await db
       .select({ id: user.id })
@@ -117,7 +113,7 @@ export function createInvitation(deps: AppDeps): RequestHandler {
 
     // The inviting coach gets the link too, to pass on by hand (no mailbox needed for the demo).
     const sent = await sendInvitation(deps, squad, email, linkBase(deps.config.links, req));
-    res.status(201).json(sent);
+    return sent;
   };
 }
 
@@ -125,9 +121,9 @@ export function createInvitation(deps: AppDeps): RequestHandler {
  * Sends a not-yet-accepted invitation again with a new token: the old link is withdrawn (it answers 409
  * "withdrawn"), the new one runs 14 days from now. The answer carries the new link for the coach to copy.
  */
-export function resendInvitation(deps: AppDeps): RequestHandler {
+export function resendInvitation(deps: AppDeps) {
   const db = deps.database.db;
-  return async (req, res) => {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const id = parseOrThrow(idSchema, req.params.id, "id");
     const [found] = await db
@@ -139,26 +135,29 @@ export function resendInvitation(deps: AppDeps): RequestHandler {
     if (found.invitation.status === "accepted") throw conflict("This invitation was already accepted; there is nothing to resend.");
     const sent = await sendInvitation(deps, found.squad, found.invitation.email, linkBase(deps.config.links, req));
     // A revoked or expired invitation resent: the old row is withdrawn too (it may not have been pending).
-    await db.update(invitations).set({ status: "revoked" }).where(and(eq(invitations.id, id), ne(invitations.status, "accepted")));
-    res.status(201).json(sent);
+    await db
+      .update(invitations)
+      .set({ status: "revoked" })
+      .where(and(eq(invitations.id, id), ne(invitations.status, "accepted")));
+    return sent;
   };
 }
 
-export function listInvitations(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listInvitations(db: Db) {
+  return async ({ req }: Ctx) => {
     const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
     const rows = await db
       .select()
       .from(invitations)
       .where(eq(invitations.squadId, squad.id))
       .orderBy(desc(invitations.createdAt), invitations.id);
-    res.json({ invitations: rows.map(invitationView) });
+    return { invitations: rows.map(invitationView) };
   };
 }
 
 /** Withdraws a pending (or expired) invitation; revoking twice is fine; an accepted one is 409. */
-export function revokeInvitation(db: Db): RequestHandler {
-  return async (req, res) => {
+export function revokeInvitation(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const id = parseOrThrow(idSchema, req.params.id, "id");
     const [found] = await db
@@ -170,7 +169,6 @@ export function revokeInvitation(db: Db): RequestHandler {
     if (found.invitation.status === "accepted")
       throw conflict("This invitation was already accepted; remove the member from the squad instead.");
     await db.update(invitations).set({ status: "revoked" }).where(eq(invitations.id, id));
-    res.status(204).end();
   };
 }
 
@@ -189,8 +187,8 @@ async function findByToken(db: Db, raw: unknown) {
 }
 
 /** Public: the join page shows whom the link is for before anyone signs in. */
-export function previewInvitation(db: Db): RequestHandler {
-  return async (req, res) => {
+export function previewInvitation(db: Db) {
+  return async ({ req }: Ctx) => {
     const { invitation, squad, coachName, provesAddress } = await findByToken(db, req.params.token);
     const preview: InvitationPreview = {
       squad: { name: squad.name },
@@ -200,7 +198,7 @@ export function previewInvitation(db: Db): RequestHandler {
       expiresAt: invitation.expiresAt.toISOString(),
       provesAddress,
     };
-    res.json(preview);
+    return preview;
   };
 }
 
@@ -209,8 +207,8 @@ export function previewInvitation(db: Db): RequestHandler {
  * case) and confirmed — following the e-mailed link is that confirmation; the coach's share link is not.
  * Coach and admin accounts cannot join squads. Used, withdrawn or expired links answer 409.
  */
-export function acceptInvitation(db: Db): RequestHandler {
-  return async (req, res) => {
+export function acceptInvitation(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const { invitation, squad, coachName, provesAddress } = await findByToken(db, req.params.token);
     const why = refusal(statusOf(invitation));
@@ -221,7 +219,8 @@ export function acceptInvitation(db: Db): RequestHandler {
     }
     // Read from the database, not the session's cached copy: the e-mail must really be confirmed.
     const [account] = await db.select({ emailVerified: user.emailVerified }).from(user).where(eq(user.id, me.id));
-    if (!account?.emailVerified && !provesAddress) throw forbidden("Confirm your e-mail address first (open the link we sent you), then accept the invitation.");
+    if (!account?.emailVerified && !provesAddress)
+      throw forbidden("Confirm your e-mail address first (open the link we sent you), then accept the invitation.");
     const joinedAt = await db.transaction(async (tx) => {
       // The status guard makes the token single-use even when two accepts race.
       const used = await tx
@@ -231,7 +230,11 @@ export function acceptInvitation(db: Db): RequestHandler {
         .returning({ id: invitations.id });
       if (used.length === 0) throw conflict("This invitation has already been used.");
       // Following the link that was e-mailed to this exact address proves the address: no second confirmation.
-      if (provesAddress) await tx.update(user).set({ emailVerified: true }).where(and(eq(user.id, me.id), eq(user.emailVerified, false)));
+      if (provesAddress)
+        await tx
+          .update(user)
+          .set({ emailVerified: true })
+          .where(and(eq(user.id, me.id), eq(user.emailVerified, false)));
       await tx.insert(squadMembers).values({ squadId: squad.id, playerId: me.id }).onConflictDoNothing();
       const [m] = await tx
         .select({ joinedAt: squadMembers.joinedAt })
@@ -239,9 +242,9 @@ export function acceptInvitation(db: Db): RequestHandler {
         .where(and(eq(squadMembers.squadId, squad.id), eq(squadMembers.playerId, me.id)));
       return m!.joinedAt;
     });
-    res.json({
+    return {
       squad: { id: squad.id, name: squad.name, coach: { id: squad.coachId, name: coachName } },
       joinedAt: joinedAt.toISOString(),
-    });
+    };
   };
 }

@@ -1,4 +1,4 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, desc, eq } from "drizzle-orm";
 import { idSchema } from "../../../shared/schemas/common";
 import {
@@ -13,7 +13,8 @@ import type { Db } from "../../db/client";
 import { ladders, user } from "../../db/schema";
 import { forbidden, notFound } from "../../lib/http-error";
 import { currentUser, type SessionUser } from "../../middleware/session";
-import { body, parseOrThrow } from "../../middleware/validate";
+import { parseOrThrow } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 import { ownedBy } from "../squads/squad-access";
 import { BUILT_IN_LADDERS, findBuiltInLadder } from "./built-in-ladders";
 
@@ -55,20 +56,20 @@ function columns(input: LadderInput) {
   return { name: input.name, description: input.description ?? null, failRule: input.failRule, rungs: input.rungs };
 }
 
-export function createLadder(db: Db): RequestHandler {
-  return async (req, res) => {
+export function createLadder(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof ladderInputSchema>>) => {
     const me = currentUser(req);
     const [row] = await db
       .insert(ladders)
-      .values({ ownerId: me.id, ...columns(body(req, ladderInputSchema)) })
+      .values({ ownerId: me.id, ...columns(body) })
       .returning();
-    res.status(201).json(ladderView(row!));
+    return ladderView(row!);
   };
 }
 
 /** The user's own library (newest first), then the built-in ladders. */
-export function listLadders(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listLadders(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const rows = await db
       .select({ ladder: ladders, ownerName: user.name })
@@ -77,48 +78,47 @@ export function listLadders(db: Db): RequestHandler {
       .where(ownedBy(ladders.ownerId, me))
       .orderBy(desc(ladders.createdAt), ladders.id);
     // The owner's name goes with each ladder so an admin's list says whose it is.
-    res.json({ ladders: [...rows.map((r) => ({ ...ladderView(r.ladder), ownerName: r.ownerName })), ...BUILT_IN_LADDERS] });
+    return { ladders: [...rows.map((r) => ({ ...ladderView(r.ladder), ownerName: r.ownerName })), ...BUILT_IN_LADDERS] };
   };
 }
 
-export function getLadder(db: Db): RequestHandler {
-  return async (req, res) => {
-    res.json(await findLadder(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id")));
+export function getLadder(db: Db) {
+  return async ({ req }: Ctx) => {
+    return await findLadder(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
   };
 }
 
 /** Replaces the ladder. Assignments already made keep the copy they were given. */
-export function updateLadder(db: Db): RequestHandler {
-  return async (req, res) => {
+export function updateLadder(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof ladderInputSchema>>) => {
     const ladder = await findOwnEditable(db, currentUser(req), req.params.id);
     const [row] = await db
       .update(ladders)
-      .set({ ...columns(body(req, ladderInputSchema)), updatedAt: new Date() })
+      .set({ ...columns(body), updatedAt: new Date() })
       .where(eq(ladders.id, ladder.id))
       .returning();
-    res.json(ladderView(row!));
+    return ladderView(row!);
   };
 }
 
-export function deleteLadder(db: Db): RequestHandler {
-  return async (req, res) => {
+export function deleteLadder(db: Db) {
+  return async ({ req }: Ctx) => {
     const ladder = await findOwnEditable(db, currentUser(req), req.params.id);
     await db.delete(ladders).where(eq(ladders.id, ladder.id));
-    res.status(204).end();
   };
 }
 
 /** A copy in the user's own library: of a built-in ladder (same name) or of their own (" (copy)"). */
-export function copyLadder(db: Db): RequestHandler {
-  return async (req, res) => {
+export function copyLadder(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof ladderCopySchema>>) => {
     const me = currentUser(req);
     const source = await findLadder(db, me, parseOrThrow(idSchema, req.params.id, "id"));
-    const { name } = body(req, ladderCopySchema);
+    const { name } = body;
     const copyName = name ?? (source.builtIn ? source.name : `${source.name.slice(0, 73)} (copy)`);
     const [row] = await db
       .insert(ladders)
       .values({ ownerId: me.id, ...columns({ ...source, name: copyName }) })
       .returning();
-    res.status(201).json(ladderView(row!));
+    return ladderView(row!);
   };
 }

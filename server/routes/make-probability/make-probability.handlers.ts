@@ -1,5 +1,5 @@
+import type { z } from "zod";
 import crypto from "node:crypto";
-import type { RequestHandler } from "express";
 import { and, between, count, desc, eq, sql } from "drizzle-orm";
 import { wilsonInterval } from "../../../shared/stats/wilson";
 import {
@@ -20,10 +20,10 @@ import {
 } from "../../../shared/schemas/make-probability";
 import type { Db } from "../../db/client";
 import { practiceSessions, putts } from "../../db/schema";
-import { notFound, unprocessable } from "../../lib/http-error";
+import { cannotStopError, notFound } from "../../lib/http-error";
 import { targetPlayerId } from "../../lib/player-access";
 import { currentUser, type SessionUser } from "../../middleware/session";
-import { body, query } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 
 /** The most recent putts the estimate uses (older ones say less about the player's stroke today). */
 const MAX_PUTTS = 2000;
@@ -51,9 +51,7 @@ async function dispersionOf(db: Db, playerId: string): Promise<DispersionEstimat
     .where(eq(putts.playerId, playerId))
     .orderBy(desc(putts.createdAt))
     .limit(MAX_PUTTS);
-  return estimateDispersion(
-    rows.map((r) => ({ ...r, missSide: r.missSide === "left" || r.missSide === "right" ? r.missSide : null })),
-  );
+  return estimateDispersion(rows.map((r) => ({ ...r, missSide: r.missSide === "left" || r.missSide === "right" ? r.missSide : null })));
 }
 
 function toDispersionResponse(e: DispersionEstimate): DispersionResponse {
@@ -76,12 +74,12 @@ function toDispersionResponse(e: DispersionEstimate): DispersionResponse {
   };
 }
 
-export function getDispersion(db: Db): RequestHandler {
-  return async (req, res) => {
+export function getDispersion(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof dispersionQuerySchema>>) => {
     const me = currentUser(req);
-    const { playerId } = query(req, dispersionQuerySchema);
+    const { playerId } = query;
     const target = await readablePlayer(db, me, playerId);
-    res.json(toDispersionResponse(await dispersionOf(db, target)));
+    return toDispersionResponse(await dispersionOf(db, target));
   };
 }
 
@@ -122,10 +120,10 @@ async function loggedNear(db: Db, playerId: string, distanceM: number, odds: num
   };
 }
 
-export function postMakeProbability(db: Db): RequestHandler {
-  return async (req, res) => {
+export function postMakeProbability(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof makeProbabilityRequestSchema>>) => {
     const me = currentUser(req);
-    const input = body(req, makeProbabilityRequestSchema);
+    const input = body;
     let dispersion: MakeProbabilityResponse["dispersion"];
     if (input.dispersion) {
       dispersion = {
@@ -151,16 +149,19 @@ export function postMakeProbability(db: Db): RequestHandler {
     const seed = input.seed ?? crypto.randomInt(0, 2 ** 31 - 1);
     const result = bestPace({
       ...input.read,
-      dispersion: { angleDeg: dispersion.angleDeg, pace: dispersion.pace, readSlopePct: dispersion.readSlopePct, greenLateralM: dispersion.greenLateralM },
+      dispersion: {
+        angleDeg: dispersion.angleDeg,
+        pace: dispersion.pace,
+        readSlopePct: dispersion.readSlopePct,
+        greenLateralM: dispersion.greenLateralM,
+      },
       samples: input.samples,
       random: seededUniform(seed),
       secondPuttRiskMax: input.secondPuttRiskMax,
       secondPuttM: 1,
     });
     if (!result.ok) {
-      throw unprocessable(result.message, {
-        "read.slopePct": `too steep to stop a ball at Stimp ${input.read.stimpFt} ft (steepest: ${result.model.maxStoppableSlopePct.toFixed(1)} %)`,
-      });
+      throw cannotStopError(result.message, "read.slopePct", input.read.stimpFt, result.model.maxStoppableSlopePct);
     }
     const { best, requested, curve, secondPuttRiskMax } = result.result;
     const response: MakeProbabilityResponse = {
@@ -172,14 +173,17 @@ export function postMakeProbability(db: Db): RequestHandler {
       misses: requested.misses,
       bestPace: { ...paceResult(best), meetsRiskLimit: best.meetsRiskLimit },
       defaultPace: paceResult(requested),
-      paceCurve: curve.map((c) => ({ rollPastM: c.rollPastM, makeProbability: c.makeProbability, secondPuttOver1mProbability: c.secondPuttOverProbability })),
+      paceCurve: curve.map((c) => ({
+        rollPastM: c.rollPastM,
+        makeProbability: c.makeProbability,
+        secondPuttOver1mProbability: c.secondPuttOverProbability,
+      })),
       dispersion,
       logged: await loggedNear(db, me.id, input.read.distanceM, requested.makeProbability),
       seed,
       samples: input.samples,
       secondPuttRiskMax,
     };
-    res.json(response);
+    return response;
   };
 }
-

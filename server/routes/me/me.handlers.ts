@@ -1,10 +1,9 @@
-import type { RequestHandler } from "express";
 import { eq } from "drizzle-orm";
-import { preferencesSchema, type Me, type SignedOutMe } from "../../../shared/schemas/me";
+import type { Me, Preferences, SignedOutMe } from "../../../shared/schemas/me";
 import type { Db } from "../../db/client";
 import { user as userTable, userPreferences } from "../../db/schema";
 import { currentUser, type SessionUser } from "../../middleware/session";
-import { body } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 
 async function meOf(db: Db, user: SessionUser): Promise<Me> {
   const [[prefs], [row]] = await Promise.all([
@@ -18,25 +17,17 @@ async function meOf(db: Db, user: SessionUser): Promise<Me> {
   };
 }
 
-export function getMe(db: Db): RequestHandler {
-  return async (req, res) => {
-    if (!req.user) {
-      const nobody: SignedOutMe = { user: null, preferences: null };
-      res.json(nobody);
-      return;
-    }
-    res.json(await meOf(db, req.user));
-  };
+export function getMe(db: Db) {
+  return async ({ req }: Ctx): Promise<Me | SignedOutMe> => (req.user ? meOf(db, req.user) : { user: null, preferences: null });
 }
 
-export function updatePreferences(db: Db): RequestHandler {
-  return async (req, res) => {
+export function updatePreferences(db: Db) {
+  return async ({ req, body: { units } }: Ctx<Preferences>): Promise<Me> => {
     const user = currentUser(req);
-    const { units } = body(req, preferencesSchema);
     await db
       .insert(userPreferences)
       .values({ userId: user.id, units })
       .onConflictDoUpdate({ target: userPreferences.userId, set: { units, updatedAt: new Date() } });
-    res.json(await meOf(db, user));
+    return meOf(db, user);
   };
 }

@@ -1,14 +1,23 @@
-import { Router } from "express";
-import { noteInputSchema } from "../../../shared/schemas/notes";
+import { noteInputSchema, playerNoteListSchema, playerNoteSchema } from "../../../shared/schemas/notes";
 import type { AppDeps } from "../../deps";
+import { defineRoute } from "../../lib/route";
 import { requireRole, requireUser } from "../../middleware/session";
-import { validateBody } from "../../middleware/validate";
 import { addNote, listNotes } from "./notes.handlers";
 
 export function notesRoutes({ database }: AppDeps) {
   const db = database.db;
-  const router = Router();
-  router.get("/players/:playerId/notes", requireUser, listNotes(db));
-  router.post("/players/:playerId/notes", requireRole("coach", "admin"), validateBody(noteInputSchema), addNote(db));
-  return router;
+  return [
+    defineRoute({ method: "get", path: "/players/:playerId/notes", use: [requireUser], response: playerNoteListSchema }, listNotes(db)),
+    defineRoute(
+      {
+        method: "post",
+        path: "/players/:playerId/notes",
+        use: [requireRole("coach", "admin")],
+        body: noteInputSchema,
+        response: playerNoteSchema,
+        status: 201,
+      },
+      addNote(db),
+    ),
+  ];
 }

@@ -1,4 +1,4 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, asc, desc, eq, gte, lte, sql, type SQL } from "drizzle-orm";
 import { puttInputSchema, puttListQuerySchema, type Putt } from "../../../shared/schemas/putts";
 import type { Page } from "../../../shared/schemas/sessions";
@@ -8,7 +8,7 @@ import { conflict, notFound } from "../../lib/http-error";
 import { readableBy, targetPlayerId } from "../../lib/player-access";
 import { pathId } from "../../lib/path-params";
 import { currentUser } from "../../middleware/session";
-import { body, query } from "../../middleware/validate";
+import { reply, type Ctx } from "../../lib/route";
 import { readableSession, sessionIdParam } from "../sessions/sessions.handlers";
 
 const puttColumns = {
@@ -25,13 +25,18 @@ const puttColumns = {
 };
 
 type PuttRow = Omit<Putt, "createdAt" | "missSide" | "breakType"> & { createdAt: Date; missSide: string | null; breakType: string | null };
-const toPutt = (r: PuttRow): Putt => ({ ...r, missSide: r.missSide as Putt["missSide"], breakType: r.breakType as Putt["breakType"], createdAt: r.createdAt.toISOString() });
+const toPutt = (r: PuttRow): Putt => ({
+  ...r,
+  missSide: r.missSide as Putt["missSide"],
+  breakType: r.breakType as Putt["breakType"],
+  createdAt: r.createdAt.toISOString(),
+});
 
-export function addPutt(db: Db): RequestHandler {
-  return async (req, res) => {
+export function addPutt(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof puttInputSchema>>) => {
     const me = currentUser(req);
     const sessionId = sessionIdParam(req);
-    const input = body(req, puttInputSchema);
+    const input = body;
     // The hot path of logging on the green: one statement checks the session is mine and stores the putt.
     // A retry with the same clientId (the phone lost the first answer) conflicts and stores nothing.
     const inserted = await db.execute(sql`
@@ -45,22 +50,28 @@ export function addPutt(db: Db): RequestHandler {
     // node-postgres and PGlite both answer { rows }.
     const row = (inserted as unknown as { rows: { id: string }[] }).rows[0];
     if (row) {
-      res.status(201).json({ id: row.id });
-      return;
+      return { id: row.id };
     }
-    const [own] = await db.select({ id: practiceSessions.id }).from(practiceSessions).where(and(eq(practiceSessions.id, sessionId), eq(practiceSessions.playerId, me.id)));
+    const [own] = await db
+      .select({ id: practiceSessions.id })
+      .from(practiceSessions)
+      .where(and(eq(practiceSessions.id, sessionId), eq(practiceSessions.playerId, me.id)));
     if (!own) throw notFound("That session");
     const [existing] = input.clientId
-      ? await db.select({ id: putts.id, sessionId: putts.sessionId }).from(putts).where(and(eq(putts.playerId, me.id), eq(putts.clientId, input.clientId)))
+      ? await db
+          .select({ id: putts.id, sessionId: putts.sessionId })
+          .from(putts)
+          .where(and(eq(putts.playerId, me.id), eq(putts.clientId, input.clientId)))
       : [];
     if (!existing) throw conflict("That putt is being stored; retry.");
     if (existing.sessionId !== sessionId) throw conflict("That clientId belongs to a putt in another session.");
-    res.status(200).json({ id: existing.id });
+    // A retried clientId: stored once, answered 200 (the route's default for a new putt is 201).
+    return reply(200, { id: existing.id });
   };
 }
 
-export function listSessionPutts(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listSessionPutts(db: Db) {
+  return async ({ req }: Ctx) => {
     const viewer = currentUser(req);
     const session = await readableSession(db, viewer, sessionIdParam(req));
     const rows = await db
@@ -69,22 +80,24 @@ export function listSessionPutts(db: Db): RequestHandler {
       .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
       .where(eq(putts.sessionId, session.id))
       .orderBy(asc(putts.createdAt), asc(putts.id));
-    res.json({ items: rows.map(toPutt) });
+    return { items: rows.map(toPutt) };
   };
 }
 
-export function deletePutt(db: Db): RequestHandler {
-  return async (req, res) => {
+export function deletePutt(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const id = pathId(req);
-    const gone = await db.delete(putts).where(and(eq(putts.id, id), eq(putts.playerId, me.id))).returning({ id: putts.id });
+    const gone = await db
+      .delete(putts)
+      .where(and(eq(putts.id, id), eq(putts.playerId, me.id)))
+      .returning({ id: putts.id });
     if (gone.length === 0) throw notFound("That putt");
-    res.status(204).end();
   };
 }
 
-export function getPutt(db: Db): RequestHandler {
-  return async (req, res) => {
+export function getPutt(db: Db) {
+  return async ({ req }: Ctx) => {
     const viewer = currentUser(req);
     const id = pathId(req);
     const [row] = await db
@@ -93,14 +106,14 @@ export function getPutt(db: Db): RequestHandler {
       .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
       .where(and(eq(putts.id, id), readableBy(viewer, putts.playerId)));
     if (!row) throw notFound("That putt");
-    res.json(toPutt(row));
+    return toPutt(row);
   };
 }
 
-export function listPutts(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listPutts(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof puttListQuerySchema>>) => {
     const viewer = currentUser(req);
-    const qs = query(req, puttListQuerySchema);
+    const qs = query;
     const playerId = await targetPlayerId(db, viewer, qs.playerId);
     const where: SQL[] = [eq(putts.playerId, playerId)];
     if (qs.from) where.push(gte(practiceSessions.date, qs.from));
@@ -113,7 +126,12 @@ export function listPutts(db: Db): RequestHandler {
     const cond = and(...where)!;
     const dir = qs.sort.startsWith("-") ? desc : asc;
     const key = qs.sort.replace(/^-/, "");
-    const primary = key === "date" ? [dir(practiceSessions.date), dir(putts.createdAt)] : key === "distance" ? [dir(putts.distanceM)] : [dir(putts.createdAt)];
+    const primary =
+      key === "date"
+        ? [dir(practiceSessions.date), dir(putts.createdAt)]
+        : key === "distance"
+          ? [dir(putts.distanceM)]
+          : [dir(putts.createdAt)];
     const [rows, [total]] = await Promise.all([
       db
         .select(puttColumns)
@@ -123,9 +141,13 @@ export function listPutts(db: Db): RequestHandler {
         .orderBy(...primary, asc(putts.id))
         .limit(qs.pageSize)
         .offset((qs.page - 1) * qs.pageSize),
-      db.select({ n: sql<number>`count(*)::int` }).from(putts).innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId)).where(cond),
+      db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(putts)
+        .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
+        .where(cond),
     ]);
     const page: Page<Putt> = { items: rows.map(toPutt), total: Number(total?.n ?? 0), page: qs.page, pageSize: qs.pageSize };
-    res.json(page);
+    return page;
   };
 }

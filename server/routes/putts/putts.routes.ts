@@ -1,17 +1,22 @@
-import { Router } from "express";
-import { puttInputSchema, puttListQuerySchema } from "../../../shared/schemas/putts";
+import { createdIdSchema } from "../../../shared/schemas/common";
+import { puttInputSchema, puttListQuerySchema, puttListSchema, puttPageSchema, puttSchema } from "../../../shared/schemas/putts";
 import type { AppDeps } from "../../deps";
+import { defineRoute, noContent } from "../../lib/route";
 import { requireUser } from "../../middleware/session";
-import { validateBody, validateQuery } from "../../middleware/validate";
 import { addPutt, deletePutt, getPutt, listPutts, listSessionPutts } from "./putts.handlers";
+
+const user = [requireUser];
 
 export function puttsRoutes({ database }: AppDeps) {
   const db = database.db;
-  const router = Router();
-  router.post("/sessions/:id/putts", requireUser, validateBody(puttInputSchema), addPutt(db));
-  router.get("/sessions/:id/putts", requireUser, listSessionPutts(db));
-  router.get("/putts", requireUser, validateQuery(puttListQuerySchema), listPutts(db));
-  router.get("/putts/:id", requireUser, getPutt(db));
-  router.delete("/putts/:id", requireUser, deletePutt(db));
-  return router;
+  return [
+    defineRoute(
+      { method: "post", path: "/sessions/:id/putts", use: user, body: puttInputSchema, response: createdIdSchema, status: 201 },
+      addPutt(db),
+    ),
+    defineRoute({ method: "get", path: "/sessions/:id/putts", use: user, response: puttListSchema }, listSessionPutts(db)),
+    defineRoute({ method: "get", path: "/putts", use: user, query: puttListQuerySchema, response: puttPageSchema }, listPutts(db)),
+    defineRoute({ method: "get", path: "/putts/:id", use: user, response: puttSchema }, getPutt(db)),
+    defineRoute({ method: "delete", path: "/putts/:id", use: user, response: noContent }, deletePutt(db)),
+  ];
 }

@@ -1,47 +1,64 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, desc, eq } from "drizzle-orm";
 import { answerChart, answerRead, toReadResponse } from "../../../shared/read-answers";
-import { idSchema } from "../../../shared/schemas/common";
-import { chartRequestSchema, readRequestSchema, saveReadSchema, type ReadResponse } from "../../../shared/schemas/reads";
+import type {
+  ChartRequest,
+  ReadRequest,
+  ReadResponse,
+  SaveReadInput,
+  savedReadListSchema,
+  savedReadSchema,
+} from "../../../shared/schemas/reads";
 import type { Db } from "../../db/client";
 import { visibleGreen } from "../../lib/green-access";
 import { greens, savedReads } from "../../db/schema";
 import { httpErrorOf, notFound } from "../../lib/http-error";
 import { currentUser } from "../../middleware/session";
-import { body, parseOrThrow } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
+
+type SavedReadAnswer = z.input<typeof savedReadSchema>;
 
 /** The read in the API's shape (shared with the browser, which builds the same answer offline). */
 export const toResponse = toReadResponse;
 
 /** Solves a read or throws the 422 a golfer can act on ("this ball cannot stop here"). */
-export function solveOrThrow(input: ReturnType<typeof readRequestSchema.parse>): ReadResponse {
+export function solveOrThrow(input: ReadRequest): ReadResponse {
   const answer = answerRead(input);
   if (!answer.ok) throw httpErrorOf(422, answer.error);
   return answer.response;
 }
 
-export const solve: RequestHandler = (req, res) => {
-  res.json(solveOrThrow(body(req, readRequestSchema)));
-};
+export const solve = ({ body }: Ctx<ReadRequest>): ReadResponse => solveOrThrow(body);
 
-export const chart: RequestHandler = (req, res) => {
-  res.json(answerChart(body(req, chartRequestSchema)));
-};
+export const chart = ({ body }: Ctx<ChartRequest>) => answerChart(body);
 
-export function saveRead(db: Db): RequestHandler {
-  return async (req, res) => {
+export function saveRead(db: Db) {
+  return async ({ req, body: input }: Ctx<SaveReadInput>): Promise<SavedReadAnswer> => {
     const me = currentUser(req);
-    const input = body(req, saveReadSchema);
+    let greenName: string | null = null;
     if (input.greenId) {
-      const [green] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, input.greenId), visibleGreen(me.id)));
+      const [green] = await db
+        .select({ name: greens.name })
+        .from(greens)
+        .where(and(eq(greens.id, input.greenId), visibleGreen(me.id)));
       if (!green) throw notFound("That green");
+      greenName = green.name;
     }
     const result = solveOrThrow(input.read);
     const [row] = await db
       .insert(savedReads)
       .values({ userId: me.id, greenId: input.greenId ?? null, label: input.label ?? null, input: input.read, result: summary(result) })
       .returning();
-    res.status(201).json(row);
+    // The stored row carries its owner's id: the answer names only what savedReadSchema describes.
+    return {
+      id: row!.id,
+      label: row!.label,
+      greenId: row!.greenId,
+      greenName,
+      input: row!.input as ReadRequest,
+      result: row!.result as SavedReadAnswer["result"],
+      createdAt: row!.createdAt,
+    };
   };
 }
 
@@ -51,8 +68,8 @@ function summary(r: ReadResponse) {
   return rest;
 }
 
-export function listReads(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listReads(db: Db) {
+  return async ({ req }: Ctx): Promise<z.input<typeof savedReadListSchema>> => {
     const me = currentUser(req);
     const rows = await db
       .select({
@@ -69,16 +86,17 @@ export function listReads(db: Db): RequestHandler {
       .where(eq(savedReads.userId, me.id))
       .orderBy(desc(savedReads.createdAt))
       .limit(200);
-    res.json({ items: rows });
+    return { items: rows.map((r) => ({ ...r, input: r.input as ReadRequest, result: r.result as SavedReadAnswer["result"] })) };
   };
 }
 
-export function deleteRead(db: Db): RequestHandler {
-  return async (req, res) => {
+export function deleteRead(db: Db) {
+  return async ({ req, params: { id } }: Ctx<undefined, undefined, { id: string }>) => {
     const me = currentUser(req);
-    const id = parseOrThrow(idSchema, req.params.id, "id");
-    const gone = await db.delete(savedReads).where(and(eq(savedReads.id, id), eq(savedReads.userId, me.id))).returning({ id: savedReads.id });
+    const gone = await db
+      .delete(savedReads)
+      .where(and(eq(savedReads.id, id), eq(savedReads.userId, me.id)))
+      .returning({ id: savedReads.id });
     if (gone.length === 0) throw notFound("That saved read");
-    res.status(204).end();
   };
 }

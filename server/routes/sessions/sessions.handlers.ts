@@ -1,4 +1,4 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, asc, desc, eq, gte, lte, sql, type SQL } from "drizzle-orm";
 import {
   sessionInputSchema,
@@ -14,7 +14,7 @@ import { visibleGreen } from "../../lib/green-access";
 import { readableBy, targetPlayerId } from "../../lib/player-access";
 import { pathId } from "../../lib/path-params";
 import { currentUser } from "../../middleware/session";
-import { body, query } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 
 /** Putt counts per session, limited by `filter` (the player or the session) so it never scans everyone's putts. */
 const counts = (db: Db, filter: SQL) =>
@@ -71,7 +71,10 @@ export async function readableSession(db: Db, viewer: Parameters<typeof readable
 
 /** greenId must be the player's own green or one shared with a squad of theirs; 400 otherwise. */
 async function checkGreen(db: Db, playerId: string, greenId: string): Promise<void> {
-  const [g] = await db.select({ id: greens.id }).from(greens).where(and(eq(greens.id, greenId), visibleGreen(playerId)));
+  const [g] = await db
+    .select({ id: greens.id })
+    .from(greens)
+    .where(and(eq(greens.id, greenId), visibleGreen(playerId)));
   if (!g) throw badRequest("The request body is not valid.", { greenId: "No green of yours or of your squad has this id" });
 }
 
@@ -86,10 +89,10 @@ async function stimpOn(db: Db, greenId: string, date: string): Promise<number | 
   return r?.stimpFt ?? null;
 }
 
-export function createSession(db: Db): RequestHandler {
-  return async (req, res) => {
+export function createSession(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof sessionInputSchema>>) => {
     const me = currentUser(req);
-    const input = body(req, sessionInputSchema);
+    const input = body;
     if (input.greenId) await checkGreen(db, me.id, input.greenId);
     const stimpFt = input.stimpFt !== undefined ? input.stimpFt : input.greenId ? await stimpOn(db, input.greenId, input.date) : null;
     const [row] = await db
@@ -104,14 +107,14 @@ export function createSession(db: Db): RequestHandler {
         notes: input.notes ?? null,
       })
       .returning({ id: practiceSessions.id });
-    res.status(201).json({ id: row!.id });
+    return { id: row!.id };
   };
 }
 
-export function listSessions(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listSessions(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof sessionListQuerySchema>>) => {
     const viewer = currentUser(req);
-    const qs = query(req, sessionListQuerySchema);
+    const qs = query;
     const playerId = await targetPlayerId(db, viewer, qs.playerId);
     const where: SQL[] = [eq(practiceSessions.playerId, playerId)];
     if (qs.from) where.push(gte(practiceSessions.date, qs.from));
@@ -129,26 +132,36 @@ export function listSessions(db: Db): RequestHandler {
       asc(practiceSessions.id),
     ];
     const [rows, [total]] = await Promise.all([
-      q.where(cond).orderBy(...order).limit(qs.pageSize).offset((qs.page - 1) * qs.pageSize),
-      db.select({ n: sql<number>`count(*)::int` }).from(practiceSessions).where(cond),
+      q
+        .where(cond)
+        .orderBy(...order)
+        .limit(qs.pageSize)
+        .offset((qs.page - 1) * qs.pageSize),
+      db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(practiceSessions)
+        .where(cond),
     ]);
     const page: Page<SessionItem> = { items: rows.map(toItem), total: Number(total?.n ?? 0), page: qs.page, pageSize: qs.pageSize };
-    res.json(page);
+    return page;
   };
 }
 
-export function getSession(db: Db): RequestHandler {
-  return async (req, res) => {
-    res.json(await readableSession(db, currentUser(req), sessionIdParam(req)));
+export function getSession(db: Db) {
+  return async ({ req }: Ctx) => {
+    return await readableSession(db, currentUser(req), sessionIdParam(req));
   };
 }
 
-export function updateSession(db: Db): RequestHandler {
-  return async (req, res) => {
+export function updateSession(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof sessionPatchSchema>>) => {
     const me = currentUser(req);
     const id = sessionIdParam(req);
-    const patch = body(req, sessionPatchSchema);
-    const [own] = await db.select({ id: practiceSessions.id }).from(practiceSessions).where(and(eq(practiceSessions.id, id), eq(practiceSessions.playerId, me.id)));
+    const patch = body;
+    const [own] = await db
+      .select({ id: practiceSessions.id })
+      .from(practiceSessions)
+      .where(and(eq(practiceSessions.id, id), eq(practiceSessions.playerId, me.id)));
     if (!own) throw notFound("That session");
     if (patch.greenId) await checkGreen(db, me.id, patch.greenId);
     const set: Partial<typeof practiceSessions.$inferInsert> = {};
@@ -158,19 +171,21 @@ export function updateSession(db: Db): RequestHandler {
     if (patch.conditions !== undefined) set.conditions = patch.conditions;
     if (patch.tags !== undefined) set.tags = patch.tags;
     if (patch.notes !== undefined) set.notes = patch.notes;
-    await db.update(practiceSessions).set(set).where(and(eq(practiceSessions.id, id), eq(practiceSessions.playerId, me.id)));
-    res.json(await readableSession(db, me, id));
+    await db
+      .update(practiceSessions)
+      .set(set)
+      .where(and(eq(practiceSessions.id, id), eq(practiceSessions.playerId, me.id)));
+    return await readableSession(db, me, id);
   };
 }
 
-export function deleteSession(db: Db): RequestHandler {
-  return async (req, res) => {
+export function deleteSession(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const gone = await db
       .delete(practiceSessions)
       .where(and(eq(practiceSessions.id, sessionIdParam(req)), eq(practiceSessions.playerId, me.id)))
       .returning({ id: practiceSessions.id });
     if (gone.length === 0) throw notFound("That session");
-    res.status(204).end();
   };
 }

@@ -1,4 +1,4 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, count, eq, gt, inArray } from "drizzle-orm";
 import { idSchema } from "../../../shared/schemas/common";
 import { squadInputSchema, squadPatchSchema, userIdSchema, type Squad, type SquadMembership } from "../../../shared/schemas/squads";
@@ -6,7 +6,8 @@ import type { Db } from "../../db/client";
 import { invitations, ladderAssignments, squadMembers, squads, user } from "../../db/schema";
 import { notFound } from "../../lib/http-error";
 import { currentUser } from "../../middleware/session";
-import { body, parseOrThrow } from "../../middleware/validate";
+import { parseOrThrow } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 import { findOwnSquad, ownedBy } from "./squad-access";
 
 type SquadRow = typeof squads.$inferSelect;
@@ -54,27 +55,26 @@ async function squadViews(db: Db, rows: SquadRow[]): Promise<Squad[]> {
   });
 }
 
-export function createSquad(db: Db): RequestHandler {
-  return async (req, res) => {
+export function createSquad(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof squadInputSchema>>) => {
     const me = currentUser(req);
-    const input = body(req, squadInputSchema);
+    const input = body;
     const [row] = await db
       .insert(squads)
       .values({ coachId: me.id, name: input.name, description: input.description ?? null })
       .returning();
     const [view] = await squadViews(db, [row!]);
-    res.status(201).json(view);
+    return view!;
   };
 }
 
 /** A coach (or admin) gets the squads they run; a player gets the squads they belong to. */
-export function listSquads(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listSquads(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     if (me.role !== "player") {
       const rows = await db.select().from(squads).where(ownedBy(squads.coachId, me)).orderBy(squads.createdAt, squads.id);
-      res.json({ squads: await squadViews(db, rows) });
-      return;
+      return { squads: await squadViews(db, rows) };
     }
     const rows = await db
       .select({ squad: squads, coachName: user.name, joinedAt: squadMembers.joinedAt })
@@ -101,22 +101,22 @@ export function listSquads(db: Db): RequestHandler {
       joinedAt: r.joinedAt.toISOString(),
       counts: { members: sizeOf.get(r.squad.id) ?? 0 },
     }));
-    res.json({ squads: memberships });
+    return { squads: memberships };
   };
 }
 
-export function getSquad(db: Db): RequestHandler {
-  return async (req, res) => {
+export function getSquad(db: Db) {
+  return async ({ req }: Ctx) => {
     const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
     const [view] = await squadViews(db, [squad]);
-    res.json(view);
+    return view!;
   };
 }
 
-export function updateSquad(db: Db): RequestHandler {
-  return async (req, res) => {
+export function updateSquad(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof squadPatchSchema>>) => {
     const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
-    const patch = body(req, squadPatchSchema);
+    const patch = body;
     const [row] = await db
       .update(squads)
       .set({
@@ -126,21 +126,20 @@ export function updateSquad(db: Db): RequestHandler {
       .where(eq(squads.id, squad.id))
       .returning();
     const [view] = await squadViews(db, [row!]);
-    res.json(view);
+    return view!;
   };
 }
 
 /** Members and invitations go with the squad; assignments stay with their players (squad left empty). */
-export function deleteSquad(db: Db): RequestHandler {
-  return async (req, res) => {
+export function deleteSquad(db: Db) {
+  return async ({ req }: Ctx) => {
     const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
     await db.delete(squads).where(eq(squads.id, squad.id));
-    res.status(204).end();
   };
 }
 
-export function removeMember(db: Db): RequestHandler {
-  return async (req, res) => {
+export function removeMember(db: Db) {
+  return async ({ req }: Ctx) => {
     const squad = await findOwnSquad(db, currentUser(req), parseOrThrow(idSchema, req.params.id, "id"));
     const playerId = parseOrThrow(userIdSchema, req.params.playerId, "playerId");
     const gone = await db
@@ -148,12 +147,11 @@ export function removeMember(db: Db): RequestHandler {
       .where(and(eq(squadMembers.squadId, squad.id), eq(squadMembers.playerId, playerId)))
       .returning({ playerId: squadMembers.playerId });
     if (gone.length === 0) throw notFound("That member");
-    res.status(204).end();
   };
 }
 
-export function leaveSquad(db: Db): RequestHandler {
-  return async (req, res) => {
+export function leaveSquad(db: Db) {
+  return async ({ req }: Ctx) => {
     const me = currentUser(req);
     const squadId = parseOrThrow(idSchema, req.params.id, "id");
     const gone = await db
@@ -161,6 +159,5 @@ export function leaveSquad(db: Db): RequestHandler {
       .where(and(eq(squadMembers.squadId, squadId), eq(squadMembers.playerId, me.id)))
       .returning({ playerId: squadMembers.playerId });
     if (gone.length === 0) throw notFound("Squad membership");
-    res.status(204).end();
   };
 }

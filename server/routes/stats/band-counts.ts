@@ -91,5 +91,10 @@ export async function weeklyCounts(db: Db, filter: CountsFilter, edgesM: readonl
         from cells window win as (partition by b order by w range between ${sql.raw(`'${(Math.trunc(rollingWeeks) - 1) * 7} days'::interval`)} preceding and current row)
         order by w, b`
     : sql`${base} select to_char(w, 'YYYY-MM-DD') as week, b as band, n as attempts, m as made from cells order by w, b`;
-  return rowsOf<WeekCount>(await db.execute(q)).map((r) => ({ week: String(r.week), band: Number(r.band), attempts: Number(r.attempts), made: Number(r.made) }));
+  return rowsOf<WeekCount>(await db.execute(q)).map((r) => ({
+    week: String(r.week),
+    band: Number(r.band),
+    attempts: Number(r.attempts),
+    made: Number(r.made),
+  }));
 }

@@ -1,9 +1,26 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
-import { compareQuerySchema, makeRatesQuerySchema, missesQuerySchema, sessionStatsQuerySchema, trendQuerySchema, type BandRate, type MakeRates, type MissBand, type Misses } from "../../../shared/schemas/stats";
+import {
+  compareQuerySchema,
+  makeRatesQuerySchema,
+  missesQuerySchema,
+  sessionStatsQuerySchema,
+  trendQuerySchema,
+  type BandRate,
+  type MakeRates,
+  type MissBand,
+  type Misses,
+} from "../../../shared/schemas/stats";
 import { bandsFromEdges, DEFAULT_BAND_EDGES_M, type Band } from "../../../shared/stats/bands";
 import { BASELINE_INTERPOLATION, TOUR_EXPECTED_PUTTS, TOUR_ONE_PUTT_RATE, type BaselineSeries } from "../../../shared/stats/baseline";
-import { ASSUMED_LEAVE_FRACTION, ASSUMED_LEAVE_MIN_M, LONG_PUTT_M, summarisePutts, THREE_PUTT_RANGE_M, type PracticePutt } from "../../../shared/stats/strokes-gained";
+import {
+  ASSUMED_LEAVE_FRACTION,
+  ASSUMED_LEAVE_MIN_M,
+  LONG_PUTT_M,
+  summarisePutts,
+  THREE_PUTT_RANGE_M,
+  type PracticePutt,
+} from "../../../shared/stats/strokes-gained";
 import { twoProportionZTest } from "../../../shared/stats/two-proportion";
 import { rateOf } from "../../../shared/stats/wilson";
 import { METRES_PER_FOOT } from "../../../shared/units";
@@ -11,7 +28,7 @@ import type { Db } from "../../db/client";
 import { greens, practiceSessions, putts, userPreferences } from "../../db/schema";
 import { targetPlayerId } from "../../lib/player-access";
 import { currentUser } from "../../middleware/session";
-import { query } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 import { bandCounts, periodCounts, weeklyCounts } from "./band-counts";
 
 /** The bands asked for, or the defaults for the viewer's unit preference. */
@@ -23,33 +40,47 @@ async function edgesFor(db: Db, viewerId: string, asked: number[] | undefined): 
 
 const band = (b: Band) => ({ fromM: b.fromM, toM: b.toM });
 
-export function makeRates(db: Db): RequestHandler {
-  return async (req, res) => {
+export function makeRates(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof makeRatesQuerySchema>>) => {
     const viewer = currentUser(req);
-    const qs = query(req, makeRatesQuerySchema);
+    const qs = query;
     const playerId = await targetPlayerId(db, viewer, qs.playerId);
     const edges = await edgesFor(db, viewer.id, qs.bands);
-    const counts = new Map((await bandCounts(db, { playerId, from: qs.from, to: qs.to, source: qs.source }, edges)).map((c) => [c.band, c]));
-    const bands: BandRate[] = bandsFromEdges(edges).map((b, i) => ({ ...band(b), ...rateOf(counts.get(i)?.made ?? 0, counts.get(i)?.attempts ?? 0) }));
+    const counts = new Map(
+      (await bandCounts(db, { playerId, from: qs.from, to: qs.to, source: qs.source }, edges)).map((c) => [c.band, c]),
+    );
+    const bands: BandRate[] = bandsFromEdges(edges).map((b, i) => ({
+      ...band(b),
+      ...rateOf(counts.get(i)?.made ?? 0, counts.get(i)?.attempts ?? 0),
+    }));
     const out: MakeRates = { playerId, from: qs.from ?? null, to: qs.to ?? null, source: qs.source, bands };
-    res.json(out);
+    return out;
   };
 }
 
-export function trend(db: Db): RequestHandler {
-  return async (req, res) => {
+export function trend(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof trendQuerySchema>>) => {
     const viewer = currentUser(req);
-    const qs = query(req, trendQuerySchema);
+    const qs = query;
     const playerId = await targetPlayerId(db, viewer, qs.playerId);
     const edges = await edgesFor(db, viewer.id, qs.bands);
-    const rows = await weeklyCounts(db, { playerId, from: qs.from, to: qs.to, source: qs.source }, edges, qs.window === "rolling" ? qs.windowWeeks : undefined);
+    const rows = await weeklyCounts(
+      db,
+      { playerId, from: qs.from, to: qs.to, source: qs.source },
+      edges,
+      qs.window === "rolling" ? qs.windowWeeks : undefined,
+    );
     const bands = bandsFromEdges(edges);
     const weeks = new Map<string, ReturnType<typeof rateOf>[]>();
     for (const r of rows) {
-      if (!weeks.has(r.week)) weeks.set(r.week, bands.map(() => rateOf(0, 0)));
+      if (!weeks.has(r.week))
+        weeks.set(
+          r.week,
+          bands.map(() => rateOf(0, 0)),
+        );
       weeks.get(r.week)![r.band] = rateOf(r.made, r.attempts);
     }
-    res.json({
+    return {
       playerId,
       from: qs.from ?? null,
       to: qs.to ?? null,
@@ -58,26 +89,30 @@ export function trend(db: Db): RequestHandler {
       windowWeeks: qs.window === "rolling" ? qs.windowWeeks : 1,
       bands: bands.map(band),
       weeks: [...weeks].map(([weekStart, cells]) => ({ weekStart, bands: cells })),
-    });
+    };
   };
 }
 
-export function compare(db: Db): RequestHandler {
-  return async (req, res) => {
+export function compare(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof compareQuerySchema>>) => {
     const viewer = currentUser(req);
-    const qs = query(req, compareQuerySchema);
+    const qs = query;
     const playerId = await targetPlayerId(db, viewer, qs.playerId);
     const edges = await edgesFor(db, viewer.id, qs.bands);
     const a = { from: qs.aFrom, to: qs.aTo };
     const b = { from: qs.bFrom, to: qs.bTo };
     const rows = new Map((await periodCounts(db, { playerId, source: qs.source, a, b }, edges)).map((r) => [r.band, r]));
-    const side = (made: number, n: number, mb: number, nb: number) => ({ a: rateOf(made, n), b: rateOf(mb, nb), ...twoProportionZTest(made, n, mb, nb) });
+    const side = (made: number, n: number, mb: number, nb: number) => ({
+      a: rateOf(made, n),
+      b: rateOf(mb, nb),
+      ...twoProportionZTest(made, n, mb, nb),
+    });
     const bands = bandsFromEdges(edges).map((bd, i) => {
       const r = rows.get(i);
       return { ...band(bd), ...side(r?.aMade ?? 0, r?.aAttempts ?? 0, r?.bMade ?? 0, r?.bAttempts ?? 0) };
     });
     const sum = (k: "aMade" | "aAttempts" | "bMade" | "bAttempts") => [...rows.values()].reduce((s, r) => s + r[k], 0);
-    res.json({
+    return {
       playerId,
       source: qs.source,
       a,
@@ -86,7 +121,7 @@ export function compare(db: Db): RequestHandler {
       overlap: a.from <= b.to && b.from <= a.to,
       bands,
       overall: side(sum("aMade"), sum("aAttempts"), sum("bMade"), sum("bAttempts")),
-    });
+    };
   };
 }
 
@@ -97,24 +132,25 @@ const series = (s: BaselineSeries) => ({
   points: s.points.map((p) => ({ distanceFt: p.distanceFt, distanceM: p.distanceFt * METRES_PER_FOOT, value: p.value })),
 });
 
-export const baseline: RequestHandler = (_req, res) => {
-  res.json({
+export const baseline = () => {
+  return {
     onePuttRate: series(TOUR_ONE_PUTT_RATE),
     expectedPutts: series(TOUR_EXPECTED_PUTTS),
     interpolation: BASELINE_INTERPOLATION,
     strokesGained: {
-      definition: "SG = baseline expected putts from the putt's distance − putts taken; a holed putt took 1, a miss 1 + expected putts from its leave (M. Broadie, Interfaces 42(2), 2012).",
+      definition:
+        "SG = baseline expected putts from the putt's distance − putts taken; a holed putt took 1, a miss 1 + expected putts from its leave (M. Broadie, Interfaces 42(2), 2012).",
       unknownLeave: `A miss without a recorded leave is assumed to finish max(${ASSUMED_LEAVE_MIN_M} m, ${ASSUMED_LEAVE_FRACTION * 100} % of its length) away.`,
       longPuttM: LONG_PUTT_M,
       threePuttRangeM: THREE_PUTT_RANGE_M,
     },
-  });
+  };
 };
 
-export function sessionStats(db: Db): RequestHandler {
-  return async (req, res) => {
+export function sessionStats(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof sessionStatsQuerySchema>>) => {
     const viewer = currentUser(req);
-    const qs = query(req, sessionStatsQuerySchema);
+    const qs = query;
     const playerId = await targetPlayerId(db, viewer, qs.playerId);
     const where: SQL[] = [eq(practiceSessions.playerId, playerId)];
     if (qs.from) where.push(gte(practiceSessions.date, qs.from));
@@ -129,7 +165,10 @@ export function sessionStats(db: Db): RequestHandler {
         .orderBy(desc(practiceSessions.date), desc(practiceSessions.createdAt), asc(practiceSessions.id))
         .limit(qs.pageSize)
         .offset((qs.page - 1) * qs.pageSize),
-      db.select({ n: sql<number>`count(*)::int` }).from(practiceSessions).where(cond),
+      db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(practiceSessions)
+        .where(cond),
     ]);
     const ids = sessions.map((s) => s.id);
     const byId = new Map<string, PracticePutt[]>(ids.map((id) => [id, []]));
@@ -140,13 +179,19 @@ export function sessionStats(db: Db): RequestHandler {
         .where(and(eq(putts.playerId, playerId), inArray(putts.sessionId, ids)));
       for (const r of rows) byId.get(r.sessionId)!.push(r);
     }
-    res.json({
+    return {
       playerId,
-      items: sessions.map((s) => ({ sessionId: s.id, date: s.date, greenName: s.greenName, stimpFt: s.stimpFt, ...summarisePutts(byId.get(s.id)!) })),
+      items: sessions.map((s) => ({
+        sessionId: s.id,
+        date: s.date,
+        greenName: s.greenName,
+        stimpFt: s.stimpFt,
+        ...summarisePutts(byId.get(s.id)!),
+      })),
       total: Number(total?.n ?? 0),
       page: qs.page,
       pageSize: qs.pageSize,
-    });
+    };
   };
 }
 
@@ -154,10 +199,10 @@ export function sessionStats(db: Db): RequestHandler {
  * The pattern of a player's practice misses per band (left/right, short/long) and the strokes gained or
  * lost in each band against the tour baseline: where the strokes go.
  */
-export function misses(db: Db): RequestHandler {
-  return async (req, res) => {
+export function misses(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof missesQuerySchema>>) => {
     const viewer = currentUser(req);
-    const qs = query(req, missesQuerySchema);
+    const qs = query;
     const playerId = await targetPlayerId(db, viewer, qs.playerId);
     const edges = await edgesFor(db, viewer.id, qs.bands);
     const where: SQL[] = [eq(putts.playerId, playerId)];
@@ -170,7 +215,18 @@ export function misses(db: Db): RequestHandler {
       .where(and(...where));
     const bands = bandsFromEdges(edges);
     const groups: PracticePutt[][] = bands.map(() => []);
-    const out: MissBand[] = bands.map((b) => ({ ...band(b), attempts: 0, made: 0, missed: 0, left: 0, right: 0, short: 0, long: 0, strokesGained: 0, leavesAssumed: 0 }));
+    const out: MissBand[] = bands.map((b) => ({
+      ...band(b),
+      attempts: 0,
+      made: 0,
+      missed: 0,
+      left: 0,
+      right: 0,
+      short: 0,
+      long: 0,
+      strokesGained: 0,
+      leavesAssumed: 0,
+    }));
     for (const r of rows) {
       // The band holds its lower edge and excludes its upper one; the last is open-ended (as width_bucket does).
       const i = bands.findIndex((b) => r.distanceM >= b.fromM && (b.toM === null || r.distanceM < b.toM));
@@ -189,6 +245,6 @@ export function misses(db: Db): RequestHandler {
       Object.assign(out[i]!, { attempts: v.putts, made: v.holed, strokesGained: v.strokesGained, leavesAssumed: v.leavesAssumed });
     });
     const answer: Misses = { playerId, from: qs.from ?? null, to: qs.to ?? null, bands: out };
-    res.json(answer);
+    return answer;
   };
 }

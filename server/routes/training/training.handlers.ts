@@ -1,4 +1,4 @@
-import type { RequestHandler } from "express";
+import type { z } from "zod";
 import { and, desc, eq, sql } from "drizzle-orm";
 import {
   createAttemptSchema,
@@ -13,7 +13,7 @@ import { trainingAttempts } from "../../db/schema";
 import { HttpError, unprocessable } from "../../lib/http-error";
 import { ERROR_CODES } from "../../../shared/errors";
 import { currentUser } from "../../middleware/session";
-import { body, query } from "../../middleware/validate";
+import type { Ctx } from "../../lib/route";
 
 type Row = typeof trainingAttempts.$inferSelect;
 
@@ -39,10 +39,10 @@ export const ALREADY_SCORED_REASON = "already-scored";
  * refused with a 409 and nothing is stored. The player's row is locked for the check, so two requests at once
  * cannot both pass it.
  */
-export function createAttempt(db: Db): RequestHandler {
-  return async (req, res) => {
+export function createAttempt(db: Db) {
+  return async ({ req, body }: Ctx<z.infer<typeof createAttemptSchema>>) => {
     const me = currentUser(req);
-    const input = body(req, createAttemptSchema);
+    const input = body;
     const result = evaluateAttempt(input.putt, input.guess);
     if (!result.ok) throw unprocessable(result.message, { "putt.slopePct": "too steep to stop a ball at this Stimp" });
     const row = await db.transaction(async (tx) => {
@@ -89,20 +89,20 @@ export function createAttempt(db: Db): RequestHandler {
         restM: y.restM,
       },
     };
-    res.status(201).json(response);
+    return response;
   };
 }
 
-export function listAttempts(db: Db): RequestHandler {
-  return async (req, res) => {
+export function listAttempts(db: Db) {
+  return async ({ req, query }: Ctx<unknown, z.infer<typeof listAttemptsQuerySchema>>) => {
     const me = currentUser(req);
-    const { limit } = query(req, listAttemptsQuerySchema);
+    const { limit } = query;
     const rows = await db
       .select()
       .from(trainingAttempts)
       .where(eq(trainingAttempts.userId, me.id))
       .orderBy(desc(trainingAttempts.createdAt), desc(trainingAttempts.id))
       .limit(limit);
-    res.json({ items: rows.map(toAttempt) });
+    return { items: rows.map(toAttempt) };
   };
 }

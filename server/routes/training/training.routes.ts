@@ -1,14 +1,31 @@
-import { Router } from "express";
-import { createAttemptSchema, listAttemptsQuerySchema } from "../../../shared/schemas/training";
+import {
+  attemptListSchema,
+  createAttemptResponseSchema,
+  createAttemptSchema,
+  listAttemptsQuerySchema,
+} from "../../../shared/schemas/training";
 import type { AppDeps } from "../../deps";
+import { defineRoute } from "../../lib/route";
 import { requireUser } from "../../middleware/session";
-import { validateBody, validateQuery } from "../../middleware/validate";
 import { createAttempt, listAttempts } from "./training.handlers";
 
 /** Read training history: anyone may train in the browser; keeping attempts needs an account. */
 export function trainingRoutes({ database }: AppDeps) {
-  const router = Router();
-  router.post("/training/attempts", requireUser, validateBody(createAttemptSchema), createAttempt(database.db));
-  router.get("/training/attempts", requireUser, validateQuery(listAttemptsQuerySchema), listAttempts(database.db));
-  return router;
+  return [
+    defineRoute(
+      {
+        method: "post",
+        path: "/training/attempts",
+        use: [requireUser],
+        body: createAttemptSchema,
+        response: createAttemptResponseSchema,
+        status: 201,
+      },
+      createAttempt(database.db),
+    ),
+    defineRoute(
+      { method: "get", path: "/training/attempts", use: [requireUser], query: listAttemptsQuerySchema, response: attemptListSchema },
+      listAttempts(database.db),
+    ),
+  ];
 }

@@ -36,14 +36,19 @@ export function AppShell() {
       <div className="print:hidden">
         <VerifyEmailNotice />
       </div>
-      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 focus:outline-none sm:px-6 sm:py-12 print:max-w-none print:p-0">
+      <main
+        id="main"
+        tabIndex={-1}
+        className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 focus:outline-none sm:px-6 sm:py-12 print:max-w-none print:p-0"
+      >
         <SectionNav />
         <Outlet />
       </main>
       <footer className="border-t border-ink-900/10 print:hidden">
         <div className="mx-auto flex max-w-6xl flex-col gap-1 px-4 py-6 text-sm text-ink-500 sm:px-6">
           <p>
-            <span className="font-semibold text-ink-700">Borrowline</span> — reads for the putt in front of you, practice that shows where the strokes go.
+            <span className="font-semibold text-ink-700">Borrowline</span> — reads for the putt in front of you, practice that shows where
+            the strokes go.
           </p>
           <p>A read assumes an even slope and a true-rolling ball. Grain, wind and contours are yours to judge.</p>
           <DevMailLink />

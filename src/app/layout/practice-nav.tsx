@@ -5,7 +5,7 @@ import { practiceNavItems } from "../nav";
 /** Tabs across the practice log's pages: sessions, rounds on the course, greens, make rates. */
 export function PracticeNav() {
   return (
-    <nav aria-label="Practice log" className="mb-6 -mt-2 print:hidden sm:-mt-4">
+    <nav aria-label="Practice log" className="-mt-2 mb-6 sm:-mt-4 print:hidden">
       <ul className="grid grid-cols-4 gap-1 rounded-xl bg-ink-900/5 p-1 sm:inline-grid">
         {practiceNavItems.map((item) => (
           <li key={item.to}>

@@ -14,7 +14,7 @@ export function SectionNav() {
   // The most specific tab wins (/ladders/mine is "My ladders", not "Ladders").
   const active = items.filter((i) => isNavItemActive(pathname, i)).sort((a, b) => b.to.length - a.to.length)[0];
   return (
-    <nav aria-label={section.label} className="mb-6 -mt-2 overflow-x-auto print:hidden sm:-mt-4">
+    <nav aria-label={section.label} className="-mt-2 mb-6 overflow-x-auto sm:-mt-4 print:hidden">
       <ul className="inline-flex gap-1 rounded-xl bg-ink-900/5 p-1">
         {items.map((item) => (
           <li key={item.to}>

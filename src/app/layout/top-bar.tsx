@@ -17,7 +17,9 @@ function useVisibleNav() {
 const desktopLink = ({ isActive }: { isActive: boolean }) =>
   clsx(
     "flex min-h-11 items-center rounded-lg px-3 text-sm font-medium transition-colors",
-    isActive ? "bg-sand-50/10 text-sand-50 shadow-[inset_0_-2px_0_var(--color-coral-400)]" : "text-sand-200 hover:bg-sand-50/5 hover:text-sand-50",
+    isActive
+      ? "bg-sand-50/10 text-sand-50 shadow-[inset_0_-2px_0_var(--color-coral-400)]"
+      : "text-sand-200 hover:bg-sand-50/5 hover:text-sand-50",
   );
 
 const mobileLink = ({ isActive }: { isActive: boolean }) =>
@@ -49,7 +51,7 @@ export function TopBar() {
   }, [open]);
 
   return (
-    <header className="sticky top-0 z-40 bg-ink-900 print:hidden text-sand-50 shadow-[0_1px_0_rgb(0_0_0/0.2)]">
+    <header className="sticky top-0 z-40 bg-ink-900 text-sand-50 shadow-[0_1px_0_rgb(0_0_0/0.2)] print:hidden">
       <div className="mx-auto flex h-16 max-w-6xl items-center gap-4 px-4 sm:px-6">
         <Link to={paths.home.href()} className="flex min-h-11 items-center gap-2.5 rounded-lg pr-2 text-xl font-semibold tracking-tight">
           <LogoMark />
@@ -60,7 +62,11 @@ export function TopBar() {
           <ul className="flex items-center gap-1">
             {items.map((item) => (
               <li key={item.to}>
-                <Link to={item.to} aria-current={isNavItemActive(pathname, item) ? "page" : undefined} className={desktopLink({ isActive: isNavItemActive(pathname, item) })}>
+                <Link
+                  to={item.to}
+                  aria-current={isNavItemActive(pathname, item) ? "page" : undefined}
+                  className={desktopLink({ isActive: isNavItemActive(pathname, item) })}
+                >
                   {item.label}
                 </Link>
               </li>
@@ -96,7 +102,12 @@ export function TopBar() {
           <ul className="flex flex-col gap-1">
             {items.map((item) => (
               <li key={item.to}>
-                <Link to={item.to} aria-current={isNavItemActive(pathname, item) ? "page" : undefined} className={mobileLink({ isActive: isNavItemActive(pathname, item) })} onClick={() => setOpen(false)}>
+                <Link
+                  to={item.to}
+                  aria-current={isNavItemActive(pathname, item) ? "page" : undefined}
+                  className={mobileLink({ isActive: isNavItemActive(pathname, item) })}
+                  onClick={() => setOpen(false)}
+                >
                   {item.label}
                 </Link>
               </li>

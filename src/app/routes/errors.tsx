@@ -14,7 +14,11 @@ const notFound: Described = {
 function describe(error: unknown): Described {
   if (isRouteErrorResponse(error)) {
     if (error.status === 404) return notFound;
-    return { status: error.status, title: "Something went wrong", message: typeof error.data === "string" && error.data ? error.data : error.statusText || "The page could not be shown." };
+    return {
+      status: error.status,
+      title: "Something went wrong",
+      message: typeof error.data === "string" && error.data ? error.data : error.statusText || "The page could not be shown.",
+    };
   }
   if (isApiError(error)) {
     if (error.status === 404) return notFound;
@@ -22,7 +26,10 @@ function describe(error: unknown): Described {
     return { status: error.status || undefined, title: "Something went wrong", message: error.message };
   }
   if (error instanceof Error && /dynamically imported module|Importing a module script failed|Failed to fetch/i.test(error.message)) {
-    return { title: "Borrowline has been updated", message: "Part of the page could not be loaded, probably because a newer version is out. Reload to get it." };
+    return {
+      title: "Borrowline has been updated",
+      message: "Part of the page could not be loaded, probably because a newer version is out. Reload to get it.",
+    };
   }
   return {
     title: "Something went wrong",
@@ -54,7 +61,9 @@ function ErrorView({ d }: { d: Described }) {
           </Button>
         )}
       </div>
-      {d.detail ? <pre className="mt-4 max-h-72 w-full overflow-auto rounded-xl bg-ink-900 p-4 text-xs text-sand-100">{d.detail}</pre> : null}
+      {d.detail ? (
+        <pre className="mt-4 max-h-72 w-full overflow-auto rounded-xl bg-ink-900 p-4 text-xs text-sand-100">{d.detail}</pre>
+      ) : null}
     </section>
   );
 }

@@ -66,7 +66,9 @@ function Welcome() {
 function Greeting() {
   const me = useMe();
   if (!me.data) return <p className="text-sm font-semibold tracking-wide text-coral-300 uppercase">Putting and green reading</p>;
-  return <p className="text-sm font-semibold tracking-wide text-coral-300 uppercase">{greeting(me.data.user.name, me.data.user.createdAt)}</p>;
+  return (
+    <p className="text-sm font-semibold tracking-wide text-coral-300 uppercase">{greeting(me.data.user.name, me.data.user.createdAt)}</p>
+  );
 }
 
 export function HomeRoute() {
@@ -81,8 +83,8 @@ export function HomeRoute() {
               Know where to start the ball, and how firmly to roll it.
             </h1>
             <p className="max-w-xl text-lg leading-relaxed text-sand-200">
-              Most strokes on the green go to a wrong read, not a bad stroke. Tell Borrowline the putt in front of you and it works out the break
-              for the pace you choose — because a ball that is dying at the hole curves far more than one still rolling firmly.
+              Most strokes on the green go to a wrong read, not a bad stroke. Tell Borrowline the putt in front of you and it works out the
+              break for the pace you choose — because a ball that is dying at the hole curves far more than one still rolling firmly.
             </p>
             <Welcome />
           </div>

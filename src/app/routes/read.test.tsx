@@ -25,7 +25,9 @@ const solved = {
   aimOffsetM: -0.274,
   entrySpeedMps: 0.67,
   rollPastM: 0.45,
-  flatPuttLengthM: 2.97, aimGiven: "offset", aimNote: null,
+  flatPuttLengthM: 2.97,
+  aimGiven: "offset",
+  aimNote: null,
   breaks: "left-to-right",
   capture: { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.64, marginMps: 0.96 },
   path: [

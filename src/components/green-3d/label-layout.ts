@@ -35,7 +35,8 @@ export function placeLabels(labels: readonly LabelBox[], view: { width: number; 
     const stepX = rect.w / 2 + g;
     const tries: [number, number][] = [[0, 0]];
     for (let k = 1; k <= 4; k++) tries.push([0, -k * stepY], [0, k * stepY]);
-    for (const sx of [-1, 1]) for (let k = 1; k <= 3; k++) tries.push([sx * k * stepX, 0], [sx * k * stepX, -stepY], [sx * k * stepX, stepY]);
+    for (const sx of [-1, 1])
+      for (let k = 1; k <= 3; k++) tries.push([sx * k * stepX, 0], [sx * k * stepX, -stepY], [sx * k * stepX, stepY]);
     let chosen: Placement = null;
     for (const [tx, ty] of tries) {
       const r = { x: rect.x + inX + tx, y: rect.y + inY + ty, w: rect.w, h: rect.h };

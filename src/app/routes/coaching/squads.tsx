@@ -12,7 +12,11 @@ export function SquadsRoute() {
         {(me) =>
           me.user.role === "player" ? (
             <>
-              <PageHeader eyebrow="Practice" title="My squads" description="The coaches you work with. They can give you ladders and see your practice." />
+              <PageHeader
+                eyebrow="Practice"
+                title="My squads"
+                description="The coaches you work with. They can give you ladders and see your practice."
+              />
               <div className="max-w-2xl">
                 <MySquads />
               </div>

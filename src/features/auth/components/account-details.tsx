@@ -30,7 +30,13 @@ export function AccountDetails({ me }: { me: Me }) {
           <div>
             <dt className="text-sm text-ink-500">E-mail</dt>
             <dd className="text-lg font-medium break-all">{me.user.email}</dd>
-            <dd className="mt-1 text-sm">{me.user.emailVerified ? <span className="text-ok-600">Confirmed</span> : <span className="text-warn-600">Not confirmed yet</span>}</dd>
+            <dd className="mt-1 text-sm">
+              {me.user.emailVerified ? (
+                <span className="text-ok-600">Confirmed</span>
+              ) : (
+                <span className="text-warn-600">Not confirmed yet</span>
+              )}
+            </dd>
           </div>
           <div>
             <dt className="text-sm text-ink-500">Account type</dt>

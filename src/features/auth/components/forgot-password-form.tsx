@@ -42,8 +42,8 @@ export function ForgotPasswordForm() {
   if (sentTo) {
     return (
       <Alert tone="success" title="Check your inbox">
-        If an account uses <strong className="font-semibold break-all">{sentTo}</strong>, a link to choose a new password is on its way. It works
-        once and expires after a while.
+        If an account uses <strong className="font-semibold break-all">{sentTo}</strong>, a link to choose a new password is on its way. It
+        works once and expires after a while.
       </Alert>
     );
   }

@@ -83,7 +83,13 @@ export function ResetPasswordForm({ token, linkError }: ResetPasswordFormProps) 
         error={errors.newPassword?.message}
         {...register("newPassword")}
       />
-      <InputField label="New password again" type="password" autoComplete="new-password" error={errors.confirmPassword?.message} {...register("confirmPassword")} />
+      <InputField
+        label="New password again"
+        type="password"
+        autoComplete="new-password"
+        error={errors.confirmPassword?.message}
+        {...register("confirmPassword")}
+      />
       <Button type="submit" size="lg" fullWidth loading={isSubmitting} loadingText="Saving…">
         Save new password
       </Button>

@@ -52,7 +52,13 @@ export function SignInForm() {
       {formError ? <Alert tone="error">{formError}</Alert> : null}
       <InputField label="E-mail" type="email" autoComplete="email" inputMode="email" error={errors.email?.message} {...register("email")} />
       <div className="flex flex-col gap-2">
-        <InputField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
+        <InputField
+          label="Password"
+          type="password"
+          autoComplete="current-password"
+          error={errors.password?.message}
+          {...register("password")}
+        />
         <TextLink to={paths.forgotPassword.href()} className="self-end text-sm">
           Forgot your password?
         </TextLink>

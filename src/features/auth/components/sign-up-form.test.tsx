@@ -41,7 +41,9 @@ test("submitting an empty form names every missing detail, including the role, a
   expect(screen.getByLabelText("Name")).toHaveAccessibleDescription("Enter your name.");
   expect(screen.getByLabelText("E-mail")).toHaveAccessibleDescription("Enter your e-mail address.");
   expect(screen.getByLabelText("Password")).toHaveAccessibleDescription("Use at least 8 characters.");
-  expect(screen.getByRole("group", { name: "How will you use Borrowline?" })).toHaveAccessibleDescription("Choose whether you are a player or a coach.");
+  expect(screen.getByRole("group", { name: "How will you use Borrowline?" })).toHaveAccessibleDescription(
+    "Choose whether you are a player or a coach.",
+  );
   expect(screen.getByLabelText("Name")).toHaveAttribute("aria-invalid", "true");
   expect(signUpEmail).not.toHaveBeenCalled();
 });
@@ -79,7 +81,12 @@ test("a complete form sends name, e-mail, password and role, then goes to the ho
 
   expect(await screen.findByText("Home page")).toBeInTheDocument();
   expect(signUpEmail).toHaveBeenCalledTimes(1);
-  expect(signUpEmail).toHaveBeenCalledWith({ name: "Dana Whitcombe", email: "dana@example.test", password: "correct horse", accountType: "coach" });
+  expect(signUpEmail).toHaveBeenCalledWith({
+    name: "Dana Whitcombe",
+    email: "dana@example.test",
+    password: "correct horse",
+    accountType: "coach",
+  });
 });
 
 test("after signing up from a guarded page the user is sent back to it", async () => {
@@ -94,7 +101,10 @@ test("after signing up from a guarded page the user is sent back to it", async (
 });
 
 test("an e-mail already in use is shown beside the e-mail field", async () => {
-  signUpEmail.mockResolvedValue({ data: null, error: { code: "USER_ALREADY_EXISTS_USE_ANOTHER_EMAIL", message: "User already exists. Use another email.", status: 422 } });
+  signUpEmail.mockResolvedValue({
+    data: null,
+    error: { code: "USER_ALREADY_EXISTS_USE_ANOTHER_EMAIL", message: "User already exists. Use another email.", status: 422 },
+  });
   const user = userEvent.setup();
   renderForm();
   await fillIn(user, { name: "Sam Okoro", email: "sam@example.test", password: "correct horse" });

@@ -48,17 +48,34 @@ export function SignUpForm({ defaultEmail = "", role, onSignedUp, callbackURL }:
     setFormError(null);
     try {
       // The server takes the chosen role as `accountType` (an extra user field); the client types do not know it.
-      const { data, error } = await authClient.signUp.email({ name, email, password, accountType: role, ...(callbackURL ? { callbackURL } : {}) } as SignUpInput);
+      const { data, error } = await authClient.signUp.email({
+        name,
+        email,
+        password,
+        accountType: role,
+        ...(callbackURL ? { callbackURL } : {}),
+      } as SignUpInput);
       if (error) {
         const described = describeAuthError(error, "Could not create the account. Please try again.");
-        if (described.field === "name" || described.field === "email" || described.field === "password" || (described.field as string) === "accountType") {
-          setError((described.field as string) === "accountType" ? "role" : (described.field as "name" | "email" | "password"), { type: "server", message: described.message }, { shouldFocus: true });
+        if (
+          described.field === "name" ||
+          described.field === "email" ||
+          described.field === "password" ||
+          (described.field as string) === "accountType"
+        ) {
+          setError(
+            (described.field as string) === "accountType" ? "role" : (described.field as "name" | "email" | "password"),
+            { type: "server", message: described.message },
+            { shouldFocus: true },
+          );
         } else {
           setFormError(described.message);
         }
         return;
       }
-      toast.success(data?.token ? `Welcome to Borrowline, ${name}.` : "Account created. Check your inbox to confirm your e-mail, then sign in.");
+      toast.success(
+        data?.token ? `Welcome to Borrowline, ${name}.` : "Account created. Check your inbox to confirm your e-mail, then sign in.",
+      );
       if (onSignedUp) {
         await queryClient.invalidateQueries({ queryKey: authKeys.all });
         await onSignedUp();
@@ -86,7 +103,12 @@ export function SignUpForm({ defaultEmail = "", role, onSignedUp, callbackURL }:
       {role ? (
         <p className="text-sm text-ink-600">{roleChoices.find((c) => c.value === role)?.description}</p>
       ) : (
-        <ChoiceGroup legend="How will you use Borrowline?" choices={roleChoices} error={errors.role?.message} inputProps={register("role")} />
+        <ChoiceGroup
+          legend="How will you use Borrowline?"
+          choices={roleChoices}
+          error={errors.role?.message}
+          inputProps={register("role")}
+        />
       )}
       <Button type="submit" size="lg" fullWidth loading={isSubmitting} loadingText="Creating your account…">
         Create account

@@ -6,7 +6,13 @@
  * (better-auth's own codes in lower case), which the client spreads into the error beside status.
  */
 export type AuthErrorLike =
-  | { code?: string; message?: string; status?: number; statusText?: string; error?: { code?: string; message?: string; fields?: Record<string, string> } }
+  | {
+      code?: string;
+      message?: string;
+      status?: number;
+      statusText?: string;
+      error?: { code?: string; message?: string; fields?: Record<string, string> };
+    }
   | null
   | undefined;
 export type AuthField = "name" | "email" | "password" | "newPassword" | "role";
@@ -14,7 +20,10 @@ export type DescribedAuthError = { field?: AuthField; message: string };
 
 const byCode: Record<string, DescribedAuthError> = {
   USER_ALREADY_EXISTS: { field: "email", message: "An account with this e-mail already exists. Sign in instead, or use another e-mail." },
-  USER_ALREADY_EXISTS_USE_ANOTHER_EMAIL: { field: "email", message: "An account with this e-mail already exists. Sign in instead, or use another e-mail." },
+  USER_ALREADY_EXISTS_USE_ANOTHER_EMAIL: {
+    field: "email",
+    message: "An account with this e-mail already exists. Sign in instead, or use another e-mail.",
+  },
   INVALID_EMAIL: { field: "email", message: "Enter a valid e-mail address." },
   PASSWORD_TOO_SHORT: { field: "password", message: "The password is too short." },
   PASSWORD_TOO_LONG: { field: "password", message: "The password is too long." },

@@ -24,9 +24,21 @@ const summary = (over: Partial<AssignmentSummary>): AssignmentSummary => ({
 });
 
 const players: CoachedPlayer[] = [
-  { id: "ivo", name: "Ivo Marsh", email: "ivo@x.test", squads: [{ id: "s1", name: "Juniors" }], assignments: [summary({}), summary({ id: "a2", ladderName: "Lag ladder", status: "assigned", overdue: true })] },
+  {
+    id: "ivo",
+    name: "Ivo Marsh",
+    email: "ivo@x.test",
+    squads: [{ id: "s1", name: "Juniors" }],
+    assignments: [summary({}), summary({ id: "a2", ladderName: "Lag ladder", status: "assigned", overdue: true })],
+  },
   { id: "ruth", name: "Ruth Calder", email: "ruth@x.test", squads: [{ id: "s2", name: "Seniors" }], assignments: [] },
-  { id: "sam", name: "Sam Okoro", email: "sam@x.test", squads: [{ id: "s1", name: "Juniors" }], assignments: [summary({ id: "a3", player: { id: "sam", name: "Sam Okoro" }, status: "completed", rungReached: 7 })] },
+  {
+    id: "sam",
+    name: "Sam Okoro",
+    email: "sam@x.test",
+    squads: [{ id: "s1", name: "Juniors" }],
+    assignments: [summary({ id: "a3", player: { id: "sam", name: "Sam Okoro" }, status: "completed", rungReached: 7 })],
+  },
 ];
 
 test("one row per ladder given, and one for a player without a ladder", () => {

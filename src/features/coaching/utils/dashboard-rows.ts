@@ -21,9 +21,28 @@ export type DashboardRow = {
 
 export function dashboardRows(players: readonly CoachedPlayer[]): DashboardRow[] {
   return players.flatMap((p): DashboardRow[] => {
-    const base = { playerId: p.id, playerName: p.name, squadIds: p.squads.map((s) => s.id), squadNames: p.squads.map((s) => s.name).join(", ") };
+    const base = {
+      playerId: p.id,
+      playerName: p.name,
+      squadIds: p.squads.map((s) => s.id),
+      squadNames: p.squads.map((s) => s.name).join(", "),
+    };
     if (p.assignments.length === 0) {
-      return [{ ...base, id: `player-${p.id}`, assignmentId: null, ladderName: null, rungReached: 0, rungsTotal: 0, attempts: 0, puttsTaken: 0, lastActivityAt: null, dueDate: null, status: "no-ladder" }];
+      return [
+        {
+          ...base,
+          id: `player-${p.id}`,
+          assignmentId: null,
+          ladderName: null,
+          rungReached: 0,
+          rungsTotal: 0,
+          attempts: 0,
+          puttsTaken: 0,
+          lastActivityAt: null,
+          dueDate: null,
+          status: "no-ladder",
+        },
+      ];
     }
     return p.assignments.map((a) => ({
       ...base,

@@ -1,5 +1,13 @@
 import { expect, test } from "vitest";
-import { emptyLadderForm, formToLadderInput, ladderToForm, nextRung, serverFieldsToForm, validateLadderForm, type LadderFormValues } from "./ladder-form";
+import {
+  emptyLadderForm,
+  formToLadderInput,
+  ladderToForm,
+  nextRung,
+  serverFieldsToForm,
+  validateLadderForm,
+  type LadderFormValues,
+} from "./ladder-form";
 
 const form = (rungs: Partial<LadderFormValues["rungs"][number]>[], extra: Partial<LadderFormValues> = {}): LadderFormValues => ({
   name: "Short game",
@@ -10,9 +18,18 @@ const form = (rungs: Partial<LadderFormValues["rungs"][number]>[], extra: Partia
 });
 
 test("feet in the form become metres for the API, and come back as the same feet", () => {
-  const input = formToLadderInput(form([{ distance: "6" }, { distance: "7.5", passKind: "in-a-row", need: "2", breakType: "uphill", note: " low side " }]), "imperial");
+  const input = formToLadderInput(
+    form([{ distance: "6" }, { distance: "7.5", passKind: "in-a-row", need: "2", breakType: "uphill", note: " low side " }]),
+    "imperial",
+  );
   expect(input.rungs[0]).toEqual({ distanceM: 1.829, balls: 5, passRule: { kind: "make", made: 3 } });
-  expect(input.rungs[1]).toEqual({ distanceM: 2.286, balls: 5, passRule: { kind: "in-a-row", count: 2 }, breakType: "uphill", note: "low side" });
+  expect(input.rungs[1]).toEqual({
+    distanceM: 2.286,
+    balls: 5,
+    passRule: { kind: "in-a-row", count: 2 },
+    breakType: "uphill",
+    note: "low side",
+  });
   expect(ladderToForm({ ...input, failRule: "drop-one" }, "imperial").rungs.map((r) => r.distance)).toEqual(["6", "7.5"]);
 });
 
@@ -43,5 +60,9 @@ test("a new rung steps one foot (or half a metre) further with the same rule", (
 });
 
 test("server field errors land on the same form fields", () => {
-  expect(serverFieldsToForm({ "rungs.1.passRule": "Needs 4", "rungs.0.distanceM": "Too far", name: "Taken" })).toEqual({ "rungs.1.need": "Needs 4", "rungs.0.distance": "Too far", name: "Taken" });
+  expect(serverFieldsToForm({ "rungs.1.passRule": "Needs 4", "rungs.0.distanceM": "Too far", name: "Taken" })).toEqual({
+    "rungs.1.need": "Needs 4",
+    "rungs.0.distance": "Too far",
+    name: "Taken",
+  });
 });

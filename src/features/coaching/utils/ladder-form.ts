@@ -2,7 +2,7 @@
 // the API's LadderInput (SI). Validation is the shared schema's; its messages are placed beside the fields.
 import { parseDecimal } from "../../../../shared/units";
 import type { z } from "zod";
-import { ladderInputSchema, type FailRule, type Ladder, type LadderInput } from "../../../../shared/schemas/ladders";
+import { holedToPass, ladderInputSchema, type FailRule, type Ladder, type LadderInput } from "../../../../shared/schemas/ladders";
 import type { BreakType } from "../../../../shared/schemas/putts";
 import { formatLength, fromLongUnit, longUnitLabel, toLongUnit, type UnitSystem } from "../../../../shared/units";
 
@@ -42,19 +42,29 @@ export function rungToForm(rung: LadderInput["rungs"][number], units: UnitSystem
     distance: lengthForInput(rung.distanceM, units),
     balls: String(rung.balls),
     passKind: rung.passRule.kind,
-    need: String(rung.passRule.kind === "make" ? rung.passRule.made : rung.passRule.count),
+    need: String(holedToPass(rung.passRule)),
     breakType: rung.breakType ?? "",
     note: rung.note ?? "",
   };
 }
 
 export function ladderToForm(ladder: Pick<Ladder, "name" | "description" | "failRule" | "rungs">, units: UnitSystem): LadderFormValues {
-  return { name: ladder.name, description: ladder.description ?? "", failRule: ladder.failRule, rungs: ladder.rungs.map((r) => rungToForm(r, units)) };
+  return {
+    name: ladder.name,
+    description: ladder.description ?? "",
+    failRule: ladder.failRule,
+    rungs: ladder.rungs.map((r) => rungToForm(r, units)),
+  };
 }
 
 /** A new ladder starts with one short rung: 3 ft (or 1 m), hole 3 of 5. */
 export function emptyLadderForm(units: UnitSystem): LadderFormValues {
-  return { name: "", description: "", failRule: "repeat", rungs: [{ distance: units === "imperial" ? "3" : "1", balls: "5", passKind: "make", need: "3", breakType: "", note: "" }] };
+  return {
+    name: "",
+    description: "",
+    failRule: "repeat",
+    rungs: [{ distance: units === "imperial" ? "3" : "1", balls: "5", passKind: "make", need: "3", breakType: "", note: "" }],
+  };
 }
 
 /** The rung a coach adds after `last`: the same set-up one step further (1 ft or 0.5 m). */
@@ -113,7 +123,8 @@ function friendly(issue: z.core.$ZodIssue, field: string, units: UnitSystem): st
 /** Where an issue of the shared schema (path in LadderInput) belongs in the form, and its message. */
 function place(issue: z.core.$ZodIssue, units: UnitSystem): [string, string] {
   const [head, index, field, sub] = issue.path;
-  if (head !== "rungs" || index === undefined) return [String(head ?? "form"), head === "name" && issue.code === "too_big" ? "At most 80 characters" : issue.message];
+  if (head !== "rungs" || index === undefined)
+    return [String(head ?? "form"), head === "name" && issue.code === "too_big" ? "At most 80 characters" : issue.message];
   if (head === "rungs" && typeof index !== "number") return ["rungs", issue.message];
   const at = `rungs.${String(index)}`;
   if (field === "distanceM") return [`${at}.distance`, friendly(issue, "distance", units)];
@@ -126,7 +137,10 @@ function place(issue: z.core.$ZodIssue, units: UnitSystem): [string, string] {
 }
 
 /** Validates the form with the shared ladder schema: the API's input, or messages keyed by form path (first per field). */
-export function validateLadderForm(v: LadderFormValues, units: UnitSystem): { ok: true; input: LadderInput } | { ok: false; errors: LadderFormErrors } {
+export function validateLadderForm(
+  v: LadderFormValues,
+  units: UnitSystem,
+): { ok: true; input: LadderInput } | { ok: false; errors: LadderFormErrors } {
   const parsed = ladderInputSchema.safeParse(formToLadderInput(v, units));
   if (parsed.success) return { ok: true, input: parsed.data };
   const errors: LadderFormErrors = {};

@@ -22,7 +22,12 @@ const overview: SquadOverview = {
         { recent: { attempts: 20, made: 18, rate: 0.9 }, past: { attempts: 30, made: 24, rate: 0.8 } },
         { recent: { attempts: 4, made: 1, rate: 0.25 }, past: { attempts: 50, made: 20, rate: 0.4 } },
       ],
-      ladders: { active: 1, completed: 0, overdue: 1, latest: { name: "Three-to-nine", status: "in-progress", overdue: true, rungReached: 3, rungsTotal: 5 } },
+      ladders: {
+        active: 1,
+        completed: 0,
+        overdue: 1,
+        latest: { name: "Three-to-nine", status: "in-progress", overdue: true, rungReached: 3, rungsTotal: 5 },
+      },
     },
   ],
 };

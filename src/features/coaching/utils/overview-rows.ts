@@ -40,11 +40,17 @@ export function overviewRows(o: SquadOverview): OverviewRow[] {
         past: b.past.rate,
         recentN: b.recent.attempts,
         pastN: b.past.attempts,
-        change: b.recent.rate !== null && b.past.rate !== null && b.recent.attempts >= COMPARE_MIN_PUTTS && b.past.attempts >= COMPARE_MIN_PUTTS ? b.recent.rate - b.past.rate : null,
+        change:
+          b.recent.rate !== null && b.past.rate !== null && b.recent.attempts >= COMPARE_MIN_PUTTS && b.past.attempts >= COMPARE_MIN_PUTTS
+            ? b.recent.rate - b.past.rate
+            : null,
       })),
       sgRecent: p.recent.strokesGainedPerPutt,
       sgPast: p.past.strokesGainedPerPutt,
-      sgChange: p.recent.strokesGainedPerPutt !== null && p.past.strokesGainedPerPutt !== null ? p.recent.strokesGainedPerPutt - p.past.strokesGainedPerPutt : null,
+      sgChange:
+        p.recent.strokesGainedPerPutt !== null && p.past.strokesGainedPerPutt !== null
+          ? p.recent.strokesGainedPerPutt - p.past.strokesGainedPerPutt
+          : null,
       ladder,
       ladderOrder: l.overdue > 0 ? 0 : l.active > 0 ? 1 : l.completed > 0 ? 2 : 3,
     };

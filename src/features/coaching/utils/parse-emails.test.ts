@@ -9,7 +9,10 @@ test("several addresses on lines, with commas or semicolons, each kept once in l
 });
 
 test("something that is not an address is reported, not sent", () => {
-  expect(parseEmails("ruth@example.test ruth-at-example <sam@example.test>")).toEqual({ valid: ["ruth@example.test", "sam@example.test"], invalid: ["ruth-at-example"] });
+  expect(parseEmails("ruth@example.test ruth-at-example <sam@example.test>")).toEqual({
+    valid: ["ruth@example.test", "sam@example.test"],
+    invalid: ["ruth-at-example"],
+  });
 });
 
 test("an empty box gives nothing", () => {

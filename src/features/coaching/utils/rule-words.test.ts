@@ -10,7 +10,9 @@ test("a make-k-of-n rung reads as the brief's example", () => {
 });
 
 test("an in-a-row rung names the run and the balls it may take", () => {
-  expect(rungInWords({ distanceM: 0.9, balls: 4, passRule: { kind: "in-a-row", count: 4 } }, "metric")).toBe("Hole 4 in a row from 0.90 m (4 balls)");
+  expect(rungInWords({ distanceM: 0.9, balls: 4, passRule: { kind: "in-a-row", count: 4 } }, "metric")).toBe(
+    "Hole 4 in a row from 0.90 m (4 balls)",
+  );
   expect(passRuleWords({ kind: "in-a-row", count: 1 }, 1)).toBe("Hole 1 in a row (1 ball)");
 });
 

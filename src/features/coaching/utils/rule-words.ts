@@ -1,7 +1,7 @@
 // Pass rules, fail rules and rung outcomes in plain words, as coaches and players read them.
 import type { LadderProgress } from "../../../../shared/ladder-engine";
 import type { AssignmentStatus } from "../../../../shared/schemas/assignments";
-import type { FailRule, PassRule } from "../../../../shared/schemas/ladders";
+import { unknownRule, type FailRule, type PassRule } from "../../../../shared/schemas/ladders";
 import type { BreakType } from "../../../../shared/schemas/putts";
 import { formatLength, type UnitSystem } from "../../../../shared/units";
 
@@ -11,20 +11,28 @@ const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? o
 
 /** "Hole 3 of 5" or "Hole 3 in a row (5 balls)": the rule without the distance. */
 export function passRuleWords(rule: PassRule, balls: number): string {
-  if (rule.kind === "make") return `Hole ${rule.made} of ${balls}`;
-  return `Hole ${rule.count} in a row (${plural(balls, "ball")})`;
+  switch (rule.kind) {
+    case "make":
+      return `Hole ${rule.made} of ${balls}`;
+    case "in-a-row":
+      return `Hole ${rule.count} in a row (${plural(balls, "ball")})`;
+    default:
+      return unknownRule(rule);
+  }
 }
 
 /** The whole rung in words: "Hole 3 of 5 from 6 ft", "Hole 4 in a row from 3 ft (4 balls)". */
 export function rungInWords(rung: RungLike, units: UnitSystem): string {
   const from = `from ${formatLength(rung.distanceM, units)}`;
-  if (rung.passRule.kind === "make") return `Hole ${rung.passRule.made} of ${rung.balls} ${from}`;
-  return `Hole ${rung.passRule.count} in a row ${from} (${plural(rung.balls, "ball")})`;
-}
-
-/** How many holed the rule needs, whatever its kind. */
-export function holedNeeded(rule: PassRule): number {
-  return rule.kind === "make" ? rule.made : rule.count;
+  const rule = rung.passRule;
+  switch (rule.kind) {
+    case "make":
+      return `Hole ${rule.made} of ${rung.balls} ${from}`;
+    case "in-a-row":
+      return `Hole ${rule.count} in a row ${from} (${plural(rung.balls, "ball")})`;
+    default:
+      return unknownRule(rule);
+  }
 }
 
 export const FAIL_RULE_WORDS: Record<FailRule, { label: string; description: string }> = {
@@ -69,7 +77,13 @@ export function momentWords(
   const at = formatLength(next.distanceM, units);
   if (after.lastResult === "passed") return { tone: "passed", text: `Rung passed — on to ${at}` };
   if (after.rungIndex < before.rungIndex) {
-    return { tone: "failed", text: after.rungIndex === 0 && ladder.failRule === "restart" ? `Missed the rung — start again from ${at}` : `Missed the rung — back to ${at}` };
+    return {
+      tone: "failed",
+      text:
+        after.rungIndex === 0 && ladder.failRule === "restart"
+          ? `Missed the rung — start again from ${at}`
+          : `Missed the rung — back to ${at}`,
+    };
   }
   return { tone: "failed", text: `Missed the rung — go again from ${at}` };
 }

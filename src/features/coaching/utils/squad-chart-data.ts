@@ -13,7 +13,11 @@ export type SquadChartData = { series: SquadChartSeries[]; rows: SquadChartRow[]
  * Bands where nobody has a putt are dropped, so the chart does not show empty groups; a player without putts
  * in a band has a null there (no bar), which is not the same as 0 %.
  */
-export function squadChartData(players: readonly { id: string; name: string }[], rates: ReadonlyMap<string, readonly BandRate[] | undefined>, units: UnitSystem): SquadChartData {
+export function squadChartData(
+  players: readonly { id: string; name: string }[],
+  rates: ReadonlyMap<string, readonly BandRate[] | undefined>,
+  units: UnitSystem,
+): SquadChartData {
   const withData = players.filter((p) => rates.get(p.id));
   const series = withData.map((p, i) => ({ playerId: p.id, name: p.name, dataKey: `p${i}` }));
   const template = withData.length > 0 ? rates.get(withData[0]!.id)! : [];

@@ -39,7 +39,7 @@ export function AimRingPicture({ answer, units, settingsWords }: Props) {
   const toY = (y: number) => PAD + 18 + (topM - y) * k;
   const step = gridStepM(halfWidthM, units);
   const gridXs: number[] = [];
-  for (let x = -Math.floor(halfWidthM * 1.08 / step) * step; x <= halfWidthM * 1.08 + 1e-9; x += step) gridXs.push(x);
+  for (let x = -Math.floor((halfWidthM * 1.08) / step) * step; x <= halfWidthM * 1.08 + 1e-9; x += step) gridXs.push(x);
   const gridYs: number[] = [];
   for (let y = Math.ceil(bottomM / step) * step; y <= topM + 1e-9; y += step) gridYs.push(y);
 
@@ -175,7 +175,7 @@ export function AimRingPicture({ answer, units, settingsWords }: Props) {
             {BALL_SIDES.map((b) => (
               <label
                 key={b.bearingDeg}
-                className="flex min-h-11 cursor-pointer items-center rounded-lg border-2 px-2.5 has-checked:border-ink-900 has-checked:bg-ink-50 has-focus-visible:outline-3 has-focus-visible:outline-coral-500 border-ink-900/15 bg-white"
+                className="flex min-h-11 cursor-pointer items-center rounded-lg border-2 border-ink-900/15 bg-white px-2.5 has-checked:border-ink-900 has-checked:bg-ink-50 has-focus-visible:outline-3 has-focus-visible:outline-coral-500"
               >
                 <input
                   type="radio"

@@ -11,7 +11,11 @@ export function BreakChartTable({ answer, units, caption }: BreakChartTableProps
   return (
     <figure className="flex flex-col gap-3">
       <figcaption className="text-sm text-ink-600 print:text-[9pt]">{caption}</figcaption>
-      <TableScroller label="The aims in numbers" framed={false} className="-mx-5 px-5 sm:mx-0 sm:px-0 print:mx-0 print:overflow-visible print:px-0">
+      <TableScroller
+        label="The aims in numbers"
+        framed={false}
+        className="-mx-5 px-5 sm:mx-0 sm:px-0 print:mx-0 print:overflow-visible print:px-0"
+      >
         <table
           aria-label="Aim offset by distance and by which way the green falls"
           className="w-full min-w-[46rem] border-collapse text-sm tabular-nums print:min-w-0 print:text-[7.5pt]"

@@ -179,8 +179,8 @@ export function ChartPage() {
         />
         {entryPace ? (
           <p className="mt-3 text-sm text-ink-600">
-            The read gave its pace as an entry speed ({formatSpeed(read.entrySpeedMps, units)} at the hole); the chart uses it for every cell.
-            Show the chart with a finish-past to change it.
+            The read gave its pace as an entry speed ({formatSpeed(read.entrySpeedMps, units)} at the hole); the chart uses it for every
+            cell. Show the chart with a finish-past to change it.
           </p>
         ) : null}
         <div className="mt-4 flex flex-wrap gap-2 border-t border-ink-900/10 pt-4">

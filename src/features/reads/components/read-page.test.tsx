@@ -18,7 +18,9 @@ const fakeRead = {
   aimOffsetM: -0.274,
   entrySpeedMps: 0.67,
   rollPastM: 0.45,
-  flatPuttLengthM: 2.97, aimGiven: "offset", aimNote: null,
+  flatPuttLengthM: 2.97,
+  aimGiven: "offset",
+  aimNote: null,
   breaks: "left-to-right",
   capture: { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.64, marginMps: 0.96 },
   path: [
@@ -115,7 +117,9 @@ test("out-of-range values are named in the user's units and nothing is sent for 
   await user.clear(distance);
   await user.type(distance, "120");
   await user.tab();
-  expect(await within(screen.getByRole("form", { name: "The putt" })).findByText("Enter a distance from 1 to 98.4 ft.")).toBeInTheDocument();
+  expect(
+    await within(screen.getByRole("form", { name: "The putt" })).findByText("Enter a distance from 1 to 98.4 ft."),
+  ).toBeInTheDocument();
   expect(distance).toHaveAccessibleDescription("Enter a distance from 1 to 98.4 ft.");
   await user.clear(screen.getByLabelText("Slope (%)"));
   await user.type(screen.getByLabelText("Slope (%)"), "9");
@@ -230,8 +234,10 @@ test("a 422 is shown as 'would not stop' with the steepest stoppable slope, not 
     json(422, {
       error: {
         code: "UNPROCESSABLE",
-        message: "A ball cannot stop on this green: … the steepest stoppable slope at this Stimp is 7.9 %.",
-        fields: { slopePct: "too steep to stop a ball at Stimp 10 ft (steepest: 7.9 %)" },
+        // The number travels in details (as cannotStopBody sends it), not in the words: the page must not parse prose.
+        message: "A ball cannot stop on this green.",
+        fields: { slopePct: "too steep to stop a ball at Stimp 10 ft" },
+        details: { reason: "cannot-stop", maxStoppableSlopePct: 7.86 },
       },
     }),
   );

@@ -11,7 +11,8 @@ import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useSolveRead } from "../api/solve-read";
 import { useUnits } from "../../auth/hooks/use-units";
-import { cannotStopWords, steepestFromMessage } from "../utils/answer-text";
+import { cannotStopWords } from "../utils/answer-text";
+import { maxStoppableSlopeOf } from "../../../../shared/errors";
 import { formFieldForApi, type NumericField } from "../utils/read-form";
 import { decodeReadQuery, encodeReadQuery, isCompleteReadQuery, toReadRequest, type ReadValues } from "../../../lib/read-url";
 import { AnswerBar } from "./answer-bar";
@@ -108,7 +109,7 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
     }
   }
   const unplacedError = error && !cannotStop && Object.keys(serverErrors).length === 0 ? error : null;
-  const steepest = cannotStop && isApiError(error) ? steepestFromMessage(error.fields.slopePct, error.message) : undefined;
+  const steepest = cannotStop && isApiError(error) ? maxStoppableSlopeOf(error.body) : undefined;
   const shownRead = live ?? solve.data;
   // The form holds a value that cannot be read (slope 9 %), or the server refused one: the answer on screen is for
   // the last putt that could be read, so it is greyed out and the reason given.

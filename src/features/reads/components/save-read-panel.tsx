@@ -42,7 +42,10 @@ export function SaveReadPanel({ request }: SaveReadPanelProps) {
             onChange={(e) => setGreenId(e.target.value)}
             options={[
               { value: "", label: "No green" },
-              ...choices.map((g) => ({ value: g.id, label: g.currentStimpFt !== null ? `${g.name} (${stimpText(g.currentStimpFt)})` : g.name })),
+              ...choices.map((g) => ({
+                value: g.id,
+                label: g.currentStimpFt !== null ? `${g.name} (${stimpText(g.currentStimpFt)})` : g.name,
+              })),
             ]}
           />
         ) : (

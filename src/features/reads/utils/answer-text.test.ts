@@ -1,6 +1,6 @@
 import { expect, test } from "vitest";
 import { HOLE_DIAMETER_M, inchesToMetres } from "../../../../shared/units";
-import { aOrAn, aimWords, formatAim, captureWords, cannotStopWords, paceWords, steepestFromMessage } from "./answer-text";
+import { aOrAn, aimWords, formatAim, captureWords, cannotStopWords, paceWords } from "./answer-text";
 
 test("an aim outside the hole is given from the edge, and from the centre in hole widths", () => {
   const aim = aimWords(-2.5 * HOLE_DIAMETER_M, -5.2, "imperial");
@@ -69,12 +69,6 @@ test("a ball stopped at the hole is said in words, never 0.00 m/s or speed to sp
 test("the cannot-stop answer names the slope, the Stimp and the steepest stoppable slope", () => {
   expect(cannotStopWords(8, 10, 7.86)).toBe("On an 8 % slope at Stimp 10 the ball would not stop — the steepest it stops on is 7.9 %.");
   expect(cannotStopWords(6.5, 13, undefined)).toBe("On a 6.5 % slope at Stimp 13 the ball would not stop.");
-});
-
-test("the steepest stoppable slope is read from either of the API's wordings", () => {
-  expect(steepestFromMessage("too steep to stop a ball at Stimp 10 ft (steepest: 7.9 %)")).toBe(7.9);
-  expect(steepestFromMessage(undefined, "… the steepest stoppable slope at this Stimp is 4.8 %.")).toBe(4.8);
-  expect(steepestFromMessage("no number here")).toBeUndefined();
 });
 
 test("articles follow how numbers are said", () => {

@@ -79,7 +79,11 @@ const ONLY_JUST_MPS = 0.25;
  * The ball at the hole in a golfer's words (capture model: Holmes 1991, see docs/sources.md): a stopped ball is
  * said in words, never "0.00 m/s"; a rolling one in the user's speed unit (ft/s in feet and inches).
  */
-export function captureWords(entrySpeedMps: number, capture: CaptureSummary, units: UnitSystem): { entry: string; verdict: string; tone: "ok" | "warn" } {
+export function captureWords(
+  entrySpeedMps: number,
+  capture: CaptureSummary,
+  units: UnitSystem,
+): { entry: string; verdict: string; tone: "ok" | "warn" } {
   const limit = formatSpeed(capture.maxCaptureSpeedMps, units);
   if (entrySpeedMps < STOPPED_AT_HOLE_MPS) {
     return capture.outcome === "miss"
@@ -118,15 +122,6 @@ export function aOrAn(numberText: string): "a" | "an" {
 
 function formatPct(n: number): string {
   return String(Math.round(n * 10) / 10);
-}
-
-/** The steepest stoppable slope out of the API's 422 wording ("… (steepest: 7.9 %)" or "… is 7.9 %."). */
-export function steepestFromMessage(...texts: Array<string | undefined>): number | undefined {
-  for (const t of texts) {
-    const m = t?.match(/steepest[^0-9]*(\d+(?:\.\d+)?)\s*%/i);
-    if (m?.[1]) return Number(m[1]);
-  }
-  return undefined;
 }
 
 /** One line describing a read's inputs: "10 ft, 2 % falls to the right, Stimp 10". */

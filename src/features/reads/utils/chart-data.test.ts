@@ -103,7 +103,16 @@ test("cannot-stop cells are counted", () => {
 });
 
 test("a cell whose start line is wider than 60° shows the start line, never a huge offset (issue 13: was 1576 cm R)", () => {
-  const wide = { ok: true as const, distanceM: 3, fallLineDeg: 30, aimOffsetM: null, aimGiven: "start-line" as const, startLineDeg: -100.8, launchSpeedMps: 1, entrySpeedMps: 0 };
+  const wide = {
+    ok: true as const,
+    distanceM: 3,
+    fallLineDeg: 30,
+    aimOffsetM: null,
+    aimGiven: "start-line" as const,
+    startLineDeg: -100.8,
+    launchSpeedMps: 1,
+    entrySpeedMps: 0,
+  };
   expect(cellText(wide, "metric")).toBe("start 101° left");
   expect(cellText({ ...wide, startLineDeg: 91 }, "imperial")).toBe("start 91° right");
 });

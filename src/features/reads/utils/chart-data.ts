@@ -63,7 +63,17 @@ export function toChartTable(answer: BreakChartAnswer, units: UnitSystem): { col
     heading: distanceHeading(distanceM, units),
     cells: (answer.cells[i] ?? []).map((cell, j): TableCell => {
       const aim = cell.ok ? cell.aimOffsetM : null;
-      const side = !cell.ok ? "none" : aim === null ? (cell.startLineDeg < 0 ? "left" : "right") : Math.abs(aim) < CENTRE_M ? "centre" : aim < 0 ? "left" : "right";
+      const side = !cell.ok
+        ? "none"
+        : aim === null
+          ? cell.startLineDeg < 0
+            ? "left"
+            : "right"
+          : Math.abs(aim) < CENTRE_M
+            ? "centre"
+            : aim < 0
+              ? "left"
+              : "right";
       return { key: `r${i}c${j}`, text: cellText(cell, units), ok: cell.ok, side };
     }),
   }));

@@ -5,7 +5,10 @@ import { statsKeys } from "./keys";
 import type { SessionStats } from "./types";
 
 /** GET /api/stats/sessions: expected putts, strokes gained and long-lag share per session, newest first. */
-export function getSessionStats(params: { from?: string; to?: string; pageSize?: number; playerId?: string }, signal?: AbortSignal): Promise<SessionStats> {
+export function getSessionStats(
+  params: { from?: string; to?: string; pageSize?: number; playerId?: string },
+  signal?: AbortSignal,
+): Promise<SessionStats> {
   return api.get<SessionStats>(apiPaths.statsSessions, { query: params, signal });
 }
 

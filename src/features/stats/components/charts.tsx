@@ -25,17 +25,32 @@ const grid = <CartesianGrid stroke={CHART_GRID} vertical={false} />;
 const percentAxis = <YAxis domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} unit=" %" width={52} tick={tickStyle} />;
 const pct = (v: unknown) => (typeof v === "number" ? `${v.toFixed(1)} %` : "–");
 
-export type MakeRateChartProps = { rows: MakeRateRow[]; tourSource: string | null; /** The line's name: "Your make rate", or the player's for their coach. */ rateLabel?: string };
+export type MakeRateChartProps = {
+  rows: MakeRateRow[];
+  tourSource: string | null;
+  /** The line's name: "Your make rate", or the player's for their coach. */ rateLabel?: string;
+};
 
 /** Your make rate per band (line and points), its 95 % interval as a shaded band, and the tour's one-putt rate. */
 export function MakeRateChart({ rows, tourSource, rateLabel = "Your make rate" }: MakeRateChartProps) {
   return (
     <figure className="flex flex-col gap-2">
-      <div className="h-72 w-full sm:h-80" role="img" aria-label="Make rate by distance band with its 95 % interval, and the tour one-putt rate for comparison">
+      <div
+        className="h-72 w-full sm:h-80"
+        role="img"
+        aria-label="Make rate by distance band with its 95 % interval, and the tour one-putt rate for comparison"
+      >
         <ResponsiveContainer width="100%" height="100%">
           <ComposedChart {...figureChart} data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }}>
             {grid}
-            <XAxis dataKey="label" tick={tickStyle} interval={0} angle={rows.length > 6 ? -30 : 0} textAnchor={rows.length > 6 ? "end" : "middle"} height={rows.length > 6 ? 48 : 28} />
+            <XAxis
+              dataKey="label"
+              tick={tickStyle}
+              interval={0}
+              angle={rows.length > 6 ? -30 : 0}
+              textAnchor={rows.length > 6 ? "end" : "middle"}
+              height={rows.length > 6 ? 48 : 28}
+            />
             {percentAxis}
             <Tooltip
               formatter={(v) => (Array.isArray(v) ? `${pct(v[0])} – ${pct(v[1])}` : pct(v))}
@@ -45,9 +60,39 @@ export function MakeRateChart({ rows, tourSource, rateLabel = "Your make rate" }
               }}
             />
             <Legend verticalAlign="top" height={28} {...legendProps} />
-            <Area type="linear" dataKey="range" name="95 % interval" legendType="rect" stroke="none" fill={ROLE_COLOURS.band} fillOpacity={0.3} connectNulls={false} isAnimationActive={false} />
-            <Line type="linear" dataKey="tour" name="Tour one-putt rate" legendType="triangle" stroke={ROLE_COLOURS.tour} strokeWidth={2} strokeDasharray="6 4" dot={seriesDot(1, 40)} isAnimationActive={false} />
-            <Line type="linear" dataKey="rate" name={rateLabel} legendType="circle" stroke={ROLE_COLOURS.you} strokeWidth={2.5} dot={seriesDot(0, 56)} connectNulls={false} isAnimationActive={false}>
+            <Area
+              type="linear"
+              dataKey="range"
+              name="95 % interval"
+              legendType="rect"
+              stroke="none"
+              fill={ROLE_COLOURS.band}
+              fillOpacity={0.3}
+              connectNulls={false}
+              isAnimationActive={false}
+            />
+            <Line
+              type="linear"
+              dataKey="tour"
+              name="Tour one-putt rate"
+              legendType="triangle"
+              stroke={ROLE_COLOURS.tour}
+              strokeWidth={2}
+              strokeDasharray="6 4"
+              dot={seriesDot(1, 40)}
+              isAnimationActive={false}
+            />
+            <Line
+              type="linear"
+              dataKey="rate"
+              name={rateLabel}
+              legendType="circle"
+              stroke={ROLE_COLOURS.you}
+              strokeWidth={2.5}
+              dot={seriesDot(0, 56)}
+              connectNulls={false}
+              isAnimationActive={false}
+            >
               <ErrorBar dataKey="err" width={6} stroke={ROLE_COLOURS.you} strokeWidth={1.5} direction="y" />
             </Line>
           </ComposedChart>
@@ -63,7 +108,11 @@ export type TrendChartProps = { rows: TrendRow[]; series: TrendSeries[]; rolling
 /** Each chosen band's make rate week by week; a week without putts in a band is a gap. */
 export function TrendChart({ rows, series, rolling }: TrendChartProps) {
   return (
-    <div className="h-72 w-full sm:h-80" role="img" aria-label={`Make rate per ${rolling ? "rolling window" : "week"} for the chosen distance bands`}>
+    <div
+      className="h-72 w-full sm:h-80"
+      role="img"
+      aria-label={`Make rate per ${rolling ? "rolling window" : "week"} for the chosen distance bands`}
+    >
       <ResponsiveContainer width="100%" height="100%">
         <LineChart {...figureChart} data={rows} margin={{ top: 8, right: 12, bottom: 4, left: 0 }}>
           {grid}
@@ -107,7 +156,14 @@ export function CompareChart({ rows, aLabel, bLabel }: CompareChartProps) {
       <ResponsiveContainer width="100%" height="100%">
         <BarChart {...figureChart} data={rows} margin={{ top: 8, right: 8, bottom: 4, left: 0 }} barGap={2}>
           {grid}
-          <XAxis dataKey="label" tick={tickStyle} interval={0} angle={rows.length > 6 ? -30 : 0} textAnchor={rows.length > 6 ? "end" : "middle"} height={rows.length > 6 ? 48 : 28} />
+          <XAxis
+            dataKey="label"
+            tick={tickStyle}
+            interval={0}
+            angle={rows.length > 6 ? -30 : 0}
+            textAnchor={rows.length > 6 ? "end" : "middle"}
+            height={rows.length > 6 ? 48 : 28}
+          />
           {percentAxis}
           <Tooltip formatter={(v) => pct(v)} />
           <Legend verticalAlign="top" height={28} {...legendProps} />
@@ -134,7 +190,10 @@ export function SessionsChart({ rows }: { rows: SessionRow[] }) {
           <XAxis dataKey="label" tick={tickStyle} minTickGap={12} />
           <YAxis width={44} tick={tickStyle} />
           <ReferenceLine y={0} stroke={ROLE_COLOURS.you} />
-          <Tooltip formatter={(v) => (typeof v === "number" ? `${v > 0 ? "+" : ""}${v.toFixed(2)} strokes` : "–")} labelFormatter={(l, p) => `${l} · ${(p?.[0]?.payload as SessionRow | undefined)?.putts ?? 0} putts`} />
+          <Tooltip
+            formatter={(v) => (typeof v === "number" ? `${v > 0 ? "+" : ""}${v.toFixed(2)} strokes` : "–")}
+            labelFormatter={(l, p) => `${l} · ${(p?.[0]?.payload as SessionRow | undefined)?.putts ?? 0} putts`}
+          />
           <Bar dataKey="strokesGained" name="Strokes gained" isAnimationActive={false}>
             {rows.map((r) => (
               <Cell key={r.sessionId} fill={r.strokesGained >= 0 ? ROLE_COLOURS.gain : ROLE_COLOURS.loss} />

@@ -13,7 +13,9 @@ function ChartFrame({ children, height = "h-72 sm:h-80" }: { children: ReactNode
   return (
     <ErrorBoundary
       fallback={(_error, retry) => (
-        <div className={`flex ${height} flex-col items-center justify-center gap-3 rounded-xl bg-white/60 p-4 text-center text-ink-600 ring-1 ring-ink-900/10`}>
+        <div
+          className={`flex ${height} flex-col items-center justify-center gap-3 rounded-xl bg-white/60 p-4 text-center text-ink-600 ring-1 ring-ink-900/10`}
+        >
           <p>The chart could not be drawn. The table has the same numbers.</p>
           <Button size="sm" variant="secondary" onClick={retry}>
             Try again

@@ -45,7 +45,9 @@ export function MakeRateTable({ rows, caption }: { rows: MakeRateRow[]; caption:
               </td>
               <td className="px-2 py-2 text-right tabular-nums">
                 <span className="font-semibold">{fmt(r.rate)}</span>
-                <span className="block text-xs whitespace-nowrap text-ink-500">{r.lo === null ? "no putts" : `${r.lo.toFixed(0)}–${r.hi!.toFixed(0)} %`}</span>
+                <span className="block text-xs whitespace-nowrap text-ink-500">
+                  {r.lo === null ? "no putts" : `${r.lo.toFixed(0)}–${r.hi!.toFixed(0)} %`}
+                </span>
                 {r.caution ? <span className="block text-xs text-warn-800">{r.caution}</span> : null}
               </td>
               <td className="py-2 pr-4 pl-2 text-right whitespace-nowrap text-ink-600 tabular-nums">{fmt(r.tour)}</td>
@@ -58,11 +60,26 @@ export function MakeRateTable({ rows, caption }: { rows: MakeRateRow[]; caption:
 }
 
 /** Make rate by distance band with its interval and the tour overlay: chart and table with the same numbers. */
-export function MakeRatesSection({ params, units, empty, rateLabel }: { params: StatsParams; units: UnitSystem; empty: ReactNode; rateLabel?: string }) {
+export function MakeRatesSection({
+  params,
+  units,
+  empty,
+  rateLabel,
+}: {
+  params: StatsParams;
+  units: UnitSystem;
+  empty: ReactNode;
+  rateLabel?: string;
+}) {
   const rates = useMakeRates(params);
   const baseline = useBaseline();
   const tour = baseline.data ? toBaselineSeries(baseline.data.onePuttRate) : null;
-  if (rates.isError) return <Alert tone="error" title="Could not work out your make rates">{errorMessage(rates.error)}</Alert>;
+  if (rates.isError)
+    return (
+      <Alert tone="error" title="Could not work out your make rates">
+        {errorMessage(rates.error)}
+      </Alert>
+    );
   if (!rates.data) return <div className="h-72 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading make rates" />;
   const rows = makeRateRows(rates.data.bands, units, tour);
   const n = totalAttempts(rates.data.bands);
@@ -71,20 +88,20 @@ export function MakeRatesSection({ params, units, empty, rateLabel }: { params: 
   return (
     <div className="flex flex-col gap-4">
       <p className="text-ink-600">
-        {n} {n === 1 ? "putt" : "putts"} in {rows.filter((r) => r.attempts > 0).length} of {rows.length} bands. The shaded band is the range the true rate
-        likely lies in (95 % Wilson interval); the dashed line is the tour’s one-putt rate, averaged across each band.
+        {n} {n === 1 ? "putt" : "putts"} in {rows.filter((r) => r.attempts > 0).length} of {rows.length} bands. The shaded band is the range
+        the true rate likely lies in (95 % Wilson interval); the dashed line is the tour’s one-putt rate, averaged across each band.
       </p>
       <MakeRateChart rows={rows} tourSource={tour ? `${TOUR_SOURCE_LINE}.` : null} {...(rateLabel ? { rateLabel } : {})} />
       {thin > 0 ? (
         <Alert tone="warning">
-          {thin === 1 ? "One band has" : `${thin} bands have`} fewer than {SMALL_SAMPLE} putts: the rate there can swing a long way from one session to the next, so read the
-          interval, not the single number.
+          {thin === 1 ? "One band has" : `${thin} bands have`} fewer than {SMALL_SAMPLE} putts: the rate there can swing a long way from one
+          session to the next, so read the interval, not the single number.
         </Alert>
       ) : null}
       <MakeRateTable rows={rows} caption="Make rate by distance band" />
       <p className="text-xs text-ink-500">
-        Tour column: {baseline.data?.onePuttRate.source ?? "loading the source…"}. A tour one-putt rate is measured on tournament greens in play, not on a practice
-        green: treat it as a yardstick, not a target.
+        Tour column: {baseline.data?.onePuttRate.source ?? "loading the source…"}. A tour one-putt rate is measured on tournament greens in
+        play, not on a practice green: treat it as a yardstick, not a target.
       </p>
     </div>
   );

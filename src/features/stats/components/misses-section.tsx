@@ -9,9 +9,22 @@ const sg = (v: number) => `${v > 0.005 ? "+" : v < -0.005 ? "−" : ""}${Math.ab
 const pct = (n: number, of: number) => (of === 0 ? "–" : `${Math.round((n / of) * 100)} %`);
 
 /** Where the strokes go: a short summary in words, then misses left/right and short/long per band with the strokes gained. */
-export function MissesSection({ params, units, name }: { params: { from?: string; to?: string; bands?: string; playerId?: string }; units: UnitSystem; name?: string }) {
+export function MissesSection({
+  params,
+  units,
+  name,
+}: {
+  params: { from?: string; to?: string; bands?: string; playerId?: string };
+  units: UnitSystem;
+  name?: string;
+}) {
   const misses = useMisses(params);
-  if (misses.isError) return <Alert tone="error" title="Could not load the misses">{errorMessage(misses.error)}</Alert>;
+  if (misses.isError)
+    return (
+      <Alert tone="error" title="Could not load the misses">
+        {errorMessage(misses.error)}
+      </Alert>
+    );
   if (!misses.data) return <div className="h-40 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading the misses" />;
   const bands = misses.data.bands;
   if (bands.every((b) => b.attempts === 0)) return <p className="text-ink-500">No practice putts in this period.</p>;
@@ -35,10 +48,18 @@ export function MissesSection({ params, units, name }: { params: { from?: string
           <caption className="sr-only">Misses by side and length, and strokes gained, per distance band</caption>
           <thead className="bg-ink-50 align-bottom text-ink-700">
             <tr>
-              <th scope="col" className="py-2 pr-2 pl-4 font-semibold">Distance</th>
-              <th scope="col" className="px-2 py-2 text-right font-semibold">Missed</th>
-              <th scope="col" className="px-2 py-2 text-right font-semibold">Left / right</th>
-              <th scope="col" className="px-2 py-2 text-right font-semibold">Short / long</th>
+              <th scope="col" className="py-2 pr-2 pl-4 font-semibold">
+                Distance
+              </th>
+              <th scope="col" className="px-2 py-2 text-right font-semibold">
+                Missed
+              </th>
+              <th scope="col" className="px-2 py-2 text-right font-semibold">
+                Left / right
+              </th>
+              <th scope="col" className="px-2 py-2 text-right font-semibold">
+                Short / long
+              </th>
               <th scope="col" className="py-2 pr-4 pl-2 text-right font-semibold">
                 Strokes<span className="block text-xs font-normal text-ink-500">vs tour</span>
               </th>
@@ -47,15 +68,19 @@ export function MissesSection({ params, units, name }: { params: { from?: string
           <tbody>
             {bands.map((b) => (
               <tr key={b.fromM} className="border-t border-ink-900/5">
-                <th scope="row" className="py-2 pr-2 pl-4 font-medium whitespace-nowrap">{bandLabel(b.fromM, b.toM, units)}</th>
+                <th scope="row" className="py-2 pr-2 pl-4 font-medium whitespace-nowrap">
+                  {bandLabel(b.fromM, b.toM, units)}
+                </th>
                 <td className="px-2 py-2 text-right tabular-nums">{b.attempts === 0 ? "–" : `${b.missed} of ${b.attempts}`}</td>
-                <td className="px-2 py-2 text-right tabular-nums whitespace-nowrap">
+                <td className="px-2 py-2 text-right whitespace-nowrap tabular-nums">
                   {b.left + b.right === 0 ? "–" : `${pct(b.left, b.left + b.right)} / ${pct(b.right, b.left + b.right)}`}
                 </td>
-                <td className="px-2 py-2 text-right tabular-nums whitespace-nowrap">
+                <td className="px-2 py-2 text-right whitespace-nowrap tabular-nums">
                   {b.short + b.long === 0 ? "–" : `${pct(b.short, b.short + b.long)} / ${pct(b.long, b.short + b.long)}`}
                 </td>
-                <td className={`py-2 pr-4 pl-2 text-right font-semibold tabular-nums ${b.strokesGained < -0.05 ? "text-bad-600" : "text-ink-800"}`}>
+                <td
+                  className={`py-2 pr-4 pl-2 text-right font-semibold tabular-nums ${b.strokesGained < -0.05 ? "text-bad-600" : "text-ink-800"}`}
+                >
                   {b.attempts === 0 ? "–" : sg(b.strokesGained)}
                 </td>
               </tr>
@@ -64,8 +89,8 @@ export function MissesSection({ params, units, name }: { params: { from?: string
         </table>
       </TableScroller>
       <p className="text-xs text-ink-500">
-        Shares count only the misses whose side or leave was logged. Strokes: the tour’s expected putts from each putt’s distance minus the putts it took (holed 1, missed 1 + the tour’s
-        expected putts from the leave).
+        Shares count only the misses whose side or leave was logged. Strokes: the tour’s expected putts from each putt’s distance minus the
+        putts it took (holed 1, missed 1 + the tour’s expected putts from the leave).
       </p>
     </div>
   );

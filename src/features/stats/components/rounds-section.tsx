@@ -9,7 +9,12 @@ const sg = (v: number) => `${v > 0.005 ? "+" : v < -0.005 ? "−" : ""}${Math.ab
 /** Strokes gained on the greens per round: putts taken against the tour's expected putts from each first putt. */
 export function RoundsSection({ params }: { params: PlayerRange }) {
   const rounds = useRounds(params);
-  if (rounds.isError) return <Alert tone="error" title="Could not load the rounds">{errorMessage(rounds.error)}</Alert>;
+  if (rounds.isError)
+    return (
+      <Alert tone="error" title="Could not load the rounds">
+        {errorMessage(rounds.error)}
+      </Alert>
+    );
   if (!rounds.data) return <div className="h-32 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading the rounds" />;
   const items = rounds.data.items.filter((r) => r.totals.holes > 0);
   if (items.length === 0) return <p className="text-ink-500">No rounds logged in this period.</p>;
@@ -19,11 +24,21 @@ export function RoundsSection({ params }: { params: PlayerRange }) {
         <caption className="sr-only">Strokes gained per round</caption>
         <thead className="bg-ink-50 text-ink-700">
           <tr>
-            <th scope="col" className="py-2 pr-2 pl-4 font-semibold">Round</th>
-            <th scope="col" className="px-2 py-2 text-right font-semibold">Holes</th>
-            <th scope="col" className="px-2 py-2 text-right font-semibold">Putts</th>
-            <th scope="col" className="px-2 py-2 text-right font-semibold">Tour</th>
-            <th scope="col" className="py-2 pr-4 pl-2 text-right font-semibold">Gained</th>
+            <th scope="col" className="py-2 pr-2 pl-4 font-semibold">
+              Round
+            </th>
+            <th scope="col" className="px-2 py-2 text-right font-semibold">
+              Holes
+            </th>
+            <th scope="col" className="px-2 py-2 text-right font-semibold">
+              Putts
+            </th>
+            <th scope="col" className="px-2 py-2 text-right font-semibold">
+              Tour
+            </th>
+            <th scope="col" className="py-2 pr-4 pl-2 text-right font-semibold">
+              Gained
+            </th>
           </tr>
         </thead>
         <tbody>

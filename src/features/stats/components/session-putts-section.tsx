@@ -44,7 +44,12 @@ function SessionPutts({ session, units }: { session: SessionStat; units: UnitSys
 export function SessionPuttsSection({ playerId, from, to, units }: { playerId?: string; from?: string; to?: string; units: UnitSystem }) {
   const [shown, setShown] = useState(10);
   const stats = useSessionStats({ ...(from ? { from } : {}), ...(to ? { to } : {}), ...(playerId ? { playerId } : {}), pageSize: 50 });
-  if (stats.isError) return <Alert tone="error" title="Could not load the sessions">{errorMessage(stats.error)}</Alert>;
+  if (stats.isError)
+    return (
+      <Alert tone="error" title="Could not load the sessions">
+        {errorMessage(stats.error)}
+      </Alert>
+    );
   if (!stats.data) return <div className="h-32 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading the sessions" />;
   const items = stats.data.items;
   if (items.length === 0) return <p className="text-ink-500">No sessions in this period.</p>;

@@ -9,7 +9,12 @@ const sg = (v: number) => `${v > 0.005 ? "+" : v < -0.005 ? "−" : ""}${Math.ab
 /** Expected putts and strokes gained per session against the tour baseline, and how often long lags finish outside 1 m. */
 export function SessionsSection({ from, to, playerId }: { from?: string; to?: string; playerId?: string }) {
   const stats = useSessionStats({ ...(from ? { from } : {}), ...(to ? { to } : {}), ...(playerId ? { playerId } : {}), pageSize: 50 });
-  if (stats.isError) return <Alert tone="error" title="Could not load the session figures">{errorMessage(stats.error)}</Alert>;
+  if (stats.isError)
+    return (
+      <Alert tone="error" title="Could not load the session figures">
+        {errorMessage(stats.error)}
+      </Alert>
+    );
   if (!stats.data) return <div className="h-56 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading the session figures" />;
   const items = stats.data.items.filter((s) => s.putts > 0);
   if (items.length === 0) return <p className="text-ink-500">No sessions with putts in this period.</p>;
@@ -22,7 +27,11 @@ export function SessionsSection({ from, to, playerId }: { from?: string; to?: st
           <p className="text-sm text-ink-500">Long putts (6 m / 20 ft or more) that finished outside 1 m</p>
           <p className="text-3xl font-semibold tabular-nums">{lags.share === null ? "–" : `${Math.round(lags.share * 100)} %`}</p>
           <p className="text-sm text-ink-500">
-            {lags.known > 0 ? `${lags.outside} of ${lags.known} lags whose finish was logged` : lags.lags > 0 ? `${lags.lags} lags, none with the miss length logged` : "No long putts logged"}
+            {lags.known > 0
+              ? `${lags.outside} of ${lags.known} lags whose finish was logged`
+              : lags.lags > 0
+                ? `${lags.lags} lags, none with the miss length logged`
+                : "No long putts logged"}
             {lags.known > 0 && lags.known < 30 ? " — few lags, read it as a rough guide" : ""}
           </p>
         </div>
@@ -30,8 +39,14 @@ export function SessionsSection({ from, to, playerId }: { from?: string; to?: st
           <p className="text-sm text-ink-500">Strokes gained over these sessions</p>
           <p className="text-3xl font-semibold tabular-nums">{sg(items.reduce((s, x) => s + x.strokesGained, 0))}</p>
           <p className="text-sm text-ink-500">
-            {sg(items.reduce((s, x) => s + x.strokesGained, 0) / Math.max(1, items.reduce((s, x) => s + x.putts, 0)))} a putt over {items.reduce((s, x) => s + x.putts, 0)} putts; above 0 is better than
-            the tour average from the same distances
+            {sg(
+              items.reduce((s, x) => s + x.strokesGained, 0) /
+                Math.max(
+                  1,
+                  items.reduce((s, x) => s + x.putts, 0),
+                ),
+            )}{" "}
+            a putt over {items.reduce((s, x) => s + x.putts, 0)} putts; above 0 is better than the tour average from the same distances
           </p>
         </div>
       </div>
@@ -71,16 +86,18 @@ export function SessionsSection({ from, to, playerId }: { from?: string; to?: st
                   {s.leavesAssumed > 0 ? <span className="block text-xs text-ink-500">{s.leavesAssumed} leaves assumed</span> : null}
                 </td>
                 <td className="px-2 py-2 text-right font-semibold tabular-nums">{sg(s.strokesGained)}</td>
-                <td className="py-2 pr-4 pl-2 text-right whitespace-nowrap tabular-nums">{s.longPuttsKnown > 0 ? `${s.longLagsOutside1m} of ${s.longPuttsKnown}` : "–"}</td>
+                <td className="py-2 pr-4 pl-2 text-right whitespace-nowrap tabular-nums">
+                  {s.longPuttsKnown > 0 ? `${s.longLagsOutside1m} of ${s.longPuttsKnown}` : "–"}
+                </td>
               </tr>
             ))}
           </tbody>
         </table>
       </TableScroller>
       <p className="text-xs text-ink-500">
-        Each putt is worth the tour’s average putts to hole out from its distance; a holed putt took 1, a miss took 1 plus the average from where it finished. A miss
-        logged without its length is assumed to finish 45 cm or a tenth of its length away (whichever is more), and is counted as “leaves assumed”. Baseline: tour
-        averages attributed to M. Broadie, Every Shot Counts (2014), partly from memory.
+        Each putt is worth the tour’s average putts to hole out from its distance; a holed putt took 1, a miss took 1 plus the average from
+        where it finished. A miss logged without its length is assumed to finish 45 cm or a tenth of its length away (whichever is more),
+        and is counted as “leaves assumed”. Baseline: tour averages attributed to M. Broadie, Every Shot Counts (2014), partly from memory.
       </p>
     </div>
   );

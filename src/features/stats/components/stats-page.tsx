@@ -47,7 +47,11 @@ export function StatsPage() {
   return (
     <div className="flex flex-col gap-6">
       <title>Make rates · Borrowline</title>
-      <PageHeader eyebrow="Practice log" title="Make rates" description="How often you hole out from each distance, how sure that number is, and whether it is moving." />
+      <PageHeader
+        eyebrow="Practice log"
+        title="Make rates"
+        description="How often you hole out from each distance, how sure that number is, and whether it is moving."
+      />
       <StatsBody />
     </div>
   );
@@ -67,7 +71,11 @@ export function StatsBody({ player }: { player?: { id: string; name: string } })
     const playerId = player.id;
     return { ...raw, stats: { ...raw.stats, playerId }, trend: { ...raw.trend, playerId }, compare: { ...raw.compare, playerId } };
   }, [raw, player]);
-  const range = { ...(view.stats.from ? { from: view.stats.from } : {}), ...(view.stats.to ? { to: view.stats.to } : {}), ...(player ? { playerId: player.id } : {}) };
+  const range = {
+    ...(view.stats.from ? { from: view.stats.from } : {}),
+    ...(view.stats.to ? { to: view.stats.to } : {}),
+    ...(player ? { playerId: player.id } : {}),
+  };
   const who = player ? player.name : "You";
   const update = (changes: Record<string, string | undefined>) => {
     const next = new URLSearchParams(query);
@@ -77,11 +85,16 @@ export function StatsBody({ player }: { player?: { id: string; name: string } })
     }
     setQuery(next, { replace: true, preventScrollReset: true });
   };
-  const periodId = !view.stats.from && !view.stats.to ? "all" : PERIODS.find((p) => p.days !== null && view.stats.to === undefined && view.stats.from === addDays(day, -(p.days - 1)))?.id;
+  const periodId =
+    !view.stats.from && !view.stats.to
+      ? "all"
+      : PERIODS.find((p) => p.days !== null && view.stats.to === undefined && view.stats.from === addDays(day, -(p.days - 1)))?.id;
 
   const empty = player ? (
     <EmptyState title={view.stats.from || view.stats.to ? "No putts in this period" : `${player.name} has not logged any putts yet`}>
-      {view.stats.from || view.stats.to ? "Choose a longer period." : "Their make rates appear here once they log a practice session or import one."}
+      {view.stats.from || view.stats.to
+        ? "Choose a longer period."
+        : "Their make rates appear here once they log a practice session or import one."}
     </EmptyState>
   ) : (
     <EmptyState
@@ -116,15 +129,31 @@ export function StatsBody({ player }: { player?: { id: string; name: string } })
                   type="button"
                   aria-pressed={periodId === p.id}
                   onClick={() => update({ from: p.days === null ? undefined : addDays(day, -(p.days - 1)), to: undefined })}
-                  className={periodId === p.id ? "min-h-11 rounded-lg bg-white px-2 text-sm font-medium whitespace-nowrap shadow-sm" : "min-h-11 rounded-lg px-2 text-sm font-medium whitespace-nowrap text-ink-600 hover:text-ink-900"}
+                  className={
+                    periodId === p.id
+                      ? "min-h-11 rounded-lg bg-white px-2 text-sm font-medium whitespace-nowrap shadow-sm"
+                      : "min-h-11 rounded-lg px-2 text-sm font-medium whitespace-nowrap text-ink-600 hover:text-ink-900"
+                  }
                 >
                   {p.label}
                 </button>
               ))}
             </div>
           </fieldset>
-          <InputField label="From" type="date" value={view.stats.from ?? ""} max={view.stats.to} onChange={(e) => update({ from: e.target.value || undefined })} />
-          <InputField label="To" type="date" value={view.stats.to ?? ""} min={view.stats.from} onChange={(e) => update({ to: e.target.value || undefined })} />
+          <InputField
+            label="From"
+            type="date"
+            value={view.stats.from ?? ""}
+            max={view.stats.to}
+            onChange={(e) => update({ from: e.target.value || undefined })}
+          />
+          <InputField
+            label="To"
+            type="date"
+            value={view.stats.to ?? ""}
+            min={view.stats.from}
+            onChange={(e) => update({ to: e.target.value || undefined })}
+          />
           <SelectField
             containerClassName="col-span-2 lg:col-span-1"
             label="Putts from"
@@ -138,46 +167,91 @@ export function StatsBody({ player }: { player?: { id: string; name: string } })
           />
         </div>
         <details className="mt-3">
-          <summary className="flex min-h-11 cursor-pointer items-center text-sm font-medium text-ink-700">Distance bands{view.edgesM ? " (your own)" : " (the defaults)"}</summary>
+          <summary className="flex min-h-11 cursor-pointer items-center text-sm font-medium text-ink-700">
+            Distance bands{view.edgesM ? " (your own)" : " (the defaults)"}
+          </summary>
           <div className="mt-2 max-w-xl">
-            <BandEditor key={`${units}-${bandsParam(view.edgesM) ?? "default"}`} units={units} edgesM={view.edgesM} onChange={(e) => update({ bands: bandsParam(e), tb: undefined })} />
+            <BandEditor
+              key={`${units}-${bandsParam(view.edgesM) ?? "default"}`}
+              units={units}
+              edgesM={view.edgesM}
+              onChange={(e) => update({ bands: bandsParam(e), tb: undefined })}
+            />
           </div>
         </details>
       </Card>
 
       <Section id="by-distance" title="Make rate by distance">
-        <MakeRatesSection params={view.stats} units={units} empty={empty} {...(player ? { rateLabel: `${player.name}’s make rate` } : {})} />
+        <MakeRatesSection
+          params={view.stats}
+          units={units}
+          empty={empty}
+          {...(player ? { rateLabel: `${player.name}’s make rate` } : {})}
+        />
       </Section>
 
-      <Section id="misses" title="Where the strokes go" intro="Strokes gained or lost against the tour from each distance, and which way the misses finish.">
+      <Section
+        id="misses"
+        title="Where the strokes go"
+        intro="Strokes gained or lost against the tour from each distance, and which way the misses finish."
+      >
         <MissesSection params={{ ...range, ...(view.stats.bands ? { bands: view.stats.bands } : {}) }} units={units} name={who} />
       </Section>
 
-      <Section id="trend" title="Over time" intro={player ? "The make rate per band, week by week." : "Your make rate per band, week by week."}>
+      <Section
+        id="trend"
+        title="Over time"
+        intro={player ? "The make rate per band, week by week." : "Your make rate per band, week by week."}
+      >
         <TrendSection
           params={view.trend}
           units={units}
           chosen={view.trendBands}
           onChoose={(b) => update({ tb: b.join(",") })}
-          onWindow={(w, weeks) => update({ win: w === "rolling" ? "rolling" : undefined, ww: w === "rolling" && weeks && weeks !== 4 ? String(weeks) : undefined })}
+          onWindow={(w, weeks) =>
+            update({
+              win: w === "rolling" ? "rolling" : undefined,
+              ww: w === "rolling" && weeks && weeks !== 4 ? String(weeks) : undefined,
+            })
+          }
         />
       </Section>
 
-      <Section id="compare" title="Compare two periods" intro="Is the practice paying off? Set an earlier period A against a later period B.">
-        <CompareSection params={view.compare} units={units} onChange={(p) => update({ aFrom: p.aFrom, aTo: p.aTo, bFrom: p.bFrom, bTo: p.bTo })} />
+      <Section
+        id="compare"
+        title="Compare two periods"
+        intro="Is the practice paying off? Set an earlier period A against a later period B."
+      >
+        <CompareSection
+          params={view.compare}
+          units={units}
+          onChange={(p) => update({ aFrom: p.aFrom, aTo: p.aTo, bFrom: p.bFrom, bTo: p.bTo })}
+        />
       </Section>
 
-      <Section id="sessions" title="Strokes gained per session" intro="Each session’s putts against what a tour player would take from the same distances.">
+      <Section
+        id="sessions"
+        title="Strokes gained per session"
+        intro="Each session’s putts against what a tour player would take from the same distances."
+      >
         <SessionsSection from={view.stats.from} to={view.stats.to} {...(player ? { playerId: player.id } : {})} />
       </Section>
 
       {player ? (
-        <Section id="session-putts" title="Sessions and putts" intro={`${player.name}’s sessions, newest first. Open one to see its putts.`}>
+        <Section
+          id="session-putts"
+          title="Sessions and putts"
+          intro={`${player.name}’s sessions, newest first. Open one to see its putts.`}
+        >
           <SessionPuttsSection playerId={player.id} from={view.stats.from} to={view.stats.to} units={units} />
         </Section>
       ) : null}
 
-      <Section id="rounds" title="Strokes gained per round" intro="On the course: putts taken against the tour’s expected putts from each first putt.">
+      <Section
+        id="rounds"
+        title="Strokes gained per round"
+        intro="On the course: putts taken against the tour’s expected putts from each first putt."
+      >
         <RoundsSection params={range} />
       </Section>
     </div>

@@ -18,7 +18,12 @@ export type TrendSectionProps = {
 /** Make rate over time per band: week by week, or a rolling window of weeks that smooths thin weeks. */
 export function TrendSection({ params, units, chosen, onChoose, onWindow }: TrendSectionProps) {
   const trend = useTrend(params);
-  if (trend.isError) return <Alert tone="error" title="Could not load the trend">{errorMessage(trend.error)}</Alert>;
+  if (trend.isError)
+    return (
+      <Alert tone="error" title="Could not load the trend">
+        {errorMessage(trend.error)}
+      </Alert>
+    );
   if (!trend.data) return <div className="h-72 animate-pulse rounded-xl bg-ink-900/5" aria-label="Loading the trend" />;
   const t = trend.data;
   const bands = chosen ?? defaultTrendBands(t);
@@ -65,7 +70,11 @@ export function TrendSection({ params, units, chosen, onChoose, onWindow }: Tren
                 type="button"
                 aria-pressed={on}
                 onClick={() => toggle(i)}
-                className={on ? "min-h-11 rounded-full border-2 border-ink-900 bg-ink-900 px-4 text-sm font-medium text-sand-50" : "min-h-11 rounded-full border-2 border-ink-900/15 bg-white px-4 text-sm font-medium text-ink-700"}
+                className={
+                  on
+                    ? "min-h-11 rounded-full border-2 border-ink-900 bg-ink-900 px-4 text-sm font-medium text-sand-50"
+                    : "min-h-11 rounded-full border-2 border-ink-900/15 bg-white px-4 text-sm font-medium text-ink-700"
+                }
               >
                 {bandLabel(b.fromM, b.toM, units)}
               </button>
@@ -80,7 +89,11 @@ export function TrendSection({ params, units, chosen, onChoose, onWindow }: Tren
       ) : (
         <>
           <TrendChart rows={rows} series={series} rolling={t.window === "rolling"} />
-          {t.weeks.length < 3 ? <Alert tone="info">Only {t.weeks.length} {t.weeks.length === 1 ? "week" : "weeks"} with putts so far: a trend needs a few more.</Alert> : null}
+          {t.weeks.length < 3 ? (
+            <Alert tone="info">
+              Only {t.weeks.length} {t.weeks.length === 1 ? "week" : "weeks"} with putts so far: a trend needs a few more.
+            </Alert>
+          ) : null}
           <p className="text-xs text-ink-500">
             {t.window === "rolling"
               ? `Each point pools the week it is drawn at and the ${t.windowWeeks - 1} weeks before it.`

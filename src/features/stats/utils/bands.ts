@@ -31,7 +31,8 @@ export function edgesFromText(text: string, units: UnitSystem): EdgesParse {
     .map((p) => p.trim())
     .filter(Boolean);
   const u = longUnitLabel(units);
-  if (parts.length === 0) return { ok: false, message: `Enter at least one edge in ${u}, e.g. ${units === "imperial" ? "3, 6, 10" : "1, 2, 3"}` };
+  if (parts.length === 0)
+    return { ok: false, message: `Enter at least one edge in ${u}, e.g. ${units === "imperial" ? "3, 6, 10" : "1, 2, 3"}` };
   const values = parts.map(Number);
   if (values.some((v) => !Number.isFinite(v))) return { ok: false, message: `Only numbers (${u}), separated by commas` };
   const inner = values[0] === 0 ? values.slice(1) : values;
@@ -57,6 +58,11 @@ export function bandsParam(edgesM: readonly number[] | null): string | undefined
 export function edgesFromParam(value: string | null): number[] | null {
   if (!value) return null;
   const edges = value.split(",").map(Number);
-  if (edges.length === 0 || edges.length > MAX_BAND_EDGES || edges.some((e, i) => !Number.isFinite(e) || e <= 0 || e > MAX_BAND_EDGE_M || (i > 0 && e <= edges[i - 1]!))) return null;
+  if (
+    edges.length === 0 ||
+    edges.length > MAX_BAND_EDGES ||
+    edges.some((e, i) => !Number.isFinite(e) || e <= 0 || e > MAX_BAND_EDGE_M || (i > 0 && e <= edges[i - 1]!))
+  )
+    return null;
   return edges;
 }

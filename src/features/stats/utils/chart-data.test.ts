@@ -64,6 +64,10 @@ test("small samples are named with their size; enough putts or none need no caut
 });
 
 const trend: Trend = {
+  playerId: "p1",
+  from: null,
+  to: null,
+  source: "practice",
   window: "week",
   windowWeeks: 1,
   bands: [
@@ -106,6 +110,8 @@ test("a compared band reads as a real change only below p = 0.05, with the direc
   expect(formatP(0.2345)).toBe("p = 0.23");
 
   const compare: Compare = {
+    playerId: "p1",
+    source: "practice",
     a: { from: "2024-04-01", to: "2024-04-30" },
     b: { from: "2024-05-01", to: "2024-05-31" },
     overlap: false,

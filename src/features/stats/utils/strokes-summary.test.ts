@@ -27,14 +27,19 @@ test("names the band that loses the most strokes in total, how much, and which w
     "metric",
     "Ivo",
   )!;
-  expect(lines[0]).toBe("Ivo loses the most strokes from 1–2 m: 3.6 over 30 putts (0.12 a putt) against a tour player from the same spots, holing 40 %.");
+  expect(lines[0]).toBe(
+    "Ivo loses the most strokes from 1–2 m: 3.6 over 30 putts (0.12 a putt) against a tour player from the same spots, holing 40 %.",
+  );
   expect(lines[1]).toBe("From there, most misses finish right (11 of 14 with a side logged) and short (12 of 16 with a leave logged).");
   expect(lines[2]).toBe("The best band is 0–1 m, where they lose only 0.01 a putt.");
 });
 
 test("thin bands are not singled out, and no putts at all gives no summary", () => {
   expect(strokesSummary([band(0, 1, { attempts: 9, strokesGained: -5 })], "metric")).toBeNull();
-  const lines = strokesSummary([band(0, 1, { attempts: 9, strokesGained: -5 }), band(1, 2, { attempts: 12, strokesGained: -1 })], "metric")!;
+  const lines = strokesSummary(
+    [band(0, 1, { attempts: 9, strokesGained: -5 }), band(1, 2, { attempts: 12, strokesGained: -1 })],
+    "metric",
+  )!;
   expect(lines[0]).toMatch(/^You lose the most strokes from 1–2 m/);
 });
 

@@ -43,10 +43,17 @@ export function strokesSummary(bands: readonly MissBand[], units: UnitSystem, na
     const lean = missLean(worst);
     if (lean) lines.push(`From there, ${lean}.`);
   } else {
-    lines.push(`${name} hold${name === "You" ? "" : "s"} their own against the tour baseline in every band with ${SUMMARY_MIN_PUTTS} or more putts.`.replace("their own", name === "You" ? "your own" : "their own"));
+    lines.push(
+      `${name} hold${name === "You" ? "" : "s"} their own against the tour baseline in every band with ${SUMMARY_MIN_PUTTS} or more putts.`.replace(
+        "their own",
+        name === "You" ? "your own" : "their own",
+      ),
+    );
   }
   if (best !== worst && best.strokesGained / best.attempts > worst.strokesGained / worst.attempts) {
-    lines.push(`The best band is ${label(best)}, where ${they} ${best.strokesGained >= 0 ? "gain" : "lose only"} ${Math.abs(best.strokesGained / best.attempts).toFixed(2)} a putt.`);
+    lines.push(
+      `The best band is ${label(best)}, where ${they} ${best.strokesGained >= 0 ? "gain" : "lose only"} ${Math.abs(best.strokesGained / best.attempts).toFixed(2)} a putt.`,
+    );
   }
   return lines;
 }
