@@ -5,6 +5,7 @@ import { cleanup, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { useLocation } from "react-router";
 import { renderRoute } from "../../../testing/render";
+import { http, HttpResponse, meAnswer, network, type JsonBodyType } from "../../../testing/network";
 import { ReadPage } from "./read-page";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
@@ -27,10 +28,6 @@ let saved: Saved[] = [];
 let posted: unknown[] = [];
 let greensAnswer: { status: number; body: unknown } = { status: 404, body: { error: { code: "NOT_FOUND", message: "Not found" } } };
 
-function json(status: number, body?: unknown) {
-  return new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-}
-
 beforeEach(() => {
   saved = [
     {
@@ -46,33 +43,26 @@ beforeEach(() => {
   posted = [];
   greensAnswer = { status: 404, body: { error: { code: "NOT_FOUND", message: "Not found" } } };
   window.localStorage.clear();
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      const method = init?.method ?? "GET";
-      if (url.pathname === "/api/me") return json(200, me);
-      if (url.pathname === "/api/reads/solve") return json(200, { ...result, path: [[0, 0], [0, 3]] });
-      if (url.pathname === "/api/greens") return json(greensAnswer.status, greensAnswer.body);
-      if (url.pathname === "/api/reads" && method === "GET") return json(200, { items: saved });
-      if (url.pathname === "/api/reads" && method === "POST") {
-        const body = JSON.parse(String(init?.body)) as { read: unknown; label?: string; greenId?: string };
-        posted.push(body);
-        const row = { id: "22222222-2222-4222-8222-222222222222", label: body.label ?? null, greenId: body.greenId ?? null, greenName: body.greenId ? "Top green" : null, input: body.read, result, createdAt: "2025-05-02T10:00:00.000Z" };
-        saved = [row, ...saved];
-        return json(201, row);
-      }
-      if (url.pathname.startsWith("/api/reads/") && method === "DELETE") {
-        saved = saved.filter((s) => !url.pathname.endsWith(s.id));
-        return json(204);
-      }
-      return json(404, { error: { code: "NOT_FOUND", message: "Not found" } });
+  network.use(
+    meAnswer(me),
+    http.post("/api/reads/solve", () => HttpResponse.json({ ...result, path: [[0, 0], [0, 3]] })),
+    http.get("/api/greens", () => HttpResponse.json(greensAnswer.body as JsonBodyType, { status: greensAnswer.status })),
+    http.get("/api/reads", () => HttpResponse.json({ items: saved })),
+    http.post("/api/reads", async ({ request }) => {
+      const body = (await request.json()) as { read: unknown; label?: string; greenId?: string };
+      posted.push(body);
+      const row = { id: "22222222-2222-4222-8222-222222222222", label: body.label ?? null, greenId: body.greenId ?? null, greenName: body.greenId ? "Top green" : null, input: body.read, result, createdAt: "2025-05-02T10:00:00.000Z" };
+      saved = [row, ...saved];
+      return HttpResponse.json(row as JsonBodyType, { status: 201 });
+    }),
+    http.delete("/api/reads/:id", ({ params }) => {
+      saved = saved.filter((s) => s.id !== params.id);
+      return new HttpResponse(null, { status: 204 });
     }),
   );
 });
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 function Where() {
