@@ -4,11 +4,11 @@
 // A test adds its answers with `network.use(http.get("/api/...", () => HttpResponse.json(...)))`; they are reset
 // after each test. Paths are relative to the jsdom page (http://localhost:3000), as the app's requests are.
 import { vi } from "vitest";
-import { http, HttpResponse, type JsonBodyType, type RequestHandler } from "msw";
+import { delay, http, HttpResponse, type JsonBodyType, type RequestHandler } from "msw";
 import { setupServer } from "msw/node";
 import type { ApiErrorBody, ErrorCode } from "../../shared/errors";
 
-export { http, HttpResponse, type JsonBodyType };
+export { delay, http, HttpResponse, type JsonBodyType };
 
 export const network = setupServer();
 
@@ -52,7 +52,7 @@ export function serve(...handlers: RequestHandler[]): Call[] {
  */
 export function watchUploads(): { path: string; form: FormData }[] {
   const forms: { path: string; form: FormData }[] = [];
-  if (vi.isMockFunction(globalThis.fetch)) globalThis.fetch.mockRestore(); // a second watch in one test starts afresh
+  if (vi.isMockFunction(globalThis.fetch)) vi.mocked(globalThis.fetch).mockRestore(); // a second watch in one test starts afresh
   const intercepted = globalThis.fetch; // MSW's, installed by network.listen()
   vi.spyOn(globalThis, "fetch").mockImplementation((input, init) => {
     const url = new URL(input instanceof Request ? input.url : String(input), window.location.href);
