@@ -3,6 +3,7 @@
 import Delaunator from "delaunator";
 import Papa from "papaparse";
 import { HEIGHT_MAP_LIMITS, type HeightMapSummary, type StoredHeightMap } from "./schemas/height-map";
+import { parseDecimal } from "./units";
 
 /** `{ ok: true, value }` or field errors keyed by where they are ("row 3, column 5", "spacingM", …). */
 export type Checked<T> = { ok: true; value: T } | { ok: false; message: string; errors: Record<string, string> };
@@ -43,7 +44,7 @@ export function parseHeightGridCsv(text: string): Checked<number[][]> {
     heights.push(
       row.map((cell, c) => {
         const t = cell.trim();
-        const v = t === "" ? Number.NaN : Number(t);
+        const v = parseDecimal(t) ?? Number.NaN;
         if (!Number.isFinite(v)) errs.add(`row ${r + 1}, column ${c + 1}`, t === "" ? "is empty (a hole in the grid)" : `"${t.slice(0, 20)}" is not a height in metres`);
         return v;
       }),
@@ -65,7 +66,7 @@ export function parseSpotHeightsCsv(text: string): Checked<[number, number, numb
       errs.add(`row ${r + 1}`, `has ${row.length} values; a spot height is x,y,z`);
       return;
     }
-    const v = row.map((c) => (c.trim() === "" ? Number.NaN : Number(c.trim())));
+    const v = row.map((c) => parseDecimal(c) ?? Number.NaN);
     v.forEach((x, c) => {
       if (!Number.isFinite(x)) errs.add(`row ${r + 1}, column ${c + 1}`, "is not a number");
     });

@@ -64,3 +64,20 @@ test("the coach who keeps a green shares it with a squad, then takes it back", a
   await waitFor(() => expect(calls.filter((c) => c.method === "PUT").at(-1)?.body).toEqual({ squadId: null }));
   expect(await screen.findByText(/Only you see this green/)).toBeInTheDocument();
 });
+
+test("a Stimp reading is read as a golfer types it: 10,5 is 10.5; 1e1 and 0x0A are not numbers", async () => {
+  stubApi({ ...base, squad: null, ownerName: "Coach Ash", mine: true });
+  const user = userEvent.setup();
+  renderRoute(<GreenPage greenId={GREEN_ID} />, { at: "/greens/g" });
+  const field = await screen.findByLabelText("Stimp (ft)");
+  const save = screen.getByRole("button", { name: "Save the reading" });
+  for (const typed of ["1e1", "0x0A"]) {
+    await user.clear(field);
+    await user.type(field, typed);
+    expect(save).toBeDisabled();
+    expect(field).toHaveAccessibleDescription(/Between 3 and 16 ft/);
+  }
+  await user.clear(field);
+  await user.type(field, "10,5");
+  expect(save).toBeEnabled();
+});
