@@ -45,3 +45,32 @@ test("the one number parser: comma decimals yes; hex, exponents, blanks and unit
     expect(parseDecimal(bad), String(bad)).toBeNull();
   expect(Number("0x1A")).toBe(26); // why bare Number() is not used
 });
+
+test("the fall line's two wordings (the read's short one, the scene's from where the golfer stands) agree on every lean", async () => {
+  const { describeFallLine, fallLineWords } = await import("./format");
+  const cases: [number, string, string][] = [
+    [0, "straight downhill", "falls toward the hole (downhill putt)"],
+    [45, "downhill, falls right", "falls to your right and toward the hole (downhill)"],
+    [90, "falls to the right", "falls to your right (side hill)"],
+    [135, "uphill, falls right", "falls to your right and toward you (uphill)"],
+    [180, "straight uphill", "falls toward you (uphill putt)"],
+    [260, "falls to the left", "falls to your left (side hill)"],
+    [315, "downhill, falls left", "falls to your left and toward the hole (downhill)"],
+    // 15° either side of a quarter still takes the quarter's name (common practice: nobody reads a 10° lean).
+    [14, "straight downhill", "falls toward the hole (downhill putt)"],
+  ];
+  for (const [deg, short, golfer] of cases) {
+    expect(describeFallLine(deg)).toBe(short);
+    expect(fallLineWords(deg)).toBe(golfer);
+  }
+});
+
+test("aim words: an offset by side, the centre, and a start line too wide for an offset", async () => {
+  const { aimWords, holeWidthsWords } = await import("./format");
+  expect(aimWords(-0.39, "metric")).toBe("39 cm left of the hole");
+  expect(aimWords(0.003, "imperial")).toBe("straight at the hole");
+  expect(aimWords(null, "imperial", -75.4)).toBe("start it 75° left of the hole");
+  // 4.25 in = 10.795 cm a hole width (Rules of Golf, Definitions "Hole").
+  expect(holeWidthsWords(0.10795)).toBe("1.0 hole width");
+  expect(holeWidthsWords(-0.27)).toBe("2.5 hole widths");
+});

@@ -1,6 +1,6 @@
 // Numbers and dates for people: the one place they are rounded and worded (issue 14). Storage stays SI and
 // unrounded; only what is shown or exported passes through here. Lengths come from units.ts (re-exported).
-import { formatLength, formatShort, mpsToFtps, type UnitSystem } from "./units";
+import { formatLength, formatShort, metresToHoleWidths, mpsToFtps, type UnitSystem } from "./units";
 
 export { formatLength, formatShort };
 
@@ -104,4 +104,92 @@ export const STOPPED_AT_HOLE_MPS = 0.05;
 /** The ball at the hole for a sentence "… at the hole": "just reaching the hole, dying" or "rolling at 2.2 ft/s". */
 export function atHoleText(entrySpeedMps: number, units: UnitSystem): string {
   return entrySpeedMps < STOPPED_AT_HOLE_MPS ? "just reaching the hole, dying" : `rolling at ${formatSpeed(entrySpeedMps, units)}`;
+}
+
+// ---- a read in words (issue 16: aim, fall line and pace are worded here, once) --------------------------------
+// Signed sideways lengths and angles: + = the golfer's right. Fall lines: the direction the green falls toward,
+// clockwise from the line ball→hole seen from above (0 = away toward the hole: a downhill putt; 90 = to the right).
+
+/** Which side a signed sideways length or angle lies on. */
+export function sideOf(signed: number): "left" | "right" {
+  return signed < 0 ? "left" : "right";
+}
+
+/** Under this an aim is the centre of the hole: about a fifth of an inch, less than anyone can aim. */
+export const AIM_CENTRE_M = 0.005;
+
+/** A start line wider than the API gives an offset for (aimOffsetM null): "75° left of the hole". */
+export function startLineAimText(startLineDeg: number): string {
+  return `${Math.abs(startLineDeg).toFixed(0)}° ${sideOf(startLineDeg)} of the hole`;
+}
+
+/** The aim in a few words: "39 cm left of the hole", "straight at the hole", or "start it 75° left of the hole". */
+export function aimWords(aimOffsetM: number | null, units: UnitSystem, startLineDeg = 0): string {
+  if (aimOffsetM === null) return `start it ${startLineAimText(startLineDeg)}`;
+  if (Math.abs(aimOffsetM) < AIM_CENTRE_M) return "straight at the hole";
+  return `${formatShort(aimOffsetM, units)} ${sideOf(aimOffsetM)} of the hole`;
+}
+
+/** "3.6 hole widths", "1 hole width", "12 hole widths". */
+export function holeWidthsWords(m: number): string {
+  const w = metresToHoleWidths(Math.abs(m));
+  return `${w < 10 ? w.toFixed(1) : Math.round(w)} hole width${w >= 0.95 && w < 1.05 ? "" : "s"}`;
+}
+
+/**
+ * The two leans of a fall line: toward the hole or the golfer, and to a side. Within 15° of a quarter only that
+ * quarter's lean counts (null for the other), as a golfer would call it.
+ */
+export function fallLineLeans(fallLineDeg: number): { along: "downhill" | "uphill" | null; side: "left" | "right" | null } {
+  const r = (fallLineDeg * Math.PI) / 180;
+  const along = Math.cos(r);
+  const side = Math.sin(r);
+  const slight = Math.sin((15 * Math.PI) / 180);
+  return {
+    along: Math.abs(along) <= slight ? null : along > 0 ? "downhill" : "uphill",
+    side: Math.abs(side) <= slight ? null : side > 0 ? "right" : "left",
+  };
+}
+
+/** The fall line from where the golfer stands: "falls to your right and toward the hole (downhill)". */
+export function fallLineWords(fallLineDeg: number): string {
+  const { along, side } = fallLineLeans(fallLineDeg);
+  if (side === null) return along === "downhill" ? "falls toward the hole (downhill putt)" : "falls toward you (uphill putt)";
+  const sideWords = `falls to your ${side}`;
+  if (along === null) return `${sideWords} (side hill)`;
+  return `${sideWords} and ${along === "downhill" ? "toward the hole (downhill)" : "toward you (uphill)"}`;
+}
+
+/** The fall line in a read's short words: "falls to the right", "straight uphill", "downhill, falls left". */
+export function describeFallLine(fallLineDeg: number): string {
+  const { along, side } = fallLineLeans(fallLineDeg);
+  if (side === null) return along === "downhill" ? "straight downhill" : "straight uphill";
+  if (along === null) return `falls to the ${side}`;
+  return `${along}, falls ${side}`;
+}
+
+/** Under this roll-past (1 cm) the answer calls the pace dying: the ball just reaches the hole. */
+export const DYING_ROLL_PAST_M = 0.01;
+
+/** The answer's pace: "Firm enough to finish 17 in past if it misses" and "Hit it as hard as a flat 11 ft 3 in putt". */
+export function paceWords(rollPastM: number, flatPuttLengthM: number, units: UnitSystem): { headline: string; flatPutt: string } {
+  return {
+    headline: rollPastM < DYING_ROLL_PAST_M ? "Just reach the hole: a dying pace" : `Firm enough to finish ${formatShort(rollPastM, units)} past if it misses`,
+    flatPutt: `Hit it as hard as a flat ${formatLength(Math.max(0, flatPuttLengthM), units)} putt`,
+  };
+}
+
+/** A roll-past on the pace scale: "45 cm" or "1 ft 6 in"; 0 reads "0 cm" / "0 in". */
+export function rollPastWords(m: number, units: UnitSystem): string {
+  if (units === "metric") return `${Math.round(m * 100)} cm`;
+  return m < 0.0127 ? "0 in" : formatLength(m, units);
+}
+
+/** Where a roll-past sits between dying and firm, in words (the pace scale's bands). */
+export function paceFeel(rollPastM: number): string {
+  if (rollPastM < 0.05) return "dying: just reaches the hole";
+  if (rollPastM < 0.3) return "soft";
+  if (rollPastM < 0.7) return "a makeable pace";
+  if (rollPastM < 1.1) return "firm";
+  return "very firm";
 }

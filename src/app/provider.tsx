@@ -2,15 +2,15 @@ import { useEffect, useState, type ReactNode } from "react";
 import { QueryClientProvider } from "@tanstack/react-query";
 import { Toaster } from "sonner";
 import { createQueryClient, startOnlineState } from "../lib/query-client";
-import { registerPuttMutations } from "../features/practice/api/add-putt";
+import { startOutbox } from "./outbox";
 
 export function AppProvider({ children }: { children: ReactNode }) {
   const [queryClient] = useState(createQueryClient);
-  // Putts logged on the green wait in localStorage until the server has them; resume that queue at start (or, opened
-  // with no signal, when the connection comes back).
+  // Putts logged on the green (practice and ladder) wait in localStorage until the server has them; resume that
+  // queue at start (or, opened with no signal, when the connection comes back).
   useEffect(() => {
     startOnlineState();
-    return registerPuttMutations(queryClient);
+    return startOutbox(queryClient);
   }, [queryClient]);
   return (
     <QueryClientProvider client={queryClient}>

@@ -4,18 +4,18 @@ import { afterEach, expect, test, vi } from "vitest";
 import { cleanup, render, screen } from "@testing-library/react";
 import { QueryClientProvider } from "@tanstack/react-query";
 import { createMemoryRouter, RouterProvider } from "react-router";
-import { createTestQueryClient, fakeFetch } from "../testing/render";
+import { createTestQueryClient } from "../testing/render";
+import { meAnswer, network } from "../testing/network";
 import { createAppRoutes } from "./router";
 
 vi.mock("../lib/auth-client", () => ({ authClient: {} }));
 
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 function renderAt(path: string) {
-  vi.stubGlobal("fetch", vi.fn(fakeFetch({ "/api/me": { status: 401, body: { error: { code: "UNAUTHORIZED", message: "Sign in" } } } })));
+  network.use(meAnswer(null));
   const queryClient = createTestQueryClient();
   const router = createMemoryRouter(createAppRoutes(), { initialEntries: [path] });
   render(

@@ -1,14 +1,19 @@
-import { afterEach, expect, test, vi } from "vitest";
+// @vitest-environment jsdom
+// jsdom for a page origin (the client's requests are relative); answers come from the one network mock.
+import { expect, test } from "vitest";
+import { http, HttpResponse, network, watchUploads } from "../testing/network";
 import { api, ApiError, apiRequest, attachmentName, downloadFile, toApiError } from "./api-client";
 
-afterEach(() => {
-  vi.unstubAllGlobals();
-});
-
+/** Every request answers `status` with `body`; returns the requests as the server received them. */
 function answer(status: number, body?: unknown, contentType = "application/json") {
-  const fetchMock = vi.fn(async (_input: RequestInfo | URL, _init?: RequestInit) => new Response(body === undefined ? null : typeof body === "string" ? body : JSON.stringify(body), { status, headers: { "Content-Type": contentType } }));
-  vi.stubGlobal("fetch", fetchMock);
-  return fetchMock;
+  const seen: Request[] = [];
+  network.use(
+    http.all("*", ({ request }) => {
+      seen.push(request.clone());
+      return new HttpResponse(body === undefined ? null : typeof body === "string" ? body : JSON.stringify(body), { status, headers: { "Content-Type": contentType } });
+    }),
+  );
+  return seen;
 }
 
 test("a 400 in the API's error shape becomes an ApiError with status, code, message and fields", async () => {
@@ -46,18 +51,17 @@ test("a flat {code, message} body, as better-auth sends, is understood too", () 
 });
 
 test("a JSON body is sent with its content type, same-origin credentials and the chosen method", async () => {
-  const fetchMock = answer(200, { user: { id: "u1" }, preferences: { units: "metric" } });
+  const seen = answer(200, { user: { id: "u1" }, preferences: { units: "metric" } });
   const result = await api.patch<{ preferences: { units: string } }>("/api/me/preferences", { units: "metric" });
   expect(result.preferences.units).toBe("metric");
-  expect(fetchMock).toHaveBeenCalledWith(
-    "/api/me/preferences",
-    expect.objectContaining({
-      method: "PATCH",
-      body: JSON.stringify({ units: "metric" }),
-      credentials: "same-origin",
-      headers: expect.objectContaining({ "Content-Type": "application/json", Accept: "application/json" }),
-    }),
-  );
+  expect(seen).toHaveLength(1);
+  const request = seen[0]!;
+  expect(request.url).toBe(`${window.location.origin}/api/me/preferences`);
+  expect(request.method).toBe("PATCH");
+  expect(await request.text()).toBe(JSON.stringify({ units: "metric" }));
+  expect(request.credentials).toBe("same-origin");
+  expect(request.headers.get("Content-Type")).toBe("application/json");
+  expect(request.headers.get("Accept")).toBe("application/json");
 });
 
 test("a 204 resolves with undefined", async () => {
@@ -66,24 +70,25 @@ test("a 204 resolves with undefined", async () => {
 });
 
 test("query parameters are added and undefined ones left out", async () => {
-  const fetchMock = answer(200, { messages: [] });
+  const seen = answer(200, { messages: [] });
   await api.get("/api/dev/mail", { query: { to: "a@b.test", limit: 5, since: undefined } });
-  expect(fetchMock.mock.calls[0]?.[0]).toBe("/api/dev/mail?to=a%40b.test&limit=5");
+  expect(seen.map((r) => r.url.slice(window.location.origin.length))).toEqual(["/api/dev/mail?to=a%40b.test&limit=5"]);
 });
 
 test("a network failure becomes an ApiError with status 0", async () => {
-  vi.stubGlobal("fetch", vi.fn(async () => Promise.reject(new TypeError("fetch failed"))));
+  network.use(http.all("*", () => HttpResponse.error()));
   await expect(api.get("/api/me")).rejects.toMatchObject({ status: 0, code: "NETWORK_ERROR" });
 });
 
 test("a FormData body is passed through as it is, without a JSON content type", async () => {
-  const fetchMock = answer(200, { headers: ["date"] });
+  const seen = answer(200, { headers: ["date"] });
+  const uploads = watchUploads();
   const form = new FormData();
   form.append("file", new Blob(["date\n2024-05-01\n"], { type: "text/csv" }), "putts.csv");
   await api.post("/api/csv/putts/preview", form);
-  const init = fetchMock.mock.calls[0]?.[1];
-  expect(init?.body).toBe(form);
-  expect((init?.headers as Record<string, string>)["Content-Type"]).toBeUndefined();
+  expect(uploads[0]!.form).toBe(form);
+  // The browser writes the multipart type with its boundary; a JSON type would break the upload.
+  expect(seen[0]!.headers.get("Content-Type")).toMatch(/^multipart\/form-data; boundary=/);
 });
 
 test("an error answer keeps its whole body, so extra fields such as row errors can be read", async () => {

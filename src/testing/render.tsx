@@ -29,15 +29,3 @@ export function renderRoute(element: ReactElement, { at, routes = [], queryClien
   );
   return { ...result, router, queryClient };
 }
-
-/** A fetch stand-in answering JSON by URL path; unknown paths answer 404 in the API's error shape. */
-export function fakeFetch(answers: Record<string, { status?: number; body?: unknown }>) {
-  return async (input: RequestInfo | URL): Promise<Response> => {
-    const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-    const answer = answers[url.pathname] ?? { status: 404, body: { error: { code: "NOT_FOUND", message: "Not found" } } };
-    return new Response(answer.body === undefined ? null : JSON.stringify(answer.body), {
-      status: answer.status ?? 200,
-      headers: { "Content-Type": "application/json" },
-    });
-  };
-}

@@ -1,5 +1,5 @@
 // An unexpected console.error fails the test that caused it.
-import { afterEach, vi } from "vitest";
+import { afterAll, afterEach, beforeAll, vi } from "vitest";
 
 const original = console.error;
 let errors: unknown[][] = [];
@@ -15,3 +15,15 @@ afterEach(() => {
   }
   vi.restoreAllMocks();
 });
+
+// Component tests (jsdom) get the one network mock (src/testing/network.ts): a request that no handler answers
+// is an error. Node tests (API, physics) keep the real network: they talk to a test server on loopback.
+if (typeof window !== "undefined") {
+  const { network } = await import("../../src/testing/network");
+  beforeAll(() => network.listen({ onUnhandledRequest: "error" }));
+  afterEach(() => {
+    network.resetHandlers();
+    network.events.removeAllListeners();
+  });
+  afterAll(() => network.close());
+}

@@ -3,14 +3,14 @@ import "@testing-library/jest-dom/vitest";
 import { afterEach, expect, test, vi } from "vitest";
 import { cleanup, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { fakeFetch, renderRoute } from "../../testing/render";
+import { renderRoute } from "../../testing/render";
+import { meAnswer, network } from "../../testing/network";
 import { TopBar } from "./top-bar";
 
 vi.mock("../../lib/auth-client", () => ({ authClient: { signOut: vi.fn(async () => ({ data: { success: true }, error: null })) } }));
 
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 const dana = {
@@ -19,7 +19,7 @@ const dana = {
 };
 
 test("a signed-in user sees who they are signed in as, with their role", async () => {
-  vi.stubGlobal("fetch", vi.fn(fakeFetch({ "/api/me": { body: dana } })));
+  network.use(meAnswer(dana));
   renderRoute(<TopBar />, { at: "/" });
   const indicators = await screen.findAllByText((_, el) => el?.tagName === "P" && (el.textContent ?? "").startsWith("Signed in as"));
   expect(indicators[0]).toHaveTextContent("Signed in as Dana Whitcombe (coach)");
@@ -27,7 +27,7 @@ test("a signed-in user sees who they are signed in as, with their role", async (
 });
 
 test("the menu button opens and closes the menu, and Escape closes it", async () => {
-  vi.stubGlobal("fetch", vi.fn(fakeFetch({ "/api/me": { status: 401, body: { error: { code: "UNAUTHORIZED", message: "Sign in" } } } })));
+  network.use(meAnswer(null));
   const user = userEvent.setup();
   renderRoute(<TopBar />, { at: "/rehearse" });
 

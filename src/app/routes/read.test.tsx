@@ -5,6 +5,7 @@ import { cleanup, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { useLocation } from "react-router";
 import { renderRoute } from "../../testing/render";
+import { http, HttpResponse, meAnswer, network } from "../../testing/network";
 import { fakeDispersion, fakeOdds } from "../../features/make-probability/components/test-data";
 import { ReadRoute } from "./read";
 
@@ -12,7 +13,6 @@ vi.mock("../../lib/auth-client", () => ({ authClient: {} }));
 
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 const me = {
@@ -44,22 +44,15 @@ function Where() {
 
 test("on /read the odds panel's best-pace button puts that roll-past into the read form and the address", async () => {
   const bodies: unknown[] = [];
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      const answer = (body: unknown) =>
-        new Response(JSON.stringify(body), { status: 200, headers: { "Content-Type": "application/json" } });
-      if (url.pathname === "/api/me") return answer(me);
-      if (url.pathname === "/api/reads/solve") return answer(solved);
-      if (url.pathname === "/api/reads") return answer({ items: [] });
-      if (url.pathname === "/api/greens") return answer([]);
-      if (url.pathname === "/api/players/me/dispersion") return answer(fakeDispersion());
-      if (url.pathname === "/api/reads/make-probability") {
-        bodies.push(JSON.parse(String(init?.body)));
-        return answer(fakeOdds());
-      }
-      return new Response(JSON.stringify({ error: { code: "NOT_FOUND", message: "Not found" } }), { status: 404 });
+  network.use(
+    meAnswer(me),
+    http.post("/api/reads/solve", () => HttpResponse.json(solved)),
+    http.get("/api/reads", () => HttpResponse.json({ items: [] })),
+    http.get("/api/greens", () => HttpResponse.json([])),
+    http.get("/api/players/me/dispersion", () => HttpResponse.json(fakeDispersion())),
+    http.post("/api/reads/make-probability", async ({ request }) => {
+      bodies.push(await request.json());
+      return HttpResponse.json(fakeOdds());
     }),
   );
   renderRoute(

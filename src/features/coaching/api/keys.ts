@@ -16,4 +16,6 @@ export const coachingKeys = {
   notes: (playerId: string) => [...coachingKeys.all, "notes", playerId] as const,
   squadOverview: (squadId: string, days: number) => [...coachingKeys.coach(), "overview", squadId, days] as const,
   makeRates: (playerId: string) => [...coachingKeys.coach(), "make-rates", playerId] as const,
+  /** Mutation key of "play a ladder putt", one of the outbox's (src/lib/outbox.ts): its defaults are registered once. */
+  addLadderPutt: () => [...coachingKeys.all, "add-ladder-putt"] as const,
 };

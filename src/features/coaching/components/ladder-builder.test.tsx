@@ -4,6 +4,7 @@ import { afterEach, beforeEach, expect, test, vi } from "vitest";
 import { act, cleanup, fireEvent, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { renderRoute } from "../../../testing/render";
+import { http, HttpResponse, network } from "../../../testing/network";
 import { LadderBuilder } from "./ladder-builder";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
@@ -12,16 +13,11 @@ let posted: unknown[] = [];
 
 beforeEach(() => {
   posted = [];
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      if (url.pathname === "/api/ladders" && init?.method === "POST") {
-        const body = JSON.parse(String(init.body)) as object;
-        posted.push(body);
-        return new Response(JSON.stringify({ ...body, id: "11111111-1111-4111-8111-111111111111", builtIn: false, ownerId: "c1", createdAt: "x", updatedAt: "x" }), { status: 201, headers: { "Content-Type": "application/json" } });
-      }
-      return new Response(JSON.stringify({ error: { code: "NOT_FOUND", message: "Not found" } }), { status: 404, headers: { "Content-Type": "application/json" } });
+  network.use(
+    http.post("/api/ladders", async ({ request }) => {
+      const body = (await request.json()) as object;
+      posted.push(body);
+      return HttpResponse.json({ ...body, id: "11111111-1111-4111-8111-111111111111", builtIn: false, ownerId: "c1", createdAt: "x", updatedAt: "x" }, { status: 201 });
     }),
   );
   // jsdom lays nothing out; dnd-kit's keyboard sensor moves by measured boxes, so give each rung a 100 px row.
@@ -34,7 +30,6 @@ beforeEach(() => {
 });
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 function renderBuilder() {

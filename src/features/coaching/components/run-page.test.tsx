@@ -6,8 +6,12 @@ import userEvent from "@testing-library/user-event";
 import { replay } from "../../../../shared/ladder-engine";
 import type { AssignmentDetail, LadderSnapshot } from "../../../../shared/schemas/assignments";
 import { feetToMetres } from "../../../../shared/units";
-import { renderRoute } from "../../../testing/render";
-import { forgetRunStores } from "../hooks/run-store";
+import type { QueryClient } from "@tanstack/react-query";
+import { OUTBOX_STORAGE_KEY, persistOutbox } from "../../../lib/outbox";
+import { delay, http, HttpResponse, meAnswer, network } from "../../../testing/network";
+import { createTestQueryClient, renderRoute } from "../../../testing/render";
+import { registerLadderPuttMutations } from "../api/add-ladder-putt";
+import { coachingKeys } from "../api/keys";
 import { RunPage } from "./run-page";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
@@ -31,7 +35,7 @@ const ladder: LadderSnapshot = {
 /** The server's side: the stored outcomes, answered as the handlers do (replayed by the same engine). */
 let stored: boolean[] = [];
 let posts: { holed: boolean; clientId?: string }[] = [];
-let answerPost: (body: { holed: boolean; clientId?: string }) => Promise<Response>;
+let answerPost: (body: { holed: boolean; clientId?: string }) => Promise<Response> | Response;
 
 function detail(): AssignmentDetail {
   const progress = replay(ladder, stored);
@@ -54,51 +58,53 @@ function detail(): AssignmentDetail {
   };
 }
 
-function json(status: number, body?: unknown) {
-  return new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-}
-
 function storeAndAnswer(body: { holed: boolean }) {
   stored.push(body.holed);
-  return Promise.resolve(json(201, detail()));
+  return HttpResponse.json(detail(), { status: 201 });
 }
+
+/** The ladder putts kept in the outbox on this phone (localStorage), oldest first. */
+const keptOnPhone = () =>
+  ((JSON.parse(window.localStorage.getItem(OUTBOX_STORAGE_KEY) ?? "null") as { mutations: { state: { variables: { clientId: string } } }[] } | null)?.mutations ?? []).map(
+    (m) => m.state.variables.clientId,
+  );
+
+let client: QueryClient;
+let stopOutbox: () => void;
 
 beforeEach(() => {
   stored = [];
   posts = [];
   answerPost = storeAndAnswer;
   window.localStorage.clear();
-  forgetRunStores();
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      const method = init?.method ?? "GET";
-      if (url.pathname === "/api/me") return json(200, me);
-      if (url.pathname === `/api/assignments/${ID}` && method === "GET") return json(200, detail());
-      if (url.pathname === `/api/assignments/${ID}/putts` && method === "POST") {
-        const body = JSON.parse(String(init?.body)) as { holed: boolean; clientId?: string };
-        posts.push(body);
-        return answerPost(body);
-      }
-      if (url.pathname === `/api/assignments/${ID}/putts/last` && method === "DELETE") {
-        stored.pop();
-        return json(200, detail());
-      }
-      return json(404, { error: { code: "NOT_FOUND", message: "Not found" } });
+  client = createTestQueryClient();
+  registerLadderPuttMutations(client, { retryDelay: () => 0 });
+  stopOutbox = persistOutbox(client, [coachingKeys.addLadderPutt()]);
+  network.use(
+    meAnswer(me),
+    http.get(`/api/assignments/${ID}`, () => HttpResponse.json(detail())),
+    http.post(`/api/assignments/${ID}/putts`, async ({ request }) => {
+      const body = (await request.json()) as { holed: boolean; clientId?: string };
+      posts.push(body);
+      return answerPost(body);
+    }),
+    http.delete(`/api/assignments/${ID}/putts/last`, () => {
+      stored.pop();
+      return HttpResponse.json(detail());
     }),
   );
 });
 afterEach(() => {
   cleanup();
-  forgetRunStores();
-  vi.unstubAllGlobals();
+  stopOutbox();
+  client.clear();
 });
 
 function renderRun() {
   return renderRoute(<RunPage assignmentId={ID} />, {
     at: `/ladders/run/${ID}`,
     routes: [{ path: "/ladders/mine", element: <p>My ladders page</p> }],
+    queryClient: client,
   });
 }
 
@@ -106,7 +112,10 @@ const stat = (label: string) =>
   within(screen.getByRole("region", { name: "Current rung" })).getByText(label).nextElementSibling?.textContent;
 
 test("a tap shows the new state at once, before the server has answered", async () => {
-  answerPost = () => new Promise<Response>(() => {});
+  answerPost = async () => {
+    await delay("infinite");
+    return HttpResponse.json(null);
+  };
   const user = userEvent.setup();
   renderRun();
   expect(await screen.findByText("3 ft")).toBeInTheDocument();
@@ -122,7 +131,7 @@ test("a tap shows the new state at once, before the server has answered", async 
   await user.click(screen.getByRole("button", { name: "Skip" }));
   expect(screen.getByText("Saving…")).toBeInTheDocument();
   expect(stat("Balls left")).toBe("1");
-  expect(posts).toHaveLength(1);
+  await waitFor(() => expect(posts).toHaveLength(1));
 });
 
 test("passing a rung moves up with a clear message, and the server's answer agrees", async () => {
@@ -189,16 +198,21 @@ test("a ladder miss marked long is not saved without how far: Save waits, and ta
 
 test("without a connection the putts wait on the phone and go out, once each, when it comes back", async () => {
   let online = false;
-  answerPost = (body) => (online ? storeAndAnswer(body) : Promise.reject(new TypeError("Failed to fetch")));
+  answerPost = (body) => (online ? storeAndAnswer(body) : HttpResponse.error());
   const user = userEvent.setup();
   renderRun();
   await screen.findByText("3 ft");
+  // The phone loses its signal (the browser says so).
+  await act(async () => {
+    window.dispatchEvent(new Event("offline"));
+  });
   await user.click(screen.getByRole("button", { name: "Missed" }));
   await user.click(screen.getByRole("button", { name: "Skip" }));
   expect(await screen.findByText(/No connection/)).toBeInTheDocument();
-  expect(JSON.parse(window.localStorage.getItem(`borrowline.ladder-run.${ID}`) ?? "[]")).toHaveLength(1);
+  expect(keptOnPhone()).toEqual([posts[0]!.clientId]);
   await user.click(screen.getByRole("button", { name: "Holed" }));
   expect(screen.getByText("Rung passed — on to 5 ft")).toBeInTheDocument();
+  expect(keptOnPhone()).toHaveLength(2);
 
   online = true;
   await act(async () => {
@@ -210,7 +224,7 @@ test("without a connection the putts wait on the phone and go out, once each, wh
   const ids = posts.map((p) => p.clientId);
   expect(new Set(ids).size).toBe(2);
   expect(ids[0]).toBe(ids[1]);
-  expect(window.localStorage.getItem(`borrowline.ladder-run.${ID}`)).toBeNull();
+  expect(window.localStorage.getItem(OUTBOX_STORAGE_KEY)).toBeNull();
 });
 
 test("undo takes back the last putt", async () => {

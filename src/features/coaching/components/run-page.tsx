@@ -33,11 +33,8 @@ function RungTrack({ total, current, completed }: { total: number; current: numb
 function SyncStatus({ run }: { run: LadderRun }) {
   if (run.waiting) {
     return (
-      <p className="flex flex-wrap items-center gap-2 text-sm text-warn-800">
+      <p className="text-sm text-warn-800">
         No connection. {run.pendingCount} putt{run.pendingCount === 1 ? " is" : "s are"} kept on this phone and sent when you are back online.
-        <button type="button" className="min-h-11 font-medium underline underline-offset-4" onClick={run.retryNow}>
-          Try now
-        </button>
       </p>
     );
   }

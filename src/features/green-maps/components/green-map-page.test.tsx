@@ -4,6 +4,7 @@ import { afterEach, beforeEach, expect, test, vi } from "vitest";
 import { cleanup, fireEvent, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { renderRoute } from "../../../testing/render";
+import { apiError, http, HttpResponse, meAnswer, network, watchUploads } from "../../../testing/network";
 import { mapLayout } from "../utils/map-view";
 import { GreenMapPage } from "./green-map-page";
 import { HeightMapUpload } from "./height-map-upload";
@@ -61,26 +62,28 @@ const surfaceRead = {
   diagnostics: { method: "surface-newton", iterations: 4, integrations: 12 },
 };
 
-function json(status: number, body: unknown) {
-  return new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-}
-
+/** The API as this page sees it; reads and uploads are recorded (JSON bodies parsed). */
 function stubApi(put?: () => Response) {
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      const method = init?.method ?? "GET";
-      const body = init?.body instanceof FormData ? init.body : init?.body ? JSON.parse(String(init.body)) : undefined;
-      calls.push({ url: url.pathname, method, body });
-      if (url.pathname === "/api/me") return json(200, me);
-      if (url.pathname === `/api/greens/${GREEN_ID}`) return json(200, green);
-      if (url.pathname === `/api/greens/${GREEN_ID}/height-map` && method === "GET") return json(200, heightMap);
-      if (url.pathname === `/api/greens/${GREEN_ID}/height-map` && method === "PUT" && put) return put();
-      if (url.pathname === `/api/greens/${GREEN_ID}/reads/solve`) return json(200, surfaceRead);
-      return json(404, { error: { code: "not_found", message: "Not found" } });
+  const record = async (request: Request) => {
+    const json = request.headers.get("Content-Type")?.includes("json");
+    calls.push({ url: new URL(request.url).pathname, method: request.method, body: json ? await request.json() : undefined });
+  };
+  network.use(
+    meAnswer(me),
+    http.get(`/api/greens/${GREEN_ID}`, () => HttpResponse.json(green)),
+    http.get(`/api/greens/${GREEN_ID}/height-map`, () => HttpResponse.json(heightMap)),
+    http.post(`/api/greens/${GREEN_ID}/reads/solve`, async ({ request }) => {
+      await record(request);
+      return HttpResponse.json(surfaceRead);
     }),
   );
+  if (put)
+    network.use(
+      http.put(`/api/greens/${GREEN_ID}/height-map`, async ({ request }) => {
+        await record(request);
+        return put();
+      }),
+    );
 }
 
 beforeEach(() => {
@@ -90,7 +93,6 @@ beforeEach(() => {
 });
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 test("tapping the ball and then the hole asks for the read with both positions in metres in the green's frame", async () => {
@@ -143,18 +145,15 @@ test("with both placed, a tap moves the one chosen; the summary shows the map's 
 
 test("a refused upload lists the server's row and column errors, and the spacing error beside its field", async () => {
   stubApi(() =>
-    json(400, {
-      error: {
-        code: "bad_request",
-        message: "The grid has 3 problem(s).",
-        fields: {
-          "row 3, column 2": '"x" is not a height in metres',
-          "row 2": "has 1 values; row 1 has 3 (every row needs the same number)",
-          spacingM: "spacingM must be at least 0.05 m",
-        },
+    apiError(400, "bad_request", "The grid has 3 problem(s).", {
+      fields: {
+        "row 3, column 2": '"x" is not a height in metres',
+        "row 2": "has 1 values; row 1 has 3 (every row needs the same number)",
+        spacingM: "spacingM must be at least 0.05 m",
       },
     }),
   );
+  const uploads = watchUploads();
   renderRoute(<HeightMapUpload greenId={GREEN_ID} replacing={false} />, { at: "/greens/x/map" });
   await userEvent.upload(screen.getByLabelText("CSV file"), new File(["0,0,0\n0\n0,x,0\n"], "bumpy.csv", { type: "text/csv" }));
   await userEvent.clear(screen.getByLabelText("Spacing (m)"));
@@ -170,8 +169,9 @@ test("a refused upload lists the server's row and column errors, and the spacing
     'Row 3, column 2 "x" is not a height in metres',
   ]);
   expect(screen.getByText("spacingM must be at least 0.05 m")).toBeInTheDocument();
-  const put = calls.find((c) => c.method === "PUT")!;
-  const form = put.body as FormData;
+  expect(calls.filter((c) => c.method === "PUT")).toHaveLength(1);
+  expect(uploads.map((u) => u.path)).toEqual([`/api/greens/${GREEN_ID}/height-map`]);
+  const form = uploads[0]!.form;
   expect(form.get("format")).toBe("grid");
   expect(form.get("spacingM")).toBe("0.01");
   expect(form.get("originXM")).toBe("0");

@@ -4,28 +4,18 @@ import { afterEach, beforeEach, expect, test, vi } from "vitest";
 import { cleanup, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { renderRoute } from "../../../testing/render";
+import { apiError, http, HttpResponse, serve, type Call } from "../../../testing/network";
 import { OddsPanel, type OddsPanelProps } from "./odds-panel";
 import { fakeDispersion, fakeOdds } from "./test-data";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
 
-type Call = { url: string; method: string; body: unknown };
 let calls: Call[] = [];
 
-function json(status: number, body: unknown) {
-  return new Response(JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-}
-
-function stubApi(odds: () => Response = () => json(200, fakeOdds()), dispersion = fakeDispersion()) {
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      calls.push({ url: url.pathname, method: init?.method ?? "GET", body: init?.body ? JSON.parse(String(init.body)) : undefined });
-      if (url.pathname === "/api/reads/make-probability") return odds();
-      if (url.pathname === "/api/players/me/dispersion") return json(200, dispersion);
-      return json(404, { error: { code: "NOT_FOUND", message: "Not found" } });
-    }),
+function stubApi(odds: () => Response = () => HttpResponse.json(fakeOdds()), dispersion = fakeDispersion()) {
+  calls = serve(
+    http.post("/api/reads/make-probability", odds),
+    http.get("/api/players/me/dispersion", () => HttpResponse.json(dispersion)),
   );
 }
 
@@ -45,14 +35,13 @@ beforeEach(() => {
 });
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 test("a signed-in player sees how often they hole the read, from POST /api/reads/make-probability with that read", async () => {
   stubApi();
   const { container } = renderPanel();
   expect(await screen.findByText("You hole this about 34 % of the time")).toBeInTheDocument();
-  const posts = calls.filter((c) => c.url === "/api/reads/make-probability");
+  const posts = calls.filter((c) => c.path === "/api/reads/make-probability");
   expect(posts).toHaveLength(1);
   // No dispersion in the body: the server uses the player's own, from their logged putts.
   expect(posts[0]!.body).toEqual({ read, seed: expect.any(Number) });
@@ -76,7 +65,7 @@ test("the best pace sits beside the read's own, and its button hands that roll-p
 
 test("with few putts logged the panel says it leans on typical club-golfer values", async () => {
   stubApi(
-    () => json(200, fakeOdds({ dispersion: { angleDeg: 1.2, pace: 0.12, source: "my-putts", putts: 0, usedPrior: true, readSlopePct: 0.5, greenLateralM: 0.02 } })),
+    () => HttpResponse.json(fakeOdds({ dispersion: { angleDeg: 1.2, pace: 0.12, source: "my-putts", putts: 0, usedPrior: true, readSlopePct: 0.5, greenLateralM: 0.02 } })),
     fakeDispersion({ putts: 0, usedPrior: true }),
   );
   renderPanel();
@@ -84,7 +73,7 @@ test("with few putts logged the panel says it leans on typical club-golfer value
 });
 
 test("a ball that would not stop (422) is explained, not shown as a failure", async () => {
-  stubApi(() => json(422, { error: { code: "unprocessable", message: "The ball cannot stop", fields: {} } }));
+  stubApi(() => apiError(422, "unprocessable", "The ball cannot stop", { fields: {} }));
   renderPanel();
   expect(await screen.findByText(/would not stop on that slope/)).toBeInTheDocument();
   expect(screen.queryByRole("alert")).not.toBeInTheDocument();
@@ -102,8 +91,7 @@ test("signed out: one line inviting the golfer to sign in, and no simulation is 
 
 test("odds outside the player's own logged rate come with the reason, never silently", async () => {
   stubApi(() =>
-    json(
-      200,
+    HttpResponse.json(
       fakeOdds({
         logged: { fromM: 2.4, toM: 3.75, attempts: 40, made: 36, rate: 0.9, ci95: [0.77, 0.96], oddsOutside: true, why: "These odds are for this putt: its slope." },
       }),

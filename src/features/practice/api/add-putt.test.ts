@@ -1,15 +1,22 @@
 // @vitest-environment jsdom
 import { afterEach, beforeEach, expect, test, vi } from "vitest";
 import { onlineManager, QueryClient } from "@tanstack/react-query";
-import { OUTBOX_STORAGE_KEY, registerPuttMutations, undoQueuedPutt, type NewPutt } from "./add-putt";
+import { OUTBOX_STORAGE_KEY, persistOutbox } from "../../../lib/outbox";
+import { http, HttpResponse, network, serve } from "../../../testing/network";
+import { registerPuttMutations, undoQueuedPutt, type NewPutt } from "./add-putt";
 import { practiceKeys } from "./keys";
 
 const SESSION = "11111111-1111-4111-8111-111111111111";
 const putt = (clientId: string, holed = true): NewPutt => ({ sessionId: SESSION, clientId, distanceM: 1.5, holed, loggedAt: new Date().toISOString() });
 
+/** A page's query client with the putt defaults registered and the outbox kept in localStorage. */
 function newClient() {
-  return new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  registerPuttMutations(client, { retryDelay: () => 0 });
+  return { client, stop: persistOutbox(client, [practiceKeys.addPutt()]) };
 }
+
+const noConnection = () => serve(http.post(`/api/sessions/${SESSION}/putts`, () => HttpResponse.error()));
 
 function run(client: QueryClient, v: NewPutt) {
   const m = client.getMutationCache().build(client, { mutationKey: practiceKeys.addPutt(), scope: { id: `putts:${v.sessionId}` } });
@@ -23,36 +30,32 @@ beforeEach(() => {
 });
 afterEach(() => {
   onlineManager.setOnline(true);
-  vi.unstubAllGlobals();
 });
 
 test("a putt logged offline waits in localStorage and a fresh page sends it, once, when the connection is back", async () => {
-  const fetchMock = vi.fn(async () => Promise.reject(new TypeError("Failed to fetch")));
-  vi.stubGlobal("fetch", fetchMock);
+  const tried = noConnection();
   onlineManager.setOnline(false);
-  const first = newClient();
-  const stop = registerPuttMutations(first, { retryDelay: () => 0 });
+  const { client: first, stop } = newClient();
   void run(first, putt("c-1"));
   void run(first, putt("c-2", false));
   await vi.waitFor(() => expect(stored()?.mutations.map((m) => m.state.variables.clientId)).toEqual(["c-1", "c-2"]));
   // offlineFirst: the first putt was tried once and then paused; the second waits its turn behind it.
-  await vi.waitFor(() => expect(fetchMock).toHaveBeenCalledTimes(1));
+  await vi.waitFor(() => expect(tried).toHaveLength(1));
+  await vi.waitFor(() => expect(first.getMutationCache().getAll().map((m) => m.state.isPaused)).toEqual([true, true]));
   await new Promise((r) => setTimeout(r, 30));
-  expect(fetchMock).toHaveBeenCalledTimes(1);
-  expect(first.getMutationCache().getAll().map((m) => m.state.isPaused)).toEqual([true, true]);
+  expect(tried).toHaveLength(1);
   stop();
 
   // "Reload": a new client restores the queue and sends it when the browser is online again.
+  network.resetHandlers();
   const sent: Record<string, unknown>[] = [];
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (_url: RequestInfo | URL, init?: RequestInit) => {
-      sent.push(JSON.parse(String(init?.body)));
-      return new Response(JSON.stringify({ id: `id-${sent.length}` }), { status: 201, headers: { "Content-Type": "application/json" } });
+  network.use(
+    http.post(`/api/sessions/${SESSION}/putts`, async ({ request }) => {
+      sent.push((await request.json()) as Record<string, unknown>);
+      return HttpResponse.json({ id: `id-${sent.length}` }, { status: 201 });
     }),
   );
-  const second = newClient();
-  const stop2 = registerPuttMutations(second, { retryDelay: () => 0 });
+  const { client: second, stop: stop2 } = newClient();
   expect(second.getMutationCache().findAll({ mutationKey: practiceKeys.addPutt(), status: "pending" })).toHaveLength(2);
   expect(sent).toHaveLength(0);
   onlineManager.setOnline(true);
@@ -65,11 +68,9 @@ test("a putt logged offline waits in localStorage and a fresh page sends it, onc
 });
 
 test("undoing a putt that is still waiting takes it out of the queue and out of storage", async () => {
-  const fetchMock = vi.fn(async () => Promise.reject(new TypeError("Failed to fetch")));
-  vi.stubGlobal("fetch", fetchMock);
+  noConnection();
   onlineManager.setOnline(false);
-  const client = newClient();
-  const stop = registerPuttMutations(client, { retryDelay: () => 0 });
+  const { client, stop } = newClient();
   void run(client, putt("c-1"));
   void run(client, putt("c-2"));
   await vi.waitFor(() => expect(stored()?.mutations).toHaveLength(2));

@@ -2,8 +2,8 @@ import { useMutation, useMutationState, type Mutation, type QueryClient } from "
 import { toast } from "sonner";
 import type { BreakType, MissSide, Putt } from "../../../../shared/schemas/putts";
 import { apiPaths } from "../../../config/paths";
-import { api, ApiError } from "../../../lib/api-client";
-import { persistMutations } from "../../../lib/mutation-persistence";
+import { api } from "../../../lib/api-client";
+import { outboxRetry, outboxRetryDelay } from "../../../lib/outbox";
 import { errorMessage } from "../../../lib/query-client";
 import { practiceKeys } from "./keys";
 import type { SessionPutts } from "./get-session-putts";
@@ -22,8 +22,6 @@ export type NewPutt = {
 };
 
 export type AddPuttResult = { id: string | null };
-
-export const OUTBOX_STORAGE_KEY = "borrowline.putt-outbox";
 
 // Putts undone while still waiting: their request is skipped, or, if it was already on its way, the stored putt
 // is deleted as soon as its id comes back.
@@ -52,18 +50,8 @@ export function pendingPutt(v: NewPutt, sessionDate = v.loggedAt.slice(0, 10)): 
   };
 }
 
-/**
- * Which failures are worth another try: no connection (status 0: paused while offline, tried again when it comes
- * back), a server fault, a rate limit, or the server's "being stored; retry". A 4xx answer will not change.
- */
-export function retryPutt(failureCount: number, error: Error): boolean {
-  if (!(error instanceof ApiError)) return failureCount < 3;
-  if (error.status === 0) return true;
-  if (error.status >= 500 || error.status === 429 || error.status === 409) return failureCount < 4;
-  return false;
-}
-
-const defaultRetryDelay = (attempt: number) => Math.min(30_000, 1000 * 2 ** attempt);
+/** The outbox's retries (src/lib/outbox.ts), and a 409 too: the server's "being stored; retry". */
+export const retryPutt = outboxRetry([409]);
 
 // Sessions whose logging screen is open: that screen shows a failed putt itself, so no toast then.
 const watched = new Map<string, number>();
@@ -81,16 +69,16 @@ function withoutPutt(old: SessionPutts | undefined, clientId: string): SessionPu
 }
 
 /**
- * Registers how a logged putt is sent, so a queue restored from localStorage after a reload can run, and keeps
- * that queue in localStorage. Call once per query client (the provider does); returns the unsubscribe.
+ * Registers how a logged putt is sent, so the outbox restored from localStorage after a reload can run. Call once
+ * per query client, before the outbox is restored (src/app/outbox.ts does both).
  */
-export function registerPuttMutations(client: QueryClient, options: { retryDelay?: (attempt: number) => number; persist?: boolean } = {}): () => void {
+export function registerPuttMutations(client: QueryClient, options: { retryDelay?: (attempt: number) => number } = {}): void {
   client.setMutationDefaults<AddPuttResult, Error, NewPutt, { previous?: SessionPutts }>(practiceKeys.addPutt(), {
     mutationFn: postPutt,
     // The first try goes out even when the browser says offline (it is often wrong); a failure then waits for the network.
     networkMode: "offlineFirst",
     retry: retryPutt,
-    retryDelay: options.retryDelay ?? defaultRetryDelay,
+    retryDelay: options.retryDelay ?? outboxRetryDelay,
     gcTime: 10 * 60_000,
     meta: { errorToast: false },
     onMutate: async (v) => {
@@ -126,8 +114,6 @@ export function registerPuttMutations(client: QueryClient, options: { retryDelay
       void client.invalidateQueries({ queryKey: practiceKeys.sessions(), refetchType: "none" });
     },
   });
-  if (options.persist === false) return () => undefined;
-  return persistMutations(client, { storageKey: OUTBOX_STORAGE_KEY, mutationKeys: [practiceKeys.addPutt()] });
 }
 
 /** Logs a putt; putts of one session go out one after another, in the order they were logged. */

@@ -1,9 +1,10 @@
 // @vitest-environment jsdom
 import "@testing-library/jest-dom/vitest";
-import { afterEach, expect, test, vi } from "vitest";
+import { afterEach, expect, test } from "vitest";
 import { cleanup, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { renderRoute } from "../../../testing/render";
+import { http, HttpResponse, meAnswer, network, watchUploads, type JsonBodyType } from "../../../testing/network";
 import { CsvImportPage } from "./csv-import-page";
 
 const me = { user: { id: "u1", name: "Ivo", email: "ivo@example.test", role: "player", emailVerified: true }, preferences: { units: "imperial" } };
@@ -24,37 +25,37 @@ const rowErrors = [
   { row: 3, line: 4, field: "holed", message: '"maybe" is not yes/no, true/false, 1/0 or holed/missed' },
 ];
 
-type Call = { url: string; fields: Record<string, string> };
+type Answer = { status: number; body: unknown };
+const reply = (a: Answer) => HttpResponse.json(a.body as JsonBodyType, { status: a.status });
 
-function stubApi(answers: { preview?: { status: number; body: unknown }; imports?: { status: number; body: unknown }[] }) {
-  const calls: Call[] = [];
+/** The API for this page; returns each upload's text fields (a file as `file:<name>`), in the order sent. */
+function stubApi(answers: { preview?: Answer; imports?: Answer[] }) {
   let imports = 0;
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = typeof input === "string" ? input : input instanceof URL ? input.href : input.url;
-      const fields: Record<string, string> = {};
-      if (init?.body instanceof FormData) for (const [k, v] of init.body.entries()) fields[k] = typeof v === "string" ? v : `file:${v.name}`;
-      calls.push({ url, fields });
-      const reply = (a: { status: number; body: unknown }) => new Response(JSON.stringify(a.body), { status: a.status, headers: { "Content-Type": "application/json" } });
-      if (url === "/api/me") return reply({ status: 200, body: me });
-      if (url === "/api/csv/putts/preview") return reply(answers.preview ?? { status: 200, body: preview });
-      if (url === "/api/csv/putts/import") return reply(answers.imports![imports++]!);
-      return reply({ status: 404, body: { error: { code: "NOT_FOUND", message: "Not found" } } });
-    }),
+  network.use(
+    meAnswer(me),
+    http.post("/api/csv/putts/preview", () => reply(answers.preview ?? { status: 200, body: preview })),
+    http.post("/api/csv/putts/import", () => reply(answers.imports![imports++]!)),
   );
-  return calls;
+  const uploads = watchUploads();
+  return {
+    get calls() {
+      return uploads.map(({ path, form }) => {
+        const fields: Record<string, string> = {};
+        for (const [k, v] of form.entries()) fields[k] = typeof v === "string" ? v : `file:${v.name}`;
+        return { url: path, fields };
+      });
+    },
+  };
 }
 
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 const file = () => new File(["Date,Distance (ft),Made\n"], "putts.csv", { type: "text/csv" });
 
 test("the mapping is prefilled from the suggestion, and a refused import lists each bad row with its field and why", async () => {
-  const calls = stubApi({
+  const api = stubApi({
     imports: [
       { status: 422, body: { error: { code: "unprocessable", message: "2 row(s) have errors; nothing was imported.", fields: { file: "2 invalid row(s)" } }, imported: 0, sessionsCreated: 0, greensCreated: 0, skipped: 2, errors: rowErrors } },
       { status: 200, body: { imported: 1, sessionsCreated: 1, greensCreated: 1, skipped: 2, errors: rowErrors } },
@@ -83,23 +84,23 @@ test("the mapping is prefilled from the suggestion, and a refused import lists e
     ["3", "4", "Holed", '"maybe" is not yes/no, true/false, 1/0 or holed/missed'],
   ]);
   expect(screen.getByText(/2 of 3 rows have problems/)).toBeInTheDocument();
-  expect(calls.find((c) => c.url === "/api/csv/putts/import")?.fields).toMatchObject({ skipInvalid: "false", file: "file:putts.csv" });
-  expect(JSON.parse(calls.find((c) => c.url === "/api/csv/putts/import")!.fields.mapping!)).toEqual({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side", green: "Green" });
+  expect(api.calls.find((c) => c.url === "/api/csv/putts/import")?.fields).toMatchObject({ skipInvalid: "false", file: "file:putts.csv" });
+  expect(JSON.parse(api.calls.find((c) => c.url === "/api/csv/putts/import")!.fields.mapping!)).toEqual({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side", green: "Green" });
 
   await user.click(screen.getByRole("button", { name: "Import the 1 valid rows only" }));
   expect(await screen.findByText("Imported 1 putt")).toBeInTheDocument();
-  expect(calls.filter((c) => c.url === "/api/csv/putts/import").map((c) => c.fields.skipInvalid)).toEqual(["false", "true"]);
+  expect(api.calls.filter((c) => c.url === "/api/csv/putts/import").map((c) => c.fields.skipInvalid)).toEqual(["false", "true"]);
 });
 
 test("a required column left unmapped stops the import before anything is sent", async () => {
-  const calls = stubApi({});
+  const api = stubApi({});
   const user = userEvent.setup();
   renderRoute(<CsvImportPage />, { at: "/practice/import" });
   await user.upload(screen.getByLabelText("CSV file"), file());
   await user.selectOptions(await screen.findByLabelText("Holed (required)"), "");
   expect(screen.getByText(/Choose a column for Holed/)).toBeInTheDocument();
   expect(screen.getByRole("button", { name: "Import 3 rows" })).toBeDisabled();
-  expect(calls.some((c) => c.url === "/api/csv/putts/import")).toBe(false);
+  expect(api.calls.some((c) => c.url === "/api/csv/putts/import")).toBe(false);
 });
 
 test("too large and not-CSV uploads are explained in plain words", async () => {

@@ -4,6 +4,7 @@ import { afterEach, expect, test, vi } from "vitest";
 import { cleanup, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { renderRoute } from "../../../testing/render";
+import { http, HttpResponse, meAnswer, serve, type Call } from "../../../testing/network";
 import { GreenPage } from "./green-page";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
@@ -14,39 +15,25 @@ const reading = { id: "8e9c2f0e-6f5e-4c1f-9d4e-0a1b2c3d4e5f", measuredOn: "2026-
 const base = { id: GREEN_ID, name: "Top green", locationNote: null, currentStimpFt: 10.5, createdAt: "2026-01-01T00:00:00Z", readings: [reading] };
 const me = { user: { id: "u1", name: "Coach Ash", email: "ash@example.com", role: "coach", emailVerified: true }, preferences: { units: "metric" } };
 
-type Call = { path: string; method: string; body: unknown };
 let calls: Call[] = [];
-
-function json(status: number, body: unknown) {
-  return new Response(JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-}
 
 function stubApi(green: object) {
   let current = green;
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      const method = init?.method ?? "GET";
-      const body = init?.body ? JSON.parse(String(init.body)) : undefined;
-      calls.push({ path: url.pathname, method, body });
-      if (url.pathname === "/api/me") return json(200, me);
-      if (url.pathname === "/api/squads") return json(200, { squads: [{ id: SQUAD_ID, name: "Juniors" }] });
-      if (url.pathname === `/api/greens/${GREEN_ID}/squad` && method === "PUT") {
-        const squadId = (body as { squadId: string | null }).squadId;
-        current = { ...current, squad: squadId ? { id: squadId, name: "Juniors" } : null };
-        return json(200, current);
-      }
-      if (url.pathname === `/api/greens/${GREEN_ID}`) return json(200, current);
-      if (url.pathname === "/api/greens") return json(200, { items: [current] });
-      return json(404, { error: { code: "not_found", message: "Not found" } });
+  calls = serve(
+    meAnswer(me),
+    http.get("/api/squads", () => HttpResponse.json({ squads: [{ id: SQUAD_ID, name: "Juniors" }] })),
+    http.put(`/api/greens/${GREEN_ID}/squad`, async ({ request }) => {
+      const { squadId } = (await request.json()) as { squadId: string | null };
+      current = { ...current, squad: squadId ? { id: squadId, name: "Juniors" } : null };
+      return HttpResponse.json(current);
     }),
+    http.get(`/api/greens/${GREEN_ID}`, () => HttpResponse.json(current)),
+    http.get("/api/greens", () => HttpResponse.json({ items: [current] })),
   );
 }
 
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
   calls = [];
 });
 
@@ -70,10 +57,27 @@ test("the coach who keeps a green shares it with a squad, then takes it back", a
   expect(screen.getByText(/Only you see this green/)).toBeInTheDocument();
   await user.selectOptions(select, "Juniors");
   await user.click(screen.getByRole("button", { name: "Share" }));
-  await waitFor(() => expect(calls.filter((c) => c.method === "PUT")).toEqual([{ path: `/api/greens/${GREEN_ID}/squad`, method: "PUT", body: { squadId: SQUAD_ID } }]));
+  await waitFor(() => expect(calls.filter((c) => c.method === "PUT")).toMatchObject([{ path: `/api/greens/${GREEN_ID}/squad`, method: "PUT", body: { squadId: SQUAD_ID } }]));
   expect(await screen.findByText(/Shared with Juniors: its players see this green/)).toBeInTheDocument();
   await user.selectOptions(screen.getByRole("combobox", { name: "Shared with" }), "Nobody (only me)");
   await user.click(screen.getByRole("button", { name: "Stop sharing" }));
   await waitFor(() => expect(calls.filter((c) => c.method === "PUT").at(-1)?.body).toEqual({ squadId: null }));
   expect(await screen.findByText(/Only you see this green/)).toBeInTheDocument();
+});
+
+test("a Stimp reading is read as a golfer types it: 10,5 is 10.5; 1e1 and 0x0A are not numbers", async () => {
+  stubApi({ ...base, squad: null, ownerName: "Coach Ash", mine: true });
+  const user = userEvent.setup();
+  renderRoute(<GreenPage greenId={GREEN_ID} />, { at: "/greens/g" });
+  const field = await screen.findByLabelText("Stimp (ft)");
+  const save = screen.getByRole("button", { name: "Save the reading" });
+  for (const typed of ["1e1", "0x0A"]) {
+    await user.clear(field);
+    await user.type(field, typed);
+    expect(save).toBeDisabled();
+    expect(field).toHaveAccessibleDescription(/Between 3 and 16 ft/);
+  }
+  await user.clear(field);
+  await user.type(field, "10,5");
+  expect(save).toBeEnabled();
 });

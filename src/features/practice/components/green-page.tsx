@@ -18,6 +18,7 @@ import { useUnits } from "../../auth/hooks/use-units";
 import { todayIso } from "../utils/dates";
 import { formatRoll, stimpFeetAndInches } from "../utils/stimp";
 import { STIMP_CAUTION, StimpHelper } from "./stimp-helper";
+import { parseDecimal } from "../../../../shared/units";
 
 function RenameForm({ green, onDone }: { green: Green; onDone: () => void }) {
   const update = useUpdateGreen(green.id);
@@ -65,8 +66,8 @@ function ReadingForm({ greenId }: { greenId: string }) {
   const [saved, setSaved] = useState<string | null>(null);
   // A new helper after each save, so the same rolls are not saved twice by a second tap.
   const [entry, setEntry] = useState(0);
-  const value = Number(stimp.replace(",", "."));
-  const stimpOk = stimp.trim() !== "" && Number.isFinite(value) && value >= STIMP_LIMITS.minFt && value <= STIMP_LIMITS.maxFt;
+  const value = parseDecimal(stimp);
+  const stimpOk = value !== null && value >= STIMP_LIMITS.minFt && value <= STIMP_LIMITS.maxFt;
   const fields = isApiError(add.error) ? add.error.fields : {};
   const done = (g: Green) => {
     setStimp("");
@@ -109,7 +110,7 @@ function ReadingForm({ greenId }: { greenId: string }) {
             className="flex flex-col gap-4"
             onSubmit={(e) => {
               e.preventDefault();
-              if (stimpOk) add.mutate({ measuredOn, stimpFt: value }, { onSuccess: done });
+              if (stimpOk && value !== null) add.mutate({ measuredOn, stimpFt: value }, { onSuccess: done });
             }}
           >
             <InputField

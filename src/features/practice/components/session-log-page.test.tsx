@@ -1,12 +1,13 @@
 // @vitest-environment jsdom
 import "@testing-library/jest-dom/vitest";
-import { afterEach, beforeEach, expect, test, vi } from "vitest";
+import { afterEach, beforeEach, expect, test } from "vitest";
 import { cleanup, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import type { QueryClient } from "@tanstack/react-query";
 import type { Putt } from "../../../../shared/schemas/putts";
 import { METRES_PER_FOOT } from "../../../../shared/units";
 import { createTestQueryClient, renderRoute } from "../../../testing/render";
+import { delay, http, HttpResponse, meAnswer, network, type JsonBodyType } from "../../../testing/network";
 import { registerPuttMutations } from "../api/add-putt";
 import type { SessionPutts } from "../api/get-session-putts";
 import { practiceKeys } from "../api/keys";
@@ -41,22 +42,18 @@ function fakeServer(post: PostAnswer, options: { refetchHangs?: boolean } = {}) 
   const posts: Record<string, unknown>[] = [];
   const deletes: string[] = [];
   let n = 0;
-  const json = (status: number, body?: unknown) =>
-    new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-  const fetchMock = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-    const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-    const method = init?.method ?? "GET";
-    if (url.pathname === "/api/me") return json(200, me);
-    if (url.pathname === `/api/sessions/${SESSION}` && method === "GET") return json(200, session);
-    if (url.pathname === `/api/sessions/${SESSION}/putts` && method === "GET") {
-      if (options.refetchHangs && listed++ > 0) return new Promise<Response>(() => undefined);
-      return json(200, { items: stored });
-    }
-    if (url.pathname === `/api/sessions/${SESSION}/putts` && method === "POST") {
-      const body = JSON.parse(String(init?.body)) as Record<string, unknown>;
+  network.use(
+    meAnswer(me),
+    http.get(`/api/sessions/${SESSION}`, () => HttpResponse.json(session)),
+    http.get(`/api/sessions/${SESSION}/putts`, async () => {
+      if (options.refetchHangs && listed++ > 0) await delay("infinite");
+      return HttpResponse.json({ items: stored });
+    }),
+    http.post(`/api/sessions/${SESSION}/putts`, async ({ request }) => {
+      const body = (await request.json()) as Record<string, unknown>;
       posts.push(body);
-      if (post === "hang") return new Promise<Response>(() => undefined);
-      if (post !== "store") return json(post.status, post.body);
+      if (post === "hang") await delay("infinite");
+      if (post !== "store" && post !== "hang") return HttpResponse.json(post.body as JsonBodyType, { status: post.status });
       const id = `p${++n}`;
       stored.push({
         id,
@@ -70,32 +67,27 @@ function fakeServer(post: PostAnswer, options: { refetchHangs?: boolean } = {}) 
         clientId: body.clientId as string,
         createdAt: new Date(Date.now() + n).toISOString(),
       });
-      return json(201, { id });
-    }
-    const del = /^\/api\/putts\/(.+)$/.exec(url.pathname);
-    if (del && method === "DELETE") {
-      deletes.push(del[1]!);
-      const i = stored.findIndex((p) => p.id === del[1]);
+      return HttpResponse.json({ id }, { status: 201 });
+    }),
+    http.delete("/api/putts/:id", ({ params }) => {
+      const id = String(params.id);
+      deletes.push(id);
+      const i = stored.findIndex((p) => p.id === id);
       if (i >= 0) stored.splice(i, 1);
-      return json(204);
-    }
-    return json(404, { error: { code: "NOT_FOUND", message: "Not found" } });
-  });
-  vi.stubGlobal("fetch", fetchMock);
+      return new HttpResponse(null, { status: 204 });
+    }),
+  );
   return { stored, posts, deletes };
 }
 
 let client: QueryClient;
-let unregister: () => void;
 beforeEach(() => {
   window.localStorage.clear();
   client = createTestQueryClient();
-  unregister = registerPuttMutations(client, { retryDelay: () => 0, persist: false });
+  registerPuttMutations(client, { retryDelay: () => 0 });
 });
 afterEach(() => {
-  unregister();
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 function renderPage() {
@@ -120,7 +112,7 @@ test("a putt is shown at once, before the server answers", async () => {
   expect(tallyValue("Putts")).toBe("1");
   expect(tallyValue("Make rate")).toBe("100 %");
   // The request went out with an idempotency key, and the server has not answered.
-  expect(server.posts).toHaveLength(1);
+  await waitFor(() => expect(server.posts).toHaveLength(1));
   expect(server.posts[0]).toMatchObject({ holed: true, clientId: expect.stringMatching(/^[0-9a-f-]{36}$/) });
   expect(server.stored).toHaveLength(0);
   // The optimistic update wrote the putt into the session's cached list (onMutate).

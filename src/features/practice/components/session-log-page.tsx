@@ -3,7 +3,7 @@ import { useEffect, useMemo, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import clsx from "clsx";
 import type { BreakType } from "../../../../shared/schemas/putts";
-import { formatLength, fromLongUnit, type UnitSystem } from "../../../../shared/units";
+import { formatLength, fromLongUnit, parseDecimal, type UnitSystem } from "../../../../shared/units";
 import { Alert, Button, ButtonLink, PageSpinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";
@@ -23,8 +23,8 @@ const LAST_DISTANCE_KEY = "borrowline.last-distance-m";
 
 function readLastDistance(units: UnitSystem): number {
   try {
-    const v = Number(window.localStorage.getItem(LAST_DISTANCE_KEY));
-    if (Number.isFinite(v) && v >= 0.1 && v <= 60) return v;
+    const v = parseDecimal(window.localStorage.getItem(LAST_DISTANCE_KEY));
+    if (v !== null && v >= 0.1 && v <= 60) return v;
   } catch {
     // no storage
   }

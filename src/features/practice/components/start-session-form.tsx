@@ -13,8 +13,11 @@ import { useCreateSession } from "../api/create-session";
 import { useGreens } from "../api/get-greens";
 import { useSessions } from "../api/get-sessions";
 import { todayIso } from "../utils/dates";
+import { parseDecimal } from "../../../../shared/units";
 
 export const SESSION_TAGS = ["damp", "dry", "windy", "after mowing", "after rolling", "hollow-tined"] as const;
+
+const isStimp = (ft: number | null) => ft !== null && ft >= STIMP_LIMITS.minFt && ft <= STIMP_LIMITS.maxFt;
 
 const formSchema = z.object({
   date: z.iso.date({ message: "Choose the day" }),
@@ -22,7 +25,7 @@ const formSchema = z.object({
   stimp: z
     .string()
     .trim()
-    .refine((v) => v === "" || (/^\d+([.,]\d+)?$/.test(v) && Number(v.replace(",", ".")) >= STIMP_LIMITS.minFt && Number(v.replace(",", ".")) <= STIMP_LIMITS.maxFt), {
+    .refine((v) => v === "" || isStimp(parseDecimal(v)), {
       message: `A Stimp between ${STIMP_LIMITS.minFt} and ${STIMP_LIMITS.maxFt} ft, or leave it empty`,
     }),
   conditions: z.string().trim().max(200, "At most 200 characters"),
@@ -61,7 +64,7 @@ export function StartSessionForm() {
   }, [likely, getValues, setValue]);
 
   const submit = handleSubmit((v) => {
-    const stimp = v.stimp === "" ? undefined : Number(v.stimp.replace(",", "."));
+    const stimp = parseDecimal(v.stimp) ?? undefined;
     create.mutate(
       {
         date: v.date,

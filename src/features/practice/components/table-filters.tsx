@@ -1,5 +1,5 @@
 import { useState, type KeyboardEvent, type ReactNode } from "react";
-import { fromLongUnit, longUnitLabel, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import { fromLongUnit, longUnitLabel, parseDecimal, toLongUnit, type UnitSystem } from "../../../../shared/units";
 import { Button, InputField, SelectField } from "../../../components/ui";
 
 /** Filters in a panel that folds away on a phone; says how many are on. */
@@ -39,10 +39,9 @@ function shown(m: number | undefined, units: UnitSystem): string {
 }
 
 function parse(text: string, units: UnitSystem): number | undefined | null {
-  const t = text.trim().replace(",", ".");
-  if (t === "") return undefined;
-  const n = Number(t);
-  if (!Number.isFinite(n) || n < 0) return null;
+  if (text.trim() === "") return undefined;
+  const n = parseDecimal(text);
+  if (n === null || n < 0) return null;
   return Math.min(60, fromLongUnit(n, units));
 }
 

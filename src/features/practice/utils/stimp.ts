@@ -2,16 +2,15 @@
 // (physics owns it, and the server uses the same function on save).
 import { stimpFromTwoWays } from "../../../../physics";
 import { ONE_WAY_LIMITS, STIMP_LIMITS } from "../../../../shared/schemas/greens";
-import { METRES_PER_FOOT, type UnitSystem } from "../../../../shared/units";
+import { METRES_PER_FOOT, parseDecimal, type UnitSystem } from "../../../../shared/units";
 
 /** One roll as typed: feet and inches, or metres and centimetres. Empty parts count as 0. */
 export type RollText = { major: string; minor: string };
 
 function part(text: string): number | null {
-  const t = text.trim().replace(",", ".");
-  if (t === "") return 0;
-  if (!/^\d+(\.\d*)?$|^\.\d+$/.test(t)) return null;
-  return Number(t);
+  if (text.trim() === "") return 0;
+  const n = parseDecimal(text);
+  return n !== null && n >= 0 ? n : null;
 }
 
 /** A roll in feet, or null when a part is not a number or the whole is zero. */

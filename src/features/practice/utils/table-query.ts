@@ -5,6 +5,7 @@ import { BREAK_TYPES, PUTT_SORTS, type BreakType } from "../../../../shared/sche
 import { SESSION_SORTS } from "../../../../shared/schemas/sessions";
 import type { PuttListParams, PuttSort } from "../api/get-putts";
 import type { SessionListParams, SessionSort } from "../api/get-sessions";
+import { parseDecimal } from "../../../../shared/units";
 
 export const SESSION_PAGE_SIZE = 20;
 export const PUTT_PAGE_SIZE = 25;
@@ -19,15 +20,13 @@ function dateParam(q: URLSearchParams, key: string): string | undefined {
 }
 
 function pageParam(q: URLSearchParams): number {
-  const n = Number(q.get("page"));
-  return Number.isInteger(n) && n >= 1 && n <= 100_000 ? n : 1;
+  const n = parseDecimal(q.get("page"));
+  return n !== null && Number.isInteger(n) && n >= 1 && n <= 100_000 ? n : 1;
 }
 
 function numberParam(q: URLSearchParams, key: string, max: number): number | undefined {
-  const raw = q.get(key);
-  if (raw === null || raw.trim() === "") return undefined;
-  const n = Number(raw);
-  return Number.isFinite(n) && n >= 0 && n <= max ? n : undefined;
+  const n = parseDecimal(q.get(key));
+  return n !== null && n >= 0 && n <= max ? n : undefined;
 }
 
 function dateRange(q: URLSearchParams): { from?: string; to?: string } {

@@ -5,11 +5,11 @@ import { act, cleanup, fireEvent, screen, waitFor, within } from "@testing-libra
 import userEvent from "@testing-library/user-event";
 import { useLocation } from "react-router";
 import { renderRoute } from "../../../testing/render";
+import { http, HttpResponse, meAnswer, serve, type Call } from "../../../testing/network";
 import { ReadPage } from "./read-page";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
 
-type Call = { url: string; method: string; body: unknown };
 let calls: Call[] = [];
 
 const fakeRead = {
@@ -32,21 +32,10 @@ const fakeRead = {
   model: { name: "m", v0Mps: 1.83, rollingDecelMps2: 0.55, gravityDecelMps2: 0.14, maxStoppableSlopePct: 7.86 },
 };
 
-function json(status: number, body: unknown) {
-  return new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-}
-
-function stubApi(solve: (body: Record<string, unknown>) => Response = () => json(200, fakeRead)) {
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      const body = init?.body ? (JSON.parse(String(init.body)) as Record<string, unknown>) : undefined;
-      calls.push({ url: url.pathname, method: init?.method ?? "GET", body });
-      if (url.pathname === "/api/me") return json(401, { error: { code: "UNAUTHORIZED", message: "Sign in" } });
-      if (url.pathname === "/api/reads/solve") return solve(body ?? {});
-      return json(404, { error: { code: "NOT_FOUND", message: "Not found" } });
-    }),
+function stubApi(solve: (body: Record<string, unknown>) => Response = () => HttpResponse.json(fakeRead)) {
+  calls = serve(
+    meAnswer(null),
+    http.post("/api/reads/solve", async ({ request }) => solve((await request.json()) as Record<string, unknown>)),
   );
 }
 
@@ -65,7 +54,7 @@ function renderPage(at = "/read") {
   );
 }
 
-const solveBodies = () => calls.filter((c) => c.url === "/api/reads/solve").map((c) => c.body);
+const solveBodies = () => calls.filter((c) => c.path === "/api/reads/solve").map((c) => c.body);
 
 beforeEach(() => {
   calls = [];
@@ -73,7 +62,6 @@ beforeEach(() => {
 });
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
   vi.useRealTimers();
 });
 
@@ -231,15 +219,18 @@ test("dragging the dial with a pointer previews the line live and commits on rel
 
 test("a 422 is shown as 'would not stop' with the steepest stoppable slope, not as a failure", async () => {
   stubApi(() =>
-    json(422, {
-      error: {
-        code: "UNPROCESSABLE",
-        // The number travels in details (as cannotStopBody sends it), not in the words: the page must not parse prose.
-        message: "A ball cannot stop on this green.",
-        fields: { slopePct: "too steep to stop a ball at Stimp 10 ft" },
-        details: { reason: "cannot-stop", maxStoppableSlopePct: 7.86 },
+    HttpResponse.json(
+      {
+        error: {
+          code: "UNPROCESSABLE",
+          // The number travels in details (as cannotStopBody sends it), not in the words: the page must not parse prose.
+          message: "A ball cannot stop on this green.",
+          fields: { slopePct: "too steep to stop a ball at Stimp 10 ft" },
+          details: { reason: "cannot-stop", maxStoppableSlopePct: 7.86 },
+        },
       },
-    }),
+      { status: 422 },
+    ),
   );
   renderPage("/read?d=3&s=8&f=90&st=10&rp=0.45");
   // In the answer panel, and in the phone answer bar.
@@ -253,9 +244,10 @@ test("a 422 is shown as 'would not stop' with the steepest stoppable slope, not 
 
 test("a 400 from the API is shown beside the field it names", async () => {
   stubApi(() =>
-    json(400, {
-      error: { code: "BAD_REQUEST", message: "The request body is not valid.", fields: { distanceM: "distanceM must be at least 0.3 m" } },
-    }),
+    HttpResponse.json(
+      { error: { code: "BAD_REQUEST", message: "The request body is not valid.", fields: { distanceM: "distanceM must be at least 0.3 m" } } },
+      { status: 400 },
+    ),
   );
   renderPage("/read?d=0.3&s=2&f=90&st=10&rp=0.45");
   const distance = await screen.findByLabelText("Distance (ft)");

@@ -5,44 +5,28 @@ import { cleanup, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { useLocation } from "react-router";
 import { renderRoute } from "../../../testing/render";
+import { http, HttpResponse, meAnswer, network, type JsonBodyType } from "../../../testing/network";
 import { ReadPage } from "./read-page";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
 
-const me = {
-  user: { id: "u1", name: "Leena Park", email: "leena@example.test", role: "player", emailVerified: true },
-  preferences: { units: "metric" },
-};
+const me = { user: { id: "u1", name: "Leena Park", email: "leena@example.test", role: "player", emailVerified: true }, preferences: { units: "metric" } };
 const result = {
   launchSpeedMps: 1.9,
   startLineDeg: -5,
   aimOffsetM: -0.27,
   entrySpeedMps: 0.67,
   rollPastM: 0.45,
-  flatPuttLengthM: 2.95,
-  aimGiven: "offset",
-  aimNote: null,
+  flatPuttLengthM: 2.95, aimGiven: "offset", aimNote: null,
   breaks: "left-to-right",
   capture: { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.64, marginMps: 0.97 },
   model: { name: "m", v0Mps: 1.83, rollingDecelMps2: 0.55, gravityDecelMps2: 0.14, maxStoppableSlopePct: 7.86 },
 };
 
-type Saved = {
-  id: string;
-  label: string | null;
-  greenId: string | null;
-  greenName: string | null;
-  input: unknown;
-  result: unknown;
-  createdAt: string;
-};
+type Saved = { id: string; label: string | null; greenId: string | null; greenName: string | null; input: unknown; result: unknown; createdAt: string };
 let saved: Saved[] = [];
 let posted: unknown[] = [];
 let greensAnswer: { status: number; body: unknown } = { status: 404, body: { error: { code: "NOT_FOUND", message: "Not found" } } };
-
-function json(status: number, body?: unknown) {
-  return new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-}
 
 beforeEach(() => {
   saved = [
@@ -59,48 +43,26 @@ beforeEach(() => {
   posted = [];
   greensAnswer = { status: 404, body: { error: { code: "NOT_FOUND", message: "Not found" } } };
   window.localStorage.clear();
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      const method = init?.method ?? "GET";
-      if (url.pathname === "/api/me") return json(200, me);
-      if (url.pathname === "/api/reads/solve")
-        return json(200, {
-          ...result,
-          path: [
-            [0, 0],
-            [0, 3],
-          ],
-        });
-      if (url.pathname === "/api/greens") return json(greensAnswer.status, greensAnswer.body);
-      if (url.pathname === "/api/reads" && method === "GET") return json(200, { items: saved });
-      if (url.pathname === "/api/reads" && method === "POST") {
-        const body = JSON.parse(String(init?.body)) as { read: unknown; label?: string; greenId?: string };
-        posted.push(body);
-        const row = {
-          id: "22222222-2222-4222-8222-222222222222",
-          label: body.label ?? null,
-          greenId: body.greenId ?? null,
-          greenName: body.greenId ? "Top green" : null,
-          input: body.read,
-          result,
-          createdAt: "2025-05-02T10:00:00.000Z",
-        };
-        saved = [row, ...saved];
-        return json(201, row);
-      }
-      if (url.pathname.startsWith("/api/reads/") && method === "DELETE") {
-        saved = saved.filter((s) => !url.pathname.endsWith(s.id));
-        return json(204);
-      }
-      return json(404, { error: { code: "NOT_FOUND", message: "Not found" } });
+  network.use(
+    meAnswer(me),
+    http.post("/api/reads/solve", () => HttpResponse.json({ ...result, path: [[0, 0], [0, 3]] })),
+    http.get("/api/greens", () => HttpResponse.json(greensAnswer.body as JsonBodyType, { status: greensAnswer.status })),
+    http.get("/api/reads", () => HttpResponse.json({ items: saved })),
+    http.post("/api/reads", async ({ request }) => {
+      const body = (await request.json()) as { read: unknown; label?: string; greenId?: string };
+      posted.push(body);
+      const row = { id: "22222222-2222-4222-8222-222222222222", label: body.label ?? null, greenId: body.greenId ?? null, greenName: body.greenId ? "Top green" : null, input: body.read, result, createdAt: "2025-05-02T10:00:00.000Z" };
+      saved = [row, ...saved];
+      return HttpResponse.json(row as JsonBodyType, { status: 201 });
+    }),
+    http.delete("/api/reads/:id", ({ params }) => {
+      saved = saved.filter((s) => s.id !== params.id);
+      return new HttpResponse(null, { status: 204 });
     }),
   );
 });
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 function Where() {
@@ -125,18 +87,13 @@ test("a signed-in player sees lengths in their account's units, saves a read wit
   await user.type(screen.getByLabelText("Label (optional)"), "  Practice green, left of the flag ");
   await user.click(screen.getByRole("button", { name: "Save this read" }));
   expect(await screen.findByText("Saved. It is in your list below.")).toBeInTheDocument();
-  expect(posted).toEqual([
-    {
-      read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } },
-      label: "Practice green, left of the flag",
-    },
-  ]);
+  expect(posted).toEqual([{ read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } }, label: "Practice green, left of the flag" }]);
   const list = await screen.findByRole("region", { name: "Saved reads" });
   expect(await within(list).findByText("Practice green, left of the flag")).toBeInTheDocument();
 });
 
-test("with greens saved, the read can be saved to one of them", async () => {
-  greensAnswer = { status: 200, body: { items: [{ id: "33333333-3333-4333-8333-333333333333", name: "Top green", currentStimpFt: 9.5 }] } };
+test("with greens saved, the read can be saved to one of them (either shape of the greens list)", async () => {
+  greensAnswer = { status: 200, body: [{ id: "33333333-3333-4333-8333-333333333333", name: "Top green", currentStimpFt: 9.5 }] };
   const user = userEvent.setup();
   renderPage();
   const green = await screen.findByLabelText("Green (optional)");

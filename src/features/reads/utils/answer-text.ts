@@ -1,10 +1,10 @@
 // The answer in words, in the user's units. Signed lengths: + = the golfer's right.
-import { HOLE_DIAMETER_M, formatLength, formatShort, metresToHoleWidths, toShortUnit, type UnitSystem } from "../../../../shared/units";
-import { STOPPED_AT_HOLE_MPS, formatSpeed, stimpText } from "../../../../shared/format";
+import { HOLE_DIAMETER_M, formatLength, toShortUnit, type UnitSystem } from "../../../../shared/units";
+import { AIM_CENTRE_M, STOPPED_AT_HOLE_MPS, formatSpeed, holeWidthsWords, paceWords, sideOf, startLineAimText, stimpText } from "../../../../shared/format";
+
+export { paceWords };
 
 const HOLE_RADIUS_M = HOLE_DIAMETER_M / 2;
-/** Below this the aim is "the centre": about a fifth of an inch, less than anyone can aim. */
-const CENTRE_M = 0.005;
 /** Past this the start line is so wide that an offset "at the hole's distance" stops meaning much. */
 const WIDE_START_LINE_DEG = 60;
 
@@ -24,27 +24,17 @@ export function formatAim(m: number, units: UnitSystem): string {
   return `${v < 5 ? v.toFixed(1) : Math.round(v)} cm`;
 }
 
-function side(m: number): "left" | "right" {
-  return m < 0 ? "left" : "right";
-}
-
-function holeWidths(m: number): string {
-  const w = metresToHoleWidths(Math.abs(m));
-  const s = w.toFixed(1);
-  return `${s} hole ${s === "1.0" ? "width" : "widths"}`;
-}
-
 export function startLineWords(startLineDeg: number): string {
   const a = Math.abs(startLineDeg);
   if (a < 0.05) return "Start line straight at the hole";
-  return `Start line ${a.toFixed(1)}° ${side(startLineDeg)} of the straight line to the hole`;
+  return `Start line ${a.toFixed(1)}° ${sideOf(startLineDeg)} of the straight line to the hole`;
 }
 
 export function aimWords(aimOffsetM: number | null, startLineDeg: number, units: UnitSystem): AimWords {
   const startLine = startLineWords(startLineDeg);
   if (aimOffsetM === null || Math.abs(startLineDeg) > WIDE_START_LINE_DEG) {
     return {
-      headline: `Start it ${Math.abs(startLineDeg).toFixed(0)}° ${side(startLineDeg)} of the hole`,
+      headline: `Start it ${startLineAimText(startLineDeg)}`,
       detail:
         Math.abs(startLineDeg) >= 90
           ? "Square to the hole or back up the slope: judge it by the start direction, not a spot beside the hole."
@@ -53,21 +43,11 @@ export function aimWords(aimOffsetM: number | null, startLineDeg: number, units:
     };
   }
   const abs = Math.abs(aimOffsetM);
-  if (abs < CENTRE_M) return { headline: "Aim at the centre of the hole", detail: "No borrow to play", startLine };
-  const s = side(aimOffsetM);
-  const fromCentre = `${holeWidths(aimOffsetM)} (${formatAim(aimOffsetM, units)}) ${s} of centre`;
+  if (abs < AIM_CENTRE_M) return { headline: "Aim at the centre of the hole", detail: "No borrow to play", startLine };
+  const s = sideOf(aimOffsetM);
+  const fromCentre = `${holeWidthsWords(aimOffsetM)} (${formatAim(aimOffsetM, units)}) ${s} of centre`;
   if (abs <= HOLE_RADIUS_M) return { headline: `Aim inside the ${s} edge`, detail: fromCentre, startLine };
   return { headline: `Start it ${formatAim(abs - HOLE_RADIUS_M, units)} outside the ${s} edge`, detail: fromCentre, startLine };
-}
-
-/** "Firm enough to finish 17 in past" and "Hit it as hard as a flat 11 ft 3 in putt". */
-export function paceWords(rollPastM: number, flatPuttLengthM: number, units: UnitSystem): { headline: string; flatPutt: string } {
-  const past =
-    rollPastM < 0.01 ? "Just reach the hole: a dying pace" : `Firm enough to finish ${formatShort(rollPastM, units)} past if it misses`;
-  return {
-    headline: past,
-    flatPutt: `Hit it as hard as a flat ${formatLength(Math.max(0, flatPuttLengthM), units)} putt`,
-  };
 }
 
 export type CaptureSummary = { holed: boolean; outcome: "holed" | "lip-out" | "miss"; maxCaptureSpeedMps: number; marginMps: number };

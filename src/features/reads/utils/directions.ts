@@ -4,6 +4,8 @@
 // golfer (an uphill putt), 270 = it falls to the left. So 45° lies between "away" and "right": downhill, falling
 // right; 135° lies between "right" and "toward you": uphill, falling right.
 
+import { describeFallLine } from "../../../../shared/format";
+
 export type NamedDirection = { deg: number; label: string; detail: string };
 
 export const NAMED_DIRECTIONS: ReadonlyArray<NamedDirection> = [
@@ -30,21 +32,8 @@ export function namedDirectionAt(deg: number): NamedDirection | undefined {
   return NAMED_DIRECTIONS.find((n) => Math.abs(n.deg - d) < 1e-9);
 }
 
-/**
- * The fall line in plain words, for any angle: within 15° of a quarter it takes that quarter's name
- * ("falls to the right"); otherwise it names both leans ("downhill, falls right").
- */
-export function describeFallLine(deg: number): string {
-  const d = normaliseDeg(deg);
-  const rad = (d * Math.PI) / 180;
-  const along = Math.cos(rad); // + the green falls away (downhill putt), − toward the golfer
-  const side = Math.sin(rad); // + falls right, − falls left
-  const quarterSine = Math.sin((15 * Math.PI) / 180);
-  if (Math.abs(side) <= quarterSine) return along > 0 ? "straight downhill" : "straight uphill";
-  const sideWords = side > 0 ? "falls right" : "falls left";
-  if (Math.abs(along) <= quarterSine) return side > 0 ? "falls to the right" : "falls to the left";
-  return `${along > 0 ? "downhill" : "uphill"}, ${sideWords}`;
-}
+/** The fall line in plain words (shared/format.ts): "falls to the right", "downhill, falls right". */
+export { describeFallLine };
 
 /** What a screen reader hears for the dial: "falls to the right, 90°". */
 export function fallLineValueText(deg: number): string {

@@ -2,6 +2,7 @@
 import { STAT_SOURCES, type StatSource } from "../../../../shared/schemas/stats";
 import type { CompareParams, StatsParams, TrendParams } from "../api/types";
 import { bandsParam, edgesFromParam } from "./bands";
+import { parseDecimal } from "../../../../shared/units";
 
 const ISO = /^\d{4}-\d{2}-\d{2}$/;
 const date = (q: URLSearchParams, k: string) => {
@@ -33,17 +34,10 @@ export function statsView(q: URLSearchParams, today: string): StatsView {
   const bands = bandsParam(edgesM);
   const base = { ...(from ? { from } : {}), ...(to ? { to } : {}), ...(bands ? { bands } : {}), source };
   const win = q.get("win") === "rolling" ? "rolling" : "week";
-  const ww = Number(q.get("ww"));
-  const windowWeeks = Number.isInteger(ww) && ww >= 2 && ww <= 12 ? ww : 4;
+  const ww = parseDecimal(q.get("ww"));
+  const windowWeeks = ww !== null && Number.isInteger(ww) && ww >= 2 && ww <= 12 ? ww : 4;
   const tb = q.get("tb");
-  const trendBands =
-    tb === null
-      ? null
-      : tb
-          .split(",")
-          .filter(Boolean)
-          .map(Number)
-          .filter((n) => Number.isInteger(n) && n >= 0 && n < 21);
+  const trendBands = tb === null ? null : tb.split(",").map(parseDecimal).filter((n): n is number => n !== null && Number.isInteger(n) && n >= 0 && n < 21);
 
   // Compare: by default the last four weeks against the four before them.
   let bTo = date(q, "bTo") ?? today;

@@ -1,15 +1,6 @@
 // The player's read: an aim (slider, or an amount and a side) and a pace as a flat-putt length (slider or a number).
 import { useId, useState } from "react";
-import {
-  formatLength,
-  fromLongUnit,
-  fromShortUnit,
-  longUnitLabel,
-  shortUnitLabel,
-  toLongUnit,
-  toShortUnit,
-  type UnitSystem,
-} from "../../../../shared/units";
+import { formatLength, fromLongUnit, fromShortUnit, longUnitLabel, parseDecimal, shortUnitLabel, toLongUnit, toShortUnit, type UnitSystem } from "../../../../shared/units";
 import { aimWords } from "../../../components/green-3d/words";
 
 const inputClass =
@@ -51,8 +42,8 @@ export function AimControl({
     if (aimOffsetM !== 0) setSide(aimOffsetM < 0 ? "left" : "right");
   }
   const commit = (amountText: string, s: "left" | "right") => {
-    const v = Number(amountText);
-    if (amountText.trim() === "" || !Number.isFinite(v) || v < 0) return;
+    const v = parseDecimal(amountText);
+    if (v === null || v < 0) return;
     const m = Math.min(range, fromShortUnit(v, units)) * (s === "left" ? -1 : 1);
     setSeen(m);
     onChange(m);
@@ -184,8 +175,8 @@ export function FlatPuttControl({
           value={draft}
           onChange={(e) => {
             setDraft(e.target.value);
-            const v = Number(e.target.value);
-            if (e.target.value.trim() === "" || !Number.isFinite(v)) return;
+            const v = parseDecimal(e.target.value);
+            if (v === null) return;
             const m = Math.min(max, Math.max(min, fromLongUnit(v, units)));
             setSeen(m);
             onChange(m);

@@ -4,20 +4,16 @@ import { afterEach, beforeEach, expect, test, vi } from "vitest";
 import { cleanup, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { renderRoute } from "../../../testing/render";
+import { apiError, http, HttpResponse, serve, type Call } from "../../../testing/network";
 import { fallLineWords } from "../../../components/green-3d/words";
 import { roundPutt } from "../utils/putt-generator";
 import { TrainPage } from "./train-page";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
 
-type Call = { url: string; method: string; body: unknown };
 let calls: Call[] = [];
 let units: "imperial" | "metric" = "imperial";
 let attemptAnswer: () => Response;
-
-function json(status: number, body: unknown) {
-  return new Response(JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } });
-}
 
 const me = () => ({
   user: { id: "u1", name: "Ivo Marsh", email: "ivo@example.test", role: "player", emailVerified: true },
@@ -27,29 +23,21 @@ const me = () => ({
 beforeEach(() => {
   calls = [];
   units = "imperial";
-  attemptAnswer = () => json(201, { id: "a1" });
+  attemptAnswer = () => HttpResponse.json({ id: "a1" }, { status: 201 });
   // No WebGL in jsdom: the page draws the flat diagram, as it does on a phone without WebGL.
   vi.spyOn(HTMLCanvasElement.prototype, "getContext").mockReturnValue(null);
-  vi.stubGlobal(
-    "fetch",
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(typeof input === "string" ? input : input instanceof URL ? input.href : input.url, "http://localhost");
-      const method = init?.method ?? "GET";
-      calls.push({ url: url.pathname, method, body: init?.body ? JSON.parse(String(init.body)) : undefined });
-      if (url.pathname === "/api/me") return json(200, me());
-      if (url.pathname === "/api/training/attempts" && method === "POST") return attemptAnswer();
-      if (url.pathname === "/api/training/attempts") return json(200, { items: [] });
-      return json(404, { error: { code: "NOT_FOUND", message: "Not found" } });
-    }),
+  calls = serve(
+    http.get("/api/me", () => HttpResponse.json(me())),
+    http.post("/api/training/attempts", () => attemptAnswer()),
+    http.get("/api/training/attempts", () => HttpResponse.json({ items: [] })),
   );
 });
 afterEach(() => {
   cleanup();
   vi.restoreAllMocks();
-  vi.unstubAllGlobals();
 });
 
-const posts = () => calls.filter((c) => c.url === "/api/training/attempts" && c.method === "POST");
+const posts = () => calls.filter((c) => c.path === "/api/training/attempts" && c.method === "POST");
 
 test("the By eye level hides the slope and fall line until the reveal, then names them", async () => {
   const putt = roundPutt("by-eye", 123, 0);
@@ -88,7 +76,7 @@ test("after the reveal a putt can be read again, but that read is not scored or 
 
 test("a putt the server says was scored before (409) is shown as practice, without a score", async () => {
   attemptAnswer = () =>
-    json(409, { error: { code: "conflict", message: "already scored", details: { reason: "already-scored", attemptId: "a0" } } });
+    apiError(409, "conflict", "already scored", { details: { reason: "already-scored", attemptId: "a0" } });
   renderRoute(<TrainPage />, { at: "/train?level=club&seed=77&n=2" });
   await userEvent.click(await screen.findByRole("button", { name: "Reveal the line" }));
   await screen.findByText(/You were scored on this putt before/);

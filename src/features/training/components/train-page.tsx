@@ -2,7 +2,7 @@ import { useEffect, useMemo, useState, type KeyboardEvent } from "react";
 import { useSearchParams } from "react-router";
 import clsx from "clsx";
 import { TRAINING_LEVELS, TRAINING_LEVEL_IDS, evaluateAttempt, levelDescription, type Evaluation, type TrainingLevelId } from "../../../../shared/training";
-import { formatLength, fromShortUnit, type UnitSystem } from "../../../../shared/units";
+import { formatLength, fromShortUnit, parseDecimal, type UnitSystem } from "../../../../shared/units";
 import { CameraButtons } from "../../../components/green-3d/camera-buttons";
 import { contourIntervalM, greenShape, heightRange } from "../../../components/green-3d/frame";
 import { GreenView } from "../../../components/green-3d/green-view";
@@ -27,7 +27,7 @@ function parseLevel(v: string | null): TrainingLevelId {
 }
 function parseInt0(v: string | null): number | null {
   if (v === null || !/^\d{1,10}$/.test(v)) return null;
-  return Number(v);
+  return parseDecimal(v);
 }
 function roundQuery(level: TrainingLevelId, seed: number, n: number): string {
   return new URLSearchParams({ level, seed: String(seed), n: String(n) }).toString();
