@@ -15,6 +15,7 @@ import { heightMapRoutes } from "./height-maps/height-maps.routes";
 import { meRoutes } from "./me/me.routes";
 import { notesRoutes } from "./notes/notes.routes";
 import { adminRoutes } from "./admin/admin.routes";
+import { practicePlanRoutes } from "./practice-plan/practice-plan.routes";
 import { puttsRoutes } from "./putts/putts.routes";
 import { readsRoutes } from "./reads/reads.routes";
 import { roundsRoutes } from "./rounds/rounds.routes";
@@ -39,6 +40,7 @@ export function apiRouters(deps: RouterDeps): Router[] {
   routers.push(makeProbabilityRoutes(deps));
   routers.push(heightMapRoutes(deps));
   routers.push(notesRoutes(deps));
+  routers.push(practicePlanRoutes(deps));
   routers.push(adminRoutes(deps));
   if (deps.smtpFake) routers.push(devRoutes(deps));
   return routers;
