@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import fc from "fast-check";
-import { buildPracticePlan, MIN_PLAN_PUTTS, publishedFirstPuttShareBelow, weeklyCheck, weekMove, type PlanPutt } from "./practice-plan";
+import { buildPracticePlan, MIN_PLAN_PUTTS, weeklyVolume, publishedFirstPuttShareBelow, weeklyCheck, weekMove, type PlanPutt } from "./practice-plan";
 import { ladderInputSchema } from "./schemas/ladders";
 import { planProposalSchema, type PlanReady } from "./schemas/practice-plan";
 import { DEFAULT_BAND_EDGES_M } from "./stats/bands";
@@ -52,7 +52,8 @@ test("a player weak only at 6–10 ft gets a plan for 6–10 ft alone", () => {
   expect(eight.passRule).toEqual({ kind: "make", made: 3 });
   // 6–10 ft (1.83–3.05 m) lies wholly inside the gentle level's 1–4 m (shared/training.ts), the gentlest that covers it.
   expect(plan.trainingLevel).toBe("gentle");
-  expect(plan.weekly.puttsPerWeek).toBe(plan.weekly.sessions * plan.weekly.puttsPerSession);
+  // Three rungs of 10 balls (lengths under 3 m): 30 putts a session; two sessions give 60 ≥ 40 at 6–10 ft.
+  expect(plan.weekly).toEqual({ sessions: 2, puttsPerSession: 30, puttsPerWeek: 60, puttsPerTargetBand: 60 });
 });
 
 test("a player with too few putts is told to log more first, not given a plan", () => {
@@ -122,6 +123,13 @@ test("metric bands give rungs in tenths of a metre inside the band", () => {
   // 8 ft = 2.44 m lies in the 2–3 m band.
   expect(p.targets).toEqual([2]);
   expect(p.ladder.rungs.map((r) => r.distanceM)).toEqual([2.2, 2.5, 2.8]);
+});
+
+test("the weekly volume gives each target length about 40 putts a week, in at least two sessions", () => {
+  const rungs = (n: number, balls: number) => Array.from({ length: n }, (_, i) => ({ distanceM: 1 + i, balls, passRule: { kind: "make" as const, made: 1 } }));
+  // Two bands, 3 rungs of 4 balls each: 12 putts a band a session → 4 sessions (48 putts a band; 3 would give 36).
+  expect(weeklyVolume({ name: "x", failRule: "repeat", rungs: rungs(6, 4) }, 2)).toEqual({ sessions: 4, puttsPerSession: 24, puttsPerWeek: 96, puttsPerTargetBand: 48 });
+  expect(weeklyVolume({ name: "x", failRule: "repeat", rungs: rungs(6, 10) }, 2).sessions).toBe(2);
 });
 
 describe("plan properties", () => {

@@ -26,7 +26,13 @@ export const MIN_COURSE_PUTTS = 36;
 /** A plan works on at most this many bands (the costliest). */
 export const MAX_TARGET_BANDS = 2;
 export const RUNGS_PER_BAND = 3;
-export const PLAN_SESSIONS_PER_WEEK = 3;
+/**
+ * Putts a week wanted at each target length: about 40, so that a rise of some 20 percentage points in a band's make
+ * rate is clear of chance after two or three weeks (two-proportion test at 95 %, normal approximation [derived]).
+ */
+export const WEEKLY_PUTTS_PER_TARGET_BAND = 40;
+/** Sessions a week: at least two, more when one run of the ladder a session would not give each band its putts. */
+export const MIN_SESSIONS_PER_WEEK = 2;
 /** A band's last edge when it is open-ended (the ladder needs a top): 1.5 × its lower edge, at most 25 m. */
 const OPEN_BAND_FACTOR = 1.5;
 /** Holes in a round: the published distribution is of first putts, one a hole putted. */
@@ -187,10 +193,13 @@ export function trainingLevelFor(targets: readonly PlanBand[]): TrainingLevelId 
   return best;
 }
 
-function weeklyVolume(ladder: LadderInput, targetCount: number): WeeklyVolume {
+/** One run of the ladder a session; enough sessions for WEEKLY_PUTTS_PER_TARGET_BAND putts at each target length. */
+export function weeklyVolume(ladder: LadderInput, targetCount: number): WeeklyVolume {
   const puttsPerSession = ladder.rungs.reduce((s, r) => s + r.balls, 0);
-  const puttsPerWeek = puttsPerSession * PLAN_SESSIONS_PER_WEEK;
-  return { sessions: PLAN_SESSIONS_PER_WEEK, puttsPerSession, puttsPerWeek, puttsPerTargetBand: Math.round(puttsPerWeek / targetCount) };
+  const perBandPerSession = puttsPerSession / targetCount;
+  const sessions = Math.max(MIN_SESSIONS_PER_WEEK, Math.ceil(WEEKLY_PUTTS_PER_TARGET_BAND / perBandPerSession));
+  const puttsPerWeek = puttsPerSession * sessions;
+  return { sessions, puttsPerSession, puttsPerWeek, puttsPerTargetBand: Math.round(puttsPerWeek / targetCount) };
 }
 
 /**

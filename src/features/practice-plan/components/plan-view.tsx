@@ -13,7 +13,7 @@ import { bandLabel, bandVerdict, FAIL_RULE_TEXT, MOVE_TEXT, passRuleText, pct, r
 type Mode = "player" | "coach";
 
 const th = "px-3 py-2 text-left font-semibold whitespace-nowrap";
-const td = "px-3 py-2 align-top";
+const td = "px-3 py-2 align-top whitespace-nowrap";
 
 function BandsTable({ bands, units, caption }: { bands: PlanBand[]; units: UnitSystem; caption: string }) {
   return (
