@@ -65,7 +65,8 @@ test("the coach sees the junior's plan on the player's page and adopts it into t
   await c.getByRole("heading", { level: 1, name: JUNIOR.name }).waitFor();
   await c.getByRole("heading", { level: 3, name: "Practice plan" }).waitFor();
   // The junior started it (the first test): the coach sees it under way too.
-  await c.getByRole("heading", { name: "The plan under way" }).waitFor();
+  await c.getByRole("heading", { level: 4, name: "The plan under way" }).waitFor();
+  await c.getByRole("heading", { level: 4, name: "What the log proposes now" }).waitFor();
   await screenshot(c, "practice-plan-coach-desktop");
   await c.getByRole("button", { name: `Adopt this plan for ${JUNIOR.name}` }).click();
   await c.waitForURL(/\/ladders\/[0-9a-f-]{36}$/);

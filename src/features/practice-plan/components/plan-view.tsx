@@ -1,9 +1,10 @@
+import type { ReactNode } from "react";
 import { useNavigate } from "react-router";
 import { formatDate } from "../../../../shared/format";
 import type { ActivePlan, PlanBand, PlanReady, PracticePlanResponse } from "../../../../shared/schemas/practice-plan";
 import { TRAINING_LEVELS } from "../../../../shared/training";
 import { formatLength, type UnitSystem } from "../../../../shared/units";
-import { Alert, Button, ButtonLink, Card, CardTitle, EmptyState, PageSpinner, TableScroller, TextLink } from "../../../components/ui";
+import { Alert, Button, ButtonLink, Card, EmptyState, PageSpinner, TableScroller, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useUnits } from "../../auth/hooks/use-units";
@@ -11,6 +12,17 @@ import { useAdoptPlan, usePracticePlan, useStartPlan } from "../api/practice-pla
 import { bandLabel, bandVerdict, FAIL_RULE_TEXT, MOVE_TEXT, passRuleText, pct, rateWithRange, strokesWords } from "../utils/plan-words";
 
 type Mode = "player" | "coach";
+type Level = 2 | 3 | 4 | 5;
+
+/** A heading at the level the page needs: under the player's h1, or under the coach page's h2. */
+function H({ level, id, className, children }: { level: Level; id?: string; className?: string; children: ReactNode }) {
+  const Tag = `h${level}` as const;
+  return (
+    <Tag id={id} className={className ?? "text-lg font-semibold tracking-tight"}>
+      {children}
+    </Tag>
+  );
+}
 
 const th = "px-3 py-2 text-left font-semibold whitespace-nowrap";
 const td = "px-3 py-2 align-top whitespace-nowrap";
@@ -51,13 +63,13 @@ function BandsTable({ bands, units, caption }: { bands: PlanBand[]; units: UnitS
   );
 }
 
-function ProposedPlan({ plan, units }: { plan: PlanReady; units: UnitSystem }) {
+function ProposedPlan({ plan, units, level }: { plan: PlanReady; units: UnitSystem; level: Level }) {
   const targets = plan.targets.map((i) => plan.bands[i]!);
-  const level = TRAINING_LEVELS[plan.trainingLevel];
+  const trainingLevel = TRAINING_LEVELS[plan.trainingLevel];
   return (
     <div className="flex flex-col gap-4">
       <Card>
-        <CardTitle as="h3">Where your strokes go</CardTitle>
+        <H level={level}>Where your strokes go</H>
         <p className="mt-2 text-ink-700">{plan.message}</p>
         <ul className="mt-3 flex flex-col gap-2">
           {targets.map((b) => (
@@ -70,7 +82,7 @@ function ProposedPlan({ plan, units }: { plan: PlanReady; units: UnitSystem }) {
       </Card>
       <div className="grid gap-4 lg:grid-cols-2">
         <Card>
-          <CardTitle as="h3">The ladder</CardTitle>
+          <H level={level}>The ladder</H>
           <p className="mt-1 text-sm text-ink-600">{plan.ladder.name}</p>
           <ol className="mt-3 flex flex-col gap-1.5" aria-label="Rungs of the plan's ladder">
             {plan.ladder.rungs.map((r, i) => (
@@ -85,14 +97,14 @@ function ProposedPlan({ plan, units }: { plan: PlanReady; units: UnitSystem }) {
           <p className="mt-2 text-sm text-ink-600">{FAIL_RULE_TEXT[plan.ladder.failRule]}</p>
         </Card>
         <Card>
-          <CardTitle as="h3">Each week</CardTitle>
+          <H level={level}>Each week</H>
           <ul className="mt-2 flex flex-col gap-2 text-ink-700">
             <li>
               <strong>{plan.weekly.sessions} sessions</strong> of about {plan.weekly.puttsPerSession} putts: {plan.weekly.puttsPerWeek} putts a week, about{" "}
               {plan.weekly.puttsPerTargetBand} at each length in the plan — enough to see a change within a few weeks.
             </li>
             <li>
-              Read training at the <TextLink to={paths.train.href(`level=${plan.trainingLevel}`)}>{level.label} level</TextLink> once a week: its putts are
+              Read training at the <TextLink to={paths.train.href(`level=${plan.trainingLevel}`)}>{trainingLevel.label} level</TextLink> once a week: its putts are
               the lengths the plan works on.
             </li>
           </ul>
@@ -105,14 +117,14 @@ function ProposedPlan({ plan, units }: { plan: PlanReady; units: UnitSystem }) {
   );
 }
 
-function WeeklyCheck({ active, units, mode }: { active: ActivePlan; units: UnitSystem; mode: Mode }) {
+function WeeklyCheck({ active, units, mode, level }: { active: ActivePlan; units: UnitSystem; mode: Mode; level: Level }) {
   const started =
     active.startedBy.role === "player" ? `Started ${formatDate(active.startedOn)}` : `Adopted by ${active.startedBy.name} on ${formatDate(active.startedOn)}`;
   return (
     <Card>
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
-          <CardTitle as={mode === "player" ? "h2" : "h3"}>The plan under way</CardTitle>
+          <H level={level}>The plan under way</H>
           <p className="mt-1 text-sm text-ink-600">
             {active.plan.ladder.name} · {started}
           </p>
@@ -250,16 +262,22 @@ export function PracticePlanView({ playerId, mode }: { playerId?: string; mode: 
   const data = q.data;
   const p = data.proposal;
   const who = mode === "player" ? "you" : data.playerName;
-  // Under the page's h1 for the player; under the coach page's "…'s practice" h2 for a coach.
-  const Heading = mode === "player" ? "h2" : "h3";
+  // Under the page's h1 for the player; under the coach page's "…'s practice" h2 for a coach (whose view has a
+  // "Practice plan" h3 of its own).
+  const top: Level = mode === "player" ? 2 : 4;
   return (
     <div className="flex flex-col gap-6">
-      {data.active ? <WeeklyCheck active={data.active} units={units} mode={mode} /> : null}
+      {mode === "coach" ? (
+        <H level={3} className="text-2xl font-semibold tracking-tight">
+          Practice plan
+        </H>
+      ) : null}
+      {data.active ? <WeeklyCheck active={data.active} units={units} mode={mode} level={top} /> : null}
       <section aria-labelledby="plan-proposal" className="flex flex-col gap-4">
         <div>
-          <Heading id="plan-proposal" className="text-xl font-semibold tracking-tight">
-            {mode === "coach" ? "Practice plan" : data.active ? "What the log proposes now" : "The proposed plan"}
-          </Heading>
+          <H level={top} id="plan-proposal" className="text-xl font-semibold tracking-tight">
+            {data.active ? "What the log proposes now" : "The proposed plan"}
+          </H>
           <p className="mt-1 text-sm text-ink-600">
             From {p.puttsLogged} putts logged {formatDate(data.window.from)} – {formatDate(data.window.to)}. {p.frequency.note}
           </p>
@@ -281,7 +299,7 @@ export function PracticePlanView({ playerId, mode }: { playerId?: string; mode: 
           <EmptyState title="No length stands out">{p.message}</EmptyState>
         ) : (
           <>
-            <ProposedPlan plan={p} units={units} />
+            <ProposedPlan plan={p} units={units} level={(top + 1) as Level} />
             <Actions data={data} mode={mode} />
           </>
         )}
