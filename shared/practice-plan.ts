@@ -171,7 +171,7 @@ function rungFor(distanceM: number, band: PlanBand, units: UnitSystem): Rung {
     distanceM,
     balls,
     passRule: { kind: "make", made },
-    note: `Plan band ${bandWords(band, units)}: hole ${made} of ${balls}`,
+    note: `From your plan: ${bandWords(band, units)} costs about ${(band.strokesPerRound ?? 0).toFixed(2)} strokes a round`,
   };
 }
 
