@@ -63,14 +63,18 @@ function BandsTable({ bands, units, caption }: { bands: PlanBand[]; units: UnitS
   );
 }
 
-function ProposedPlan({ plan, units, level }: { plan: PlanReady; units: UnitSystem; level: Level }) {
+function ProposedPlan({ plan, units, level, playerName }: { plan: PlanReady; units: UnitSystem; level: Level; playerName?: string }) {
   const targets = plan.targets.map((i) => plan.bands[i]!);
   const trainingLevel = TRAINING_LEVELS[plan.trainingLevel];
   return (
     <div className="flex flex-col gap-4">
       <Card>
         <H level={level}>Where your strokes go</H>
-        <p className="mt-2 text-ink-700">{plan.message}</p>
+        <p className="mt-2 text-ink-700">
+          {playerName
+            ? `Work on ${plan.targets.map((i) => bandLabel(plan.bands[i]!, units)).join(" and ")}: that is where ${playerName} loses the most strokes a round against the tour, and the loss is clear of its interval.`
+            : plan.message}
+        </p>
         <ul className="mt-3 flex flex-col gap-2">
           {targets.map((b) => (
             <li key={b.fromM} className="rounded-lg bg-warn-50 px-3 py-2 text-ink-800">
@@ -299,7 +303,7 @@ export function PracticePlanView({ playerId, mode }: { playerId?: string; mode: 
           <EmptyState title="No length stands out">{p.message}</EmptyState>
         ) : (
           <>
-            <ProposedPlan plan={p} units={units} level={(top + 1) as Level} />
+            <ProposedPlan plan={p} units={units} level={(top + 1) as Level} playerName={mode === "coach" ? data.playerName : undefined} />
             <Actions data={data} mode={mode} />
           </>
         )}
