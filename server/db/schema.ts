@@ -302,3 +302,22 @@ export const devMail = pgTable(
   },
   (t) => [index("dev_mail_received_idx").on(t.receivedAt)],
 );
+
+/**
+ * A practice plan under way (issue 17): the proposal as it stood when the player started it or a coach adopted it
+ * (shared/schemas/practice-plan.ts), with the runnable ladder it became. The newest row is the player's plan.
+ */
+export const practicePlans = pgTable(
+  "practice_plans",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    playerId: userRef("player_id"),
+    startedBy: userRef("started_by"),
+    startedOn: date("started_on").notNull(),
+    plan: jsonb("plan").notNull(),
+    assignmentId: uuid("assignment_id").references(() => ladderAssignments.id, { onDelete: "set null" }),
+    ladderId: uuid("ladder_id").references(() => ladders.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("practice_plans_player_idx").on(t.playerId, t.createdAt)],
+);

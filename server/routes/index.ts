@@ -17,6 +17,7 @@ import { heightMapRoutes } from "./height-maps/height-maps.routes";
 import { meRoutes } from "./me/me.routes";
 import { notesRoutes } from "./notes/notes.routes";
 import { adminRoutes } from "./admin/admin.routes";
+import { practicePlanRoutes } from "./practice-plan/practice-plan.routes";
 import { puttsRoutes } from "./putts/putts.routes";
 import { readsRoutes } from "./reads/reads.routes";
 import { roundsRoutes } from "./rounds/rounds.routes";
@@ -45,6 +46,7 @@ export function apiRoutes(deps: RouterDeps): RouteDef[] {
     ...makeProbabilityRoutes(deps),
     ...heightMapRoutes(deps),
     ...notesRoutes(deps),
+    ...practicePlanRoutes(deps),
     ...adminRoutes(deps),
     ...(deps.smtpFake ? devRoutes(deps) : []),
   ];

@@ -101,8 +101,10 @@ export function visibleNavItems(items: ReadonlyArray<NavItem>, ctx: NavContext):
 
 /** Tabs across the practice log's pages (rendered by the practice pages themselves). */
 export const practiceNavItems: ReadonlyArray<NavItem> = [
-  { label: "Practice", to: paths.practice.href(), signedIn: true },
+  // "Practice" is the log itself: not active on the plan under it (/practice/plan).
+  { label: "Practice", to: paths.practice.href(), signedIn: true, end: true },
   { label: "Rounds", to: paths.rounds.href(), signedIn: true },
   { label: "Greens", to: paths.greens.href(), signedIn: true },
   { label: "Make rates", to: paths.stats.href(), signedIn: true },
+  { label: "Plan", to: paths.practicePlan.href(), signedIn: true },
 ];

@@ -34,6 +34,7 @@ export function createAppRoutes(): RouteObject[] {
             // practice log and make rates (issue 5)
             { path: paths.practice.path, lazy: () => import("./routes/practice") },
             { path: paths.practiceImport.path, lazy: () => import("./routes/practice-import") },
+            { path: paths.practicePlan.path, lazy: () => import("./routes/practice-plan") },
             { path: paths.session.path, lazy: () => import("./routes/practice-session") },
             { path: paths.greens.path, lazy: () => import("./routes/greens") },
             { path: paths.green.path, lazy: () => import("./routes/green") },

@@ -28,6 +28,8 @@ export const paths = {
   session: { path: "/practice/:sessionId", href: (sessionId: string) => `/practice/${encodeURIComponent(sessionId)}` },
   // practice log (issue 5); "import" outranks ":sessionId" in React Router.
   practiceImport: { path: "/practice/import", href: () => "/practice/import" },
+  // practice plan (issue 17); "plan" outranks ":sessionId" too.
+  practicePlan: { path: "/practice/plan", href: () => "/practice/plan" },
   greens: { path: "/greens", href: () => "/greens" },
   green: { path: "/greens/:greenId", href: (greenId: string) => `/greens/${encodeURIComponent(greenId)}` },
   // green height maps (issue 8): the map, upload and surface reads of one green.
@@ -125,5 +127,9 @@ export const apiPaths = {
   readsMakeProbability: "/api/reads/make-probability",
   myDispersion: "/api/players/me/dispersion",
   greenHeightMap: (id: string) => `/api/greens/${encodeURIComponent(id)}/height-map`,
+  // practice plan (issue 17)
+  practicePlan: "/api/practice-plan",
+  practicePlanStart: "/api/practice-plan/start",
+  practicePlanAdopt: "/api/practice-plan/adopt",
   greenSurfaceSolve: (id: string) => `/api/greens/${encodeURIComponent(id)}/reads/solve`,
 } as const;

@@ -680,6 +680,12 @@ const rows: Row[] = [
   { route: "GET /api/stats/baseline", target: "none", expect: SIGNED_IN(200) },
   { route: "GET /api/stats/sessions", target: "P1's stats (?playerId)", query: ofP1(), expect: PLAYER_ID_QUERY, reveals: "p1SessionId" },
 
+  // Practice plan (issue 17): read like the stats; a player starts only their own; a coach adopts only their players'.
+  // P1 has logged too few putts for a plan, so an allowed start or adoption is a 409 that changes nothing.
+  { route: "GET /api/practice-plan", target: "P1's plan (?playerId)", query: ofP1(), expect: PLAYER_ID_QUERY, reveals: "p1Id" },
+  { route: "POST /api/practice-plan/start", target: "own plan", expect: SIGNED_IN(409) },
+  { route: "POST /api/practice-plan/adopt", target: "P1's plan", body: () => ({ playerId: people.p1.id }), expect: C1_COACHING(409) },
+
   // CSV: imports go into one's own log; exports follow ?playerId like the other reads.
   { route: "POST /api/csv/putts/preview", target: "own upload", body: csvForm, expect: SIGNED_IN(200) },
   { route: "POST /api/csv/putts/import", target: "own log", body: csvForm, expect: SIGNED_IN(200) },

@@ -30,6 +30,7 @@ const PLAYER: Visit[] = [
   "/rounds",
   { from: "/rounds", link: /^\/rounds\/[0-9a-f-]{36}$/ },
   "/stats",
+  "/practice/plan",
   "/ladders/mine",
   { from: "/ladders/mine", link: /^\/ladders\/run\/[0-9a-f-]{36}$/ },
   "/train",
