@@ -23,7 +23,7 @@ import {
   sampleErrorWords,
   secondPuttLengthWords,
 } from "../utils/odds-words";
-import { LIVE_SAMPLES } from "../utils/live-odds";
+import { LIVE_SAMPLES } from "../utils/live-samples";
 import { FinishesPicture } from "./finishes-picture";
 
 export type OddsPanelProps = {
