@@ -3,6 +3,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { expect, test } from "vitest";
+import { openBrowser, startAppServer } from "./harness";
 
 type Chunk = {
   file: string;
@@ -96,7 +97,6 @@ test("per route (Vite manifest): only the 3D pages can load three.js, and the ch
 });
 
 test("built assets are served brotli-compressed and immutable; the page and the API are compressed too", async () => {
-  const { startAppServer } = await import("./harness");
   const server = await startAppServer();
   try {
     const entry = manifest["index.html"]!.file;
@@ -116,7 +116,6 @@ test("built assets are served brotli-compressed and immutable; the page and the 
 }, 60_000);
 
 test("in Chromium: JavaScript sent for / and /read ≤ 200 KiB, /stats (signed in) ≤ 300 KiB, and none of them loads three.js", async () => {
-  const { openBrowser, startAppServer } = await import("./harness");
   const server = await startAppServer();
   const browser = await openBrowser();
   try {

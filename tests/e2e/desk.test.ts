@@ -4,7 +4,7 @@ import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { DEMO_ADMIN, DEMO_COACH, DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
 import type { TestServer } from "../setup/server";
-import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, type Browser, allowingStatus, signInWithForm } from "./harness";
+import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer, type Browser, signInWithForm } from "./harness";
 
 let server: TestServer;
 const browsers: Browser[] = [];
@@ -24,8 +24,6 @@ async function signedIn(who: { email: string }, viewport = DESKTOP): Promise<Bro
   return b;
 }
 
-/** Console errors but Chromium's line for a 401 (a refused request some steps expect). */
-const realErrors = (b: Browser) => b.errors.filter(allowingStatus(401));
 
 /** The element is fully inside the first screen of the page (no scrolling). */
 async function aboveTheFold(page: Page, name: string | RegExp, role: "button" | "link" = "button") {
@@ -84,14 +82,12 @@ test("the coach opens a player: figures with their intervals drawn, where the st
   await screenshot(c, "desk-squad-overview-desktop");
   await c.setViewportSize(PHONE);
   await screenshot(c, "desk-squad-overview-phone");
-  expect(realErrors(coach)).toEqual([]);
 
   // The player reads the note on their ladders page.
   const player = await signedIn(ivo, PHONE);
   await player.page.goto(`${server.url}/ladders/mine`);
   await player.page.getByRole("heading", { name: "Notes from your coach" }).waitFor();
   await player.page.getByText("Hold the finish for two seconds on the 6-footers.").waitFor();
-  expect(realErrors(player)).toEqual([]);
 });
 
 test("the admin walks the admin screens: find, change a role, ban and lift, sign out, reset e-mail, owners labelled, audit", async () => {
@@ -160,7 +156,6 @@ test("the admin walks the admin screens: find, change a role, ban and lift, sign
     await a.locator("[aria-label^='Loading']").waitFor({ state: "detached" });
     await screenshot(a, name);
   }
-  expect(realErrors(admin)).toEqual([]);
 });
 
 test("on a 390 × 844 phone the main action of each page shows without scrolling", async () => {
@@ -180,7 +175,6 @@ test("on a 390 × 844 phone the main action of each page shows without scrolling
   await p.getByRole("button", { name: "Holed" }).waitFor();
   await aboveTheFold(p, "Holed");
   await screenshot(p, "desk-phone-run-rung");
-  expect(realErrors(player)).toEqual([]);
 });
 
 /** Elements a Tab reaches (tabindex ≥ 0, or natively focusable) that have no accessible name at all (a rough check: author labels, content, a label element). */
@@ -210,6 +204,4 @@ test("the make-rates page and the coach's squad charts have no Tab stop without 
   await coach.page.goto(`${server.url}/coach`);
   await coach.page.locator("svg.recharts-surface").first().waitFor();
   expect(await unnamedTabStops(coach.page)).toEqual([]);
-  expect(realErrors(player)).toEqual([]);
-  expect(realErrors(coach)).toEqual([]);
 }, 120_000);

@@ -4,6 +4,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, afterEach } from "vitest";
 import { serveBuiltClient } from "../../server/frontend";
 import { startTestServer, type TestServer } from "../setup/server";
 
@@ -16,9 +17,61 @@ export async function startAppServer(env: Record<string, string> = {}): Promise<
   return startTestServer({ frontend: serveBuiltClient(), env });
 }
 
-export type Browser = { context: BrowserContext; page: Page; errors: string[]; close: () => Promise<void> };
+export type Browser = {
+  context: BrowserContext;
+  page: Page;
+  /** Every console error and warning, page error and CSP report so far, in order ("console error: …"). */
+  messages: string[];
+  /**
+   * Expects these messages in this browser (each pattern may match any number of times), e.g.
+   * `browser.allow(refusedStatus(401))` where a test signs in with a wrong password on purpose.
+   */
+  allow: (...patterns: RegExp[]) => void;
+  /** The messages no `allow` pattern and no known library warning explains. */
+  unexpected: () => string[];
+  close: () => Promise<void>;
+};
 
-/** A fresh profile each time; console errors and page errors are collected so a test can fail on them. */
+/**
+ * Known and harmless, in every test: @react-three/fiber 9.8 still makes a THREE.Clock, which three.js 0.187 reports
+ * as deprecated. Nothing of ours; it goes when fiber moves to THREE.Timer.
+ */
+const KNOWN_LIBRARY_WARNINGS = [
+  /^console warning: THREE\.Clock: This module has been deprecated/,
+  // Headless Chromium draws WebGL with SwiftShader and composites in software: each screenshot (or a test's
+  // toDataURL) reads the 3D green's pixels back, and SwiftShader reports that read as a "GPU stall". The test
+  // machine's, not the page's: a real GPU composites without reading back.
+  /^console warning: \[\.WebGL-[0-9a-fx]+\]GL Driver Message \(OpenGL, Performance, GL_CLOSE_PATH_NV, High\): GPU stall due to ReadPixels$/,
+];
+
+/** Browsers of the running test file whose messages have not been checked yet. */
+const watched = new Set<Browser>();
+
+/**
+ * Every browser test fails on an unexpected console error or warning, page error or Content-Security-Policy report:
+ * after each test (and after the file, for browsers opened in `beforeAll`) every browser opened so far is checked,
+ * closed or not. Expected ones are named with `browser.allow(...)`.
+ */
+function checkQuiet(): void {
+  const found: string[] = [];
+  for (const b of watched) {
+    found.push(...b.unexpected());
+    b.messages.length = 0;
+  }
+  if (found.length > 0) throw new Error(`Unexpected messages in the browser console:\n${found.join("\n")}`);
+}
+afterEach(() => {
+  checkQuiet();
+});
+afterAll(() => {
+  try {
+    checkQuiet();
+  } finally {
+    watched.clear();
+  }
+});
+
+/** A fresh profile each time; its console is watched (see `checkQuiet`). */
 export async function openBrowser(viewport = DESKTOP): Promise<Browser> {
   if (!fs.existsSync(CHROMIUM)) throw new Error(`Chromium not found at ${CHROMIUM}: apt-get install -y chromium`);
   const profile = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-chromium-"));
@@ -28,25 +81,36 @@ export async function openBrowser(viewport = DESKTOP): Promise<Browser> {
     viewport,
     args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
   });
+  // A CSP refusal is reported to the page only; put it in the console so it is watched like the rest.
+  await context.addInitScript(() => {
+    document.addEventListener("securitypolicyviolation", (e) => console.error(`CSP: ${e.violatedDirective} ${e.blockedURI}`));
+  });
   const page = context.pages()[0] ?? (await context.newPage());
-  const errors: string[] = [];
+  const messages: string[] = [];
+  const allowed: RegExp[] = [...KNOWN_LIBRARY_WARNINGS];
   const watch = (p: Page) => {
-    p.on("pageerror", (e) => errors.push(`pageerror: ${e.message}`));
+    p.on("pageerror", (e) => messages.push(`page error: ${e.message}`));
     p.on("console", (m) => {
-      if (m.type() === "error") errors.push(`console: ${m.text()}`);
+      if (m.type() === "error" || m.type() === "warning") messages.push(`console ${m.type()}: ${m.text()}`);
     });
   };
   watch(page);
   context.on("page", watch);
-  return {
+  const browser: Browser = {
     context,
     page,
-    errors,
+    messages,
+    allow: (...patterns) => {
+      allowed.push(...patterns);
+    },
+    unexpected: () => messages.filter((m) => !allowed.some((a) => a.test(m))),
     close: async () => {
       await context.close();
       fs.rmSync(profile, { recursive: true, force: true });
     },
   };
+  watched.add(browser);
+  return browser;
 }
 
 export async function screenshot(page: Page, name: string): Promise<string> {
@@ -57,12 +121,11 @@ export async function screenshot(page: Page, name: string): Promise<string> {
 }
 
 /**
- * A filter for `browser.errors`: drops Chromium's "Failed to load resource" line for the given statuses, which a
- * test expects (a wrong password's 401, a putt that cannot stop's 422); every other error stays.
+ * Chromium's console line for a refused request with one of these statuses, which a test expects (a wrong password's
+ * 401, a putt that cannot stop's 422): `browser.allow(refusedStatus(401, 422))`.
  */
-export function allowingStatus(...statuses: number[]): (message: string) => boolean {
-  const expected = new RegExp(`Failed to load resource: the server responded with a status of (${statuses.join("|")})\\b`);
-  return (message) => !expected.test(message);
+export function refusedStatus(...statuses: number[]): RegExp {
+  return new RegExp(`^console error: Failed to load resource: the server responded with a status of (${statuses.join("|")})\\b`);
 }
 
 /** Signs the page in through the API (the session cookie lands in the browser), for tests about other things. */

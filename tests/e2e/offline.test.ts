@@ -84,6 +84,8 @@ test("after one visit the app opens offline: a read is worked out, three putts a
   const sessionId = session.body.id as string;
 
   const browser = await openBrowser(PHONE);
+  // With the signal cut, every request the page still tries fails, and Chromium logs each one.
+  browser.allow(/^console error: Failed to load resource: net::ERR_INTERNET_DISCONNECTED$/);
   const { page, context } = browser;
   const net = signal(context, server);
   try {
@@ -155,7 +157,6 @@ test("after one visit the app opens offline: a read is worked out, three putts a
     expect(putts).toHaveLength(3);
     expect(ladderPutts).toHaveLength(2);
     expect((await player.client.get(`/api/assignments/${assignmentId}`)).body.putts).toHaveLength(2);
-    expect(browser.errors.filter((e) => !/Failed to load resource|ERR_INTERNET_DISCONNECTED|net::ERR/.test(e))).toEqual([]);
   } finally {
     await net.on();
     await browser.close();

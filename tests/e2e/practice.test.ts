@@ -3,7 +3,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import type { Locator, Page } from "playwright-core";
-import { PHONE, SHOTS_DIR, openBrowser, screenshot, startAppServer, allowingStatus } from "./harness";
+import { PHONE, SHOTS_DIR, openBrowser, refusedStatus, screenshot, startAppServer } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -15,7 +15,6 @@ afterAll(async () => {
 });
 
 /** Expected refusals (Chromium logs each as a failed resource); any other console error fails the test. */
-const unexpected = allowingStatus(401, 422);
 
 async function panelShot(locator: Locator, name: string) {
   fs.mkdirSync(SHOTS_DIR, { recursive: true });
@@ -30,6 +29,8 @@ async function bandCount(page: Page, band: string): Promise<string> {
 
 test("on a phone a player logs a short session, sees the 0–3 ft band change, imports a CSV and exports it", async () => {
   const browser = await openBrowser(PHONE);
+  // The CSV import's check answers a file with bad rows with a 422 (shown under the upload), as the test means it to.
+  browser.allow(refusedStatus(422));
   const { page } = browser;
   try {
     // Sign up through the UI.
@@ -111,7 +112,6 @@ test("on a phone a player logs a short session, sees the 0–3 ft band change, i
     await page.goto(`${server.url}/stats`);
     await page.getByRole("table", { name: "Make rate by distance band" }).waitFor();
     expect(await bandCount(page, "0–3 ft")).toBe("3 / 5");
-    expect(browser.errors.filter(unexpected)).toEqual([]);
   } finally {
     await browser.close();
   }

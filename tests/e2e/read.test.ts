@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
 import path from "node:path";
 import type { Locator } from "playwright-core";
-import { DESKTOP, PHONE, SHOTS_DIR, openBrowser, screenshot, startAppServer, allowingStatus } from "./harness";
+import { DESKTOP, PHONE, SHOTS_DIR, openBrowser, refusedStatus, screenshot, startAppServer } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -17,8 +17,6 @@ async function panelShot(locator: Locator, name: string) {
   await locator.screenshot({ path: path.join(SHOTS_DIR, `${name}.png`) });
 }
 
-/** Expected refusals (Chromium logs each as a failed resource); any other console error fails the test. */
-const unexpected = allowingStatus(401);
 
 test("a signed-out golfer reads a putt on a phone, and the same link in a fresh browser shows the same read", async () => {
   const phone = await openBrowser(PHONE);
@@ -54,7 +52,6 @@ test("a signed-out golfer reads a putt on a phone, and the same link in a fresh 
     expect(flatPutt).toMatch(/^Hit it as hard as a flat \d+ ft( \d+ in)? putt$/);
     shared = page.url();
     await screenshot(page, "read-phone-20ft-uphill-left");
-    expect(phone.errors.filter(unexpected)).toEqual([]);
   } finally {
     await phone.close();
   }
@@ -71,7 +68,6 @@ test("a signed-out golfer reads a putt on a phone, and the same link in a fresh 
     expect(await page.getByText(/^Hit it as hard as a flat/).textContent()).toBe(flatPutt);
     expect(new URL(page.url()).search).toBe(new URL(shared).search);
     await screenshot(page, "read-desktop-shared-link");
-    expect(desktop.errors.filter(unexpected)).toEqual([]);
   } finally {
     await desktop.close();
   }
@@ -79,6 +75,8 @@ test("a signed-out golfer reads a putt on a phone, and the same link in a fresh 
 
 test("a slope too steep for the green speed is answered as 'would not stop', not as a failure", async () => {
   const browser = await openBrowser(DESKTOP);
+  // The server answers a ball that cannot stop with a 422, which Chromium logs as a failed resource.
+  browser.allow(refusedStatus(422));
   try {
     const { page } = browser;
     await page.goto(`${server.url}/read?d=3&s=8&f=90&st=10&rp=0.45`);
@@ -87,8 +85,6 @@ test("a slope too steep for the green speed is answered as 'would not stop', not
       1,
     );
     await screenshot(page, "read-desktop-cannot-stop");
-    // Chromium reports the 422 as a failed resource; nothing else may go wrong.
-    expect(browser.errors.filter(unexpected).filter((m) => !/status of 422/.test(m))).toEqual([]);
   } finally {
     await browser.close();
   }
@@ -138,7 +134,6 @@ test("the break chart shows the aim-spot picture first and a table of 10 distanc
         await page.setViewportSize(DESKTOP);
         await page.emulateMedia({ media: "screen" });
       }
-      expect(browser.errors.filter(unexpected)).toEqual([]);
     } finally {
       await browser.close();
     }

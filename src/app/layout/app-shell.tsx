@@ -36,10 +36,12 @@ export function AppShell() {
       <div className="print:hidden">
         <VerifyEmailNotice />
       </div>
+      {/* At least a screen tall under the 4rem top bar: the footer starts below the first screen, so a page that grows
+          as its data arrives never moves it in view (issue 18: layout shift on /read). */}
       <main
         id="main"
         tabIndex={-1}
-        className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 focus:outline-none sm:px-6 sm:py-12 print:max-w-none print:p-0"
+        className="mx-auto min-h-[calc(100dvh-4rem)] w-full max-w-6xl flex-1 px-4 py-8 focus:outline-none sm:px-6 sm:py-12 print:min-h-0 print:max-w-none print:p-0"
       >
         <SectionNav />
         <Outlet />

@@ -34,8 +34,16 @@ export function buttonClasses(variant: ButtonVariant = "primary", size: ButtonSi
 export type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & {
   variant?: ButtonVariant;
   size?: ButtonSize;
-  /** Shows a spinner, disables the button and announces the busy state. */
+  /**
+   * Shows a spinner and announces the busy state; the button stays focusable but ignores clicks (`pending`).
+   */
   loading?: boolean;
+  /**
+   * While an action runs: `aria-disabled`, not `disabled`, so a focused button keeps the focus (a disabled one drops
+   * it on <body>); clicks and a form's Enter are ignored until it is done. `aria-disabled` given directly acts the same
+   * (a control that cannot act now but should keep the focus, such as "Undo" with nothing left to undo).
+   */
+  pending?: boolean;
   /** Replaces the label while loading, e.g. "Signing in…". */
   loadingText?: ReactNode;
   fullWidth?: boolean;
@@ -51,16 +59,26 @@ export function Button({
   className,
   children,
   disabled,
+  pending = false,
   type = "button",
+  onClick,
   ...rest
 }: ButtonProps) {
+  const ariaDisabled = rest["aria-disabled"];
+  const inactive = pending || loading || ariaDisabled === true || ariaDisabled === "true";
   return (
     <button
+      {...rest}
       type={type}
       className={buttonClasses(variant, size, clsx(fullWidth && "w-full", className))}
-      disabled={disabled || loading}
+      disabled={disabled}
+      aria-disabled={inactive || undefined}
       aria-busy={loading || undefined}
-      {...rest}
+      onClick={(e) => {
+        // preventDefault also stops a submit button's form (and a field's Enter, which clicks it).
+        if (inactive) e.preventDefault();
+        else onClick?.(e);
+      }}
     >
       {loading ? <Spinner size="sm" label="" /> : null}
       {loading && loadingText ? loadingText : children}

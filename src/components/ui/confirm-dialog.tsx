@@ -55,7 +55,7 @@ export function ConfirmDialog({ open, title, children, confirmLabel, cancelLabel
           </div>
         ) : null}
         <div className="mt-5 flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-          <Button ref={cancelRef} variant="secondary" onClick={onCancel} disabled={busy}>
+          <Button ref={cancelRef} variant="secondary" onClick={onCancel} pending={busy}>
             {cancelLabel}
           </Button>
           <Button variant={tone === "danger" ? "danger" : "primary"} onClick={onConfirm} loading={busy} loadingText="Working…">

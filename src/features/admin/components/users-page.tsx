@@ -51,7 +51,7 @@ function UserRow({ u, me, onAsk }: { u: AdminUser; me: string; onAsk: (p: NonNul
           <Button
             size="sm"
             variant="secondary"
-            disabled={act.isPending}
+            pending={act.isPending}
             onClick={() => run("unban", undefined, `${u.name} can sign in again.`)}
           >
             Lift ban

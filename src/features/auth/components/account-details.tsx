@@ -55,9 +55,12 @@ export function AccountDetails({ me }: { me: Me }) {
           columns={1}
           legend="Show lengths in"
           choices={unitChoices}
-          inputProps={{ name: "units", disabled: update.isPending }}
+          // aria-disabled, not disabled, while saving: the focused choice keeps the focus (issue 18).
+          inputProps={{ name: "units", "aria-disabled": update.isPending || undefined }}
           value={units}
-          onValueChange={(next) => update.mutate({ units: next as Units })}
+          onValueChange={(next) => {
+            if (!update.isPending) update.mutate({ units: next as Units });
+          }}
         />
         {update.isError ? <p className="mt-3 text-sm font-medium text-bad-600">{update.error.message}</p> : null}
       </Card>

@@ -51,9 +51,11 @@ export function VerifyEmailNotice() {
         <p className="min-w-0 flex-1 py-2">Check your inbox to confirm your e-mail.</p>
         <button
           type="button"
-          onClick={() => void resend()}
-          disabled={sending}
-          className="min-h-11 shrink-0 rounded-md px-2 font-medium whitespace-nowrap underline underline-offset-4 hover:text-ink-900 disabled:opacity-60"
+          onClick={() => {
+            if (!sending) void resend();
+          }}
+          aria-disabled={sending || undefined}
+          className="min-h-11 shrink-0 rounded-md px-2 font-medium whitespace-nowrap underline underline-offset-4 hover:text-ink-900 aria-disabled:opacity-60"
         >
           {sending ? "Sending…" : "Send again"}
         </button>

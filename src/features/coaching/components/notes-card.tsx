@@ -52,7 +52,7 @@ export function NotesCard({ playerId, playerName, canWrite }: { playerId: string
             </p>
           ) : null}
           <div>
-            <Button type="submit" size="sm" disabled={add.isPending || text.trim() === ""}>
+            <Button type="submit" size="sm" disabled={text.trim() === ""} pending={add.isPending}>
               {add.isPending ? "Saving…" : "Save note"}
             </Button>
           </div>

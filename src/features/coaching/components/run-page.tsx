@@ -160,7 +160,7 @@ function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDe
 
       <div className="flex flex-wrap items-center justify-between gap-3 border-t border-ink-900/10 pt-3">
         {readOnly ? <span /> : (
-          <Button variant="ghost" onClick={() => void undo()} disabled={p.puttsTaken === 0 || undoing}>
+          <Button variant="ghost" onClick={() => void undo()} aria-disabled={p.puttsTaken === 0 || undefined} pending={undoing}>
             Undo last putt
           </Button>
         )}

@@ -144,7 +144,8 @@ export function SquadOverviewSection({ squadId, squadName }: { squadId: string; 
           <Button
             size="sm"
             variant="secondary"
-            disabled={downloading || rows.length === 0}
+            disabled={rows.length === 0}
+            pending={downloading}
             onClick={async () => {
               setDownloading(true);
               try {

@@ -91,7 +91,7 @@ function InvitationRow({ invitation, squadId }: { invitation: Invitation; squadI
             size="sm"
             variant="secondary"
             aria-label={`Send the invitation to ${invitation.email} again`}
-            disabled={resend.isPending}
+            pending={resend.isPending}
             onClick={() =>
               resend.mutate(
                 { id: invitation.id, squadId },

@@ -23,7 +23,7 @@ import {
   sampleErrorWords,
   secondPuttLengthWords,
 } from "../utils/odds-words";
-import { LIVE_SAMPLES } from "../utils/live-odds";
+import { LIVE_SAMPLES } from "../utils/live-samples";
 import { FinishesPicture } from "./finishes-picture";
 
 export type OddsPanelProps = {
@@ -176,7 +176,7 @@ function SignedInOdds({ read, liveRead = null, line, units, onApplyRollPast }: O
             <p className="text-sm font-medium text-ok-800">This read already rolls at your best pace.</p>
           ) : (
             <div>
-              <Button size="sm" variant="secondary" disabled={updating} onClick={() => onApplyRollPast(best.rollPastM)}>
+              <Button size="sm" variant="secondary" pending={updating} onClick={() => onApplyRollPast(best.rollPastM)}>
                 Use my best pace ({formatShort(best.rollPastM, units)} past)
               </Button>
             </div>

@@ -6,8 +6,9 @@ import type { Dispersion } from "../../../../shared/schemas/make-probability";
 import type { ReadRequest } from "../../../../shared/schemas/reads";
 import { seededUniform } from "../../../../shared/seeded-random";
 
-/** Few enough for ~10 ms a run, enough for a make probability within about ±1 % (one standard error). */
-export const LIVE_SAMPLES = 2000;
+import { LIVE_SAMPLES } from "./live-samples";
+
+export { LIVE_SAMPLES };
 
 export type LiveOddsRequest = { id: number; read: ReadRequest; dispersion: Dispersion; seed: number; samples?: number };
 

@@ -155,13 +155,14 @@ function HoleEntry({
               key={n}
               type="button"
               onClick={() => {
+                if (save.isPending) return;
                 setFourPlus(false);
                 commit(n);
               }}
-              disabled={save.isPending}
+              aria-disabled={save.isPending || undefined}
               aria-pressed={existing?.putts === n}
               className={clsx(
-                "min-h-20 rounded-2xl text-3xl font-semibold transition-colors disabled:opacity-60",
+                "min-h-20 rounded-2xl text-3xl font-semibold transition-colors aria-disabled:opacity-60",
                 existing?.putts === n ? "bg-coral-500 text-ink-950" : "bg-ink-900 text-sand-50 hover:bg-ink-700",
               )}
             >
@@ -183,13 +184,13 @@ function HoleEntry({
         {fourPlus ? (
           <div className="grid grid-cols-3 gap-2">
             {[4, 5, 6].map((n) => (
-              <Button key={n} size="lg" variant="secondary" onClick={() => commit(n)} disabled={save.isPending} aria-label={`${n} putts`}>
+              <Button key={n} size="lg" variant="secondary" onClick={() => commit(n)} pending={save.isPending} aria-label={`${n} putts`}>
                 {n} putts
               </Button>
             ))}
           </div>
         ) : null}
-        <Button variant="ghost" size="sm" onClick={() => commit(0)} disabled={save.isPending} className="self-start">
+        <Button variant="ghost" size="sm" onClick={() => commit(0)} pending={save.isPending} className="self-start">
           Holed from off the green (no putt)
         </Button>
       </fieldset>

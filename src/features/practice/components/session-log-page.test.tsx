@@ -36,7 +36,7 @@ const session = {
 type PostAnswer = "store" | "hang" | { status: number; body: unknown };
 
 /** A small stand-in for the API: stores putts, answers POSTs as the test says. */
-function fakeServer(post: PostAnswer, options: { refetchHangs?: boolean } = {}) {
+function fakeServer(post: PostAnswer, options: { refetchHangs?: boolean; deleteHangs?: boolean } = {}) {
   let listed = 0;
   const stored: Putt[] = [];
   const posts: Record<string, unknown>[] = [];
@@ -69,9 +69,10 @@ function fakeServer(post: PostAnswer, options: { refetchHangs?: boolean } = {}) 
       });
       return HttpResponse.json({ id }, { status: 201 });
     }),
-    http.delete("/api/putts/:id", ({ params }) => {
+    http.delete("/api/putts/:id", async ({ params }) => {
       const id = String(params.id);
       deletes.push(id);
+      if (options.deleteHangs) await delay("infinite");
       const i = stored.findIndex((p) => p.id === id);
       if (i >= 0) stored.splice(i, 1);
       return new HttpResponse(null, { status: 204 });
@@ -167,6 +168,28 @@ test("undo removes the last putt, on screen and on the server", async () => {
   expect(server.deletes).toEqual(["p2"]);
   await waitFor(() => expect(server.stored.map((p) => p.id)).toEqual(["p1"]));
   expect(tallyValue("Putts")).toBe("1");
+});
+
+test("while an undo is saving, Undo keeps the focus and ignores more presses", async () => {
+  const server = fakeServer("store", { deleteHangs: true });
+  const user = userEvent.setup();
+  renderPage();
+  await waitFor(() => expect(screen.getByText(/No putts yet/)).toBeInTheDocument());
+  await user.click(screen.getByRole("button", { name: "Holed" }));
+  await user.click(screen.getByRole("button", { name: "Holed" }));
+  await waitFor(() => expect(server.stored).toHaveLength(2));
+  await waitFor(() => expect(within(list()).queryByText("saving…")).not.toBeInTheDocument());
+
+  const undo = screen.getByRole("button", { name: "Undo last putt" });
+  undo.focus();
+  await user.keyboard("{Enter}");
+  await waitFor(() => expect(undo).toHaveAttribute("aria-disabled", "true"));
+  // Still the same, focusable button (a `disabled` one would have dropped the focus on <body>).
+  expect(undo).not.toBeDisabled();
+  expect(undo).toHaveFocus();
+  await user.keyboard("{Enter}");
+  await user.click(undo);
+  expect(server.deletes).toEqual(["p2"]);
 });
 
 test("the distance stays for the next putt, and a miss's details do not", async () => {

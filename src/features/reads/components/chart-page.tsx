@@ -24,6 +24,7 @@ import { ringFallLineDegs, ringLengthsM } from "../utils/aim-ring";
 import { AimRingPicture } from "./aim-ring-picture";
 import { BreakChartTable } from "./break-chart-table";
 import { UnitsSwitch } from "./units-switch";
+import { usePrinting } from "../../../lib/use-printing";
 
 // recharts is heavy: the graph is its own chunk, loaded after the table is on screen.
 const BreakChartGraph = lazy(() => import("./break-chart-graph").then((m) => ({ default: m.BreakChartGraph })));
@@ -117,6 +118,7 @@ function paceFrom(read: ReadValues, rollPastM: number): Pick<ReadValues, "paceMo
 
 export function ChartPage() {
   const { units, setUnits, ready, saving } = useUnits();
+  const printing = usePrinting();
   const [params, setParams] = useSearchParams();
   const query = params.toString();
   // The whole read travels in the address (the one read codec): the chart uses its slope, Stimp and pace, and keeps
@@ -263,9 +265,11 @@ export function ChartPage() {
                 </Alert>
               )}
             >
-              <Suspense fallback={<PageSpinner label="Loading the graph" />}>
-                <BreakChartGraph answer={answer} units={units} />
-              </Suspense>
+              {printing ? null : (
+                <Suspense fallback={<PageSpinner label="Loading the graph" />}>
+                  <BreakChartGraph answer={answer} units={units} />
+                </Suspense>
+              )}
             </ErrorBoundary>
           </Card>
         </div>

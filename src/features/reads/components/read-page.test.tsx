@@ -207,7 +207,8 @@ test("dragging the dial with a pointer previews the line live and commits on rel
   fireEvent.pointerDown(dial, { clientX: 250, clientY: 130, button: 0, pointerId: 1 });
   fireEvent.pointerMove(dial, { clientX: 130, clientY: 250, pointerId: 1 });
   expect(dial).toHaveAttribute("aria-valuenow", "180");
-  expect(await screen.findByText("Live while you turn the dial")).toBeInTheDocument();
+  // The engine is fetched at the first move (a dynamic import, not part of the page's first download).
+  expect(await screen.findByText("Live while you turn the dial", undefined, { timeout: 15_000 })).toBeInTheDocument();
   // The live answer is the engine's, in the browser: straight uphill runs straight.
   expect(within(screen.getByRole("region", { name: "The read" })).getByText("Runs straight")).toBeInTheDocument();
   expect(solveBodies().length).toBe(before);

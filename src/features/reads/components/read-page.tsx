@@ -2,8 +2,9 @@ import { useCallback, useEffect, useMemo, useState, type ReactNode } from "react
 import { useSearchParams } from "react-router";
 // The live preview while the dial is dragged is computed in the browser with the physics engine itself (about a
 // millisecond a read), so the line follows the finger at 60 fps; the answer the page commits to always comes from
-// POST /api/reads/solve through TanStack Query once the dial is let go or typing pauses.
-import { solveRead as solveReadInBrowser } from "../../../../physics/solve-read";
+// POST /api/reads/solve through TanStack Query once the dial is let go or typing pauses. The engine is fetched the
+// first time the dial moves, not with the page (issue 18: the first page loads only what it shows).
+import type { solveRead as SolveRead } from "../../../../physics/solve-read";
 import type { ReadRequest, ReadResponse } from "../../../../shared/schemas/reads";
 import type { UnitSystem } from "../../../../shared/units";
 import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner, TextLink } from "../../../components/ui";
@@ -22,11 +23,14 @@ import { SavedReadsList } from "./saved-reads-list";
 import { SaveReadPanel } from "./save-read-panel";
 import { UnitsSwitch } from "./units-switch";
 
-function previewRead(values: ReadValues | null): ReadResponse | null {
-  if (!values) return null;
+let engine: Promise<typeof SolveRead> | null = null;
+const loadEngine = () => (engine ??= import("../../../../physics/solve-read").then((m) => m.solveRead));
+
+function previewRead(solve: typeof SolveRead | null, values: ReadValues | null): ReadResponse | null {
+  if (!solve || !values) return null;
   const request = toReadRequest(values);
   if (!request) return null;
-  const result = solveReadInBrowser(request);
+  const result = solve(request);
   return result.ok ? result.read : null;
 }
 
@@ -82,7 +86,12 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
   const solve = useSolveRead(request);
   const [liveValues, setLiveValues] = useState<ReadValues | null>(null);
   const [formProblems, setFormProblems] = useState<string[] | null>(null);
-  const live = useMemo(() => previewRead(liveValues), [liveValues]);
+  const [solveInBrowser, setSolveInBrowser] = useState<typeof SolveRead | null>(null);
+  const dragging = liveValues !== null;
+  useEffect(() => {
+    if (dragging && !solveInBrowser) void loadEngine().then((solve) => setSolveInBrowser(() => solve));
+  }, [dragging, solveInBrowser]);
+  const live = useMemo(() => previewRead(solveInBrowser, liveValues), [solveInBrowser, liveValues]);
   const liveRequest = useMemo(() => (liveValues ? toReadRequest(liveValues) : null), [liveValues]);
 
   // A bare /read (or a partial link) gets every value written into the address, so it can be shared as it is.

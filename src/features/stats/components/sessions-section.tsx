@@ -1,3 +1,4 @@
+import { formatLength, type UnitSystem } from "../../../../shared/units";
 import { Alert, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useSessionStats } from "../api/get-session-stats";
@@ -7,7 +8,10 @@ import { SessionsChart } from "./lazy-charts";
 const sg = (v: number) => `${v > 0.005 ? "+" : v < -0.005 ? "−" : ""}${Math.abs(v).toFixed(2)}`;
 
 /** Expected putts and strokes gained per session against the tour baseline, and how often long lags finish outside 1 m. */
-export function SessionsSection({ from, to, playerId }: { from?: string; to?: string; playerId?: string }) {
+/** A lag's limits (6 m and 1 m, see lagSummary) in the reader's units. */
+const lagLength = (m: number, units: UnitSystem) => (units === "metric" ? `${m} m` : formatLength(m, units));
+
+export function SessionsSection({ from, to, playerId, units }: { from?: string; to?: string; playerId?: string; units: UnitSystem }) {
   const stats = useSessionStats({ ...(from ? { from } : {}), ...(to ? { to } : {}), ...(playerId ? { playerId } : {}), pageSize: 50 });
   if (stats.isError)
     return (
@@ -24,7 +28,7 @@ export function SessionsSection({ from, to, playerId }: { from?: string; to?: st
     <div className="flex flex-col gap-4">
       <div className="grid gap-3 sm:grid-cols-2">
         <div className="rounded-xl bg-white p-4 ring-1 ring-ink-900/5">
-          <p className="text-sm text-ink-500">Long putts (6 m / 20 ft or more) that finished outside 1 m</p>
+          <p className="text-sm text-ink-500">Long putts ({lagLength(6, units)} or more) that finished outside {lagLength(1, units)}</p>
           <p className="text-3xl font-semibold tabular-nums">{lags.share === null ? "–" : `${Math.round(lags.share * 100)} %`}</p>
           <p className="text-sm text-ink-500">
             {lags.known > 0

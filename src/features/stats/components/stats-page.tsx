@@ -234,7 +234,7 @@ export function StatsBody({ player }: { player?: { id: string; name: string } })
         title="Strokes gained per session"
         intro="Each session’s putts against what a tour player would take from the same distances."
       >
-        <SessionsSection from={view.stats.from} to={view.stats.to} {...(player ? { playerId: player.id } : {})} />
+        <SessionsSection from={view.stats.from} to={view.stats.to} units={units} {...(player ? { playerId: player.id } : {})} />
       </Section>
 
       {player ? (

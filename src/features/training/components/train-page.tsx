@@ -13,6 +13,7 @@ import { aimWords, fallLineWords } from "../../../components/green-3d/words";
 import { Alert, Button, Card, PageHeader, PageSpinner } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
 import { useMe } from "../../auth/api/get-me";
+import { useUnits } from "../../auth/hooks/use-units";
 import { useCreateAttempt } from "../api/create-attempt";
 import { newSeed, roundPutt } from "../utils/putt-generator";
 import { EyeCheck } from "./eye-check";
@@ -39,7 +40,8 @@ export function TrainPage() {
   const seed = parseInt0(params.get("seed"));
   const n = parseInt0(params.get("n")) ?? 0;
   const me = useMe();
-  const units: UnitSystem = me.data?.preferences.units ?? "imperial";
+  // The golfer's units, signed in or out (a signed-out choice lives in this browser).
+  const { units } = useUnits();
 
   // A round without a seed gets one, written into the URL so the round can be replayed from its link.
   useEffect(() => {
