@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { AxeBuilder } from "@axe-core/playwright";
-import { DESKTOP, PHONE, allowingStatus, openBrowser, screenshot, startAppServer } from "./harness";
+import { DESKTOP, PHONE, refusedStatus, openBrowser, screenshot, startAppServer } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -83,7 +83,7 @@ test("measure on the green: 2.0 % falling right with a 0.3° sensor tilt fills t
     expect(Math.abs(fall - 90)).toBeLessThanOrEqual(2);
     await page.waitForURL(/[?&]f=90\b/);
     await screenshot(page, "measure-phone-result");
-    expect(browser.errors).toEqual([]);
+    expect(browser.unexpected()).toEqual([]);
   } finally {
     await browser.close();
   }
@@ -96,7 +96,7 @@ test("measure on the green: 2.0 % falling right with a 0.3° sensor tilt fills t
     // The form is untouched and still works.
     expect(await desk.page.getByLabel("Slope (%)").isEditable()).toBe(true);
     await screenshot(desk.page, "measure-desk-no-sensor");
-    expect(desk.errors).toEqual([]);
+    expect(desk.unexpected()).toEqual([]);
   } finally {
     await desk.close();
   }
@@ -153,7 +153,8 @@ test("map this green: a 3 × 3 walk with synthetic readings is saved as the gree
     // 3 m each way = 0.03 − 0.045 = −0.015 m (hand-computed), to 1 mm after the sensor's tilt is taken out.
     expect(map.heightsM[0][2] - map.heightsM[2][0]).toBeCloseTo(-0.015, 3);
     await screenshot(page, "walk-phone-saved");
-    expect(browser.errors.filter(allowingStatus(401, 404))).toEqual([]);
+    browser.allow(refusedStatus(401, 404));
+    expect(browser.unexpected()).toEqual([]);
   } finally {
     await browser.close();
   }

@@ -54,7 +54,7 @@ test("a demo junior's plan appears on a phone and, started from the keyboard, be
   await p.getByRole("region", { name: "Weekly check of the plan" }).waitFor();
   await expect(p.getByRole("link", { name: "Run the plan’s ladder" }).isVisible()).resolves.toBe(true);
   await screenshot(p, "practice-plan-under-way-phone");
-  expect(phone.errors).toEqual([]);
+  expect(phone.unexpected()).toEqual([]);
 });
 
 test("the coach sees the junior's plan on the player's page and adopts it into the ladder library", async () => {
@@ -74,5 +74,5 @@ test("the coach sees the junior's plan on the player's page and adopts it into t
   // The coach's own flows take it from here: edit and assign.
   await expect(c.getByRole("link", { name: /Edit/ }).first().isVisible()).resolves.toBe(true);
   await screenshot(c, "practice-plan-adopted-desktop");
-  expect(desk.errors).toEqual([]);
+  expect(desk.unexpected()).toEqual([]);
 });
