@@ -78,14 +78,17 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
     if (isValid()) commit();
   }, SOLVE_DEBOUNCE_MS);
 
-  // Typing: work the read out again after a pause.
+  // Typing: work the read out again after a pause. Not while the dial is held: the drag is previewed in the browser
+  // and committed on release, so a pause mid-drag (or a slow first load of the engine) asks the server nothing.
   const watched = useWatch({ control });
   const firstWatch = useRef(true);
+  const dialHeld = useRef(false);
   useEffect(() => {
     if (firstWatch.current) {
       firstWatch.current = false;
       return;
     }
+    if (dialHeld.current) return;
     debounced.call();
   }, [watched, debounced]);
 
@@ -134,6 +137,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
     const text = formatNumber(deg, 0);
     memory.current = { ...memory.current, fallLine: { text, si: normaliseDeg(deg) } };
     setValue("fallLine", text, { shouldValidate: true, shouldDirty: true, shouldTouch: true });
+    dialHeld.current = !done;
     if (!done) {
       onLive?.(isValid() ? currentSi() : null);
       return;

@@ -92,8 +92,8 @@ test("a signed-in player sees lengths in their account's units, saves a read wit
   expect(await within(list).findByText("Practice green, left of the flag")).toBeInTheDocument();
 });
 
-test("with greens saved, the read can be saved to one of them (either shape of the greens list)", async () => {
-  greensAnswer = { status: 200, body: [{ id: "33333333-3333-4333-8333-333333333333", name: "Top green", currentStimpFt: 9.5 }] };
+test("with greens saved, the read can be saved to one of them", async () => {
+  greensAnswer = { status: 200, body: { items: [{ id: "33333333-3333-4333-8333-333333333333", name: "Top green", currentStimpFt: 9.5 }] } };
   const user = userEvent.setup();
   renderPage();
   const green = await screen.findByLabelText("Green (optional)");
