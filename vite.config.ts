@@ -86,7 +86,9 @@ export default defineConfig({
             // outranked this one, React would land in the three chunk and the entry would have to load it.
             // use-sync-external-store (a React shim that zustand, used by @react-three/fiber, and react-redux, used by
             // recharts, both import) belongs here too: in the three chunk it made the charts chunk import three.js.
-            { name: "react", test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router|use-sync-external-store)[\\/]/, priority: 40 },
+            // @babel/runtime's helpers too: drei and mathjs (the walked-green solver on the green map page) both use
+            // them, and in the three chunk they made the green map page load three.js up front.
+            { name: "react", test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router|use-sync-external-store|@babel[\\/]runtime)[\\/]/, priority: 40 },
           ],
         },
       },
