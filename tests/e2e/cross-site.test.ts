@@ -4,7 +4,7 @@
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import { afterAll, beforeAll, expect, test } from "vitest";
-import { DESKTOP, openBrowser, startAppServer, type Browser } from "./harness";
+import { DESKTOP, openBrowser, refusedStatus, startAppServer, type Browser } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -59,6 +59,8 @@ beforeAll(async () => {
   await new Promise<void>((resolve) => attacker.listen(0, "127.0.0.1", () => resolve()));
   attackerUrl = `http://127.0.0.1:${(attacker.address() as AddressInfo).port}`;
   browser = await openBrowser(DESKTOP);
+  // The refusals this test is about: Chromium logs the blocked cross-origin answers and the server's 403s.
+  browser.allow(/^console error: Failed to load resource: net::ERR_BLOCKED_BY_RESPONSE\.NotSameOrigin$/, refusedStatus(403));
 }, 120_000);
 afterAll(async () => {
   await browser?.close();

@@ -41,7 +41,7 @@ const KNOWN_LIBRARY_WARNINGS = [
   // Headless Chromium draws WebGL with SwiftShader and composites in software: each screenshot (or a test's
   // toDataURL) reads the 3D green's pixels back, and SwiftShader reports that read as a "GPU stall". The test
   // machine's, not the page's: a real GPU composites without reading back.
-  /^console warning: \[\.WebGL-[0-9a-fx]+\]GL Driver Message \(OpenGL, Performance, GL_CLOSE_PATH_NV, High\): GPU stall due to ReadPixels$/,
+  /^console warning: \[\.WebGL-[0-9a-fx]+\]GL Driver Message \(OpenGL, Performance, GL_CLOSE_PATH_NV, High\): GPU stall due to ReadPixels(?: \(this message will no longer repeat\))?$/,
 ];
 
 /** Browsers of the running test file whose messages have not been checked yet. */

@@ -25,8 +25,8 @@ async function lengthsText(page: Page): Promise<string> {
   return text
     .replace(/Stimp \(ft\)/g, "")
     .replace(/Stimp\n[\d.]+ ft/g, "")
-    // The Stimp field's range, under the field ("From 4 to 16 ft").
-    .replace(/\b4 to 16 ft\b/g, "")
+    // The Stimp field's range, under the field ("Green speed, 4–16 ft").
+    .replace(/\bGreen speed, 4(?: to |–)16 ft\b/g, "")
     .replace(/\d+(?:\.\d+)? ft \(\d+ ft \d+ in\)/g, "")
     .split("\n")
     .filter((line) => !/stimp/i.test(line))
