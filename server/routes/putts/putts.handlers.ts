@@ -3,6 +3,7 @@ import { and, asc, desc, eq, gte, lte, sql, type SQL } from "drizzle-orm";
 import { puttInputSchema, puttListQuerySchema, type Putt } from "../../../shared/schemas/putts";
 import type { Page } from "../../../shared/schemas/sessions";
 import type { Db } from "../../db/client";
+import type { PuttWriter } from "../../db/putt-writer";
 import { practiceSessions, putts } from "../../db/schema";
 import { conflict, notFound } from "../../lib/http-error";
 import { readableBy, targetPlayerId } from "../../lib/player-access";
@@ -32,26 +33,25 @@ const toPutt = (r: PuttRow): Putt => ({
   createdAt: r.createdAt.toISOString(),
 });
 
-export function addPutt(db: Db) {
+export function addPutt(db: Db, writer: PuttWriter) {
   return async ({ req, body }: Ctx<z.infer<typeof puttInputSchema>>) => {
     const me = currentUser(req);
     const sessionId = sessionIdParam(req);
     const input = body;
-    // The hot path of logging on the green: one statement checks the session is mine and stores the putt.
-    // A retry with the same clientId (the phone lost the first answer) conflicts and stores nothing.
-    const inserted = await db.execute(sql`
-      insert into ${putts} (session_id, player_id, client_id, distance_m, holed, miss_side, miss_length_m, break_type)
-      select ${practiceSessions.id}, ${practiceSessions.playerId}, ${input.clientId ?? null}, ${input.distanceM}, ${input.holed},
-             ${input.missSide ?? null}, ${input.missLengthM ?? null}, ${input.breakType ?? null}
-      from ${practiceSessions}
-      where ${practiceSessions.id} = ${sessionId} and ${practiceSessions.playerId} = ${me.id}
-      on conflict (player_id, client_id) do nothing
-      returning id`);
-    // node-postgres and PGlite both answer { rows }.
-    const row = (inserted as unknown as { rows: { id: string }[] }).rows[0];
-    if (row) {
-      return { id: row.id };
-    }
+    // The hot path of logging on the green: the writer stores it with the putts posted at the same moment, in one
+    // statement that also checks the session is mine (db/putt-writer.ts). A retry with the same clientId (the
+    // phone lost the first answer) conflicts and stores nothing.
+    const id = await writer.write({
+      sessionId,
+      playerId: me.id,
+      clientId: input.clientId ?? null,
+      distanceM: input.distanceM,
+      holed: input.holed,
+      missSide: input.missSide ?? null,
+      missLengthM: input.missLengthM ?? null,
+      breakType: input.breakType ?? null,
+    });
+    if (id) return { id };
     const [own] = await db
       .select({ id: practiceSessions.id })
       .from(practiceSessions)
