@@ -6,7 +6,7 @@ import { breakChart } from "../physics/break-chart";
 import type { Read } from "../physics/read-types";
 import { solveRead } from "../physics/solve-read";
 import { ERROR_CODES, type ApiErrorBody } from "./errors";
-import type { ChartRequest, ReadRequest, ReadResponse } from "./schemas/reads";
+import type { ChartRequest, ChartResponse, ReadRequest, ReadResponse } from "./schemas/reads";
 
 export function toReadResponse(read: Read): ReadResponse {
   const {
@@ -73,7 +73,7 @@ export function answerRead(input: ReadRequest): { ok: true; response: ReadRespon
 }
 
 /** A validated chart request's answer: aim offsets over distances × fall-line directions. */
-export function answerChart(input: ChartRequest) {
+export function answerChart(input: ChartRequest): ChartResponse {
   const result = breakChart({
     slopePct: input.slopePct,
     stimpFt: input.stimpFt,

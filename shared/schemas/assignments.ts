@@ -149,6 +149,9 @@ export const coachedPlayerSchema = z.object({
   squads: z.array(z.object({ id: z.string(), name: z.string(), joinedAt: timestampSchema })),
   assignments: z.array(assignmentSchema),
 });
+export type CoachedPlayers = z.output<typeof coachedPlayersSchema>;
+export type CoachedPlayer = CoachedPlayers["players"][number];
+export type CoachedPlayerDetail = z.output<typeof coachedPlayerSchema>;
 /** GET /api/coach/squads/:id/assignments. */
 export const squadAssignmentsSchema = z.object({
   squad: z.object({ id: z.string(), name: z.string() }),

@@ -82,6 +82,7 @@ export const puttSchema = z.object({
 });
 export type Putt = z.output<typeof puttSchema>;
 export const puttListSchema = z.object({ items: z.array(puttSchema) });
+export type PuttList = z.output<typeof puttListSchema>;
 export const puttPageSchema = z.object({
   items: z.array(puttSchema),
   total: z.number().int(),

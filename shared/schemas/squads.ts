@@ -87,6 +87,7 @@ export const acceptedInvitationSchema = z.object({
   squad: z.object({ id: z.string(), name: z.string(), coach: person }),
   joinedAt: timestampSchema,
 });
+export type AcceptedInvitation = z.output<typeof acceptedInvitationSchema>;
 
 /** GET /api/invitations/:token — what the join page shows before anyone signs in. */
 export const invitationPreviewSchema = z.object({

@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
+import type { AcceptedInvitation } from "../../../../shared/schemas/squads";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { coachingKeys } from "./keys";
 
-export type AcceptedInvitation = { squad: { id: string; name: string; coach: { id: string; name: string } }; joinedAt: string };
+export type { AcceptedInvitation };
 
 /** POST /api/invitations/:token/accept → the squad joined. 409 used/expired/withdrawn, 403 wrong e-mail or role. */
 export function acceptInvitation(token: string): Promise<AcceptedInvitation> {

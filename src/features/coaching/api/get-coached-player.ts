@@ -1,15 +1,10 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { Assignment } from "../../../../shared/schemas/assignments";
+import type { CoachedPlayerDetail } from "../../../../shared/schemas/assignments";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { coachingKeys } from "./keys";
 
-export type CoachedPlayerDetail = {
-  player: { id: string; name: string; email: string };
-  squads: { id: string; name: string; joinedAt: string }[];
-  /** Newest first. */
-  assignments: Assignment[];
-};
+export type { CoachedPlayerDetail };
 
 /** GET /api/coach/players/:playerId: one player of the coach's squads, read-only, with ladder history. */
 export function getCoachedPlayer(playerId: string, signal?: AbortSignal): Promise<CoachedPlayerDetail> {

@@ -1,20 +1,11 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
+import type { DevMailList, DevMailMessage } from "../../../../shared/schemas/system";
 import { api, ApiError } from "../../../lib/api-client";
 import { apiPaths } from "../../../config/paths";
 import { useMe } from "../../auth/api/get-me";
 import { devMailKeys } from "./keys";
 
-export type DevMailMessage = {
-  id: string;
-  to: string[];
-  from: string;
-  subject: string;
-  text: string;
-  html: string;
-  receivedAt: string;
-};
-
-export type DevMailList = { messages: DevMailMessage[] };
+export type { DevMailList, DevMailMessage };
 
 /** GET /api/dev/mail, newest first whatever order the server sends. */
 export async function getDevMail(signal?: AbortSignal): Promise<DevMailList> {

@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { Putt } from "../../../../shared/schemas/putts";
+import type { PuttList } from "../../../../shared/schemas/putts";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";
 
-export type SessionPutts = { items: Putt[] };
+/** GET /api/sessions/:id/putts (puttListSchema). */
+export type SessionPutts = PuttList;
 
 /** GET /api/sessions/:id/putts → the session's putts in the order they were logged. */
 export function getSessionPutts(sessionId: string, signal?: AbortSignal): Promise<SessionPutts> {

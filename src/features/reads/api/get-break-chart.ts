@@ -1,17 +1,14 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import type { ChartRequest } from "../../../../shared/schemas/reads";
+import type { ChartRequest, ChartResponse } from "../../../../shared/schemas/reads";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
-import type { BreakChartAnswer } from "../utils/chart-data";
 import { readsKeys } from "./keys";
 import { answerableHere } from "./solve-read";
 
-export type BreakChartResponse = BreakChartAnswer & { slopePct: number; stimpFt: number; model: { maxStoppableSlopePct: number } };
-
 /** POST /api/reads/chart: aim offsets over distances × fall-line directions (at most 400 cells). */
-export async function getBreakChart(input: ChartRequest, signal?: AbortSignal): Promise<BreakChartResponse> {
+export async function getBreakChart(input: ChartRequest, signal?: AbortSignal): Promise<ChartResponse> {
   try {
-    return await api.post<BreakChartResponse>(apiPaths.readsChart, input, { signal });
+    return await api.post<ChartResponse>(apiPaths.readsChart, input, { signal });
   } catch (error) {
     // No signal: the chart is worked out in the browser (the same physics).
     if (!answerableHere(error)) throw error;

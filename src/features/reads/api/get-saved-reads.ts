@@ -1,23 +1,14 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { ReadRequest, ReadResponse } from "../../../../shared/schemas/reads";
+import type { SavedRead, SavedReadList } from "../../../../shared/schemas/reads";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { readsKeys } from "./keys";
 
-export type SavedRead = {
-  id: string;
-  label: string | null;
-  greenId: string | null;
-  greenName: string | null;
-  input: ReadRequest;
-  /** The answer without its drawn path. */
-  result: Omit<ReadResponse, "path">;
-  createdAt: string;
-};
+export type { SavedRead };
 
 /** GET /api/reads: the signed-in player's saved reads, newest first. */
-export function getSavedReads(signal?: AbortSignal): Promise<{ items: SavedRead[] }> {
-  return api.get<{ items: SavedRead[] }>(apiPaths.reads, { signal });
+export function getSavedReads(signal?: AbortSignal): Promise<SavedReadList> {
+  return api.get<SavedReadList>(apiPaths.reads, { signal });
 }
 
 export function savedReadsQueryOptions() {

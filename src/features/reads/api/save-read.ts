@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { SaveReadInput } from "../../../../shared/schemas/reads";
+import type { SavedRead, SaveReadInput } from "../../../../shared/schemas/reads";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
-import type { SavedRead } from "./get-saved-reads";
 import { readsKeys } from "./keys";
 
 /** POST /api/reads → 201 with the saved row. */

@@ -4,7 +4,8 @@ import { Alert, Button, ButtonLink, EmptyState, Spinner } from "../../../compone
 import { paths } from "../../../config/paths";
 import type { UnitSystem } from "../../../../shared/units";
 import { useDeleteRead } from "../api/delete-read";
-import { useSavedReads, type SavedRead } from "../api/get-saved-reads";
+import type { SavedRead } from "../../../../shared/schemas/reads";
+import { useSavedReads } from "../api/get-saved-reads";
 import { aimWords, readInputSummary } from "../utils/answer-text";
 import { describeFallLine } from "../utils/directions";
 import { encodeReadQuery, fromReadRequest } from "../../../lib/read-url";

@@ -17,9 +17,10 @@ const answer: BreakChartAnswer = {
   canStop: true,
   cells: [
     [
-      { ok: true, distanceM: feetToMetres(3), fallLineDeg: 0, aimOffsetM: 0.001, startLineDeg: 0, launchSpeedMps: 1, entrySpeedMps: 0.6 },
+      { ok: true, aimGiven: "offset", distanceM: feetToMetres(3), fallLineDeg: 0, aimOffsetM: 0.001, startLineDeg: 0, launchSpeedMps: 1, entrySpeedMps: 0.6 },
       {
         ok: true,
+        aimGiven: "offset",
         distanceM: feetToMetres(3),
         fallLineDeg: 90,
         aimOffsetM: -0.0762,
@@ -29,6 +30,7 @@ const answer: BreakChartAnswer = {
       },
       {
         ok: true,
+        aimGiven: "offset",
         distanceM: feetToMetres(3),
         fallLineDeg: 270,
         aimOffsetM: 0.0762,
@@ -38,9 +40,10 @@ const answer: BreakChartAnswer = {
       },
     ],
     [
-      { ok: true, distanceM: feetToMetres(6), fallLineDeg: 0, aimOffsetM: 0, startLineDeg: 0, launchSpeedMps: 1.4, entrySpeedMps: 0.6 },
+      { ok: true, aimGiven: "offset", distanceM: feetToMetres(6), fallLineDeg: 0, aimOffsetM: 0, startLineDeg: 0, launchSpeedMps: 1.4, entrySpeedMps: 0.6 },
       {
         ok: true,
+        aimGiven: "offset",
         distanceM: feetToMetres(6),
         fallLineDeg: 90,
         aimOffsetM: -0.2794,

@@ -1,6 +1,7 @@
 // Pure data shaping for the break chart: what to ask the API for, and how to lay its answer out as a table and as
 // chart series in the user's units.
 import { feetToMetres, metresToFeet, shortUnitLabel, toShortUnit, type UnitSystem } from "../../../../shared/units";
+import type { ChartCellAnswer, ChartResponse } from "../../../../shared/schemas/reads";
 import { directionHeading } from "./directions";
 
 /** Every 30°, clockwise from straight downhill. */
@@ -12,25 +13,9 @@ export function chartDistancesM(units: UnitSystem): number[] {
   return Array.from({ length: 10 }, (_, i) => i + 1);
 }
 
-export type ChartCellAnswer =
-  | {
-      ok: true;
-      distanceM: number;
-      fallLineDeg: number;
-      aimOffsetM: number | null;
-      aimGiven?: "offset" | "start-line";
-      startLineDeg: number;
-      launchSpeedMps: number;
-      entrySpeedMps: number;
-    }
-  | { ok: false; distanceM: number; fallLineDeg: number; reason: string };
-
-export type BreakChartAnswer = {
-  distances: number[];
-  fallLineDegs: number[];
-  canStop: boolean;
-  cells: ChartCellAnswer[][];
-};
+export type { ChartCellAnswer };
+/** The part of the chart answer (POST /api/reads/chart) the table, graph and aim rings lay out. */
+export type BreakChartAnswer = Pick<ChartResponse, "distances" | "fallLineDegs" | "canStop" | "cells">;
 
 /** Under a centimetre either side is "centre": nobody aims finer than that. */
 const CENTRE_M = 0.01;

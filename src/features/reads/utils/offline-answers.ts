@@ -6,11 +6,11 @@ import {
   chartRequestSchema,
   readRequestSchema,
   type ChartRequest,
+  type ChartResponse,
   type ReadRequest,
   type ReadResponse,
 } from "../../../../shared/schemas/reads";
 import { toApiError } from "../../../lib/api-client";
-import type { BreakChartResponse } from "../api/get-break-chart";
 
 /** The server's 400 for input it would refuse, so the page explains it the same way offline. */
 function refused(error: z.ZodError): Error {
@@ -27,9 +27,8 @@ export function readOffline(input: ReadRequest): ReadResponse {
   return answer.response;
 }
 
-export function chartOffline(input: ChartRequest): BreakChartResponse {
+export function chartOffline(input: ChartRequest): ChartResponse {
   const parsed = chartRequestSchema.safeParse(input);
   if (!parsed.success) throw refused(parsed.error);
-  const chart = answerChart(parsed.data);
-  return { ...chart, distances: [...chart.distances], fallLineDegs: [...chart.fallLineDegs] };
+  return answerChart(parsed.data);
 }
