@@ -61,19 +61,10 @@ export { newPlanarRollOut, rollPlanarInto, type PlanarRollOut } from "./planar-r
 export { rollClosedForm, type PlanarRoll } from "./closed-form-roll";
 export { standardNormals, type UniformRandom } from "./normal-deviates";
 export {
-  DEFAULT_BEST_PACE_GRID_M,
   DEFAULT_GREEN_LATERAL_M,
   DEFAULT_READ_ERROR_SLOPE_PCT,
   greenLateralSigmaM,
-  readSensitivity,
-  type ReadSensitivity,
   MAX_MONTE_CARLO_SAMPLES,
-  bestPace,
-  makeProbability,
-  simulatePuttOutcomes,
-  type BestPace,
-  type BestPaceInput,
-  type BestPaceResult,
   type MakeProbability,
   type MakeProbabilityInput,
   type MakeProbabilityResult,
@@ -81,17 +72,13 @@ export {
   type PaceOutcome,
   type PaceRead,
   type PuttDispersion,
-  type SimulatedPutt,
-} from "./make-probability";
-export {
-  CLUB_GOLFER_PRIOR,
-  estimateDispersion,
-  type DispersionEstimate,
-  type DispersionPrior,
-  type EstimateOptions,
-  type Interval,
-  type LoggedPutt,
-} from "./dispersion";
+} from "./make-probability-types";
+export { readSensitivity, type ReadSensitivity } from "./read-sensitivity";
+export { makeProbability, simulatePuttOutcomes, type SimulatedPutt } from "./make-probability";
+export { DEFAULT_BEST_PACE_GRID_M, bestPace, type BestPace, type BestPaceInput, type BestPaceResult } from "./best-pace";
+export { estimateDispersion, type DispersionEstimate, type EstimateOptions, type Interval } from "./dispersion";
+export { CLUB_GOLFER_PRIOR, type DispersionPrior } from "./dispersion-prior";
+export type { LoggedPutt } from "./dispersion-data";
 export { surfaceFromGrid, type HeightGrid, type HeightSurface } from "./height-surface";
 export { simulateRollOnSurface, type SurfaceNoRest, type SurfaceRoll, type SurfaceRollInput, type SurfaceRollResult } from "./surface-roll";
 export { solveReadOnSurface, type NoSurfaceRead, type SurfaceRead, type SurfaceReadInput, type SurfaceReadResult } from "./surface-read";

@@ -27,7 +27,11 @@ async function logPutts(server: TestServer, playerId: string, bands: [distanceM:
   const [s] = await db.insert(practiceSessions).values({ playerId, date: today }).returning({ id: practiceSessions.id });
   await db
     .insert(putts)
-    .values(bands.flatMap(([distanceM, n, holed]) => Array.from({ length: n }, (_, i) => ({ sessionId: s!.id, playerId, distanceM, holed: i < holed }))));
+    .values(
+      bands.flatMap(([distanceM, n, holed]) =>
+        Array.from({ length: n }, (_, i) => ({ sessionId: s!.id, playerId, distanceM, holed: i < holed })),
+      ),
+    );
 }
 
 beforeAll(async () => {
@@ -131,8 +135,7 @@ test("real answers of every route in the table match their response schemas", as
     { squadId: throwaway.squadWithMember, playerId: player.id },
     { squadId: throwaway.squadToLeave, playerId: player.id },
   ]);
-  const invitation = async (email: string) =>
-    (await ok(c.post(`/api/squads/${squadId}/invitations`, { email }))).invitation.id as string;
+  const invitation = async (email: string) => (await ok(c.post(`/api/squads/${squadId}/invitations`, { email }))).invitation.id as string;
   const [toRevoke, toResend] = [await invitation(uniqueEmail("revoke")), await invitation(uniqueEmail("resend"))];
   // A second player, invited and accepting through the e-mailed token.
   const joiner = await signedUpClient(server, "player", "Joining Player");
@@ -234,11 +237,16 @@ test("real answers of every route in the table match their response schemas", as
     ["GET /api/csv/putts/export", p, "/api/csv/putts/export"],
     ["GET /api/csv/sessions/export", p, "/api/csv/sessions/export"],
 
-    ["POST /api/training/attempts", p, "/api/training/attempts", {
-      level: "club",
-      putt: { ...read, distanceM: 3.3 },
-      guess: { aimOffsetM: -0.1, flatPuttLengthM: 3.4 },
-    }],
+    [
+      "POST /api/training/attempts",
+      p,
+      "/api/training/attempts",
+      {
+        level: "club",
+        putt: { ...read, distanceM: 3.3 },
+        guess: { aimOffsetM: -0.1, flatPuttLengthM: 3.4 },
+      },
+    ],
     ["GET /api/training/attempts", p, "/api/training/attempts"],
 
     ["GET /api/admin/users", a, "/api/admin/users"],
