@@ -1,6 +1,7 @@
 import { describe, expect, test } from "vitest";
 import fc from "fast-check";
-import { buildPracticePlan, MIN_PLAN_PUTTS, weeklyVolume, publishedFirstPuttShareBelow, weeklyCheck, weekMove, type PlanPutt } from "./practice-plan";
+import { buildPracticePlan, MIN_PLAN_PUTTS, weeklyVolume, publishedFirstPuttShareBelow, type PlanPutt } from "./practice-plan";
+import { weeklyCheck, weekMove } from "./practice-plan-weekly";
 import { ladderInputSchema } from "./schemas/ladders";
 import { planProposalSchema, type PlanReady } from "./schemas/practice-plan";
 import { DEFAULT_BAND_EDGES_M } from "./stats/bands";

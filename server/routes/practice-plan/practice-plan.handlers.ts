@@ -3,7 +3,8 @@
 // player's plan into their ladder library, then edits and assigns it through the ladder flows.
 import { and, asc, desc, eq, gte, lte } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
-import { addDays, buildPracticePlan, weeklyCheck, type PlanPutt } from "../../../shared/practice-plan";
+import { buildPracticePlan, type PlanPutt } from "../../../shared/practice-plan";
+import { addDays, weeklyCheck } from "../../../shared/practice-plan-weekly";
 import type { LadderSnapshot } from "../../../shared/schemas/assignments";
 import {
   type ActivePlan,

@@ -2,23 +2,17 @@
 // measured there become the green's height map (shared/gradient-map.ts, least squares), saved through the same
 // route as an uploaded grid. The first spot is read twice (half a turn) to learn the phone's own tilt.
 import { useMemo, useRef, useState, type FormEvent } from "react";
-import clsx from "clsx";
 import { SUSPECT_RESIDUAL_PCT, WALK_LIMITS, heightsFromGradients, walkedHeightMap } from "../../../../shared/gradient-map";
-import { correctedGradient, halfTurn, slopeAndFallLine, type Gradient, type Vec3 } from "../../../../shared/phone-level";
+import { correctedGradient, halfTurn, type Gradient, type Vec3 } from "../../../../shared/phone-level";
 import { parseDecimal } from "../../../../shared/units";
 import { useTiltSensor } from "../../../components/measure/use-tilt-sensor";
 import { Alert, Button, InputField, Spinner } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
 import { TILT_PROBLEM_WORDS, isTiltProblem, type TiltProblem } from "../../../lib/tilt-sensor";
 import { useSaveWalkedMap } from "../api/save-walked-map";
+import { spotWords, WalkGrid, type Grid } from "./walk-grid";
 
-type Grid = { nx: number; ny: number; spacingM: number };
 type Stage = "setup" | "turn" | "walking" | "review";
-
-/** Spot k's place in words: rows from the near edge, spots from the left. */
-function spotWords(k: number, nx: number): string {
-  return `row ${Math.floor(k / nx) + 1}, spot ${(k % nx) + 1} from the left`;
-}
 
 function nextStepWords(k: number, grid: Grid): string {
   if (k === 0) return "Start at the near left corner.";
@@ -249,63 +243,3 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
   );
 }
 
-/** The spots as the golfer sees them from the near edge: the far row (toward the mark) on top. */
-function WalkGrid({
-  grid,
-  readings,
-  current,
-  residual,
-  onRedo,
-}: {
-  grid: Grid;
-  readings: (Gradient | null)[];
-  current: number | null;
-  residual: number[] | undefined;
-  onRedo?: (k: number) => void;
-}) {
-  const rows = Array.from({ length: grid.ny }, (_, r) => grid.ny - 1 - r);
-  return (
-    <div className="overflow-x-auto">
-      <table className="border-separate border-spacing-1 text-xs" aria-label="Walked spots, the row toward the mark first">
-        <tbody>
-          {rows.map((j) => (
-            <tr key={j}>
-              {Array.from({ length: grid.nx }, (_, i) => {
-                const k = j * grid.nx + i;
-                const g = readings[k];
-                const res = residual?.[k];
-                const suspect = res !== undefined && res > SUSPECT_RESIDUAL_PCT;
-                const label = g ? `${slopeAndFallLine(g).slopePct.toFixed(1)} %` : k === current ? "here" : "·";
-                const cell = clsx(
-                  "flex h-12 min-w-14 flex-col items-center justify-center rounded-lg border-2 px-1 tabular-nums",
-                  k === current ? "border-coral-500 bg-coral-50 font-semibold" : g ? "border-ink-900/20 bg-white" : "border-dashed border-ink-900/20",
-                  suspect && "border-bad-600 bg-bad-50 text-bad-800",
-                );
-                return (
-                  <td key={i} className="p-0" data-testid={`spot-${k}`}>
-                    {onRedo && g ? (
-                      <button
-                        type="button"
-                        className={clsx(cell, "w-full focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500")}
-                        aria-label={`${spotWords(k, grid.nx)}: slope ${label}, misfit ${res?.toFixed(1) ?? "?"} %${suspect ? ", worth measuring again" : ""}. Measure it again.`}
-                        onClick={() => onRedo(k)}
-                      >
-                        <span>{label}</span>
-                        {res !== undefined ? <span className="text-[11px] text-ink-500">±{res.toFixed(1)}</span> : null}
-                      </button>
-                    ) : (
-                      <div className={cell}>
-                        <span aria-hidden="true">{label}</span>
-                        <span className="sr-only">{`${spotWords(k, grid.nx)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}</span>
-                      </div>
-                    )}
-                  </td>
-                );
-              })}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
-  );
-}

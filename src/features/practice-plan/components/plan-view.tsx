@@ -1,7 +1,6 @@
-import type { ReactNode } from "react";
 import { useNavigate } from "react-router";
 import { formatDate } from "../../../../shared/format";
-import type { ActivePlan, PlanBand, PlanReady, PracticePlanResponse } from "../../../../shared/schemas/practice-plan";
+import type { PlanBand, PlanReady, PracticePlanResponse } from "../../../../shared/schemas/practice-plan";
 import { TRAINING_LEVELS } from "../../../../shared/training";
 import { formatLength, type UnitSystem } from "../../../../shared/units";
 import { Alert, Button, ButtonLink, Card, EmptyState, PageSpinner, TableScroller, TextLink } from "../../../components/ui";
@@ -9,23 +8,9 @@ import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useUnits } from "../../auth/hooks/use-units";
 import { useAdoptPlan, usePracticePlan, useStartPlan } from "../api/practice-plan";
-import { bandLabel, bandVerdict, FAIL_RULE_TEXT, MOVE_TEXT, passRuleText, pct, rateWithRange, strokesWords } from "../utils/plan-words";
-
-type Mode = "player" | "coach";
-type Level = 2 | 3 | 4 | 5;
-
-/** A heading at the level the page needs: under the player's h1, or under the coach page's h2. */
-function H({ level, id, className, children }: { level: Level; id?: string; className?: string; children: ReactNode }) {
-  const Tag = `h${level}` as const;
-  return (
-    <Tag id={id} className={className ?? "text-lg font-semibold tracking-tight"}>
-      {children}
-    </Tag>
-  );
-}
-
-const th = "px-3 py-2 text-left font-semibold whitespace-nowrap";
-const td = "px-3 py-2 align-top whitespace-nowrap";
+import { bandLabel, bandVerdict, FAIL_RULE_TEXT, passRuleText, pct, rateWithRange, strokesWords } from "../utils/plan-words";
+import { H, td, th, type Level, type Mode } from "./plan-view-parts";
+import { WeeklyCheck } from "./weekly-check";
 
 function BandsTable({ bands, units, caption }: { bands: PlanBand[]; units: UnitSystem; caption: string }) {
   return (
@@ -34,13 +19,27 @@ function BandsTable({ bands, units, caption }: { bands: PlanBand[]; units: UnitS
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-ink-900/5 text-ink-700">
           <tr>
-            <th scope="col" className={th}>Length</th>
-            <th scope="col" className={th}>Putts</th>
-            <th scope="col" className={th}>You hole (95 % range)</th>
-            <th scope="col" className={th}>Tour</th>
-            <th scope="col" className={th}>Faced a round</th>
-            <th scope="col" className={th}>Strokes a round</th>
-            <th scope="col" className={th}>Verdict</th>
+            <th scope="col" className={th}>
+              Length
+            </th>
+            <th scope="col" className={th}>
+              Putts
+            </th>
+            <th scope="col" className={th}>
+              You hole (95 % range)
+            </th>
+            <th scope="col" className={th}>
+              Tour
+            </th>
+            <th scope="col" className={th}>
+              Faced a round
+            </th>
+            <th scope="col" className={th}>
+              Strokes a round
+            </th>
+            <th scope="col" className={th}>
+              Verdict
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-ink-900/10">
@@ -78,8 +77,9 @@ function ProposedPlan({ plan, units, level, playerName }: { plan: PlanReady; uni
         <ul className="mt-3 flex flex-col gap-2">
           {targets.map((b) => (
             <li key={b.fromM} className="rounded-lg bg-warn-50 px-3 py-2 text-ink-800">
-              <strong>{bandLabel(b, units)}</strong>: you hole {rateWithRange(b.rate, b.ci95)} of {b.attempts}; the tour holes {pct(b.baselineRate)}.
-              That costs about <strong>{b.strokesPerRound!.toFixed(2)} strokes a round</strong> ({b.facedPerRound.toFixed(1)} putts of this length a round).
+              <strong>{bandLabel(b, units)}</strong>: you hole {rateWithRange(b.rate, b.ci95)} of {b.attempts}; the tour holes{" "}
+              {pct(b.baselineRate)}. That costs about <strong>{b.strokesPerRound!.toFixed(2)} strokes a round</strong> (
+              {b.facedPerRound.toFixed(1)} putts of this length a round).
             </li>
           ))}
         </ul>
@@ -104,12 +104,12 @@ function ProposedPlan({ plan, units, level, playerName }: { plan: PlanReady; uni
           <H level={level}>Each week</H>
           <ul className="mt-2 flex flex-col gap-2 text-ink-700">
             <li>
-              <strong>{plan.weekly.sessions} sessions</strong> of about {plan.weekly.puttsPerSession} putts: {plan.weekly.puttsPerWeek} putts a week, about{" "}
-              {plan.weekly.puttsPerTargetBand} at each length in the plan — enough to see a change within a few weeks.
+              <strong>{plan.weekly.sessions} sessions</strong> of about {plan.weekly.puttsPerSession} putts: {plan.weekly.puttsPerWeek}{" "}
+              putts a week, about {plan.weekly.puttsPerTargetBand} at each length in the plan — enough to see a change within a few weeks.
             </li>
             <li>
-              Read training at the <TextLink to={paths.train.href(`level=${plan.trainingLevel}`)}>{trainingLevel.label} level</TextLink> once a week: its putts are
-              the lengths the plan works on.
+              Read training at the <TextLink to={paths.train.href(`level=${plan.trainingLevel}`)}>{trainingLevel.label} level</TextLink>{" "}
+              once a week: its putts are the lengths the plan works on.
             </li>
           </ul>
           <p className="mt-3 text-sm text-ink-500">
@@ -118,78 +118,6 @@ function ProposedPlan({ plan, units, level, playerName }: { plan: PlanReady; uni
         </Card>
       </div>
     </div>
-  );
-}
-
-function WeeklyCheck({ active, units, mode, level }: { active: ActivePlan; units: UnitSystem; mode: Mode; level: Level }) {
-  const started =
-    active.startedBy.role === "player" ? `Started ${formatDate(active.startedOn)}` : `Adopted by ${active.startedBy.name} on ${formatDate(active.startedOn)}`;
-  return (
-    <Card>
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <H level={level}>The plan under way</H>
-          <p className="mt-1 text-sm text-ink-600">
-            {active.plan.ladder.name} · {started}
-          </p>
-        </div>
-        {mode === "player" && active.assignmentId ? (
-          <ButtonLink to={paths.runLadder.href(active.assignmentId)} size="sm">
-            Run the plan’s ladder
-          </ButtonLink>
-        ) : mode === "player" && active.ladderId ? (
-          <ButtonLink to={paths.myLadders.href()} size="sm" variant="secondary">
-            My ladders
-          </ButtonLink>
-        ) : null}
-      </div>
-      <p className="mt-3 text-sm text-ink-700">
-        Each week the lengths in the plan against the eight weeks before it started: “better” or “worse” only when the change is clear of chance (two-proportion
-        test, 95 %).
-      </p>
-      <TableScroller label="Weekly check of the plan" className="mt-3">
-        <table className="w-full min-w-[34rem] text-sm">
-          <caption className="sr-only">Weekly check of the plan</caption>
-          <thead className="bg-ink-900/5 text-ink-700">
-            <tr>
-              <th scope="col" className={th}>Week</th>
-              <th scope="col" className={th}>Length</th>
-              <th scope="col" className={th}>Putts</th>
-              <th scope="col" className={th}>You hole (95 % range)</th>
-              <th scope="col" className={th}>Moved?</th>
-            </tr>
-          </thead>
-          <tbody className="divide-y divide-ink-900/10">
-            {active.before.map((b) => (
-              <tr key={`before-${b.fromM}`} className="text-ink-600">
-                <th scope="row" className={`${td} text-left font-normal whitespace-nowrap`}>
-                  Before
-                </th>
-                <td className={td}>{bandLabel(b, units)}</td>
-                <td className={td}>{b.attempts}</td>
-                <td className={`${td} whitespace-nowrap`}>{rateWithRange(b.rate, b.ci95)}</td>
-                <td className={td}>—</td>
-              </tr>
-            ))}
-            {active.weeks.flatMap((w) =>
-              w.bands.map((b) => (
-                <tr key={`${w.week}-${b.fromM}`}>
-                  <th scope="row" className={`${td} text-left whitespace-nowrap`}>
-                    Week {w.week} <span className="block text-xs font-normal text-ink-500">{formatDate(w.from)}</span>
-                  </th>
-                  <td className={td}>{bandLabel(b, units)}</td>
-                  <td className={td}>{b.attempts}</td>
-                  <td className={`${td} whitespace-nowrap`}>{rateWithRange(b.rate, b.ci95)}</td>
-                  <td className={`${td} ${b.move === "better" ? "font-semibold text-ok-800" : b.move === "worse" ? "font-semibold text-bad-800" : ""}`}>
-                    {MOVE_TEXT[b.move]}
-                  </td>
-                </tr>
-              )),
-            )}
-          </tbody>
-        </table>
-      </TableScroller>
-    </Card>
   );
 }
 
@@ -311,8 +239,9 @@ export function PracticePlanView({ playerId, mode }: { playerId?: string; mode: 
           <details className="rounded-xl bg-ink-900/5 p-3">
             <summary className="cursor-pointer py-1 font-medium text-ink-800">Every length, against the tour</summary>
             <p className="mt-2 mb-3 text-sm text-ink-600">
-              A length counts only with its whole 95 % range below the tour’s rate: a loss that could be chance is left out. The tour rates are the published
-              one-putt rates (Broadie, 2014); “faced a round” is how often {who === "you" ? "you face" : `${who} faces`} that length on the course.
+              A length counts only with its whole 95 % range below the tour’s rate: a loss that could be chance is left out. The tour rates
+              are the published one-putt rates (Broadie, 2014); “faced a round” is how often {who === "you" ? "you face" : `${who} faces`}{" "}
+              that length on the course.
             </p>
             <BandsTable bands={p.bands} units={units} caption="Make rate by length against the tour" />
           </details>

@@ -1,3 +1,6 @@
+// The read form: distance, slope, fall line (named directions or the dial), Stimp and pace, in the user's units.
+// Over 300 lines on purpose (issue 16): one react-hook-form form whose fields, debounced commits, dial preview and
+// server-error focus all read and write the same form state; split, each part would take the form's methods as props.
 import { useCallback, useEffect, useId, useLayoutEffect, useRef, useState } from "react";
 import { useForm, useWatch, type FieldErrors } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
