@@ -138,7 +138,8 @@ export class TiltSensor {
   /** The mean compass heading over the last `spanS` seconds (the still reading's window), or null. */
   private headingOver(spanS: number): number | null {
     const now = performance.now() / 1000;
-    return meanHeadingDeg(this.headings.filter((x) => now - x.t <= spanS + 0.1).map((x) => x.h));
+    // No slack before the window: a heading from before the phone was laid down must not count.
+    return meanHeadingDeg(this.headings.filter((x) => now - x.t <= spanS).map((x) => x.h));
   }
 
   stop() {
