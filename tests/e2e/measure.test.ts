@@ -237,3 +237,48 @@ test("map this green by the compass: a 3 × 3 walk with the phone laid a differe
     await browser.close();
   }
 }, SENSOR_TEST_TIMEOUT_MS);
+
+test("read training's eye check: the measurement waits for a guess, then the guess is compared with it (too steep, about right, the direction's gap)", async () => {
+  const browser = await openBrowser(PHONE);
+  const { page } = browser;
+  try {
+    await page.goto(`${server.url}/train`);
+    await page.getByRole("heading", { name: "Check your eye on a real green" }).waitFor();
+    await installFeeder(page);
+    // Measured first, with no guess written: the page asks for one rather than comparing with nothing.
+    await page.getByRole("button", { name: "Measure on the green" }).click();
+    await page.getByText("Step 1 of 2").waitFor();
+    await feed(page, lying(-0.02, 0), false); // 2.0 % falling to the golfer's right (as in the read page's test)
+    await page.getByText("Step 2 of 2").waitFor();
+    await feed(page, lying(0.02, 0));
+    await page.getByTestId("measured").waitFor();
+    await page.getByText("Write down your own reading first, then measure again to compare.").waitFor();
+    expect(await page.getByRole("status").filter({ hasText: "Your eye" }).count()).toBe(0);
+
+    // A guess of 2.6 % falling left against the phone's 2.0 % falling right (hand-computed: 0.6 % too steep, 180° off).
+    await page.getByLabel("Your slope (%)").fill("2.6");
+    await page.getByLabel("It falls").selectOption({ label: "To the left" });
+    const compared = page.getByRole("status").filter({ hasText: "Your eye" });
+    await compared.filter({ hasText: "too steep" }).waitFor();
+    expect((await compared.textContent())?.replace(/\s+/g, " ")).toBe(
+      "Your eye: 2.6 %, the green falls to your left (side hill). The phone: 2.0 %. You read it 0.6 % too steep, and the direction 180° off.",
+    );
+    await screenshot(page, "train-eye-check-compared");
+    // Within a quarter of a percent is "about right"; falling right and toward the hole is 45° from falling right.
+    await page.getByLabel("Your slope (%)").fill("1.9");
+    await page.getByLabel("It falls").selectOption({ label: "Right and toward the hole" });
+    // (Waited for, not read at once: the re-render follows the input event.)
+    await compared.filter({ hasText: /The phone: 2\.0 %\. You read it about right, and the direction 45° off\.$/ }).waitFor();
+    // 1.2 % is too flat by 0.8 %.
+    await page.getByLabel("Your slope (%)").fill("1.2");
+    await compared.filter({ hasText: "You read it 0.8 % too flat, and the direction 45° off." }).waitFor();
+    // A guess outside 0–15 % is named beside its field and nothing is compared.
+    await page.getByLabel("Your slope (%)").fill("16");
+    await page.getByText("Enter a slope from 0 to 15 %.").waitFor();
+    await compared.waitFor({ state: "detached" });
+    expect(await axeViolations(page, 'section[aria-label="Measure on the green"]')).toEqual([]);
+    expect(browser.unexpected()).toEqual([]);
+  } finally {
+    await browser.close();
+  }
+}, SENSOR_TEST_TIMEOUT_MS);

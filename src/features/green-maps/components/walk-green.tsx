@@ -27,8 +27,10 @@ function compassPoint(deg: number): string {
 }
 
 /** Spot k's place in words: rows from the near edge, spots from the left. */
-function spotWords(k: number, nx: number): string {
-  return `row ${Math.floor(k / nx) + 1}, spot ${(k % nx) + 1} from the left`;
+function spotWords(k: number, nx: number, facing: Facing = "mark"): string {
+  const row = Math.floor(k / nx) + 1;
+  const spot = (k % nx) + 1;
+  return facing === "north" ? `row ${row} from the south, spot ${spot} from the west` : `row ${row}, spot ${spot} from the left`;
 }
 
 function nextStepWords(k: number, grid: Grid): string {
@@ -199,7 +201,7 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
         )}
         <div className="grid grid-cols-3 gap-3">
           <InputField label="Across" hint="Spots a row" inputMode="numeric" value={text.nx} onChange={(e) => setText((t) => ({ ...t, nx: e.target.value }))} error={setupErrors.nx} />
-          <InputField label="Rows" hint="Toward the mark" inputMode="numeric" value={text.ny} onChange={(e) => setText((t) => ({ ...t, ny: e.target.value }))} error={setupErrors.ny} />
+          <InputField label="Rows" hint={facing === "north" && !compassWhyNot ? "Northward" : "Toward the mark"} inputMode="numeric" value={text.ny} onChange={(e) => setText((t) => ({ ...t, ny: e.target.value }))} error={setupErrors.ny} />
           <InputField label="Apart (m)" hint="A pace or two" inputMode="decimal" value={text.spacing} onChange={(e) => setText((t) => ({ ...t, spacing: e.target.value }))} error={setupErrors.spacing} />
         </div>
         <ChoiceGroup
@@ -262,7 +264,7 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
           grid.facing === "north" ? (
             <>
               <p>
-                {nextStepWords(current, grid)} Lay the phone flat at {spotWords(current, grid.nx)}, any way round, and let go.
+                {nextStepWords(current, grid)} Lay the phone flat at {spotWords(current, grid.nx, "north")}, any way round, and let go.
               </p>
               <p className="text-ink-600">
                 {heading === null ? "Waiting for the compass…" : `The phone's top edge points ${heading.toFixed(0)}° (${compassPoint(heading)}).`}
@@ -326,6 +328,7 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
       </div>
       <p className="text-sm text-ink-500">
         Between the spots the map is smooth: a ridge or hollow smaller than the spacing is not in it. Grain and wind are not either.
+        {grid.facing === "north" ? " North on this map is the compass's, which metal nearby can pull off by several degrees." : ""}
       </p>
     </section>
   );
@@ -369,7 +372,7 @@ function WalkGrid({
                       <button
                         type="button"
                         className={clsx(cell, "w-full focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500")}
-                        aria-label={`${spotWords(k, grid.nx)}: slope ${label}, misfit ${res?.toFixed(1) ?? "?"} %${suspect ? ", worth measuring again" : ""}. Measure it again.`}
+                        aria-label={`${spotWords(k, grid.nx, grid.facing)}: slope ${label}, misfit ${res?.toFixed(1) ?? "?"} %${suspect ? ", worth measuring again" : ""}. Measure it again.`}
                         onClick={() => onRedo(k)}
                       >
                         <span>{label}</span>
@@ -378,7 +381,7 @@ function WalkGrid({
                     ) : (
                       <div className={cell}>
                         <span aria-hidden="true">{label}</span>
-                        <span className="sr-only">{`${spotWords(k, grid.nx)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}</span>
+                        <span className="sr-only">{`${spotWords(k, grid.nx, grid.facing)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}</span>
                       </div>
                     )}
                   </td>
