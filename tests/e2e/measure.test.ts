@@ -259,7 +259,7 @@ test("read training's eye check: the measurement waits for a guess, then the gue
     await page.getByLabel("Your slope (%)").fill("2.6");
     await page.getByLabel("It falls").selectOption({ label: "To the left" });
     const compared = page.getByRole("status").filter({ hasText: "Your eye" });
-    await compared.filter({ hasText: "too steep" }).waitFor();
+    await compared.filter({ hasText: "180° off" }).waitFor(); // after both fields (in between it reads 0° off)
     expect((await compared.textContent())?.replace(/\s+/g, " ")).toBe(
       "Your eye: 2.6 %, the green falls to your left (side hill). The phone: 2.0 %. You read it 0.6 % too steep, and the direction 180° off.",
     );
