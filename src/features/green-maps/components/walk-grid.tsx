@@ -1,13 +1,15 @@
-// The grid of spots of a walked green (walk-green.tsx), as the golfer sees it from the near edge.
+// The grid of spots of a walked green (walk-green.tsx), as the golfer sees it, and each spot's place in words.
 import clsx from "clsx";
 import { SUSPECT_RESIDUAL_PCT } from "../../../../shared/gradient-map";
 import { slopeAndFallLine, type Gradient } from "../../../../shared/phone-level";
 
-export type Grid = { nx: number; ny: number; spacingM: number };
-
+export type Facing = "mark" | "north";
+export type Grid = { nx: number; ny: number; spacingM: number; facing: Facing };
 /** Spot k's place in words: rows from the near edge, spots from the left. */
-export function spotWords(k: number, nx: number): string {
-  return `row ${Math.floor(k / nx) + 1}, spot ${(k % nx) + 1} from the left`;
+export function spotWords(k: number, nx: number, facing: Facing = "mark"): string {
+  const row = Math.floor(k / nx) + 1;
+  const spot = (k % nx) + 1;
+  return facing === "north" ? `row ${row} from the south, spot ${spot} from the west` : `row ${row}, spot ${spot} from the left`;
 }
 
 /** The spots as the golfer sees them from the near edge: the far row (toward the mark) on top. */
@@ -27,7 +29,7 @@ export function WalkGrid({
   const rows = Array.from({ length: grid.ny }, (_, r) => grid.ny - 1 - r);
   return (
     <div className="overflow-x-auto">
-      <table className="border-separate border-spacing-1 text-xs" aria-label="Walked spots, the row toward the mark first">
+      <table className="border-separate border-spacing-1 text-xs" aria-label={grid.facing === "north" ? "Walked spots, the north row first" : "Walked spots, the row toward the mark first"}>
         <tbody>
           {rows.map((j) => (
             <tr key={j}>
@@ -48,7 +50,7 @@ export function WalkGrid({
                       <button
                         type="button"
                         className={clsx(cell, "w-full focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500")}
-                        aria-label={`${spotWords(k, grid.nx)}: slope ${label}, misfit ${res?.toFixed(1) ?? "?"} %${suspect ? ", worth measuring again" : ""}. Measure it again.`}
+                        aria-label={`${spotWords(k, grid.nx, grid.facing)}: slope ${label}, misfit ${res?.toFixed(1) ?? "?"} %${suspect ? ", worth measuring again" : ""}. Measure it again.`}
                         onClick={() => onRedo(k)}
                       >
                         <span>{label}</span>
@@ -57,7 +59,7 @@ export function WalkGrid({
                     ) : (
                       <div className={cell}>
                         <span aria-hidden="true">{label}</span>
-                        <span className="sr-only">{`${spotWords(k, grid.nx)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}</span>
+                        <span className="sr-only">{`${spotWords(k, grid.nx, grid.facing)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}</span>
                       </div>
                     )}
                   </td>
