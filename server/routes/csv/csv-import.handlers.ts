@@ -38,9 +38,14 @@ export function previewCsv(db: Db) {
   };
 }
 
-/** Rows converted, and putts written, between two yields to the event loop (each chunk is a short transaction). */
-const CONVERT_CHUNK = 2000;
-const WRITE_CHUNK = 500;
+/**
+ * Rows converted, and putts written, between two yields to the event loop (each chunk is a short transaction).
+ * 500-putt chunks held PGlite ~80 ms each, and a request queued behind a chunk and a make-rate query waited up to
+ * 412 ms; at 100 the probes of `npx tsx bench/concurrency.ts` stay at p99 201 ms (goal 250) and the 50 000-row import
+ * takes 10 s instead of 8 (2026-12-03).
+ */
+const CONVERT_CHUNK = 500;
+const WRITE_CHUNK = 100;
 /** Marks the sessions of an import still being written; removed in one statement when the last chunk is in. */
 export const PENDING_IMPORT_TAG = "csv-import-pending";
 
