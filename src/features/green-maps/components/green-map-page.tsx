@@ -17,7 +17,7 @@ import { useWebGL } from "../../../components/green-3d/webgl";
 import { Alert, Button, ButtonLink, Card, InputField, PageHeader, PageSpinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
-import { useMe } from "../../auth/api/get-me";
+import { useUnits } from "../../auth/hooks/use-units";
 import { useGreen } from "../api/get-green";
 import { useHeightMap } from "../api/get-height-map";
 import { useSurfaceRead } from "../api/solve-on-surface";
@@ -35,8 +35,7 @@ import { WalkGreen } from "./walk-green";
 const EXAGGERATION = 5;
 
 export function GreenMapPage({ greenId }: { greenId: string }) {
-  const me = useMe();
-  const units: UnitSystem = me.data?.preferences.units ?? "imperial";
+  const { units } = useUnits();
   const green = useGreen(greenId);
   // Asked only once the green says it has a map: a green without one makes no request (and no 404 in the console).
   const hasMap = green.data?.hasHeightMap ?? false;
