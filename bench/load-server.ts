@@ -9,3 +9,26 @@ const running = await start({
 });
 process.stdout.write(JSON.stringify({ url: running.url }) + "\n");
 process.once("SIGTERM", () => void running.close().then(() => process.exit(0)));
+// LOAD_STALLS=1 (diagnosis): the server's event-loop stalls over 40 ms and requests slower than 50 ms, on stderr,
+// stamped with the wall clock so they line up with the client's trace (LOAD_TRACE).
+if (process.env.LOAD_STALLS) {
+  const http = await import("node:http");
+  let last = performance.now();
+  setInterval(() => {
+    const now = performance.now();
+    if (now - last > 40) process.stderr.write(`server stall ${Math.round(now - last)} ms at ${Date.now()}\n`);
+    last = now;
+  }, 5).unref();
+  const emit = http.Server.prototype.emit;
+  http.Server.prototype.emit = function (this: import("node:http").Server, ev: string | symbol, ...args: unknown[]) {
+    if (ev === "request") {
+      const started = performance.now();
+      const res = args[1] as import("node:http").ServerResponse;
+      res.once("finish", () => {
+        const ms = performance.now() - started;
+        if (ms > 50) process.stderr.write(`server slow ${Math.round(ms)} ms at ${Date.now()}\n`);
+      });
+    }
+    return Reflect.apply(emit, this, [ev, ...args]) as boolean;
+  } as typeof emit;
+}

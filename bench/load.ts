@@ -18,10 +18,16 @@ if (SECONDS > 30 || STEADY_SECONDS > 30) throw new Error("LOAD_SECONDS and STEAD
 
 type Figures = { name: string; rps: number; p50: number; p99: number; errors: number; non2xx: number; total: number; goal: string; met: boolean };
 
-async function startServer(): Promise<{ url: string; stop: () => Promise<void> }> {
+/** CPU seconds a process has used so far (user + system), from /proc: to tell the server's cost from the client's. */
+function cpuSeconds(pid: number | "self"): number {
+  const fields = fs.readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1]!.split(" ");
+  return (Number(fields[11]) + Number(fields[12])) / 100;
+}
+
+async function startServer(): Promise<{ url: string; pid: number; stop: () => Promise<void> }> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-load-"));
   const child = spawn(process.execPath, [...(process.env.LOAD_PROFILE ? ["--cpu-prof", "--cpu-prof-dir=" + process.env.LOAD_PROFILE] : []), "--import", "tsx", "bench/load-server.ts"], {
-    env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir, PORT: "0" },
+    env: { PATH: process.env.PATH, HOME: process.env.HOME, LOAD_STALLS: process.env.LOAD_STALLS ?? "", NODE_OPTIONS: process.env.LOAD_NODE_OPTIONS ?? "", DATA_DIR: dataDir, PORT: "0" },
     stdio: ["ignore", "pipe", "inherit"],
   });
   const line = await new Promise<string>((resolve, reject) => {
@@ -39,6 +45,7 @@ async function startServer(): Promise<{ url: string; stop: () => Promise<void> }
   const { url } = JSON.parse(line) as { url: string };
   return {
     url,
+    pid: child.pid!,
     stop: async () => {
       const exited = new Promise((r) => child.once("exit", r));
       child.kill("SIGTERM");
@@ -91,7 +98,7 @@ function figures(name: string, r: autocannon.Result, goal: { rps: number; p99?: 
  * 50 players logging at a steady total rate, each request sent on its own schedule (open loop). autocannon's
  * rate option sends each second's quota in one burst, which measures the burst, not the steady rate.
  */
-async function steadyPutts(url: string, players: { cookie: string; sessionId: string }[], perSecond: number): Promise<Figures> {
+async function steadyPutts(url: string, serverPid: number, players: { cookie: string; sessionId: string }[], perSecond: number): Promise<Figures> {
   const histogram = hdr.build({ lowestDiscernibleValue: 1, highestTrackableValue: 60_000, numberOfSignificantValueDigits: 3 });
   const intervalMs = (1000 * players.length) / perSecond;
   const endAt = performance.now() + STEADY_SECONDS * 1000;
@@ -99,6 +106,18 @@ async function steadyPutts(url: string, players: { cookie: string; sessionId: st
   let total = 0;
   let errors = 0;
   let non2xx = 0;
+  const cpuBefore = { server: cpuSeconds(serverPid), client: cpuSeconds("self") };
+  const started = performance.now();
+  // LOAD_TRACE=file writes [sent at (wall clock ms), latency ms] of every putt, to tell stalls (slow putts bunched in time) from queueing.
+  const trace: [number, number][] | undefined = process.env.LOAD_TRACE ? [] : undefined;
+  let lastTick = performance.now();
+  const stallTimer = process.env.LOAD_STALLS
+    ? setInterval(() => {
+        const now = performance.now();
+        if (now - lastTick > 40) console.error(`client stall ${Math.round(now - lastTick)} ms at ${Date.now()}`);
+        lastTick = now;
+      }, 5)
+    : undefined;
   const player = async (p: { cookie: string; sessionId: string }, offsetMs: number) => {
     let due = performance.now() + offsetMs;
     const inFlight: Promise<void>[] = [];
@@ -118,16 +137,23 @@ async function steadyPutts(url: string, players: { cookie: string; sessionId: st
             if (res.status < 200 || res.status > 299) non2xx++;
             else acknowledged++;
             histogram.recordValue(Math.max(1, Math.round(performance.now() - sentAt)));
+            trace?.push([Math.round(performance.timeOrigin + sentAt), Math.round(performance.now() - sentAt)]);
           })
           .catch(() => void errors++),
       );
     }
     await Promise.all(inFlight);
   };
-  const started = performance.now();
   await Promise.all(players.map((p, i) => player(p, (i * intervalMs) / players.length)));
   const rps = total / ((performance.now() - started) / 1000);
+  clearInterval(stallTimer);
+  const cpu = { server: cpuSeconds(serverPid) - cpuBefore.server, client: cpuSeconds("self") - cpuBefore.client };
+  console.log(
+    `steady scenario CPU: server ${cpu.server.toFixed(1)} s (${((1000 * cpu.server) / total).toFixed(2)} ms a putt), ` +
+      `this client ${cpu.client.toFixed(1)} s, load average ${os.loadavg()[0]!.toFixed(2)}`,
+  );
   const p99 = histogram.getValueAtPercentile(99);
+  if (trace) fs.writeFileSync(process.env.LOAD_TRACE!, JSON.stringify(trace));
   // Every acknowledged putt must be stored: count them back through the API.
   let stored = 0;
   for (const p of players) {
@@ -177,7 +203,7 @@ try {
     },
   });
   // Latency at the goal first (each player's session still empty): 200 putts a second in all, for 30 s.
-  results.push(await steadyPutts(server.url, players, 200));
+  results.push(await steadyPutts(server.url, server.pid, players, 200));
   if (ONLY === "steady") throw new Done();
   // Capacity: every player taps as fast as the server answers.
   const capacity = await run(puttRequests());

@@ -4,6 +4,9 @@ import {
   correctedGradient,
   gradientFromUp,
   halfTurn,
+  headingFromOrientation,
+  meanHeadingDeg,
+  phoneToNorthGradient,
   slopeAndFallLine,
   stillReading,
   upFromMotion,
@@ -146,5 +149,79 @@ describe("holding still for two seconds", () => {
     const r = stillReading(later)!;
     expect(r.spreadPct).toBeLessThan(0.01);
     expect(r.samples).toBe(121);
+  });
+});
+
+describe("the compass: heading and the turn into the green's frame (derived in docs/sources.md)", () => {
+  it("reads the heading clockwise from north: W3C alpha turns counter-clockwise, so heading = 360 − alpha; iOS's heading is taken as it is", () => {
+    // alpha 0: top edge north. Turned a quarter turn to the left (alpha 90) the top edge points west, 270°.
+    expect(headingFromOrientation({ alpha: 0, absolute: true })).toBe(0);
+    expect(headingFromOrientation({ alpha: 90, absolute: true })).toBeCloseTo(270, 9);
+    expect(headingFromOrientation({ alpha: 270, absolute: true })).toBeCloseTo(90, 9);
+    expect(headingFromOrientation({ alpha: 330, absolute: true })).toBeCloseTo(30, 9);
+    // A relative alpha (the plain deviceorientation event of most Android browsers) is no compass.
+    expect(headingFromOrientation({ alpha: 330, absolute: false })).toBeNull();
+    expect(headingFromOrientation({ alpha: null, absolute: true })).toBeNull();
+    expect(headingFromOrientation(null)).toBeNull();
+    // iOS: webkitCompassHeading is already clockwise from north, whatever its relative alpha says.
+    expect(headingFromOrientation({ alpha: 10, absolute: false, webkitCompassHeading: 45 })).toBe(45);
+    expect(headingFromOrientation({ alpha: 10, absolute: false, webkitCompassHeading: -1 })).toBeNull();
+  });
+
+  it("the heading from alpha is that of the top edge for any tilt: against R = Rz(α)·Rx(β)·Ry(γ) applied to (0, 1, 0)", () => {
+    // The W3C rotation written out as matrices (earth frame x east, y north, z up), independent of the code's shortcut.
+    const Rz = (a: number) => [[Math.cos(a), -Math.sin(a), 0], [Math.sin(a), Math.cos(a), 0], [0, 0, 1]];
+    const Rx = (b: number) => [[1, 0, 0], [0, Math.cos(b), -Math.sin(b)], [0, Math.sin(b), Math.cos(b)]];
+    const Ry = (g: number) => [[Math.cos(g), 0, Math.sin(g)], [0, 1, 0], [-Math.sin(g), 0, Math.cos(g)]];
+    const mul = (A: number[][], B: number[][]) => A.map((row) => B[0]!.map((_, j) => row.reduce((s, v, k) => s + v * B[k]![j]!, 0)));
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 359.9, noNaN: true }), fc.double({ min: -60, max: 60, noNaN: true }), fc.double({ min: -60, max: 60, noNaN: true }), (a, b, g) => {
+        const R = mul(mul(Rz(a * DEG), Rx(b * DEG)), Ry(g * DEG));
+        const top = [R[0]![1]!, R[1]![1]!]; // R·(0, 1, 0): (east, north) parts
+        const expected = (((Math.atan2(top[0]!, top[1]!) / DEG) % 360) + 360) % 360;
+        const got = headingFromOrientation({ alpha: a, beta: b, absolute: true })!;
+        const gap = Math.abs(((got - expected + 540) % 360) - 180);
+        expect(gap).toBeLessThan(1e-6);
+      }),
+    );
+  });
+
+  it("turns a phone-frame gradient into east/north: hand-computed cases", () => {
+    const close = (v: readonly number[], e: readonly number[]) => v.forEach((x, i) => expect(x).toBeCloseTo(e[i]!, 9));
+    close(phoneToNorthGradient([0.01, -0.02], 0), [0.01, -0.02]); // top edge north: nothing turns
+    // Top edge east, so the right edge points south: rising toward the right edge is rising southward, ∂h/∂north = −0.01.
+    close(phoneToNorthGradient([0.01, 0], 90), [0, -0.01]);
+    close(phoneToNorthGradient([0, 0.02], 90), [0.02, 0]);
+    close(phoneToNorthGradient([0.01, -0.02], 180), [-0.01, 0.02]); // half a turn flips both
+    // Top edge north-east, 2 % rising toward it: 0.02·(sin 45°, cos 45°) = (0.0141421, 0.0141421).
+    close(phoneToNorthGradient([0, 0.02], 45), [0.0141421356, 0.0141421356]);
+    // Top edge at 30°, so the right edge at 120°: 1 % toward it is 0.01·(cos 30°, −sin 30°) = (0.0086603, −0.005).
+    close(phoneToNorthGradient([0.01, 0], 30), [0.0086602540, -0.005]);
+    // 270°: top edge west, right edge north.
+    close(phoneToNorthGradient([0.01, 0], 270), [0, 0.01]);
+  });
+
+  it("a plane read by a phone turned any way comes back the same: slope kept, fall line clockwise from north", () => {
+    fc.assert(
+      fc.property(fc.double({ min: -0.05, max: 0.05, noNaN: true }), fc.double({ min: -0.05, max: 0.05, noNaN: true }), fc.double({ min: 0, max: 360, noNaN: true }), (gE, gN, H) => {
+        // What the phone sees: the plane's gradient along its right edge (cos H, −sin H) and top edge (sin H, cos H).
+        const h = H * DEG;
+        const phone: [number, number] = [gE * Math.cos(h) - gN * Math.sin(h), gE * Math.sin(h) + gN * Math.cos(h)];
+        const back = phoneToNorthGradient(phone, H);
+        expect(back[0]).toBeCloseTo(gE, 12);
+        expect(back[1]).toBeCloseTo(gN, 12);
+      }),
+    );
+    // Falling to the east (h = −0.02·east): fall line 90° from north whichever way the phone lay.
+    expect(slopeAndFallLine(phoneToNorthGradient([0, 0.02], 270)).fallLineDeg).toBeCloseTo(90, 9);
+    expect(slopeAndFallLine(phoneToNorthGradient([0, 0.02], 270)).slopePct).toBeCloseTo(2, 9);
+  });
+
+  it("averages headings on the circle", () => {
+    expect(meanHeadingDeg([359, 1])).toBeCloseTo(0, 9);
+    // sin-sum 0.34202, cos-sum 2.90931 (by hand) → atan2 = 6.705°.
+    expect(meanHeadingDeg([350, 10, 20])).toBeCloseTo(6.705, 3);
+    expect(meanHeadingDeg([0, 180])).toBeNull(); // no mean direction
+    expect(meanHeadingDeg([])).toBeNull();
   });
 });

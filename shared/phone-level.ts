@@ -161,3 +161,57 @@ export function correctedGradient(up: Vec3, sensorTilt: Gradient): [number, numb
 
 /** Above this the two readings of a half turn disagree too much to trust (a sensor's own tilt is rarely over 0.5°). */
 export const HALF_TURN_SUSPECT_PCT = 2;
+
+// The compass: a walk may record, at every spot, which way the phone's top edge points (clockwise from north, seen
+// from above), and turn each reading into the green's frame (x east, y north). Derivation in docs/sources.md,
+// "Measuring on the green with a phone", the compass.
+
+/** What a DeviceOrientationEvent (or the iOS one) says about the compass; absent fields are null or undefined. */
+export type OrientationSample = {
+  alpha?: number | null;
+  beta?: number | null;
+  absolute?: boolean | null;
+  /** iOS Safari's own: degrees clockwise from magnetic north, already a heading. */
+  webkitCompassHeading?: number | null;
+};
+
+const wrap360 = (deg: number) => ((deg % 360) + 360) % 360;
+
+/**
+ * The compass heading of the phone's top edge, degrees clockwise from north (0 north, 90 east), or null where the
+ * sample carries none. iOS's `webkitCompassHeading` is already that. Otherwise only an absolute event (absolute: true,
+ * as `deviceorientationabsolute` sends) counts: its alpha is the W3C rotation about the vertical, counter-clockwise
+ * seen from above with 0 when the top edge points north, so the heading is 360 − alpha (exact for any beta below 90°
+ * and any gamma: the top edge's horizontal part is (−sin α, cos α)·cos β in (east, north)).
+ */
+export function headingFromOrientation(e: OrientationSample | null | undefined): number | null {
+  if (!e) return null;
+  if (e.webkitCompassHeading != null && Number.isFinite(e.webkitCompassHeading) && e.webkitCompassHeading >= 0) return wrap360(e.webkitCompassHeading);
+  if (e.absolute !== true || e.alpha == null || !Number.isFinite(e.alpha)) return null;
+  return wrap360(360 - e.alpha);
+}
+
+/** The mean of compass headings (degrees) on the circle, so 359° and 1° average to 0°, not 180°; null for none. */
+export function meanHeadingDeg(headings: readonly number[]): number | null {
+  if (headings.length === 0) return null;
+  let s = 0;
+  let c = 0;
+  for (const h of headings) {
+    s += Math.sin((h * Math.PI) / 180);
+    c += Math.cos((h * Math.PI) / 180);
+  }
+  if (Math.hypot(s, c) < 1e-9 * headings.length) return null;
+  return wrap360((Math.atan2(s, c) * 180) / Math.PI);
+}
+
+/**
+ * A gradient in the phone's frame (x right edge, y top edge) turned into the green's frame (x east, y north), the top
+ * edge pointing `headingDeg` clockwise from north. The top edge is t = (sin H, cos H) in (east, north) and the right
+ * edge r = (cos H, −sin H) (a quarter turn clockwise of it), so g = g_x·r + g_y·t.
+ */
+export function phoneToNorthGradient(g: Gradient, headingDeg: number): [number, number] {
+  const h = (headingDeg * Math.PI) / 180;
+  const c = Math.cos(h);
+  const s = Math.sin(h);
+  return [g[0] * c + g[1] * s, -g[0] * s + g[1] * c];
+}

@@ -33,11 +33,12 @@ export async function staleTables(db: Db): Promise<string[]> {
 /** VACUUM ANALYZE every stale table; returns the tables done. */
 export async function analyzeStale(db: Db, logger?: Logger): Promise<string[]> {
   const stale = await staleTables(db);
+  const t = performance.now();
   for (const name of stale) {
     // Table names come from pg_class, quoted as identifiers.
     await db.execute(sql.raw(`vacuum (analyze) "${name.replace(/"/g, '""')}"`));
   }
-  if (stale.length > 0) logger?.debug({ tables: stale }, "planner statistics refreshed");
+  if (stale.length > 0) logger?.debug({ tables: stale, ms: Math.round(performance.now() - t) }, "planner statistics refreshed");
   return stale;
 }
 

@@ -2,7 +2,17 @@
 // for one (iOS: DeviceMotionEvent.requestPermission, from the tap itself), DeviceMotionEvent's
 // accelerationIncludingGravity first and DeviceOrientationEvent's beta/gamma where motion gives nothing, and
 // "held still for two seconds" readings (shared/phone-level.ts does the maths).
-import { STILL_RULES, stillReading, upFromMotion, upFromOrientation, type StillReading, type Vec3 } from "../../shared/phone-level";
+import {
+  STILL_RULES,
+  headingFromOrientation,
+  meanHeadingDeg,
+  stillReading,
+  upFromMotion,
+  upFromOrientation,
+  type OrientationSample,
+  type StillReading,
+  type Vec3,
+} from "../../shared/phone-level";
 
 /** Why there is no reading: no sensor API, not https, permission refused, nothing arrives, or the phone never settles. */
 export type TiltProblem = "unsupported" | "insecure" | "denied" | "no-readings" | "kept-moving";
@@ -13,6 +23,20 @@ const NO_READINGS_MS = 2500;
 const KEPT_MOVING_MS = 30_000;
 /** A turned or moved phone: an angle from the last reading's up above this counts as handled (or a shaken sample). */
 const MOVED_DEG = 1.5;
+
+/** A still reading with the compass heading of the phone's top edge over the same window (null: no compass). */
+export type HeadedReading = StillReading & { headingDeg: number | null };
+
+/** Why "top edge toward north" cannot be offered on this browser, or null where it can be tried. */
+export function compassUnavailableReason(): string | null {
+  if (typeof window === "undefined" || !("DeviceOrientationEvent" in window)) return "This browser gives no compass heading.";
+  const proto = (window as unknown as { DeviceOrientationEvent: { prototype: object } }).DeviceOrientationEvent.prototype;
+  if ("ondeviceorientationabsolute" in window || "webkitCompassHeading" in proto) return null;
+  return "This browser gives the phone's tilt but not a compass heading.";
+}
+
+export const NO_HEADING_WORDS =
+  "No compass heading came from this phone. Start over and lay the phone toward a fixed mark instead (or calibrate the compass in the phone's settings).";
 
 type PermissionApi = { requestPermission?: () => Promise<"granted" | "denied" | "default"> };
 
@@ -35,6 +59,9 @@ export class TiltSensor {
   private disturbed = false;
   private moveFrom: Vec3 | null = null;
   private started = false;
+  private headings: { t: number; h: number }[] = [];
+  /** The latest compass heading of the top edge (degrees clockwise from north), or null. */
+  latestHeading: number | null = null;
   /** Samples seen since start (any source), and the latest up vector. */
   count = 0;
   latest: Vec3 | null = null;
@@ -47,7 +74,17 @@ export class TiltSensor {
     this.push(t, up);
   };
 
+  private readonly onHeading = (e: DeviceOrientationEvent) => {
+    const h = headingFromOrientation(e as DeviceOrientationEvent & OrientationSample);
+    if (h === null) return;
+    const t = performance.now() / 1000;
+    this.latestHeading = h;
+    this.headings.push({ t, h });
+    while (this.headings.length > 0 && t - this.headings[0]!.t > STILL_RULES.windowS + 0.5) this.headings.shift();
+  };
+
   private readonly onOrientation = (e: DeviceOrientationEvent) => {
+    this.onHeading(e);
     const t = performance.now() / 1000;
     if (t - this.lastMotionT < 1 || e.beta == null || e.gamma == null) return;
     this.push(t, upFromOrientation(e.beta, e.gamma));
@@ -87,6 +124,7 @@ export class TiltSensor {
     }
     window.addEventListener("devicemotion", this.onMotion);
     window.addEventListener("deviceorientation", this.onOrientation);
+    window.addEventListener("deviceorientationabsolute", this.onHeading);
     this.started = true;
     return null;
   }
@@ -97,9 +135,17 @@ export class TiltSensor {
     this.samples = [];
   }
 
+  /** The mean compass heading over the last `spanS` seconds (the still reading's window), or null. */
+  private headingOver(spanS: number): number | null {
+    const now = performance.now() / 1000;
+    // No slack before the window: a heading from before the phone was laid down must not count.
+    return meanHeadingDeg(this.headings.filter((x) => now - x.t <= spanS).map((x) => x.h));
+  }
+
   stop() {
     window.removeEventListener("devicemotion", this.onMotion);
     window.removeEventListener("deviceorientation", this.onOrientation);
+    window.removeEventListener("deviceorientationabsolute", this.onHeading);
     this.started = false;
     this.listeners.clear();
   }
@@ -109,13 +155,13 @@ export class TiltSensor {
    * that reading, so the reading before a half turn or before walking on is not taken twice. `onSample` sees every
    * sample (to show the live spread); `signal` cancels.
    */
-  waitForStill(opts: { afterMove?: Vec3; signal?: AbortSignal; onSample?: (latest: Vec3 | null) => void } = {}): Promise<StillReading | TiltProblem | "cancelled"> {
+  waitForStill(opts: { afterMove?: Vec3; signal?: AbortSignal; onSample?: (latest: Vec3 | null) => void } = {}): Promise<HeadedReading | TiltProblem | "cancelled"> {
     this.samples = [];
     this.disturbed = !opts.afterMove;
     this.moveFrom = opts.afterMove ?? null;
     const startCount = this.count;
     return new Promise((resolve) => {
-      const done = (r: StillReading | TiltProblem | "cancelled") => {
+      const done = (r: HeadedReading | TiltProblem | "cancelled") => {
         this.listeners.delete(check);
         window.clearTimeout(noReadings);
         window.clearTimeout(keptMoving);
@@ -129,7 +175,7 @@ export class TiltSensor {
           return;
         }
         const r = stillReading(this.samples);
-        if (r) done(r);
+        if (r) done({ ...r, headingDeg: this.headingOver(r.spanS) });
       };
       const abort = () => done("cancelled");
       const noReadings = window.setTimeout(() => {

@@ -1,7 +1,7 @@
 import { useId, type InputHTMLAttributes, type ReactNode, type Ref } from "react";
 import clsx from "clsx";
 
-export type Choice = { value: string; label: string; description?: ReactNode };
+export type Choice = { value: string; label: string; description?: ReactNode; /** Shown but not choosable (say why in the description). */ disabled?: boolean };
 
 export type ChoiceGroupProps = {
   legend: ReactNode;
@@ -34,9 +34,10 @@ export function ChoiceGroup({ legend, choices, error, hint, inputProps, value, o
               key={choice.value}
               htmlFor={inputId}
               className={clsx(
-                "group relative flex min-h-14 cursor-pointer items-start gap-3 rounded-xl border-2 bg-white px-4 py-3 transition-colors",
+                "group relative flex min-h-14 items-start gap-3 rounded-xl border-2 bg-white px-4 py-3 transition-colors",
                 "has-checked:border-ink-900 has-checked:bg-ink-50 has-focus-visible:outline-3 has-focus-visible:outline-offset-2 has-focus-visible:outline-coral-500",
-                error ? "border-bad-600" : "border-ink-900/15 hover:border-ink-900/30",
+                choice.disabled ? "cursor-not-allowed border-dashed border-ink-900/15 bg-ink-50" : "cursor-pointer",
+                error ? "border-bad-600" : !choice.disabled && "border-ink-900/15 hover:border-ink-900/30",
               )}
             >
               <input
@@ -44,6 +45,7 @@ export function ChoiceGroup({ legend, choices, error, hint, inputProps, value, o
                 id={inputId}
                 type="radio"
                 value={choice.value}
+                disabled={choice.disabled || inputProps.disabled}
                 {...(value !== undefined ? { checked: value === choice.value, onChange: () => onValueChange?.(choice.value) } : null)}
                 aria-invalid={error ? true : undefined}
                 aria-describedby={described}

@@ -34,3 +34,14 @@ test("a browser without a tilt sensor (jsdom has none) is told so and stays on t
   expect(await screen.findByText(/gives no tilt readings|secure \(https\) address/)).toBeInTheDocument();
   expect(screen.getByRole("button", { name: "Start walking" })).toBeInTheDocument();
 });
+
+test("where the browser gives no compass heading (jsdom has the orientation event but no absolute one) the compass way is shown as unavailable with its reason, and the fixed mark stays chosen", async () => {
+  renderRoute(<WalkGreen greenId="g1" replacing={false} />, { at: "/greens/g1/map" });
+  const compass = screen.getByRole("radio", { name: /Any way round, by the compass/ });
+  expect(compass).toBeDisabled();
+  expect(screen.getByRole("radio", { name: /Top edge toward a fixed mark/ })).toBeChecked();
+  expect(screen.getByText(/Not available here: This browser gives the phone.s tilt but not a compass heading\./)).toBeInTheDocument();
+  await userEvent.setup().click(compass);
+  expect(screen.getByRole("radio", { name: /Top edge toward a fixed mark/ })).toBeChecked();
+  expect(screen.queryByText(/Compass caution/)).not.toBeInTheDocument();
+});

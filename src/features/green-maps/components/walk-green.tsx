@@ -1,28 +1,43 @@
-// "Map this green": walk a grid, lay the phone at every spot with its top edge toward a fixed mark, and the slopes
-// measured there become the green's height map (shared/gradient-map.ts, least squares), saved through the same
+// "Map this green": walk a grid, lay the phone at every spot with its top edge toward a fixed mark (or any way round,
+// the phone's compass telling which way: each reading is then turned to north with the heading at its spot,
+// shared/phone-level.ts phoneToNorthGradient), and the slopes measured there become the green's height map (shared/gradient-map.ts, least squares), saved through the same
 // route as an uploaded grid. The first spot is read twice (half a turn) to learn the phone's own tilt.
 import { useMemo, useRef, useState, type FormEvent } from "react";
 import clsx from "clsx";
 import { SUSPECT_RESIDUAL_PCT, WALK_LIMITS, heightsFromGradients, walkedHeightMap } from "../../../../shared/gradient-map";
-import { correctedGradient, halfTurn, slopeAndFallLine, type Gradient, type Vec3 } from "../../../../shared/phone-level";
+import { correctedGradient, halfTurn, phoneToNorthGradient, slopeAndFallLine, type Gradient, type Vec3 } from "../../../../shared/phone-level";
 import { parseDecimal } from "../../../../shared/units";
 import { useTiltSensor } from "../../../components/measure/use-tilt-sensor";
-import { Alert, Button, InputField, Spinner } from "../../../components/ui";
+import { Alert, Button, ChoiceGroup, InputField, Spinner } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
-import { TILT_PROBLEM_WORDS, isTiltProblem, type TiltProblem } from "../../../lib/tilt-sensor";
+import { NO_HEADING_WORDS, TILT_PROBLEM_WORDS, compassUnavailableReason, isTiltProblem, type TiltProblem } from "../../../lib/tilt-sensor";
 import { useSaveWalkedMap } from "../api/save-walked-map";
 
-type Grid = { nx: number; ny: number; spacingM: number };
+type Facing = "mark" | "north";
+type Grid = { nx: number; ny: number; spacingM: number; facing: Facing };
 type Stage = "setup" | "turn" | "walking" | "review";
+type WalkProblem = TiltProblem | "no-heading";
+
+const problemWords = (p: WalkProblem) => (p === "no-heading" ? NO_HEADING_WORDS : TILT_PROBLEM_WORDS[p]);
+
+/** 0° north, clockwise: the nearest of eight compass points, for "the top edge points 40° (north-east)". */
+function compassPoint(deg: number): string {
+  const names = ["north", "north-east", "east", "south-east", "south", "south-west", "west", "north-west"];
+  return names[Math.round(deg / 45) % 8]!;
+}
 
 /** Spot k's place in words: rows from the near edge, spots from the left. */
-function spotWords(k: number, nx: number): string {
-  return `row ${Math.floor(k / nx) + 1}, spot ${(k % nx) + 1} from the left`;
+function spotWords(k: number, nx: number, facing: Facing = "mark"): string {
+  const row = Math.floor(k / nx) + 1;
+  const spot = (k % nx) + 1;
+  return facing === "north" ? `row ${row} from the south, spot ${spot} from the west` : `row ${row}, spot ${spot} from the left`;
 }
 
 function nextStepWords(k: number, grid: Grid): string {
-  if (k === 0) return "Start at the near left corner.";
+  const north = grid.facing === "north";
+  if (k === 0) return north ? "Start at the south-west corner, facing north." : "Start at the near left corner.";
   const m = `${grid.spacingM.toFixed(1)} m`;
+  if (north) return k % grid.nx === 0 ? `Go back to the west edge and ${m} further north.` : `Walk ${m} east.`;
   return k % grid.nx === 0 ? `Go back to the left edge and ${m} further toward the mark.` : `Walk ${m} to the right.`;
 }
 
@@ -30,12 +45,15 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
   const sensor = useTiltSensor();
   const save = useSaveWalkedMap(greenId);
   const [text, setText] = useState({ nx: "3", ny: "3", spacing: "1.5" });
+  const [compassWhyNot] = useState(compassUnavailableReason);
+  const [facing, setFacing] = useState<Facing>("mark");
+  const [heading, setHeading] = useState<number | null>(null);
   const [setupErrors, setSetupErrors] = useState<Record<string, string>>({});
   const [grid, setGrid] = useState<Grid | null>(null);
   const [stage, setStage] = useState<Stage>("setup");
   const [current, setCurrent] = useState(0);
   const [readings, setReadings] = useState<(Gradient | null)[]>([]);
-  const [problem, setProblem] = useState<TiltProblem | null>(null);
+  const [problem, setProblem] = useState<WalkProblem | null>(null);
   const [waiting, setWaiting] = useState(false);
   const abort = useRef<AbortController | null>(null);
   const state = useRef<{ sensorTilt: Gradient; lastUp: Vec3 | null; readings: (Gradient | null)[] }>({ sensorTilt: [0, 0], lastUp: null, readings: [] });
@@ -57,11 +75,22 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
     abort.current = ctl;
     setProblem(null);
     const total = g.nx * g.ny;
+    let shown = 0;
+    // The compass heading under the phone, at most five times a second (for "the top edge points 40°").
+    const onSample = () => {
+      const now = performance.now();
+      if (g.facing !== "north" || now - shown < 200) return;
+      shown = now;
+      setHeading(sensor.latestHeading);
+    };
+    /** A reading's gradient in the map's frame: as read toward the mark, or turned to north by its own heading. */
+    const toMap = (gr: Gradient, headingDeg: number | null): Gradient | "no-heading" =>
+      g.facing === "mark" ? gr : headingDeg === null ? "no-heading" : phoneToNorthGradient(gr, headingDeg);
     for (let k = from; k < total; k++) {
       setCurrent(k);
       setStage("walking");
       setWaiting(true);
-      const first = await sensor.waitForStill({ afterMove: state.current.lastUp ?? undefined, signal: ctl.signal });
+      const first = await sensor.waitForStill({ afterMove: state.current.lastUp ?? undefined, signal: ctl.signal, onSample });
       if (first === "cancelled") return;
       if (isTiltProblem(first)) {
         setWaiting(false);
@@ -71,7 +100,7 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
       if (k === 0) {
         // The first spot twice: half a turn between, so the phone's own tilt is known for every later spot.
         setStage("turn");
-        const second = await sensor.waitForStill({ afterMove: first.up, signal: ctl.signal });
+        const second = await sensor.waitForStill({ afterMove: first.up, signal: ctl.signal, onSample });
         if (second === "cancelled") return;
         if (isTiltProblem(second)) {
           setWaiting(false);
@@ -81,10 +110,23 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
         const r = halfTurn(first.up, second.up);
         state.current.sensorTilt = r.sensorTilt;
         state.current.lastUp = second.up;
-        record(0, r.gradient);
+        // The half turn's gradient is in the first reading's frame, so it turns with the first reading's heading.
+        const mapped = toMap(r.gradient, first.headingDeg);
+        if (mapped === "no-heading") {
+          setWaiting(false);
+          setProblem(mapped);
+          return;
+        }
+        record(0, mapped);
       } else {
         state.current.lastUp = first.up;
-        record(k, correctedGradient(first.up, state.current.sensorTilt));
+        const mapped = toMap(correctedGradient(first.up, state.current.sensorTilt), first.headingDeg);
+        if (mapped === "no-heading") {
+          setWaiting(false);
+          setProblem(mapped);
+          return;
+        }
+        record(k, mapped);
       }
       if (only) break;
     }
@@ -110,7 +152,8 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
       setProblem(problemNow);
       return;
     }
-    const g = { nx: nx!, ny: ny!, spacingM: spacingM! };
+    const g: Grid = { nx: nx!, ny: ny!, spacingM: spacingM!, facing: compassWhyNot ? "mark" : facing };
+    setHeading(null);
     state.current = { sensorTilt: [0, 0], lastUp: null, readings: new Array<Gradient | null>(g.nx * g.ny).fill(null) };
     setReadings(state.current.readings);
     setGrid(g);
@@ -143,19 +186,49 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
         <h2 id="walk-heading" className="text-lg font-semibold tracking-tight">
           {replacing ? "Map it again by walking" : "Map this green by walking it"}
         </h2>
-        <p className="text-sm text-ink-700">
-          No survey needed: pick a fixed mark beyond the far side (the flag, a tree, a bunker&apos;s lip) and walk a grid of spots a pace or
-          two apart, starting at the near left corner. At every spot lay the phone flat with its top edge toward the mark and let go; it
-          reads the slope in two seconds. On the map, north is toward your mark.
-        </p>
+        {facing === "north" && !compassWhyNot ? (
+          <p className="text-sm text-ink-700">
+            No survey needed: walk a grid of spots a pace or two apart, rows running east and each row further north, starting at the
+            south-west corner. At every spot lay the phone flat any way round and let go; it reads the slope and the compass in two seconds
+            and turns the slope to north. On the map, north is the compass&apos;s north.
+          </p>
+        ) : (
+          <p className="text-sm text-ink-700">
+            No survey needed: pick a fixed mark beyond the far side (the flag, a tree, a bunker&apos;s lip) and walk a grid of spots a pace
+            or two apart, starting at the near left corner. At every spot lay the phone flat with its top edge toward the mark and let go;
+            it reads the slope in two seconds. On the map, north is toward your mark.
+          </p>
+        )}
         <div className="grid grid-cols-3 gap-3">
           <InputField label="Across" hint="Spots a row" inputMode="numeric" value={text.nx} onChange={(e) => setText((t) => ({ ...t, nx: e.target.value }))} error={setupErrors.nx} />
-          <InputField label="Rows" hint="Toward the mark" inputMode="numeric" value={text.ny} onChange={(e) => setText((t) => ({ ...t, ny: e.target.value }))} error={setupErrors.ny} />
+          <InputField label="Rows" hint={facing === "north" && !compassWhyNot ? "Northward" : "Toward the mark"} inputMode="numeric" value={text.ny} onChange={(e) => setText((t) => ({ ...t, ny: e.target.value }))} error={setupErrors.ny} />
           <InputField label="Apart (m)" hint="A pace or two" inputMode="decimal" value={text.spacing} onChange={(e) => setText((t) => ({ ...t, spacing: e.target.value }))} error={setupErrors.spacing} />
         </div>
+        <ChoiceGroup
+          legend="Which way the phone lies"
+          inputProps={{ name: "walk-facing" }}
+          value={compassWhyNot ? "mark" : facing}
+          onValueChange={(v) => setFacing(v as Facing)}
+          choices={[
+            { value: "mark", label: "Top edge toward a fixed mark", description: "Works on every phone: the flag, a tree, a bunker's lip." },
+            {
+              value: "north",
+              label: "Any way round, by the compass",
+              disabled: compassWhyNot !== null,
+              description: compassWhyNot
+                ? `Not available here: ${compassWhyNot}`
+                : "The phone's compass says which way it lay at each spot; rows run east, the grid grows north.",
+            },
+          ]}
+          hint={
+            !compassWhyNot && facing === "north"
+              ? "Compass caution: near metal (a cart, a sprinkler head) or with a magnet in the phone's case the heading can be off by several degrees, and so can the fall line."
+              : undefined
+          }
+        />
         {problem ? (
           <Alert tone="info" title="No measurement">
-            {TILT_PROBLEM_WORDS[problem]}
+            {problemWords(problem)}
           </Alert>
         ) : null}
         <div>
@@ -180,7 +253,7 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
       <div aria-live="polite" className="flex flex-col gap-2 text-sm text-ink-800">
         {problem ? (
           <Alert tone={problem === "kept-moving" ? "warning" : "info"} title="No reading">
-            {TILT_PROBLEM_WORDS[problem]}
+            {problemWords(problem)}
           </Alert>
         ) : stage === "turn" ? (
           <p>
@@ -188,14 +261,25 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
             teaches Borrowline the phone&apos;s own tilt, once for the whole walk.
           </p>
         ) : stage === "walking" ? (
-          <p>
-            {nextStepWords(current, grid)} Lay the phone flat at {spotWords(current, grid.nx)}, top edge toward the mark, and let go.
-          </p>
+          grid.facing === "north" ? (
+            <>
+              <p>
+                {nextStepWords(current, grid)} Lay the phone flat at {spotWords(current, grid.nx, "north")}, any way round, and let go.
+              </p>
+              <p className="text-ink-600">
+                {heading === null ? "Waiting for the compass…" : `The phone's top edge points ${heading.toFixed(0)}° (${compassPoint(heading)}).`}
+              </p>
+            </>
+          ) : (
+            <p>
+              {nextStepWords(current, grid)} Lay the phone flat at {spotWords(current, grid.nx)}, top edge toward the mark, and let go.
+            </p>
+          )
         ) : fit ? (
           <p>
             {total} spots walked. The heights fit the slopes to {fit.rmsResidualPct.toFixed(2)} % on average
             {residual && residual.some((r) => r > SUSPECT_RESIDUAL_PCT)
-              ? `; the spots marked below disagree with their neighbours by more than ${SUSPECT_RESIDUAL_PCT} %: measure them again (a tuft, a ball mark, or the phone not toward the mark).`
+              ? `; the spots marked below disagree with their neighbours by more than ${SUSPECT_RESIDUAL_PCT} %: measure them again (a tuft, a ball mark, or ${grid.facing === "north" ? "a compass pulled off by metal nearby" : "the phone not toward the mark"}).`
               : "; no spot disagrees with its neighbours."}
           </p>
         ) : null}
@@ -244,6 +328,7 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
       </div>
       <p className="text-sm text-ink-500">
         Between the spots the map is smooth: a ridge or hollow smaller than the spacing is not in it. Grain and wind are not either.
+        {grid.facing === "north" ? " North on this map is the compass's, which metal nearby can pull off by several degrees." : ""}
       </p>
     </section>
   );
@@ -266,7 +351,7 @@ function WalkGrid({
   const rows = Array.from({ length: grid.ny }, (_, r) => grid.ny - 1 - r);
   return (
     <div className="overflow-x-auto">
-      <table className="border-separate border-spacing-1 text-xs" aria-label="Walked spots, the row toward the mark first">
+      <table className="border-separate border-spacing-1 text-xs" aria-label={grid.facing === "north" ? "Walked spots, the north row first" : "Walked spots, the row toward the mark first"}>
         <tbody>
           {rows.map((j) => (
             <tr key={j}>
@@ -287,7 +372,7 @@ function WalkGrid({
                       <button
                         type="button"
                         className={clsx(cell, "w-full focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500")}
-                        aria-label={`${spotWords(k, grid.nx)}: slope ${label}, misfit ${res?.toFixed(1) ?? "?"} %${suspect ? ", worth measuring again" : ""}. Measure it again.`}
+                        aria-label={`${spotWords(k, grid.nx, grid.facing)}: slope ${label}, misfit ${res?.toFixed(1) ?? "?"} %${suspect ? ", worth measuring again" : ""}. Measure it again.`}
                         onClick={() => onRedo(k)}
                       >
                         <span>{label}</span>
@@ -296,7 +381,7 @@ function WalkGrid({
                     ) : (
                       <div className={cell}>
                         <span aria-hidden="true">{label}</span>
-                        <span className="sr-only">{`${spotWords(k, grid.nx)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}</span>
+                        <span className="sr-only">{`${spotWords(k, grid.nx, grid.facing)}: ${g ? label : k === current ? "measuring now" : "not yet"}`}</span>
                       </div>
                     )}
                   </td>
