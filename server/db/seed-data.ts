@@ -31,7 +31,7 @@ export const DEMO_SQUAD = { name: "Larkspur juniors", description: "Saturday-mor
 export const DEMO_LADDERS: LadderInput[] = [
   {
     name: "Three-to-nine",
-    description: "Short putts that must be holed: three feet up to nine, every rung pass before moving back.",
+    description: "Short putts that must be holed, shortest first: pass every rung before moving back.",
     failRule: "drop-one",
     rungs: [3, 4, 5, 6, 7, 8, 9].map((ft) => ({
       distanceM: Math.round(ft * FOOT_M * 100) / 100,

@@ -85,6 +85,8 @@ export const greenSummarySchema = z.object({
   mine: z.boolean(),
   /** The latest reading's Stimp (by measuredOn, then by when it was entered); null without readings. */
   currentStimpFt: z.number().nullable(),
+  /** True once a height map is uploaded or walked: GET /api/greens/:id/height-map answers it (a 404 before). */
+  hasHeightMap: z.boolean(),
   createdAt: timestampSchema,
 });
 export type GreenSummary = z.output<typeof greenSummarySchema>;

@@ -222,3 +222,25 @@ test("PUT /api/greens/:id/height-map with walked: true stores a walked map (sour
   const plain = await put(a.client, id, { kind: "grid", spacingM: 2, heightsM });
   expect(plain.body).toMatchObject({ source: "grid", spotCount: null });
 });
+
+test("the green's answer (one green and the list) says hasHeightMap: false before a map is PUT, true after, false once deleted", async () => {
+  const a = await signedUpClient(server);
+  const id = await greenOf(a.id, "Practice green");
+  const flags = async () => {
+    const one = await a.client.get(`/api/greens/${id}`);
+    const list = await a.client.get("/api/greens");
+    expect(one.status).toBe(200);
+    expect(list.status).toBe(200);
+    return [one.body.hasHeightMap, list.body.items.find((g: { id: string }) => g.id === id).hasHeightMap];
+  };
+  expect(await flags()).toEqual([false, false]);
+  const heightsM = [
+    [0.02, 0.01, 0],
+    [0.02, 0.01, 0],
+    [0.02, 0.01, 0],
+  ];
+  expect((await put(a.client, id, { kind: "grid", spacingM: 1, originM: [0, 0], heightsM })).status).toBe(200);
+  expect(await flags()).toEqual([true, true]);
+  expect((await a.client.delete(`/api/greens/${id}/height-map`)).status).toBe(204);
+  expect(await flags()).toEqual([false, false]);
+});

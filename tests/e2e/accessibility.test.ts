@@ -7,7 +7,7 @@ import type { Page } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { DEMO_ADMIN, DEMO_COACH, DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
 import type { TestServer } from "../setup/server";
-import { DESKTOP, PHONE, openBrowser, refusedStatus, type Browser, startAppServer, signInWithForm } from "./harness";
+import { DESKTOP, PHONE, openBrowser, type Browser, startAppServer, signInWithForm } from "./harness";
 
 let server: TestServer;
 beforeAll(async () => {
@@ -126,8 +126,6 @@ for (const { size, viewport, people } of RUNS) {
     }
     for (const [email, visits] of people) {
       const b = await openBrowser(viewport);
-      // A coach's green with no map yet: the API answers 404 for its map, which the page reads as "no map".
-      b.allow(refusedStatus(404));
       try {
         await signInWithForm(b.page, server.url, email, DEMO_PASSWORD);
         if (visits === PLAYER) await logRound(b.page);

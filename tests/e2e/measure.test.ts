@@ -135,12 +135,13 @@ test("map this green: a 3 × 3 walk with synthetic readings is saved as the gree
     await screenshot(page, "walk-phone-setup");
     await installFeeder(page);
     await page.getByLabel("Apart (m)").fill("1.5");
-    await page.getByRole("button", { name: "Start walking" }).click();
-
-    // A plane rising 1 % to the right and falling 1.5 % toward the mark: the same gradient at every spot.
+    // A plane rising 1 % to the right and falling 1.5 % toward the mark: the same gradient at every spot. The phone
+    // lies on spot 1 before Start: the walk says "no readings" after 2.5 s without any, and on a loaded machine the
+    // round trip from the "Spot 1" heading to a feed could take longer (the race behind a failed run, issue 18).
     const [gx, gy] = [0.01, -0.015];
-    await page.getByRole("heading", { name: "Spot 1 of 9" }).waitFor();
     await feed(page, lying(gx, gy), false);
+    await page.getByRole("button", { name: "Start walking" }).click();
+    await page.getByRole("heading", { name: "Spot 1 of 9" }).waitFor();
     await page.getByText("Now turn the phone half a turn").waitFor();
     await feed(page, lying(-gx, -gy));
     for (let k = 2; k <= 9; k++) {
@@ -165,7 +166,7 @@ test("map this green: a 3 × 3 walk with synthetic readings is saved as the gree
     // 3 m each way = 0.03 − 0.045 = −0.015 m (hand-computed), to 1 mm after the sensor's tilt is taken out.
     expect(map.heightsM[0][2] - map.heightsM[2][0]).toBeCloseTo(-0.015, 3);
     await screenshot(page, "walk-phone-saved");
-    browser.allow(refusedStatus(401, 404));
+    browser.allow(refusedStatus(401));
     expect(browser.unexpected()).toEqual([]);
   } finally {
     await browser.close();
@@ -184,7 +185,6 @@ test("map this green by the compass: a 3 × 3 walk with the phone laid a differe
     await screenshot(page, "walk-compass-setup");
     await installFeeder(page);
     await page.getByLabel("Apart (m)").fill("1.5");
-    await page.getByRole("button", { name: "Start walking" }).click();
 
     // The plane in the green's frame (x east, y north): falling 1.2 % to the east, rising 1.8 % to the north.
     const [gE, gN] = [-0.012, 0.018];
@@ -194,8 +194,10 @@ test("map this green by the compass: a 3 × 3 walk with the phone laid a differe
     const seen = (H: number): [number, number] => [gE * Math.cos(H * DEG) - gN * Math.sin(H * DEG), gE * Math.sin(H * DEG) + gN * Math.cos(H * DEG)];
     /** W3C alpha turns counter-clockwise seen from above, 0 with the top edge north: alpha = 360 − heading. */
     const alphaOf = (H: number) => (360 - H) % 360;
-    await page.getByRole("heading", { name: "Spot 1 of 9" }).waitFor();
+    // On spot 1 before Start, as in the walk above ("no readings" after 2.5 s without any).
     await feed(page, lying(...seen(HEADINGS[0]!)), false, alphaOf(HEADINGS[0]!));
+    await page.getByRole("button", { name: "Start walking" }).click();
+    await page.getByRole("heading", { name: "Spot 1 of 9" }).waitFor();
     await page.getByText("Now turn the phone half a turn").waitFor();
     await feed(page, lying(...seen(HEADINGS[0]! + 180)), true, alphaOf(HEADINGS[0]! + 180));
     for (let k = 2; k <= 9; k++) {
@@ -231,7 +233,7 @@ test("map this green by the compass: a 3 × 3 walk with the phone laid a differe
     // turn's second-order remainder of the 0.3° sensor tilt and the slope-squared tilt of the phone's plane).
     expect(slopeGap).toBeLessThan(0.05);
     expect(fallGap).toBeLessThan(1);
-    browser.allow(refusedStatus(401, 404));
+    browser.allow(refusedStatus(401));
     expect(browser.unexpected()).toEqual([]);
   } finally {
     await browser.close();

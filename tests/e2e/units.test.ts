@@ -6,7 +6,7 @@ import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { DEMO_COACH, DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
 import type { TestServer } from "../setup/server";
-import { DESKTOP, PHONE, openBrowser, signInWithForm, startAppServer } from "./harness";
+import { DESKTOP, PHONE, openBrowser, screenshot, signInWithForm, startAppServer } from "./harness";
 
 let server: TestServer;
 beforeAll(async () => {
@@ -121,8 +121,7 @@ test("signed in: metres chosen on the account page are kept on every page of a p
   }
 }, 240_000);
 
-// Skipped until fixed: its last run found "18 in" on the coach's /ladders page in metres (not yet traced; issue 18).
-test.skip("signed in: metres chosen on the account page are kept on every page of a coach", async () => {
+test("signed in: metres chosen on the account page are kept on every page of a coach", async () => {
   const coach = await openBrowser(DESKTOP);
   try {
     const c = coach.page;
@@ -143,6 +142,10 @@ test.skip("signed in: metres chosen on the account page are kept on every page o
       { path: "/greens", lengths: false },
       { path: "/greens", link: /^\/greens\/[0-9a-f-]{36}$/, lengths: false },
     ]);
+    // The ladder library in metres on a phone, to look at.
+    await c.setViewportSize(PHONE);
+    await visit(c, { path: "/ladders", lengths: true });
+    await screenshot(c, "units-coach-ladders-phone-metric");
   } finally {
     await coach.close();
   }

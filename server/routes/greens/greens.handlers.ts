@@ -24,11 +24,15 @@ const currentStimp = sql<
   number | null
 >`(select "stimp_readings"."stimp_ft" from "stimp_readings" where "stimp_readings"."green_id" = "greens"."id" order by "stimp_readings"."measured_on" desc, "stimp_readings"."created_at" desc limit 1)`;
 
+// A column of the row itself: no subquery and no second round trip, for one green or a list of them.
+const hasHeightMap = sql<boolean>`("greens"."height_map" is not null)`;
+
 const summaryColumns = {
   id: greens.id,
   name: greens.name,
   locationNote: greens.locationNote,
   currentStimpFt: currentStimp,
+  hasHeightMap,
   createdAt: greens.createdAt,
   ownerId: greens.ownerId,
   ownerName: user.name,
@@ -41,6 +45,7 @@ type SummaryRow = {
   name: string;
   locationNote: string | null;
   currentStimpFt: number | null;
+  hasHeightMap: boolean;
   createdAt: Date;
   ownerId: string;
   ownerName: string;
@@ -53,6 +58,7 @@ function toSummary(row: SummaryRow, meId: string): GreenSummary {
   return {
     ...rest,
     currentStimpFt: row.currentStimpFt === null ? null : Number(row.currentStimpFt),
+    hasHeightMap: Boolean(row.hasHeightMap),
     createdAt: row.createdAt.toISOString(),
     squad: squadId && squadName !== null ? { id: squadId, name: squadName } : null,
     mine: ownerId === meId,

@@ -4,7 +4,8 @@ import type { Ladder, LadderInput } from "../../../shared/schemas/ladders";
 import { feetToMetres } from "../../../shared/units";
 
 // Rungs are set in whole feet, the lengths a golfer says ("3 ft to 6 ft"), stored in metres like every length;
-// metres rounded from feet would read as "2 ft 11 in to 5 ft 11 in" (issue 14).
+// metres rounded from feet would read as "2 ft 11 in to 5 ft 11 in" (issue 14). Descriptions and notes are fixed
+// text shown in whichever units the reader chose, so they name no length in a unit (issue 18: "18 in" in metres).
 
 const builtIn = (id: string, ladder: LadderInput): Ladder => ({
   id,
@@ -31,7 +32,7 @@ export const BUILT_IN_LADDERS: readonly Ladder[] = [
   builtIn("b0a7c1e0-0000-4000-8000-000000000002", {
     name: "Pace ladder",
     description:
-      "Mid-range putts rolled at a pace that would finish about 18 in (45 cm) past the hole. The rungs get longer and need fewer holed; a failed rung sends you down one.",
+      "Mid-range putts rolled at a pace that would finish about half a putter's length past the hole. The rungs get longer and need fewer holed; a failed rung sends you down one.",
     failRule: "drop-one",
     rungs: [
       { distanceM: feetToMetres(10), balls: 6, passRule: { kind: "make", made: 2 } },

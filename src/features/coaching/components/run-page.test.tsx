@@ -248,3 +248,21 @@ test("the top rung passed shows the completed screen", async () => {
   expect(screen.getByText(/All 2 rungs passed in 3 putts, without missing a rung/)).toBeInTheDocument();
   await waitFor(() => expect(stored).toEqual([true, true, true]));
 });
+
+// Issue 18 (keyboard use): the last Holed goes with its rung; the focus fell to <body>.
+test("by keyboard, the last putt puts the focus on 'Ladder completed', and Undo there hands it to the reopened rung's Undo", async () => {
+  const user = userEvent.setup();
+  renderRun();
+  await screen.findByText("3 ft");
+  for (let i = 0; i < 3; i++) {
+    screen.getByRole("button", { name: "Holed" }).focus();
+    await user.keyboard("{Enter}");
+  }
+  const heading = screen.getByRole("heading", { name: "Ladder completed" });
+  await waitFor(() => expect(heading).toHaveFocus());
+  await waitFor(() => expect(stored).toEqual([true, true, true]));
+  screen.getByRole("button", { name: "Undo last putt (reopens the ladder)" }).focus();
+  await user.keyboard("{Enter}");
+  await waitFor(() => expect(screen.getByRole("button", { name: "Undo last putt" })).toHaveFocus());
+  await waitFor(() => expect(stored).toEqual([true, true]));
+});

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import clsx from "clsx";
 import { step } from "../../../../shared/ladder-engine";
 import type { AssignmentDetail } from "../../../../shared/schemas/assignments";
@@ -51,14 +51,21 @@ function Stat({ label, value }: { label: string; value: number }) {
   );
 }
 
-function Completed({ assignment, run }: { assignment: AssignmentDetail; run: LadderRun }) {
+type CompletedProps = { assignment: AssignmentDetail; run: LadderRun; onUndo: () => void; undoing: boolean; readOnly: boolean };
+
+function Completed({ assignment, run, onUndo, undoing, readOnly }: CompletedProps) {
   const p = run.progress!;
   const failed = p.history.filter((h) => h.result === "failed").length;
+  // The last putt's Holed button is gone with the rung: the focus goes to this heading, not to <body> (keyboard use).
+  const heading = useRef<HTMLHeadingElement>(null);
+  useEffect(() => heading.current?.focus(), []);
   return (
     <div className="flex flex-col gap-5">
       <section aria-live="polite" className="rounded-(--radius-card) bg-ok-600 p-6 text-center text-white">
         <p className="text-sm font-semibold tracking-wide uppercase">{assignment.ladder.name}</p>
-        <h1 className="mt-2 text-4xl font-semibold tracking-tight">Ladder completed</h1>
+        <h1 ref={heading} tabIndex={-1} className="mt-2 text-4xl font-semibold tracking-tight focus:outline-none">
+          Ladder completed
+        </h1>
         <p className="mt-2 text-lg">
           All {assignment.ladder.rungs.length} rungs passed in {p.puttsTaken} putts
           {failed > 0 ? `, with ${failed} missed rung${failed === 1 ? "" : "s"} on the way` : ", without missing a rung"}.
@@ -69,9 +76,11 @@ function Completed({ assignment, run }: { assignment: AssignmentDetail; run: Lad
         <ButtonLink to={paths.myLadders.href()} size="lg">
           Back to my ladders
         </ButtonLink>
-        <Button variant="ghost" size="lg" onClick={() => void run.undo()}>
-          Undo last putt (reopens the ladder)
-        </Button>
+        {readOnly ? null : (
+          <Button variant="ghost" size="lg" onClick={onUndo} pending={undoing}>
+            Undo last putt (reopens the ladder)
+          </Button>
+        )}
       </div>
     </div>
   );
@@ -80,6 +89,9 @@ function Completed({ assignment, run }: { assignment: AssignmentDetail; run: Lad
 function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDetail; run: LadderRun; units: UnitSystem; readOnly: boolean }) {
   const [moment, setMoment] = useState<(Moment & { n: number }) | null>(null);
   const [undoing, setUndoing] = useState(false);
+  // Undo on the completed screen reopens the ladder: its own Undo button takes the focus the reopened one had.
+  const focusUndo = useRef(false);
+  const undoButton = useRef<HTMLButtonElement>(null);
   const p = run.progress!;
   const ladder = assignment.ladder;
   const rung = ladder.rungs[p.rungIndex]!;
@@ -102,7 +114,19 @@ function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDe
     }
   };
 
-  if (p.completed) return <Completed assignment={assignment} run={run} />;
+  useEffect(() => {
+    if (p.completed || !focusUndo.current) return;
+    focusUndo.current = false;
+    undoButton.current?.focus();
+  }, [p.completed]);
+
+  if (p.completed) {
+    const reopen = () => {
+      focusUndo.current = true;
+      void undo();
+    };
+    return <Completed assignment={assignment} run={run} onUndo={reopen} undoing={undoing} readOnly={readOnly} />;
+  }
 
   return (
     <div className="flex flex-col gap-4">
@@ -160,7 +184,7 @@ function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDe
 
       <div className="flex flex-wrap items-center justify-between gap-3 border-t border-ink-900/10 pt-3">
         {readOnly ? <span /> : (
-          <Button variant="ghost" onClick={() => void undo()} aria-disabled={p.puttsTaken === 0 || undefined} pending={undoing}>
+          <Button ref={undoButton} variant="ghost" onClick={() => void undo()} aria-disabled={p.puttsTaken === 0 || undefined} pending={undoing}>
             Undo last putt
           </Button>
         )}

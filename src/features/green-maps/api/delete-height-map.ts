@@ -12,6 +12,10 @@ export function useDeleteHeightMap(greenId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => deleteHeightMap(greenId),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: greenMapsKeys.green(greenId) }),
+    // The map is gone: say so at once (no GET that would 404), then ask the green again, whose hasHeightMap turns false.
+    onSuccess: () => {
+      queryClient.setQueryData(greenMapsKeys.heightMap(greenId), null);
+      return queryClient.invalidateQueries({ queryKey: greenMapsKeys.details(greenId) });
+    },
   });
 }

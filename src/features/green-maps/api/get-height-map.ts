@@ -4,7 +4,10 @@ import { apiPaths } from "../../../config/paths";
 import { api, ApiError } from "../../../lib/api-client";
 import { greenMapsKeys } from "./keys";
 
-/** GET /api/greens/:id/height-map. A green without a map answers null (the API's 404 for the map), not an error. */
+/**
+ * GET /api/greens/:id/height-map. Asked only for a green whose answer says `hasHeightMap` (useHeightMap), so a green
+ * without a map costs no request and no 404; a map deleted meanwhile still answers null (the API's 404), not an error.
+ */
 export async function getHeightMap(greenId: string, signal?: AbortSignal): Promise<HeightMapResponse | null> {
   try {
     return await api.get<HeightMapResponse>(apiPaths.greenHeightMap(greenId), { signal });
@@ -14,14 +17,16 @@ export async function getHeightMap(greenId: string, signal?: AbortSignal): Promi
   }
 }
 
-export function heightMapQueryOptions(greenId: string) {
+export function heightMapQueryOptions(greenId: string, hasHeightMap: boolean) {
   return queryOptions({
     queryKey: greenMapsKeys.heightMap(greenId),
     queryFn: ({ signal }) => getHeightMap(greenId, signal),
+    enabled: hasHeightMap,
     meta: { errorToast: false },
   });
 }
 
-export function useHeightMap(greenId: string) {
-  return useQuery(heightMapQueryOptions(greenId));
+/** The green's map once its answer says it has one (`hasHeightMap` from GET /api/greens/:id); idle before. */
+export function useHeightMap(greenId: string, hasHeightMap: boolean) {
+  return useQuery(heightMapQueryOptions(greenId, hasHeightMap));
 }

@@ -19,7 +19,7 @@ const me = {
   user: { id: "u1", name: "Ivo", email: "ivo@example.com", role: "player", emailVerified: true },
   preferences: { units: "metric" },
 };
-const green = { id: GREEN_ID, name: "Top green", locationNote: null, currentStimpFt: 9.5, createdAt: "2026-01-01T00:00:00Z", squad: null, ownerName: "Test Golfer", mine: true, readings: [] };
+const green = { id: GREEN_ID, name: "Top green", locationNote: null, currentStimpFt: 9.5, createdAt: "2026-01-01T00:00:00Z", squad: null, ownerName: "Test Golfer", mine: true, hasHeightMap: true, readings: [] };
 // A 12 m × 12 m plane falling to the east, 5 × 5 heights 3 m apart, origin at (0, 0).
 const heightsM = Array.from({ length: 5 }, () => [0.12, 0.09, 0.06, 0.03, 0]);
 const heightMap = {
@@ -199,4 +199,32 @@ test("the map draws slope as equal ticks along the fall line, coloured by steepn
   expect(svg.querySelector("marker")).toBeNull();
   const key = screen.getAllByRole("list", { name: "Slope colours" })[0]!;
   expect(within(key).getAllByRole("listitem").map((li) => li.textContent)).toEqual(["under 1 %", "1–2 %", "2–3 %", "3 % or more"]);
+});
+
+test("a green without a map asks for none; after an upload the green is asked again and its map drawn at once", async () => {
+  let stored = false;
+  const gets: string[] = [];
+  network.use(
+    meAnswer(me),
+    http.get(`/api/greens/${GREEN_ID}`, () => {
+      gets.push("green");
+      return HttpResponse.json({ ...green, hasHeightMap: stored });
+    }),
+    http.get(`/api/greens/${GREEN_ID}/height-map`, () => {
+      gets.push("map");
+      return stored ? HttpResponse.json(heightMap) : apiError(404, "not_found", "That green has no height map");
+    }),
+    http.put(`/api/greens/${GREEN_ID}/height-map`, () => {
+      stored = true;
+      return HttpResponse.json({ nx: 5, ny: 5, spacingM: 3, originM: [0, 0], widthM: 12, depthM: 12, minHeightM: 0, maxHeightM: 0.12, maxSlopePct: 1, source: "grid", spotCount: null });
+    }),
+  );
+  renderRoute(<GreenMapPage greenId={GREEN_ID} />, { at: "/greens/x/map" });
+  expect(await screen.findByRole("button", { name: "Upload height map" })).toBeInTheDocument();
+  expect(gets).toEqual(["green"]);
+
+  await userEvent.upload(screen.getByLabelText("CSV file"), new File(["0,0\n0,0\n"], "flat.csv", { type: "text/csv" }));
+  await userEvent.click(screen.getByRole("button", { name: "Upload height map" }));
+  expect(await screen.findByTestId("surface-map")).toBeInTheDocument();
+  expect(gets).toEqual(["green", "green", "map"]);
 });

@@ -1,11 +1,10 @@
 // A green's height map: upload it, see its summary, tap the ball and the hole on the map, and get the read on that
 // real surface (POST /api/greens/:id/reads/solve), drawn on the map and in 3D.
 import type { HeightMapResponse } from "../../../../shared/schemas/height-map";
-import { type UnitSystem } from "../../../../shared/units";
 import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
-import { useMe } from "../../auth/api/get-me";
+import { useUnits } from "../../auth/hooks/use-units";
 import { useGreen } from "../api/get-green";
 import { useHeightMap } from "../api/get-height-map";
 import { HeightMapUpload } from "./height-map-upload";
@@ -13,12 +12,14 @@ import { WalkGreen } from "./walk-green";
 import { MapWorkspace } from "./map-workspace";
 
 export function GreenMapPage({ greenId }: { greenId: string }) {
-  const me = useMe();
-  const units: UnitSystem = me.data?.preferences.units ?? "imperial";
+  const { units } = useUnits();
   const green = useGreen(greenId);
-  const map = useHeightMap(greenId);
+  // Asked only once the green says it has a map: a green without one makes no request (and no 404 in the console).
+  const hasMap = green.data?.hasHeightMap ?? false;
+  const map = useHeightMap(greenId, hasMap);
+  const mapData = hasMap ? (map.data ?? null) : null;
 
-  if (green.isPending || map.isPending) return <PageSpinner label="Getting the green" />;
+  if (green.isPending || (hasMap && map.isPending)) return <PageSpinner label="Getting the green" />;
   if (green.isError && isApiError(green.error) && green.error.status === 404) {
     return (
       <>
@@ -27,14 +28,14 @@ export function GreenMapPage({ greenId }: { greenId: string }) {
       </>
     );
   }
-  const failed = green.error ?? map.error;
+  const failed = green.error ?? (hasMap ? map.error : null);
   if (failed) {
     return (
       <Alert
         tone="error"
         title="Could not load the green"
         action={
-          <Button size="sm" variant="secondary" onClick={() => void Promise.all([green.refetch(), map.refetch()])}>
+          <Button size="sm" variant="secondary" onClick={() => void Promise.all([green.refetch(), hasMap ? map.refetch() : null])}>
             Try again
           </Button>
         }
@@ -55,7 +56,7 @@ export function GreenMapPage({ greenId }: { greenId: string }) {
         eyebrow="Green map"
         title={name}
         description={
-          map.data
+          mapData
             ? "Tap where the ball lies and where the hole is cut; the read is rolled on this green's own surface."
             : canEdit
               ? "Walk the green with your phone, or upload a surveyed height map, to read putts on its real surface, bumps and all."
@@ -67,8 +68,8 @@ export function GreenMapPage({ greenId }: { greenId: string }) {
           </ButtonLink>
         }
       />
-      {map.data ? (
-        <MapWorkspace key={mapIdentity(map.data)} greenId={greenId} map={map.data} units={units} greenStimpFt={stimpFt} canEdit={canEdit} />
+      {mapData ? (
+        <MapWorkspace key={mapIdentity(mapData)} greenId={greenId} map={mapData} units={units} greenStimpFt={stimpFt} canEdit={canEdit} />
       ) : !canEdit ? null : (
         <div className="flex flex-col gap-6">
           <Card id="map-by-walking">

@@ -8,7 +8,16 @@ import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useUnits } from "../../auth/hooks/use-units";
 import { useAdoptPlan, usePracticePlan, useStartPlan } from "../api/practice-plan";
-import { bandLabel, bandVerdict, FAIL_RULE_TEXT, passRuleText, pct, rateWithRange, strokesWords } from "../utils/plan-words";
+import {
+  bandLabel,
+  bandVerdict,
+  planLadderName,
+  FAIL_RULE_TEXT,
+  passRuleText,
+  pct,
+  rateWithRange,
+  strokesWords,
+} from "../utils/plan-words";
 import { H, td, th, type Level, type Mode } from "./plan-view-parts";
 import { WeeklyCheck } from "./weekly-check";
 
@@ -70,9 +79,7 @@ function ProposedPlan({ plan, units, level, playerName }: { plan: PlanReady; uni
       <Card>
         <H level={level}>Where your strokes go</H>
         <p className="mt-2 text-ink-700">
-          {playerName
-            ? `Work on ${plan.targets.map((i) => bandLabel(plan.bands[i]!, units)).join(" and ")}: that is where ${playerName} loses the most strokes a round against the tour, and the loss is clear of its interval.`
-            : plan.message}
+          {`Work on ${plan.targets.map((i) => bandLabel(plan.bands[i]!, units)).join(" and ")}: that is where ${playerName ?? "you"} ${playerName ? "loses" : "lose"} the most strokes a round against the tour, and the loss is clear of its interval.`}
         </p>
         <ul className="mt-3 flex flex-col gap-2">
           {targets.map((b) => (
@@ -87,7 +94,7 @@ function ProposedPlan({ plan, units, level, playerName }: { plan: PlanReady; uni
       <div className="grid gap-4 lg:grid-cols-2">
         <Card>
           <H level={level}>The ladder</H>
-          <p className="mt-1 text-sm text-ink-600">{plan.ladder.name}</p>
+          <p className="mt-1 text-sm text-ink-600">{planLadderName(plan, units)}</p>
           <ol className="mt-3 flex flex-col gap-1.5" aria-label="Rungs of the plan's ladder">
             {plan.ladder.rungs.map((r, i) => (
               <li key={i} className="flex flex-wrap items-baseline justify-between gap-2 rounded-lg bg-ink-900/5 px-3 py-2">

@@ -4,7 +4,7 @@ import type { ActivePlan } from "../../../../shared/schemas/practice-plan";
 import { type UnitSystem } from "../../../../shared/units";
 import { ButtonLink, Card, TableScroller } from "../../../components/ui";
 import { paths } from "../../../config/paths";
-import { bandLabel, MOVE_TEXT, rateWithRange } from "../utils/plan-words";
+import { bandLabel, MOVE_TEXT, planLadderName, rateWithRange } from "../utils/plan-words";
 import { H, type Level, type Mode, td, th } from "./plan-view-parts";
 
 export function WeeklyCheck({ active, units, mode, level }: { active: ActivePlan; units: UnitSystem; mode: Mode; level: Level }) {
@@ -18,7 +18,7 @@ export function WeeklyCheck({ active, units, mode, level }: { active: ActivePlan
         <div>
           <H level={level}>The plan under way</H>
           <p className="mt-1 text-sm text-ink-600">
-            {active.plan.ladder.name} · {started}
+            {planLadderName(active.plan, units)} · {started}
           </p>
         </div>
         {mode === "player" && active.assignmentId ? (
