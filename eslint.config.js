@@ -10,11 +10,16 @@ import { createTypeScriptImportResolver } from "eslint-import-resolver-typescrip
 
 function featureNames() {
   try {
-    return fs.readdirSync(new URL("./src/features", import.meta.url), { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
+    return fs
+      .readdirSync(new URL("./src/features", import.meta.url), { withFileTypes: true })
+      .filter((d) => d.isDirectory())
+      .map((d) => d.name);
   } catch {
     return [];
   }
 }
+
+const NO_ENUM = { selector: "TSEnumDeclaration", message: "Use a const object or a union instead of enum." };
 
 export default tseslint.config(
   { ignores: ["dist/", "dist-server/", "dist-bench/", "node_modules/", "data/", "coverage/", "drizzle/"] },
@@ -26,30 +31,58 @@ export default tseslint.config(
     settings: { "import-x/resolver-next": [createTypeScriptImportResolver({ project: "./tsconfig.json" })] },
     rules: {
       "@typescript-eslint/no-explicit-any": "off",
-      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_" }],
+      "@typescript-eslint/no-unused-vars": [
+        "error",
+        { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_" },
+      ],
       "import-x/no-cycle": ["error", { maxDepth: 10 }],
       "import-x/no-restricted-paths": [
         "error",
         {
           zones: [
-            { target: "./physics/**/!(*.test).ts", from: ["./shared", "./server", "./src", "./tests"], message: "physics/ is pure: it imports nothing of the app." },
+            {
+              target: "./physics/**/!(*.test).ts",
+              from: ["./shared", "./server", "./src", "./tests"],
+              message: "physics/ is pure: it imports nothing of the app.",
+            },
             { target: "./shared", from: ["./server", "./src", "./tests"], message: "shared/ imports only zod and physics/." },
             { target: "./server", from: "./src", message: "server/ never imports the client." },
             { target: "./src", from: "./server", message: "src/ never imports the server." },
             // One zone per feature: it may import itself and auth (the current-user hook), no other feature.
             // (A single glob zone also forbade a feature's imports of its own files.)
+            {
+              target: ["./src/components", "./src/lib"],
+              from: "./src/features",
+              message: "src/components and src/lib are shared by the features: they import no feature.",
+            },
             ...featureNames()
               .filter((name) => name !== "auth")
               .map((name) => ({
                 target: `./src/features/${name}`,
                 from: "./src/features",
                 except: [`./${name}`, "./auth"],
-                message: "A feature does not import another feature (auth's current-user hook excepted); lift shared code to src/components or src/lib.",
+                message:
+                  "A feature does not import another feature (auth's current-user hook excepted); lift shared code to src/components or src/lib.",
               })),
           ],
         },
       ],
-      "no-restricted-syntax": ["error", { selector: "TSEnumDeclaration", message: "Use a const object or a union instead of enum." }],
+      "no-restricted-syntax": ["error", NO_ENUM],
+    },
+  },
+  {
+    // The environment is read in one place (server/env.ts, checked with zod); everything else gets it from there.
+    files: ["server/**/*.ts", "shared/**/*.ts", "physics/**/*.ts", "src/**/*.{ts,tsx}"],
+    ignores: ["server/env.ts", "**/*.test.{ts,tsx}"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        NO_ENUM,
+        {
+          selector: "MemberExpression[object.name='process'][property.name='env']",
+          message: "Read the environment through server/env.ts.",
+        },
+      ],
     },
   },
   {

@@ -80,7 +80,11 @@ export default defineConfig({
         // so the first page never downloads them.
         codeSplitting: {
           groups: [
-            { name: "three", test: /[\\/]node_modules[\\/](three|@react-three|three-stdlib|troika-[^\\/]+|camera-controls|maath)[\\/]/, priority: 30 },
+            {
+              name: "three",
+              test: /[\\/]node_modules[\\/](three|@react-three|three-stdlib|troika-[^\\/]+|camera-controls|maath)[\\/]/,
+              priority: 30,
+            },
             { name: "charts", test: /[\\/]node_modules[\\/](recharts|d3-[^\\/]+|victory-vendor|decimal\.js-light)[\\/]/, priority: 20 },
             // Highest priority: a group also takes its modules' dependencies, so if "three" (which imports React)
             // outranked this one, React would land in the three chunk and the entry would have to load it.
@@ -88,7 +92,11 @@ export default defineConfig({
             // recharts, both import) belongs here too: in the three chunk it made the charts chunk import three.js.
             // @babel/runtime's helpers too: drei and mathjs (the walked-green solver on the green map page) both use
             // them, and in the three chunk they made the green map page load three.js up front.
-            { name: "react", test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router|use-sync-external-store|@babel[\\/]runtime)[\\/]/, priority: 40 },
+            {
+              name: "react",
+              test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router|use-sync-external-store|@babel[\\/]runtime)[\\/]/,
+              priority: 40,
+            },
           ],
         },
       },

@@ -14,7 +14,13 @@ export default defineConfig({
         plugins: [react()],
         test: {
           name: "unit",
-          include: ["physics/**/*.test.ts", "shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.{ts,tsx}", "tests/api/**/*.test.ts"],
+          include: [
+            "physics/**/*.test.ts",
+            "shared/**/*.test.ts",
+            "server/**/*.test.ts",
+            "src/**/*.test.{ts,tsx}",
+            "tests/api/**/*.test.ts",
+          ],
           environment: "node",
           setupFiles: ["tests/setup/unit.ts"],
           globalSetup: ["tests/setup/global-unit.ts"],

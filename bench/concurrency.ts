@@ -20,10 +20,18 @@ async function signUp(url: string, name: string): Promise<{ cookie: string; id: 
   const res = await fetch(`${url}/api/auth/sign-up/email`, {
     method: "POST",
     headers: { "content-type": "application/json", origin: url },
-    body: JSON.stringify({ name, email: `${name.toLowerCase().replace(/\W/g, "")}-${Date.now()}@example.test`, password: "bench-password-123", accountType: "player" }),
+    body: JSON.stringify({
+      name,
+      email: `${name.toLowerCase().replace(/\W/g, "")}-${Date.now()}@example.test`,
+      password: "bench-password-123",
+      accountType: "player",
+    }),
   });
   if (!res.ok) throw new Error(`sign-up ${res.status}`);
-  const cookie = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const cookie = res.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
   return { cookie, id: ((await res.json()) as { user: { id: string } }).user.id };
 }
 
@@ -64,7 +72,11 @@ export async function runConcurrencyBench({ putts = Number(process.env.STATS_PUT
   const running = await start({
     env: readEnv({ NODE_ENV: "production", HOST: "127.0.0.1", PORT: "0", SEED: "0", LOG_LEVEL: "silent", DATA_DIR: os.tmpdir() }),
     pgliteDir: "memory://",
-    rateLimits: { auth: { windowMs: 60_000, limit: 1000 }, reads: { windowMs: 60_000, limit: 1_000_000 }, imports: { windowMs: 60_000, limit: 100 } },
+    rateLimits: {
+      auth: { windowMs: 60_000, limit: 1000 },
+      reads: { windowMs: 60_000, limit: 1_000_000 },
+      imports: { windowMs: 60_000, limit: 100 },
+    },
   });
   try {
     const { url, database } = running;
@@ -79,14 +91,22 @@ export async function runConcurrencyBench({ putts = Number(process.env.STATS_PUT
     await database.db.execute(sql`update practice_sessions set player_id = ${keen.id} where player_id = 'bench-player'`);
     await database.db.execute(sql`update putts set player_id = ${keen.id} where player_id = 'bench-player'`);
     await analyzeStale(database.db); // the server's own maintenance step (it runs every minute)
-    const s = await fetch(`${url}/api/sessions`, { method: "POST", headers: { "content-type": "application/json", origin: url, cookie: logger.cookie }, body: JSON.stringify({ date: "2026-12-01" }) });
+    const s = await fetch(`${url}/api/sessions`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: url, cookie: logger.cookie },
+      body: JSON.stringify({ date: "2026-12-01" }),
+    });
     const sessionId = ((await s.json()) as { id: string }).id;
 
     const idle = await probe(url, logger, sessionId, new Promise((r) => setTimeout(r, 5000)));
 
     const t0 = performance.now();
     let importMs = 0;
-    const importing = fetch(`${url}/api/csv/putts/import`, { method: "POST", headers: { origin: url, cookie: importer.cookie }, body: puttsCsvForm(50_000) }).then(async (res) => {
+    const importing = fetch(`${url}/api/csv/putts/import`, {
+      method: "POST",
+      headers: { origin: url, cookie: importer.cookie },
+      body: puttsCsvForm(50_000),
+    }).then(async (res) => {
       await res.arrayBuffer();
       importMs = performance.now() - t0;
       if (!res.ok) throw new Error(`import ${res.status}`);
@@ -110,10 +130,18 @@ export async function runConcurrencyBench({ putts = Number(process.env.STATS_PUT
 }
 
 export function printConcurrencyBench(r: ConcurrencyBenchResult): void {
-  const f = (p: Probe) => `p50 ${String(p.p50).padStart(5)} ms  p99 ${String(p.p99).padStart(6)} ms  max ${String(p.max).padStart(6)} ms  (${p.n} probes, ${p.failed} failed)`;
+  const f = (p: Probe) =>
+    `p50 ${String(p.p50).padStart(5)} ms  p99 ${String(p.p99).padStart(6)} ms  max ${String(p.max).padStart(6)} ms  (${p.n} probes, ${p.failed} failed)`;
   console.log(`  reference, idle server:                       ${f(r.idle)}`);
-  console.log(`  during a 50 000-row import + make-rate reads: ${f(r.busy)}   goal p99 ≤ 250 ms: ${r.busy.p99 <= 250 && r.busy.failed === 0 ? "met" : "NOT met"}`);
-  console.log(`  (the import took ${(r.importMs / 1000).toFixed(1)} s; ${r.statsQueries} make-rate queries over ${r.putts} stored putts ran meanwhile; load average ${os.loadavg().map((l) => l.toFixed(2)).join(" ")})`);
+  console.log(
+    `  during a 50 000-row import + make-rate reads: ${f(r.busy)}   goal p99 ≤ 250 ms: ${r.busy.p99 <= 250 && r.busy.failed === 0 ? "met" : "NOT met"}`,
+  );
+  console.log(
+    `  (the import took ${(r.importMs / 1000).toFixed(1)} s; ${r.statsQueries} make-rate queries over ${r.putts} stored putts ran meanwhile; load average ${os
+      .loadavg()
+      .map((l) => l.toFixed(2))
+      .join(" ")})`,
+  );
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {

@@ -14,14 +14,30 @@ const RUNS = Number(process.env.LIGHTHOUSE_RUNS ?? 3);
 const PAGES = (process.env.LIGHTHOUSE_PAGES ?? "/,/read").split(",");
 const CHROME = process.env.CHROME_PATH ?? "/usr/bin/chromium";
 
-type Figures = { performance: number; accessibility: number; bestPractices: number; seo: number; lcpMs: number; tbtMs: number; cls: number };
+type Figures = {
+  performance: number;
+  accessibility: number;
+  bestPractices: number;
+  seo: number;
+  lcpMs: number;
+  tbtMs: number;
+  cls: number;
+};
 
 async function startServer(): Promise<{ url: string; stop: () => Promise<void> }> {
   if (!fs.existsSync("dist/index.html") || !fs.existsSync("dist-server/index.js")) execSync("npm run build", { stdio: "inherit" });
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-lighthouse-"));
   const port = 5400 + Math.floor(Math.random() * 500);
   const child = spawn(process.execPath, ["dist-server/index.js"], {
-    env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir, PORT: String(port), HOST: "127.0.0.1", NODE_ENV: "production", LOG_LEVEL: "warn" },
+    env: {
+      PATH: process.env.PATH,
+      HOME: process.env.HOME,
+      DATA_DIR: dataDir,
+      PORT: String(port),
+      HOST: "127.0.0.1",
+      NODE_ENV: "production",
+      LOG_LEVEL: "warn",
+    },
     stdio: ["ignore", "ignore", "inherit"],
   });
   const url = `http://127.0.0.1:${port}`;
@@ -69,13 +85,24 @@ async function audit(url: string, port: number): Promise<Figures> {
 const server = await startServer();
 const chrome = await chromeLauncher.launch({ chromePath: CHROME, chromeFlags: ["--headless=new", "--no-sandbox", "--disable-gpu"] });
 try {
-  console.log(`== Lighthouse (mobile defaults, median of ${RUNS}), load average ${os.loadavg().map((l) => l.toFixed(1)).join(" ")}`);
+  console.log(
+    `== Lighthouse (mobile defaults, median of ${RUNS}), load average ${os
+      .loadavg()
+      .map((l) => l.toFixed(1))
+      .join(" ")}`,
+  );
   console.log("page        perf  a11y  best   seo    LCP ms   TBT ms     CLS   goals: perf ≥ 90, others 100, LCP ≤ 2500 ms, CLS ≤ 0.05");
   for (const page of PAGES) {
     const runs: Figures[] = [];
     for (let i = 0; i < RUNS; i++) runs.push(await audit(server.url + page, chrome.port));
     const m = (k: keyof Figures) => median(runs.map((r) => r[k]));
-    const met = m("performance") >= 90 && m("accessibility") === 100 && m("bestPractices") === 100 && m("seo") === 100 && m("lcpMs") <= 2500 && m("cls") <= 0.05;
+    const met =
+      m("performance") >= 90 &&
+      m("accessibility") === 100 &&
+      m("bestPractices") === 100 &&
+      m("seo") === 100 &&
+      m("lcpMs") <= 2500 &&
+      m("cls") <= 0.05;
     console.log(
       page.padEnd(10) +
         [m("performance"), m("accessibility"), m("bestPractices"), m("seo")].map((v) => String(v).padStart(6)).join("") +

@@ -16,7 +16,17 @@ const PLAYERS = 50;
 const ONLY = process.env.LOAD_ONLY;
 if (SECONDS > 30 || STEADY_SECONDS > 30) throw new Error("LOAD_SECONDS and STEADY_SECONDS are at most 30 per scenario");
 
-type Figures = { name: string; rps: number; p50: number; p99: number; errors: number; non2xx: number; total: number; goal: string; met: boolean };
+type Figures = {
+  name: string;
+  rps: number;
+  p50: number;
+  p99: number;
+  errors: number;
+  non2xx: number;
+  total: number;
+  goal: string;
+  met: boolean;
+};
 
 /** CPU seconds a process has used so far (user + system), from /proc: to tell the server's cost from the client's. */
 function cpuSeconds(pid: number | "self"): number {
@@ -26,10 +36,26 @@ function cpuSeconds(pid: number | "self"): number {
 
 async function startServer(): Promise<{ url: string; pid: number; stop: () => Promise<void> }> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-load-"));
-  const child = spawn(process.execPath, [...(process.env.LOAD_PROFILE ? ["--cpu-prof", "--cpu-prof-dir=" + process.env.LOAD_PROFILE] : []), "--import", "tsx", "bench/load-server.ts"], {
-    env: { PATH: process.env.PATH, HOME: process.env.HOME, LOAD_STALLS: process.env.LOAD_STALLS ?? "", NODE_OPTIONS: process.env.LOAD_NODE_OPTIONS ?? "", DATA_DIR: dataDir, PORT: "0" },
-    stdio: ["ignore", "pipe", "inherit"],
-  });
+  const child = spawn(
+    process.execPath,
+    [
+      ...(process.env.LOAD_PROFILE ? ["--cpu-prof", "--cpu-prof-dir=" + process.env.LOAD_PROFILE] : []),
+      "--import",
+      "tsx",
+      "bench/load-server.ts",
+    ],
+    {
+      env: {
+        PATH: process.env.PATH,
+        HOME: process.env.HOME,
+        LOAD_STALLS: process.env.LOAD_STALLS ?? "",
+        NODE_OPTIONS: process.env.LOAD_NODE_OPTIONS ?? "",
+        DATA_DIR: dataDir,
+        PORT: "0",
+      },
+      stdio: ["ignore", "pipe", "inherit"],
+    },
+  );
   const line = await new Promise<string>((resolve, reject) => {
     const rl = readline.createInterface({ input: child.stdout! });
     // The server's own log lines (the no-SMTP warning) come first: wait for the line that carries its url.
@@ -59,10 +85,18 @@ async function signIn(url: string, i: number): Promise<{ cookie: string; session
   const res = await fetch(`${url}/api/auth/sign-up/email`, {
     method: "POST",
     headers: { "content-type": "application/json", origin: url },
-    body: JSON.stringify({ name: `Load Player ${i}`, email: `load-${i}@example.test`, password: "load-test-password", accountType: "player" }),
+    body: JSON.stringify({
+      name: `Load Player ${i}`,
+      email: `load-${i}@example.test`,
+      password: "load-test-password",
+      accountType: "player",
+    }),
   });
   if (!res.ok) throw new Error(`sign-up ${i}: ${res.status}`);
-  const cookie = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const cookie = res.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
   const s = await fetch(`${url}/api/sessions`, {
     method: "POST",
     headers: { "content-type": "application/json", origin: url, cookie },
@@ -98,7 +132,12 @@ function figures(name: string, r: autocannon.Result, goal: { rps: number; p99?: 
  * 50 players logging at a steady total rate, each request sent on its own schedule (open loop). autocannon's
  * rate option sends each second's quota in one burst, which measures the burst, not the steady rate.
  */
-async function steadyPutts(url: string, serverPid: number, players: { cookie: string; sessionId: string }[], perSecond: number): Promise<Figures> {
+async function steadyPutts(
+  url: string,
+  serverPid: number,
+  players: { cookie: string; sessionId: string }[],
+  perSecond: number,
+): Promise<Figures> {
   const histogram = hdr.build({ lowestDiscernibleValue: 1, highestTrackableValue: 60_000, numberOfSignificantValueDigits: 3 });
   const intervalMs = (1000 * players.length) / perSecond;
   const endAt = performance.now() + STEADY_SECONDS * 1000;
@@ -160,7 +199,9 @@ async function steadyPutts(url: string, serverPid: number, players: { cookie: st
     const res = await fetch(`${url}/api/putts?pageSize=1&sessionId=${p.sessionId}`, { headers: { origin: url, cookie: p.cookie } });
     stored += ((await res.json()) as { total: number }).total;
   }
-  console.log(`steady scenario: ${acknowledged} putts acknowledged, ${stored} stored (${stored >= acknowledged ? "none lost" : "LOST SOME"})`);
+  console.log(
+    `steady scenario: ${acknowledged} putts acknowledged, ${stored} stored (${stored >= acknowledged ? "none lost" : "LOST SOME"})`,
+  );
   return {
     name: `putt logging, steady ${perSecond}/s (${players.length} players)`,
     rps,
@@ -248,9 +289,23 @@ try {
 }
 
 console.log(`\n== load (${SECONDS} s per scenario, 127.0.0.1 only)`);
-console.log("scenario".padEnd(42) + "req/s".padStart(9) + "p50 ms".padStart(9) + "p99 ms".padStart(9) + "errors".padStart(8) + "non-2xx".padStart(9) + "  goal");
+console.log(
+  "scenario".padEnd(42) +
+    "req/s".padStart(9) +
+    "p50 ms".padStart(9) +
+    "p99 ms".padStart(9) +
+    "errors".padStart(8) +
+    "non-2xx".padStart(9) +
+    "  goal",
+);
 for (const f of results) {
   console.log(
-    f.name.padEnd(42) + f.rps.toFixed(0).padStart(9) + String(f.p50).padStart(9) + String(f.p99).padStart(9) + String(f.errors).padStart(8) + String(f.non2xx).padStart(9) + `  ${f.goal}: ${f.met ? "met" : "NOT met"}`,
+    f.name.padEnd(42) +
+      f.rps.toFixed(0).padStart(9) +
+      String(f.p50).padStart(9) +
+      String(f.p99).padStart(9) +
+      String(f.errors).padStart(8) +
+      String(f.non2xx).padStart(9) +
+      `  ${f.goal}: ${f.met ? "met" : "NOT met"}`,
   );
 }

@@ -67,7 +67,14 @@ export function runMakeProbabilityBench(options: { runs?: number; referenceRolls
       rollPlanarInto(field, l.v, l.s, 0, read.distanceM, out);
       if (out.holed === reference[i]) agree++;
     });
-    return { name, medianMs, makeProbability: r.result.makeProbability, rk45PerRollMs, ratio: (rk45PerRollMs * SAMPLES) / medianMs, agreement: agree / referenceRolls };
+    return {
+      name,
+      medianMs,
+      makeProbability: r.result.makeProbability,
+      rk45PerRollMs,
+      ratio: (rk45PerRollMs * SAMPLES) / medianMs,
+      agreement: agree / referenceRolls,
+    };
   });
   const { name: _n, ...first } = CASES[0]!;
   const bestPaceMedianMs = timeMs(() => bestPace({ ...first, dispersion: DISPERSION, samples: SAMPLES, random: seededUniform(1) }), 9, 2);
@@ -95,12 +102,23 @@ export function printMakeProbabilityBench(f: MakeProbabilityBenchFigures): void 
   const num = (x: number, d = 3, w = 10) => x.toFixed(d).padStart(w);
   console.log(pad("case", 28) + `  ${f.samples} putts ms   P(make)  RK45 ms/roll   ratio  agree*`);
   for (const c of f.cases) {
-    console.log(pad(c.name, 28) + num(c.medianMs, 1, 17) + num(c.makeProbability, 3) + num(c.rk45PerRollMs, 3, 14) + num(c.ratio, 0, 8) + `${(100 * c.agreement).toFixed(0)} %`.padStart(7));
+    console.log(
+      pad(c.name, 28) +
+        num(c.medianMs, 1, 17) +
+        num(c.makeProbability, 3) +
+        num(c.rk45PerRollMs, 3, 14) +
+        num(c.ratio, 0, 8) +
+        `${(100 * c.agreement).toFixed(0)} %`.padStart(7),
+    );
   }
   console.log("* holed or not on the same launches; the RK45 reference judges capture at its closest pass, the closed form at the rim");
   const ok = (b: boolean) => (b ? "met" : "NOT met");
-  console.log(`\n${f.samples} simulated putts (median of cases): ${f.medianMs.toFixed(1)} ms  goal ≤ ${f.goals.samplesMs} ms: ${ok(f.medianMs <= f.goals.samplesMs)}`);
-  console.log(`best pace (coarse-then-fine search, 1000 putts a pace + 2 × ${f.samples}): ${f.bestPaceMedianMs.toFixed(1)} ms  goal ≤ ${f.goals.bestPaceMs} ms: ${ok(f.bestPaceMedianMs <= f.goals.bestPaceMs)}`);
+  console.log(
+    `\n${f.samples} simulated putts (median of cases): ${f.medianMs.toFixed(1)} ms  goal ≤ ${f.goals.samplesMs} ms: ${ok(f.medianMs <= f.goals.samplesMs)}`,
+  );
+  console.log(
+    `best pace (coarse-then-fine search, 1000 putts a pace + 2 × ${f.samples}): ${f.bestPaceMedianMs.toFixed(1)} ms  goal ≤ ${f.goals.bestPaceMs} ms: ${ok(f.bestPaceMedianMs <= f.goals.bestPaceMs)}`,
+  );
   console.log(`dispersion estimate from ${f.estimatePutts} logged putts: ${f.estimateMedianMs.toFixed(1)} ms`);
 }
 

@@ -15,7 +15,18 @@ export type MemoryBenchResult = { sharedBuffers: string; first: Start; restart: 
 function bundle(): void {
   execFileSync(
     path.join("node_modules", ".bin", "esbuild"),
-    ["bench/memory-server.ts", "server/db/pglite-create.ts", "--bundle", "--platform=node", "--format=esm", "--packages=external", "--outdir=dist-bench", "--out-extension:.js=.js", "--entry-names=[name]", "--log-level=warning"],
+    [
+      "bench/memory-server.ts",
+      "server/db/pglite-create.ts",
+      "--bundle",
+      "--platform=node",
+      "--format=esm",
+      "--packages=external",
+      "--outdir=dist-bench",
+      "--out-extension:.js=.js",
+      "--entry-names=[name]",
+      "--log-level=warning",
+    ],
     { stdio: "inherit" },
   );
 }
@@ -41,14 +52,20 @@ export function runMemoryBench(): MemoryBenchResult {
 }
 
 export function printMemoryBench(r: MemoryBenchResult): void {
-  const f = (s: Start) => `${s.rssMB.toFixed(0).padStart(5)} MB RSS (${s.externalMB.toFixed(0)} MB outside the JS heap, mostly PGlite's WebAssembly memory)`;
+  const f = (s: Start) =>
+    `${s.rssMB.toFixed(0).padStart(5)} MB RSS (${s.externalMB.toFixed(0)} MB outside the JS heap, mostly PGlite's WebAssembly memory)`;
   for (const x of r) {
     const tag = x.sharedBuffers === "32MB" ? "ours" : "PGlite's default";
     console.log(`  shared_buffers=${x.sharedBuffers} (${tag})`);
     console.log(`    first start, new database: ${f(x.first)}   goal ≤ 400 MB: ${x.first.rssMB <= 400 ? "met" : "NOT met"}`);
     console.log(`    restart, empty database:   ${f(x.restart)}   goal ≤ 400 MB: ${x.restart.rssMB <= 400 ? "met" : "NOT met"}`);
   }
-  console.log(`  (load average ${os.loadavg().map((l) => l.toFixed(2)).join(" ")})`);
+  console.log(
+    `  (load average ${os
+      .loadavg()
+      .map((l) => l.toFixed(2))
+      .join(" ")})`,
+  );
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {

@@ -62,7 +62,14 @@ export function rk45Roll(green: Green, v: number, s: number, D: number): Rk45Pas
 }
 
 /** Bisection for g = 0 on cubic Hermite interpolation of the state between two RK samples. */
-function refine(f: (t: number, y: number[]) => number[], t0: number, y0: number[], t1: number, y1: number[], g: (y: number[]) => number): number[] {
+function refine(
+  f: (t: number, y: number[]) => number[],
+  t0: number,
+  y0: number[],
+  t1: number,
+  y1: number[],
+  g: (y: number[]) => number,
+): number[] {
   const d0 = f(t0, y0);
   const d1 = f(t1, y1);
   const h = t1 - t0;

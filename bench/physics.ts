@@ -111,8 +111,12 @@ export function printPhysicsBench(f: PhysicsBenchFigures): void {
     );
   }
   const ok = (b: boolean) => (b ? "met" : "NOT met");
-  console.log(`\nread (median of cases): ${f.readMedianMs.toFixed(4)} ms  goal ≤ ${f.goals.readMs} ms: ${ok(f.readMedianMs <= f.goals.readMs)}`);
-  console.log(`break chart (${f.chartCells} cells): ${f.chartMedianMs.toFixed(2)} ms  goal ≤ ${f.goals.chartMs} ms: ${ok(f.chartMedianMs <= f.goals.chartMs)}`);
+  console.log(
+    `\nread (median of cases): ${f.readMedianMs.toFixed(4)} ms  goal ≤ ${f.goals.readMs} ms: ${ok(f.readMedianMs <= f.goals.readMs)}`,
+  );
+  console.log(
+    `break chart (${f.chartCells} cells): ${f.chartMedianMs.toFixed(2)} ms  goal ≤ ${f.goals.chartMs} ms: ${ok(f.chartMedianMs <= f.goals.chartMs)}`,
+  );
   console.log(
     `baseline read (mathjs solveODE RK45 at 1 mm + 2-D Newton shooting): ${f.baselineReadMedianMs.toFixed(1)} ms  ratio ${f.ratio.toFixed(0)}×  goal ≥ ${f.goals.ratio}×: ${ok(f.ratio >= f.goals.ratio)}`,
   );

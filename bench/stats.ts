@@ -37,20 +37,31 @@ export async function seedClub(database: Database, totalPutts: number): Promise<
   const { db } = database;
   const sessions = Math.ceil(totalPutts / PER_SESSION);
   const owner = (s: string) => `case when ${s} % 10 = 0 then '${PLAYER}' else 'club-' || (${s} % 99) end`;
-  await db.execute(sql.raw(`insert into "user"(id, name, email) select 'club-' || i, 'Club Player ' || i, 'club-' || i || '@borrowline.example' from generate_series(0, 98) i
-    union all select '${PLAYER}', 'Keen Player', 'keen@borrowline.example'`));
+  await db.execute(
+    sql.raw(`insert into "user"(id, name, email) select 'club-' || i, 'Club Player ' || i, 'club-' || i || '@borrowline.example' from generate_series(0, 98) i
+    union all select '${PLAYER}', 'Keen Player', 'keen@borrowline.example'`),
+  );
   await db.execute(sql`select setseed(0.2024)`);
-  await db.execute(sql.raw(`insert into practice_sessions(id, player_id, date)
-    select md5('s' || s)::uuid, ${owner("s")}, date '2021-01-01' + (s * 1460 / ${sessions}) from generate_series(0, ${sessions - 1}) s`));
-  await db.execute(sql.raw(`insert into putts(session_id, player_id, distance_m, holed, miss_length_m)
+  await db.execute(
+    sql.raw(`insert into practice_sessions(id, player_id, date)
+    select md5('s' || s)::uuid, ${owner("s")}, date '2021-01-01' + (s * 1460 / ${sessions}) from generate_series(0, ${sessions - 1}) s`),
+  );
+  await db.execute(
+    sql.raw(`insert into putts(session_id, player_id, distance_m, holed, miss_length_m)
     select md5('s' || (i / ${PER_SESSION}))::uuid, ${owner(`(i / ${PER_SESSION})`)}, d, h, case when h then null else (random() - 0.4) * 0.3 * d end
     from (select i, round((0.3 + random() * random() * 15)::numeric, 1)::float8 as d, random() as u from generate_series(0, ${totalPutts - 1}) i) x,
-      lateral (select x.u < 1 / (1 + exp((x.d - 2) / 0.8)) as h) y`));
-  const counted = (await db.execute(sql`select count(*)::int as n from putts where player_id = ${PLAYER}`)) as unknown as { rows: { n: number }[] };
+      lateral (select x.u < 1 / (1 + exp((x.d - 2) / 0.8)) as h) y`),
+  );
+  const counted = (await db.execute(sql`select count(*)::int as n from putts where player_id = ${PLAYER}`)) as unknown as {
+    rows: { n: number }[];
+  };
   return { sessions, playerPutts: Number(counted.rows[0]!.n) };
 }
 
-export async function runStatsBench({ totalPutts = Number(process.env.STATS_PUTTS ?? 500_000), runs = 15 } = {}): Promise<StatsBenchResult> {
+export async function runStatsBench({
+  totalPutts = Number(process.env.STATS_PUTTS ?? 500_000),
+  runs = 15,
+} = {}): Promise<StatsBenchResult> {
   const database = await openPglite("memory://");
   try {
     await migrate(database);
@@ -86,7 +97,8 @@ export async function runStatsBench({ totalPutts = Number(process.env.STATS_PUTT
     // The two methods must agree, or the timing compares different work.
     const js = await naive();
     for (const c of await bandCounts(db, all, edges)) {
-      if (js.get(c.band)?.attempts !== c.attempts || js.get(c.band)?.made !== c.made) throw new Error(`SQL and JS disagree on band ${c.band}`);
+      if (js.get(c.band)?.attempts !== c.attempts || js.get(c.band)?.made !== c.made)
+        throw new Error(`SQL and JS disagree on band ${c.band}`);
     }
 
     const time = (fn: () => Promise<unknown>) => timeMsAsync(fn, runs, 3);
@@ -96,8 +108,16 @@ export async function runStatsBench({ totalPutts = Number(process.env.STATS_PUTT
       return { what, unboundedMs, boundedMs, ratio: boundedMs / unboundedMs };
     };
     const rows = [
-      await row("make rates (all dates | one year)", () => bandCounts(db, all, edges), () => bandCounts(db, year, edges)),
-      await row("trend, 4-week rolling (all | one year)", () => weeklyCounts(db, all, edges, 4), () => weeklyCounts(db, year, edges, 4)),
+      await row(
+        "make rates (all dates | one year)",
+        () => bandCounts(db, all, edges),
+        () => bandCounts(db, year, edges),
+      ),
+      await row(
+        "trend, 4-week rolling (all | one year)",
+        () => weeklyCounts(db, all, edges, 4),
+        () => weeklyCounts(db, year, edges, 4),
+      ),
       await row(
         "compare (two halves of all | two half-years)",
         () => periodCounts(db, { ...all, ...wide }, edges),
@@ -118,16 +138,29 @@ export async function runStatsBench({ totalPutts = Number(process.env.STATS_PUTT
 
 export function printStatsBench(r: StatsBenchResult): void {
   const f = (ms: number) => `${ms.toFixed(1)} ms`.padStart(9);
-  console.log(`${r.putts} putts in ${r.sessions} sessions of 100 players (PGlite in memory); the player measured has ${r.playerPutts}. Median of ${r.runs}.`);
-  console.log(`  the server's own maintenance step after the seed (analyzeStale: VACUUM ANALYZE of ${r.maintenance.tables} stale tables): ${f(r.maintenance.ms)}`);
+  console.log(
+    `${r.putts} putts in ${r.sessions} sessions of 100 players (PGlite in memory); the player measured has ${r.playerPutts}. Median of ${r.runs}.`,
+  );
+  console.log(
+    `  the server's own maintenance step after the seed (analyzeStale: VACUUM ANALYZE of ${r.maintenance.tables} stale tables): ${f(r.maintenance.ms)}`,
+  );
   console.log(`  ${"query".padEnd(46)} unbounded   bounded  ratio (goal ≤ 2)  goal ≤ ${r.goalMs} ms each`);
   for (const x of r.rows) {
     const met = x.unboundedMs <= r.goalMs && x.boundedMs <= r.goalMs;
-    console.log(`  ${x.what.padEnd(46)}${f(x.unboundedMs)} ${f(x.boundedMs)}  ${x.ratio.toFixed(2).padStart(5)} ${x.ratio <= 2 ? "met" : "NOT met"}       ${met ? "met" : "NOT met"}`);
+    console.log(
+      `  ${x.what.padEnd(46)}${f(x.unboundedMs)} ${f(x.boundedMs)}  ${x.ratio.toFixed(2).padStart(5)} ${x.ratio <= 2 ? "met" : "NOT met"}       ${met ? "met" : "NOT met"}`,
+    );
   }
   const mr = r.rows[0]!;
-  console.log(`  reference: naive JS loop over the player's fetched rows (all dates): ${f(r.naiveJsMs)} → SQL/JS ${(mr.unboundedMs / r.naiveJsMs).toFixed(3)}`);
-  console.log(`  (timer: performance.now(), sub-ms; the machine is shared, so read the figures beside its load average: ${os.loadavg().map((l) => l.toFixed(2)).join(" ")})`);
+  console.log(
+    `  reference: naive JS loop over the player's fetched rows (all dates): ${f(r.naiveJsMs)} → SQL/JS ${(mr.unboundedMs / r.naiveJsMs).toFixed(3)}`,
+  );
+  console.log(
+    `  (timer: performance.now(), sub-ms; the machine is shared, so read the figures beside its load average: ${os
+      .loadavg()
+      .map((l) => l.toFixed(2))
+      .join(" ")})`,
+  );
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {

@@ -41,7 +41,16 @@ export function rollClosedForm(
   if (!stopsInPractice(green)) return cannotStop(describeModel(green));
   const out = newPlanarRollOut();
   const rh = input.holeRadiusM ?? HOLE_RADIUS_M;
-  rollPlanarInto(planarRollField(green), input.launchSpeedMps, (input.startLineDeg * Math.PI) / 180, 0, input.distanceM, out, Number.POSITIVE_INFINITY, rh);
+  rollPlanarInto(
+    planarRollField(green),
+    input.launchSpeedMps,
+    (input.startLineDeg * Math.PI) / 180,
+    0,
+    input.distanceM,
+    out,
+    Number.POSITIVE_INFINITY,
+    rh,
+  );
   return {
     ok: true,
     roll: {

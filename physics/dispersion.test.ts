@@ -7,12 +7,24 @@ function syntheticLog(truth: PuttDispersion, rollPastM: number, seed: number, pe
   const random = seededUniform(seed);
   const log: LoggedPutt[] = [];
   for (const distanceM of [1, 1.5, 2, 3, 4, 6, 8, 10]) {
-    const r = simulatePuttOutcomes({ distanceM, slopePct: 0, fallLineDeg: 0, stimpFt: 10, pace: { rollPastM }, dispersion: truth, samples: perDistance, random });
+    const r = simulatePuttOutcomes({
+      distanceM,
+      slopePct: 0,
+      fallLineDeg: 0,
+      stimpFt: 10,
+      pace: { rollPastM },
+      dispersion: truth,
+      samples: perDistance,
+      random,
+    });
     if (!r.ok) throw new Error("flat green must stop");
     for (const p of r.putts) log.push({ distanceM, holed: p.holed, missSide: p.missSide, missLengthM: p.missLengthM, stimpFt: 10 });
   }
   // Interleave distances, as a real log would mix them.
-  return log.map((p, i) => ({ p, k: (i * 7919) % log.length })).sort((a, b) => a.k - b.k).map((x) => x.p);
+  return log
+    .map((p, i) => ({ p, k: (i * 7919) % log.length }))
+    .sort((a, b) => a.k - b.k)
+    .map((x) => x.p);
 }
 
 const inside = (i: { lo: number; hi: number }, x: number) => i.lo <= x && x <= i.hi;

@@ -27,7 +27,15 @@ export {
   type ModelSummary,
   type RollModel,
 } from "./roll-model";
-export { ballDropTimeS, captureAtRim, captureOutcome, effectiveHoleWidthM, maxCaptureSpeedMps, type Capture, type RimCrossing } from "./capture";
+export {
+  ballDropTimeS,
+  captureAtRim,
+  captureOutcome,
+  effectiveHoleWidthM,
+  maxCaptureSpeedMps,
+  type Capture,
+  type RimCrossing,
+} from "./capture";
 export { solveRead } from "./solve-read";
 export { solveReadDirect } from "./solve-read-direct";
 export {

@@ -2,7 +2,16 @@ import { describe, expect, test } from "vitest";
 import fc from "fast-check";
 import jStat from "jstat";
 import { seededUniform } from "../shared/seeded-random";
-import { CLUB_GOLFER_PRIOR, DEFAULT_BEST_PACE_GRID_M, bestPace, makeProbability, maxCaptureSpeedMps, solveRead, HOLE_RADIUS_M, type MakeProbabilityInput } from "./index";
+import {
+  CLUB_GOLFER_PRIOR,
+  DEFAULT_BEST_PACE_GRID_M,
+  bestPace,
+  makeProbability,
+  maxCaptureSpeedMps,
+  solveRead,
+  HOLE_RADIUS_M,
+  type MakeProbabilityInput,
+} from "./index";
 
 /** No read error and a perfect surface: the stroke dispersion alone (for checks against closed forms). */
 const PERFECT = { readSlopePct: 0, greenLateralM: 0 } as const;
@@ -35,7 +44,9 @@ test("with no dispersion a read too firm to drop is never made (Holmes 1991: v_c
 test("make probability falls as the start-line dispersion grows, and as the pace dispersion grows (same seed)", () => {
   const byAngle = [0.25, 0.5, 1, 2, 4].map((angleDeg) => run({ dispersion: { angleDeg, pace: 0.08, ...PERFECT } }).makeProbability);
   for (let i = 1; i < byAngle.length; i++) expect(byAngle[i]!).toBeLessThan(byAngle[i - 1]!);
-  const byPace = [0.02, 0.1, 0.2, 0.4].map((pace) => run({ dispersion: { angleDeg: 0.3, pace, ...PERFECT }, pace: { rollPastM: 0.3 } }).makeProbability);
+  const byPace = [0.02, 0.1, 0.2, 0.4].map(
+    (pace) => run({ dispersion: { angleDeg: 0.3, pace, ...PERFECT }, pace: { rollPastM: 0.3 } }).makeProbability,
+  );
   for (let i = 1; i < byPace.length; i++) expect(byPace[i]!).toBeLessThan(byPace[i - 1]!);
 });
 
@@ -101,7 +112,14 @@ describe("a wider hole never lowers the make probability (common random numbers:
         }),
         ({ rollPastM, angleDeg, pace, r1, grow, seed, ...green }) => {
           const at = (holeRadiusM: number) =>
-            makeProbability({ ...green, pace: { rollPastM }, dispersion: { angleDeg, pace, ...PERFECT }, samples: 300, random: seededUniform(seed), holeRadiusM });
+            makeProbability({
+              ...green,
+              pace: { rollPastM },
+              dispersion: { angleDeg, pace, ...PERFECT },
+              samples: 300,
+              random: seededUniform(seed),
+              holeRadiusM,
+            });
           const a = at(r1);
           const b = at(r1 + grow);
           if (!a.ok || !b.ok) return a.ok === b.ok;
@@ -115,7 +133,15 @@ describe("a wider hole never lowers the make probability (common random numbers:
 
 test("best pace: the most makes among the paces tried whose second-putt risk is within the limit", () => {
   const grid = [0.1, 0.2, 0.3, 0.45, 0.6, 0.8, 1.0];
-  const r = bestPace({ ...sideHill, dispersion: club, samples: 3000, scanSamples: 3000, random: seededUniform(5), rollPastGridM: grid, secondPuttRiskMax: 0.1 });
+  const r = bestPace({
+    ...sideHill,
+    dispersion: club,
+    samples: 3000,
+    scanSamples: 3000,
+    random: seededUniform(5),
+    rollPastGridM: grid,
+    secondPuttRiskMax: 0.1,
+  });
   if (!r.ok) throw new Error("must stop");
   const { best, curve, requested } = r.result;
   expect(curve.map((c) => c.rollPastM)).toEqual(grid);
@@ -151,7 +177,14 @@ describe("best pace: the coarse-then-fine search agrees with an exhaustive 5 cm 
         ({ angleDeg, pace, riskMax, seed, ...read }) => {
           const scanSamples = 400;
           const dispersion = { angleDeg, pace };
-          const fast = bestPace({ ...read, dispersion, samples: 800, scanSamples, random: seededUniform(seed), secondPuttRiskMax: riskMax });
+          const fast = bestPace({
+            ...read,
+            dispersion,
+            samples: 800,
+            scanSamples,
+            random: seededUniform(seed),
+            secondPuttRiskMax: riskMax,
+          });
           const exhaustive = DEFAULT_BEST_PACE_GRID_M.map((rollPastM) => {
             const r = makeProbability({ ...read, pace: { rollPastM }, dispersion, samples: scanSamples, random: seededUniform(seed) });
             if (!r.ok) throw new Error("a green that stops for bestPace stops for makeProbability");
@@ -175,7 +208,9 @@ describe("best pace: the coarse-then-fine search agrees with an exhaustive 5 cm 
             expect(gotScan.makeProbability).toBeGreaterThanOrEqual(want.makeProbability - tie);
             // Where the exhaustive winner is clear (every pace within the limit more than a step from it holes over
             // two putts fewer), the search finds it within one grid step; on a flat top any level pace is the answer.
-            const clear = feasible.every((c) => Math.abs(c.rollPastM - want.rollPastM) <= step || c.makeProbability < want.makeProbability - tie);
+            const clear = feasible.every(
+              (c) => Math.abs(c.rollPastM - want.rollPastM) <= step || c.makeProbability < want.makeProbability - tie,
+            );
             if (clear) expect(Math.abs(got - want.rollPastM)).toBeLessThanOrEqual(step);
           }
           // Every pace the search tried carries the exhaustive scan's own figures at that pace.
@@ -186,7 +221,10 @@ describe("best pace: the coarse-then-fine search agrees with an exhaustive 5 cm 
           // The winner's figures are those of a full run at that pace with all the samples.
           const full = makeProbability({ ...read, pace: { rollPastM: got }, dispersion, samples: 800, random: seededUniform(seed) });
           if (!full.ok) return false;
-          expect([fast.result.best.makeProbability, fast.result.best.secondPuttOverProbability]).toEqual([full.result.makeProbability, full.result.secondPuttOverProbability]);
+          expect([fast.result.best.makeProbability, fast.result.best.secondPuttOverProbability]).toEqual([
+            full.result.makeProbability,
+            full.result.secondPuttOverProbability,
+          ]);
           return true;
         },
       ),
@@ -204,7 +242,14 @@ describe("best pace: the coarse-then-fine search agrees with an exhaustive 5 cm 
 });
 
 test("best pace with an impossible risk limit returns the safest pace, flagged", () => {
-  const r = bestPace({ ...sideHill, distanceM: 12, dispersion: { angleDeg: 2, pace: 0.2 }, samples: 1000, random: seededUniform(5), secondPuttRiskMax: 0 });
+  const r = bestPace({
+    ...sideHill,
+    distanceM: 12,
+    dispersion: { angleDeg: 2, pace: 0.2 },
+    samples: 1000,
+    random: seededUniform(5),
+    secondPuttRiskMax: 0,
+  });
   if (!r.ok) throw new Error("must stop");
   expect(r.result.best.meetsRiskLimit).toBe(false);
   const minRisk = Math.min(...r.result.curve.map((c) => c.secondPuttOverProbability));
@@ -219,7 +264,16 @@ test("make probability on a cannot-stop green is the cannot-stop value", () => {
 test("with zero dispersion (stroke, read and green) every solved read is made: the issue 13 repro and a property", () => {
   const zero = { angleDeg: 0, pace: 0, ...PERFECT };
   // D 6 m, 1.5 %, fall line 135°, Stimp 11, roll-past 0.1 m: its closest pass was missed by the closed form.
-  const repro = makeProbability({ distanceM: 6, slopePct: 1.5, fallLineDeg: 135, stimpFt: 11, pace: { rollPastM: 0.1 }, dispersion: zero, samples: 50, random: seededUniform(1) });
+  const repro = makeProbability({
+    distanceM: 6,
+    slopePct: 1.5,
+    fallLineDeg: 135,
+    stimpFt: 11,
+    pace: { rollPastM: 0.1 },
+    dispersion: zero,
+    samples: 50,
+    random: seededUniform(1),
+  });
   if (!repro.ok) throw new Error("must stop");
   expect(repro.result.makeProbability).toBe(1);
   fc.assert(

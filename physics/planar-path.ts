@@ -49,7 +49,8 @@ export function planarRollField(green: Green): PlanarRollField {
 const fieldCache = new Map<string, PlanarRollField>();
 
 function buildField(green: Green): PlanarRollField {
-  if (!green.closedForm) throw new RangeError("planarRollField: the closed form needs the closed-form forces (gravity on a plane, constant rolling resistance)");
+  if (!green.closedForm)
+    throw new RangeError("planarRollField: the closed form needs the closed-form forces (gravity on a plane, constant rolling resistance)");
   if (!stopsInPractice(green)) throw new RangeError("planarRollField: the ball cannot stop on this green (check stopsInPractice first)");
   const ag = green.gravityDecelMps2;
   const ar = green.rollingDecelMps2;
@@ -71,7 +72,19 @@ function buildField(green: Green): PlanarRollField {
     psiLnU[j - 1] = Math.log(psiU[j - 1]!);
   }
   const sampleLnW = sampleW.map(Math.log);
-  return { gravityDecelMps2: ag, rollingDecelMps2: ar, k, n, fallLine: green.fallLine, straight, sampleW, sampleLnW, sampleR, psiU, psiLnU };
+  return {
+    gravityDecelMps2: ag,
+    rollingDecelMps2: ar,
+    k,
+    n,
+    fallLine: green.fallLine,
+    straight,
+    sampleW,
+    sampleLnW,
+    sampleR,
+    psiU,
+    psiLnU,
+  };
 }
 
 /**

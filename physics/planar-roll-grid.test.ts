@@ -48,7 +48,9 @@ test("closed form and odex agree on a dense grid: pass distance, pass speed and 
       }
     }
   }
-  console.log(`closed form vs odex over ${rolls} rolls: worst pass ${(1000 * worst.pass).toFixed(4)} mm, pass speed ${(1000 * worst.speed).toFixed(4)} mm/s, rest ${(1000 * worst.rest).toFixed(4)} mm`);
+  console.log(
+    `closed form vs odex over ${rolls} rolls: worst pass ${(1000 * worst.pass).toFixed(4)} mm, pass speed ${(1000 * worst.speed).toFixed(4)} mm/s, rest ${(1000 * worst.rest).toFixed(4)} mm`,
+  );
 });
 
 test("the issue's repro holes in both rolls: 6 m, 1.5 %, fall line 135°, Stimp 11, 2.64253 m/s, −3.2095°", () => {

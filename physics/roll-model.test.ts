@@ -120,7 +120,11 @@ test("flat-putt length: a flat putt equals its own length; straight uphill longe
   // a_eff = a_r ± a_g; the flat putt with the same v and the same P is L = v²/(2·a_r) − P = (D + P)·a_eff/a_r − P.
   const ar = rollingDecelFromStimp(10);
   const ag = gravityDecelFromSlope(2);
-  for (const [D, P] of [[3, 0.45], [1.2, 0], [8, 1.5]] as const) {
+  for (const [D, P] of [
+    [3, 0.45],
+    [1.2, 0],
+    [8, 1.5],
+  ] as const) {
     const flat = solveRead({ distanceM: D, slopePct: 0, fallLineDeg: 0, stimpFt: 10, pace: { rollPastM: P } });
     const up = solveRead({ distanceM: D, slopePct: 2, fallLineDeg: 180, stimpFt: 10, pace: { rollPastM: P } });
     const down = solveRead({ distanceM: D, slopePct: 2, fallLineDeg: 0, stimpFt: 10, pace: { rollPastM: P } });

@@ -84,12 +84,20 @@ export function rollToRest(
   const events: OdeEvent[] = [{ value: (_t, y) => Math.hypot(y[2]!, y[3]!) - vStop, direction: -1, terminal: true }];
   const target = options.target;
   if (target !== undefined) {
-    events.push({ value: (_t, y) => (y[0]! - target[0]) * y[2]! + (y[1]! - target[1]) * y[3]!, direction: 1, terminal: false, scan: () => 16 });
+    events.push({
+      value: (_t, y) => (y[0]! - target[0]) * y[2]! + (y[1]! - target[1]) * y[3]!,
+      direction: 1,
+      terminal: false,
+      scan: () => 16,
+    });
   }
   const rim = options.rimRadiusM;
   const idxRim = target !== undefined && rim !== undefined ? events.length : -1;
   if (target !== undefined && rim !== undefined) {
-    events.push({ value: (_t, y) => (y[0]! - target[0]) ** 2 + (y[1]! - target[1]) ** 2 - rim * rim, direction: -1, terminal: false,
+    events.push({
+      value: (_t, y) => (y[0]! - target[0]) ** 2 + (y[1]! - target[1]) ** 2 - rim * rim,
+      direction: -1,
+      terminal: false,
       // A step's points lie within half its length of one of its ends: scan only steps that can reach the circle.
       scan: (a, b) => {
         const ds = b[5]! - a[5]!;

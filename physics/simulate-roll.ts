@@ -59,7 +59,11 @@ export function simulateRoll(input: RollInput): RollResult {
   const hole: [number, number] = [0, input.distanceM];
   if (input.launchSpeedMps === 0) return { ok: true, roll: restingBall(hole, model) };
   const s = (input.startLineDeg * Math.PI) / 180;
-  const trace = rollToRest(green, input.launchSpeedMps, [Math.sin(s), Math.cos(s)], { target: hole, rimRadiusM: HOLE_RADIUS_M, samplesPerStep: 9 });
+  const trace = rollToRest(green, input.launchSpeedMps, [Math.sin(s), Math.cos(s)], {
+    target: hole,
+    rimRadiusM: HOLE_RADIUS_M,
+    samplesPerStep: 9,
+  });
   const dist = (p: RollState) => Math.hypot(p.xM - hole[0], p.yM - hole[1]);
   let closest = trace.rest;
   for (const p of trace.approaches) if (dist(p) < dist(closest)) closest = p;

@@ -36,7 +36,11 @@ export function solveReadDirect(input: ReadInput): ReadResult {
   const stats = { iterations: 0, integrations: 0, steps: 0, evaluations: 0 };
 
   const evaluate = (speed: number, line: number) => {
-    const trace = rollToRest(green, speed, [Math.sin(line), Math.cos(line)], { target: hole, rimRadiusM: HOLE_RADIUS_M, samplesPerStep: 7 });
+    const trace = rollToRest(green, speed, [Math.sin(line), Math.cos(line)], {
+      target: hole,
+      rimRadiusM: HOLE_RADIUS_M,
+      samplesPerStep: 7,
+    });
     stats.integrations++;
     stats.steps += trace.stats.steps;
     stats.evaluations += trace.stats.evaluations;

@@ -5,7 +5,16 @@ import { PlanarPath, planarRollField, type PlanarRollField } from "./planar-path
 import { brentRoot } from "./root-find";
 import { stopsInPractice, describeModel, resolveGreen, type Green } from "./roll-model";
 import { solveReadDirect } from "./solve-read-direct";
-import { aimOf, cannotStop, flatPuttLengthM, validateReadInput, type BreakDirection, type Pace, type ReadInput, type ReadResult } from "./read-types";
+import {
+  aimOf,
+  cannotStop,
+  flatPuttLengthM,
+  validateReadInput,
+  type BreakDirection,
+  type Pace,
+  type ReadInput,
+  type ReadResult,
+} from "./read-types";
 
 /** Convergence of the pace: roll-past to 0.2 mm, entry speed to 0.1 mm/s (the hole pass is exact by construction). */
 const ROLL_PAST_TOL_M = 2e-4;
@@ -157,7 +166,8 @@ function evaluateTrial(field: PlanarRollField, path: PlanarPath, a: number, pace
   const wStar = path.wWhereHeadingXIsZero();
   if (restX <= 0 || wStar === null) {
     // A dying putt whose rest point is on the line: the hole is the rest point.
-    if (restY > 0 && Math.abs(restX) <= 1e-8 * restY) return { metric: 0, kScale: Math.sqrt(D / restY), rollPastRef: 0, entryRef: 0, crossW: 0 };
+    if (restY > 0 && Math.abs(restX) <= 1e-8 * restY)
+      return { metric: 0, kScale: Math.sqrt(D / restY), rollPastRef: 0, entryRef: 0, crossW: 0 };
     return none(Math.max(restX / Math.hypot(restX, restY), -0.99));
   }
   path.at(wStar);

@@ -4,7 +4,15 @@ import type { Capture } from "./capture";
 import type { HeightSurface } from "./height-surface";
 import { aimOf, cannotStop, flatPuttLengthM, type AimGiven, type BreakDirection, type Pace } from "./read-types";
 import { brentRoot } from "./root-find";
-import { DEFAULT_ROLL_MODEL, describeModel, maxStoppableSlopePct, resolveGreen, stopsInPractice, type ModelSummary, type RollModel } from "./roll-model";
+import {
+  DEFAULT_ROLL_MODEL,
+  describeModel,
+  maxStoppableSlopePct,
+  resolveGreen,
+  stopsInPractice,
+  type ModelSummary,
+  type RollModel,
+} from "./roll-model";
 import { solveRead } from "./solve-read";
 import { simulateRollOnSurface, type SurfaceRoll } from "./surface-roll";
 
@@ -41,7 +49,11 @@ export interface SurfaceRead {
   readonly meanPlane: { readonly slopePct: number; readonly fallLineDeg: number };
   /** The model on that mean plane (its gravity term is the mean one; the roll feels the local slope). */
   readonly model: ModelSummary;
-  readonly diagnostics: { readonly method: "surface-newton" | "surface-bracketed"; readonly iterations: number; readonly integrations: number };
+  readonly diagnostics: {
+    readonly method: "surface-newton" | "surface-bracketed";
+    readonly iterations: number;
+    readonly integrations: number;
+  };
 }
 
 /** No read: the roll cannot be made to pass the hole at that pace (e.g. every trial leaves the map). */
@@ -102,12 +114,22 @@ export function solveReadOnSurface(input: SurfaceReadInput): SurfaceReadResult {
   const steepGreen = resolveGreen({ slopePct: steepest, fallLineDeg: 0, stimpFt: input.stimpFt, model });
   if (!stopsInPractice(steepGreen)) {
     const planarAnswer = cannotStop(describeModel(steepGreen));
-    return { ok: false, reason: "cannot-stop", message: planarAnswer.message, maxStoppableSlopePct: planarAnswer.model.maxStoppableSlopePct, slopePct: steepest };
+    return {
+      ok: false,
+      reason: "cannot-stop",
+      message: planarAnswer.message,
+      maxStoppableSlopePct: planarAnswer.model.maxStoppableSlopePct,
+      slopePct: steepest,
+    };
   }
   const slopePct = Math.min(100 * Math.hypot(gx, gy), 0.9 * maxStoppableSlopePct(input.stimpFt, model));
   const fallLineDeg = ((Math.atan2(-(gx * ex[0] + gy * ex[1]), -(gx * ey[0] + gy * ey[1])) * 180) / Math.PI + 360) % 360;
   const planar = solveRead({ distanceM: D, slopePct, fallLineDeg, stimpFt: input.stimpFt, model, pace });
-  const meanPlane = { slopePct, fallLineDeg, summary: describeModel(resolveGreen({ slopePct, fallLineDeg, stimpFt: input.stimpFt, model })) };
+  const meanPlane = {
+    slopePct,
+    fallLineDeg,
+    summary: describeModel(resolveGreen({ slopePct, fallLineDeg, stimpFt: input.stimpFt, model })),
+  };
   if (!planar.ok) return cannotStopRead(meanPlane.summary.maxStoppableSlopePct);
   let v = planar.read.launchSpeedMps;
   let s = (planar.read.startLineDeg * Math.PI) / 180;
@@ -116,7 +138,15 @@ export function solveReadOnSurface(input: SurfaceReadInput): SurfaceReadResult {
   type Trial = { miss: number; pace: number; roll: SurfaceRoll } | null;
   const trial = (speed: number, line: number): Trial => {
     integrations++;
-    const r = simulateRollOnSurface({ surface, stimpFt: input.stimpFt, model, ballM, holeM, launchSpeedMps: speed, startLineDeg: (line * 180) / Math.PI });
+    const r = simulateRollOnSurface({
+      surface,
+      stimpFt: input.stimpFt,
+      model,
+      ballM,
+      holeM,
+      launchSpeedMps: speed,
+      startLineDeg: (line * 180) / Math.PI,
+    });
     if (!r.ok) return null;
     const c = r.roll.closestApproach;
     const paceNow = "rollPastM" in pace ? r.roll.rollLengthM - c.alongPathM : c.speedMps;
@@ -161,7 +191,8 @@ export function solveReadOnSurface(input: SurfaceReadInput): SurfaceReadResult {
     }
     if (!accepted) break;
   }
-  if (current !== null && converged(current)) return finishSurfaceRead(input, D, ex, ey, v, s, current.roll, "surface-newton", iterations, integrations, meanPlane);
+  if (current !== null && converged(current))
+    return finishSurfaceRead(input, D, ex, ey, v, s, current.roll, "surface-newton", iterations, integrations, meanPlane);
 
   // Bracketed fallback: for each trial start line, Brent on the speed for the pace; then Brent on the line for the miss.
   const speedFor = (line: number): { speed: number; t: NonNullable<Trial> } | null => {
@@ -208,12 +239,14 @@ export function solveReadOnSurface(input: SurfaceReadInput): SurfaceReadResult {
   if (fa * fb <= 0) {
     const root = brentRoot(missAt, a, bLine, fa, fb, (_x, fx) => Math.abs(fx) < MISS_TOL_M, 1e-12);
     const sol = speedFor(root.x);
-    if (sol !== null && converged(sol.t)) return finishSurfaceRead(input, D, ex, ey, sol.speed, root.x, sol.t.roll, "surface-bracketed", iterations, integrations, meanPlane);
+    if (sol !== null && converged(sol.t))
+      return finishSurfaceRead(input, D, ex, ey, sol.speed, root.x, sol.t.roll, "surface-bracketed", iterations, integrations, meanPlane);
   }
   return {
     ok: false,
     reason: "no-read",
-    message: "No start line and speed on this surface send the ball through the hole at that pace without leaving the map or failing to stop.",
+    message:
+      "No start line and speed on this surface send the ball through the hole at that pace without leaving the map or failing to stop.",
   };
 }
 
@@ -267,4 +300,3 @@ function finishSurfaceRead(
     },
   };
 }
-

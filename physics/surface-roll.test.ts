@@ -43,7 +43,11 @@ describe("a planar height map is the planar model (derived: the same equation of
 
   test("the surface reproduces the plane's height and gradient exactly (bicubic Hermite is exact for planes)", () => {
     const out: [number, number] = [0, 0];
-    for (const [x, y] of [[0.1, 0.1], [7.3, 12.9], [19.99, 0.01]] as const) {
+    for (const [x, y] of [
+      [0.1, 0.1],
+      [7.3, 12.9],
+      [19.99, 0.01],
+    ] as const) {
       surface.gradientAt(x, y, out);
       expect(out[0]).toBeCloseTo(plane.g[0], 12);
       expect(out[1]).toBeCloseTo(plane.g[1], 12);
@@ -53,21 +57,39 @@ describe("a planar height map is the planar model (derived: the same equation of
 
   test("forward rolls agree with simulateRoll to 1 mm (rest point and closest pass)", () => {
     fc.assert(
-      fc.property(uniform(4, 16), uniform(4, 16), uniform(0, 2 * Math.PI), uniform(1, 5), uniform(0.5, 2.5), uniform(-8, 8), uniform(8, 13), (bx, by, bearing, D, v, line, stimpFt) => {
-        const ball: [number, number] = [bx, by];
-        const hole: [number, number] = [bx + D * Math.sin(bearing), by + D * Math.cos(bearing)];
-        const p = planarEquivalent(plane.g, ball, hole);
-        const flat = simulateRoll({ distanceM: p.distanceM, slopePct: p.slopePct, fallLineDeg: p.fallLineDeg, stimpFt, launchSpeedMps: v, startLineDeg: line });
-        const onMap = simulateRollOnSurface({ surface, stimpFt, ballM: ball, holeM: hole, launchSpeedMps: v, startLineDeg: line });
-        if (!flat.ok) return false;
-        if (!onMap.ok) return onMap.reason === "off-map"; // a roll that leaves the 20 m map has no planar rest to compare
-        const rest = p.toGreen(flat.roll.restM);
-        expect(Math.hypot(rest[0] - onMap.roll.restM[0], rest[1] - onMap.roll.restM[1])).toBeLessThan(ONE_MM);
-        const pass = p.toGreen(flat.roll.closestApproach.pointM);
-        expect(Math.hypot(pass[0] - onMap.roll.closestApproach.pointM[0], pass[1] - onMap.roll.closestApproach.pointM[1])).toBeLessThan(ONE_MM);
-        expect(onMap.roll.restarts).toBe(0);
-        return true;
-      }),
+      fc.property(
+        uniform(4, 16),
+        uniform(4, 16),
+        uniform(0, 2 * Math.PI),
+        uniform(1, 5),
+        uniform(0.5, 2.5),
+        uniform(-8, 8),
+        uniform(8, 13),
+        (bx, by, bearing, D, v, line, stimpFt) => {
+          const ball: [number, number] = [bx, by];
+          const hole: [number, number] = [bx + D * Math.sin(bearing), by + D * Math.cos(bearing)];
+          const p = planarEquivalent(plane.g, ball, hole);
+          const flat = simulateRoll({
+            distanceM: p.distanceM,
+            slopePct: p.slopePct,
+            fallLineDeg: p.fallLineDeg,
+            stimpFt,
+            launchSpeedMps: v,
+            startLineDeg: line,
+          });
+          const onMap = simulateRollOnSurface({ surface, stimpFt, ballM: ball, holeM: hole, launchSpeedMps: v, startLineDeg: line });
+          if (!flat.ok) return false;
+          if (!onMap.ok) return onMap.reason === "off-map"; // a roll that leaves the 20 m map has no planar rest to compare
+          const rest = p.toGreen(flat.roll.restM);
+          expect(Math.hypot(rest[0] - onMap.roll.restM[0], rest[1] - onMap.roll.restM[1])).toBeLessThan(ONE_MM);
+          const pass = p.toGreen(flat.roll.closestApproach.pointM);
+          expect(Math.hypot(pass[0] - onMap.roll.closestApproach.pointM[0], pass[1] - onMap.roll.closestApproach.pointM[1])).toBeLessThan(
+            ONE_MM,
+          );
+          expect(onMap.roll.restarts).toBe(0);
+          return true;
+        },
+      ),
       { numRuns: 25, seed: 314 },
     );
   });
@@ -82,7 +104,7 @@ describe("a planar height map is the planar model (derived: the same equation of
     const onMap = solveReadOnSurface({ surface, stimpFt: 10, ballM: ball, holeM: hole, pace });
     if (!flat.ok || !onMap.ok) throw new Error("both must solve");
     expect(Math.abs(onMap.read.aimOffsetM! - flat.read.aimOffsetM!)).toBeLessThan(ONE_MM);
-    expect(Math.abs(onMap.read.startLineDeg - flat.read.startLineDeg)).toBeLessThan(ONE_MM / p.distanceM * (180 / Math.PI));
+    expect(Math.abs(onMap.read.startLineDeg - flat.read.startLineDeg)).toBeLessThan((ONE_MM / p.distanceM) * (180 / Math.PI));
     expect(Math.abs(onMap.read.launchSpeedMps - flat.read.launchSpeedMps)).toBeLessThan(1e-3);
     expect(Math.abs(onMap.read.rollPastM - flat.read.rollPastM)).toBeLessThan(ONE_MM);
     expect(onMap.read.breaks).toBe(flat.read.breaks);

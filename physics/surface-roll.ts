@@ -37,7 +37,13 @@ export interface SurfaceRoll {
   /** Where the ball's centre crossed the hole's edge before its closest pass (null if it never did). */
   readonly rim: RimCrossing | null;
   /** Samples along the path: time (s), speed (m/s), position (m) and height (m). */
-  readonly samples: { readonly timeS: number[]; readonly speedMps: number[]; readonly xM: number[]; readonly yM: number[]; readonly heightM: number[] };
+  readonly samples: {
+    readonly timeS: number[];
+    readonly speedMps: number[];
+    readonly xM: number[];
+    readonly yM: number[];
+    readonly heightM: number[];
+  };
   /** Times the ball stopped where the slope was too steep to hold it and rolled on from rest. */
   readonly restarts: number;
   readonly diagnostics: { readonly steps: number; readonly evaluations: number };
@@ -79,7 +85,8 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
   const { surface, ballM, holeM } = input;
   const model = input.model ?? DEFAULT_ROLL_MODEL;
   if (!surface.contains(ballM[0], ballM[1])) throw new RangeError(`ballM (${ballM.join(", ")}) is outside the height map`);
-  if (!(input.launchSpeedMps >= 0) || !Number.isFinite(input.launchSpeedMps)) throw new RangeError(`launchSpeedMps must be ≥ 0 (got ${input.launchSpeedMps})`);
+  if (!(input.launchSpeedMps >= 0) || !Number.isFinite(input.launchSpeedMps))
+    throw new RangeError(`launchSpeedMps must be ≥ 0 (got ${input.launchSpeedMps})`);
   if (!Number.isFinite(input.startLineDeg)) throw new RangeError(`startLineDeg must be finite (got ${input.startLineDeg})`);
   const D = Math.hypot(holeM[0] - ballM[0], holeM[1] - ballM[1]);
   if (!(D > 0)) throw new RangeError("ball and hole must be apart");
@@ -138,7 +145,15 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
   const path = (): [number, number][] => thin(samples.xM.map((x, i) => [x, samples.yM[i]!] as [number, number]));
   const noRest = (reason: SurfaceNoRest["reason"], y: readonly number[], why: string): SurfaceNoRest => {
     const local = localAg(y[0]!, y[1]!);
-    return { ok: false, reason, message: why, lastM: [y[0]!, y[1]!], localSlopePct: local.slopePct, maxStoppableSlopePct: maxSlope, path: path() };
+    return {
+      ok: false,
+      reason,
+      message: why,
+      lastM: [y[0]!, y[1]!],
+      localSlopePct: local.slopePct,
+      maxStoppableSlopePct: maxSlope,
+      path: path(),
+    };
   };
 
   let restarts = 0;
@@ -146,7 +161,13 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
     if (Math.hypot(state[2]!, state[3]!) > 0) {
       let run;
       try {
-        run = integrateWithEvents(rhs, 0, state, tauMax, events, { relTol: 1e-9, absTol, maxSteps: 20000, initialStep: (0.01 * vRef) / ar, samplesPerStep: 5 });
+        run = integrateWithEvents(rhs, 0, state, tauMax, events, {
+          relTol: 1e-9,
+          absTol,
+          maxSteps: 20000,
+          initialStep: (0.01 * vRef) / ar,
+          samplesPerStep: 5,
+        });
       } catch (error) {
         return noRest("cannot-stop", state, `The roll did not settle: ${(error as Error).message}`);
       }
@@ -161,7 +182,11 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
         return noRest("off-map", run.y, "The ball rolls off the height map before it stops; extend the map or roll it more gently.");
       }
       if (run.terminalEvent !== 0) {
-        return noRest("cannot-stop", run.y, "The ball does not come to rest on this surface within the roll's budget (the slopes are too steep to hold it).");
+        return noRest(
+          "cannot-stop",
+          run.y,
+          "The ball does not come to rest on this surface within the roll's budget (the slopes are too steep to hold it).",
+        );
       }
       state = finishInClosedForm(run.y, localAg(run.y[0]!, run.y[1]!), ar);
       record(state);
@@ -169,7 +194,11 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
     const local = localAg(state[0]!, state[1]!);
     if (local.ag < ar) break;
     if (restarts >= MAX_RESTARTS) {
-      return noRest("cannot-stop", state, `The ball cannot stay at rest here: the local slope (${local.slopePct.toFixed(1)} %) is steeper than the ${maxSlope.toFixed(1)} % a ball can stop on at Stimp ${input.stimpFt}.`);
+      return noRest(
+        "cannot-stop",
+        state,
+        `The ball cannot stay at rest here: the local slope (${local.slopePct.toFixed(1)} %) is steeper than the ${maxSlope.toFixed(1)} % a ball can stop on at Stimp ${input.stimpFt}.`,
+      );
     }
     // Too steep to hold the ball: it rolls on from rest down the steepest descent.
     restarts++;
@@ -211,7 +240,14 @@ export function simulateRollOnSurface(input: SurfaceRollInput): SurfaceRollResul
       restHeightM: surface.heightAt(rest[0]!, rest[1]!),
       rollLengthM: rest[5]!,
       rollTimeS: rest[4]!,
-      closestApproach: { distanceM: d, offsetM: side >= 0 ? d : -d, speedMps: speed, alongPathM: closest[5]!, pointM: [closest[0]!, closest[1]!], atRest },
+      closestApproach: {
+        distanceM: d,
+        offsetM: side >= 0 ? d : -d,
+        speedMps: speed,
+        alongPathM: closest[5]!,
+        pointM: [closest[0]!, closest[1]!],
+        atRest,
+      },
       capture: captureAtRim(d, rim, speed, dist(rest) < HOLE_RADIUS_M),
       rim,
       samples,

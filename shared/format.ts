@@ -174,7 +174,10 @@ export const DYING_ROLL_PAST_M = 0.01;
 /** The answer's pace: "Firm enough to finish 17 in past if it misses" and "Hit it as hard as a flat 11 ft 3 in putt". */
 export function paceWords(rollPastM: number, flatPuttLengthM: number, units: UnitSystem): { headline: string; flatPutt: string } {
   return {
-    headline: rollPastM < DYING_ROLL_PAST_M ? "Just reach the hole: a dying pace" : `Firm enough to finish ${formatShort(rollPastM, units)} past if it misses`,
+    headline:
+      rollPastM < DYING_ROLL_PAST_M
+        ? "Just reach the hole: a dying pace"
+        : `Firm enough to finish ${formatShort(rollPastM, units)} past if it misses`,
     flatPutt: `Hit it as hard as a flat ${formatLength(Math.max(0, flatPuttLengthM), units)} putt`,
   };
 }

@@ -56,32 +56,41 @@ describe("heights from walked slopes (least squares; docs/sources.md, 'A green f
 
   // Tolerance: with 0.2 % of noise per reading on 1 m spacing, heights within 8 mm everywhere (the noise integrates
   // like a random walk: 2 mm a step), reads within max(2 cm, 10 %) of the original's aim (the issue's bound).
-  it.each(SURFACES.map((s, i) => ({ ...s, seed: 17 + i })))("$name: noisy slopes (σ 0.2 %) rebuild the heights within 8 mm and the reads within max(2 cm, 10 %) of aim", (surface) => {
-    const grid = walk(surface, NOISE_PCT, surface.seed);
-    const rebuilt = heightsFromGradients(grid);
-    const error = maxHeightError(surface, rebuilt.heightsM);
-    expect(error).toBeLessThan(0.008);
-    // The misfit reflects the noise: about the noise's size, not zero, not many times it.
-    expect(rebuilt.rmsResidualPct).toBeGreaterThan(0.05);
-    expect(rebuilt.rmsResidualPct).toBeLessThan(2 * NOISE_PCT);
+  it.each(SURFACES.map((s, i) => ({ ...s, seed: 17 + i })))(
+    "$name: noisy slopes (σ 0.2 %) rebuild the heights within 8 mm and the reads within max(2 cm, 10 %) of aim",
+    (surface) => {
+      const grid = walk(surface, NOISE_PCT, surface.seed);
+      const rebuilt = heightsFromGradients(grid);
+      const error = maxHeightError(surface, rebuilt.heightsM);
+      expect(error).toBeLessThan(0.008);
+      // The misfit reflects the noise: about the noise's size, not zero, not many times it.
+      expect(rebuilt.rmsResidualPct).toBeGreaterThan(0.05);
+      expect(rebuilt.rmsResidualPct).toBeLessThan(2 * NOISE_PCT);
 
-    const stored = validateHeightMap({ spacingM: S, originM: [0, 0], heightsM: rebuilt.heightsM, source: "grid", spotCount: null });
-    expect(stored.ok).toBe(true);
-    const original = surveyed(surface);
-    const walked = surfaceFromGrid({ spacingM: S, originM: [0, 0], heightsM: rebuilt.heightsM });
-    for (const [ballM, holeM] of [
-      [[4, 1], [4.6, 6.5]],
-      [[1, 3.5], [6.8, 4.4]],
-    ] as const) {
-      const a = solveReadOnSurface({ surface: original, stimpFt: 10, ballM, holeM });
-      const b = solveReadOnSurface({ surface: walked, stimpFt: 10, ballM, holeM });
-      expect(a.ok && b.ok).toBe(true);
-      if (!a.ok || !b.ok) continue;
-      const aimA = a.read.aimOffsetM!;
-      const aimB = b.read.aimOffsetM!;
-      expect(Math.abs(aimB - aimA)).toBeLessThanOrEqual(Math.max(0.02, 0.1 * Math.abs(aimA)));
-    }
-  });
+      const stored = validateHeightMap({ spacingM: S, originM: [0, 0], heightsM: rebuilt.heightsM, source: "grid", spotCount: null });
+      expect(stored.ok).toBe(true);
+      const original = surveyed(surface);
+      const walked = surfaceFromGrid({ spacingM: S, originM: [0, 0], heightsM: rebuilt.heightsM });
+      for (const [ballM, holeM] of [
+        [
+          [4, 1],
+          [4.6, 6.5],
+        ],
+        [
+          [1, 3.5],
+          [6.8, 4.4],
+        ],
+      ] as const) {
+        const a = solveReadOnSurface({ surface: original, stimpFt: 10, ballM, holeM });
+        const b = solveReadOnSurface({ surface: walked, stimpFt: 10, ballM, holeM });
+        expect(a.ok && b.ok).toBe(true);
+        if (!a.ok || !b.ok) continue;
+        const aimA = a.read.aimOffsetM!;
+        const aimB = b.read.aimOffsetM!;
+        expect(Math.abs(aimB - aimA)).toBeLessThanOrEqual(Math.max(0.02, 0.1 * Math.abs(aimA)));
+      }
+    },
+  );
 
   it("a single bad reading (3 % off: the phone on a tuft) has the largest misfit and is flagged", () => {
     const grid = walk(SURFACES[1]!, NOISE_PCT, 5);
@@ -93,8 +102,9 @@ describe("heights from walked slopes (least squares; docs/sources.md, 'A green f
     expect(rebuilt.residualPct[bad]).toBeGreaterThan(SUSPECT_RESIDUAL_PCT);
     // With the plain noise only, no spot is flagged on this walk, nor (19 in 20) on others (measured on 59 seeds).
     expect(Math.max(...heightsFromGradients(grid).residualPct)).toBeLessThan(SUSPECT_RESIDUAL_PCT);
-    const flagged = Array.from({ length: 40 }, (_, seed) => Math.max(...heightsFromGradients(walk(SURFACES[1]!, NOISE_PCT, 100 + seed)).residualPct))
-      .filter((m) => m >= SUSPECT_RESIDUAL_PCT).length;
+    const flagged = Array.from({ length: 40 }, (_, seed) =>
+      Math.max(...heightsFromGradients(walk(SURFACES[1]!, NOISE_PCT, 100 + seed)).residualPct),
+    ).filter((m) => m >= SUSPECT_RESIDUAL_PCT).length;
     expect(flagged).toBeLessThanOrEqual(4);
   });
 

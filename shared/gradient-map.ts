@@ -38,7 +38,8 @@ export type RebuiltSurface = {
  */
 export function heightsFromGradients(grid: WalkedGrid): RebuiltSurface {
   const { nx, ny, spacingM: s, gradients } = grid;
-  if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2) throw new RangeError(`a walked grid needs at least 2 × 2 spots (got ${nx} × ${ny})`);
+  if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2)
+    throw new RangeError(`a walked grid needs at least 2 × 2 spots (got ${nx} × ${ny})`);
   if (gradients.length !== nx * ny) throw new RangeError(`expected ${nx * ny} gradients, got ${gradients.length}`);
   if (!(s > 0) || !Number.isFinite(s)) throw new RangeError(`spacingM must be > 0 (got ${s})`);
   for (const g of gradients) if (!Number.isFinite(g[0]) || !Number.isFinite(g[1])) throw new RangeError("every gradient must be finite");
@@ -97,7 +98,10 @@ export function heightsFromGradients(grid: WalkedGrid): RebuiltSurface {
 }
 
 /** The stored height map of a walk: its south-west spot at the origin (the first spot walked), rows north to south. */
-export function walkedHeightMap(grid: Pick<WalkedGrid, "spacingM">, rebuilt: RebuiltSurface): Pick<StoredHeightMap, "spacingM" | "originM" | "heightsM"> {
+export function walkedHeightMap(
+  grid: Pick<WalkedGrid, "spacingM">,
+  rebuilt: RebuiltSurface,
+): Pick<StoredHeightMap, "spacingM" | "originM" | "heightsM"> {
   return { spacingM: grid.spacingM, originM: [0, 0], heightsM: rebuilt.heightsM };
 }
 

@@ -7,5 +7,11 @@ test("a height grid's cells go through the same parser: hexadecimal is refused, 
   expect(bad.ok).toBe(false);
   if (!bad.ok) expect(bad.errors["row 1, column 2"]).toBe('"0x1A" is not a height in metres');
   const semicolons = parseHeightGridCsv("0,12;0,09\n0,06;0\n");
-  expect(semicolons).toEqual({ ok: true, value: [[0.12, 0.09], [0.06, 0]] });
+  expect(semicolons).toEqual({
+    ok: true,
+    value: [
+      [0.12, 0.09],
+      [0.06, 0],
+    ],
+  });
 });

@@ -33,7 +33,11 @@ const fail = <T>(message: string, errors: Record<string, string>): Checked<T> =>
  * (1-based, counting data lines), as are rows of the wrong length.
  */
 export function parseHeightGridCsv(text: string): Checked<number[][]> {
-  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ""), { skipEmptyLines: "greedy", comments: "#", delimitersToGuess: [",", ";", "\t"] });
+  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ""), {
+    skipEmptyLines: "greedy",
+    comments: "#",
+    delimitersToGuess: [",", ";", "\t"],
+  });
   const rows = parsed.data;
   if (rows.length === 0) return fail("The file has no rows of heights.", { file: "no rows of heights" });
   const errs = collector();
@@ -45,7 +49,11 @@ export function parseHeightGridCsv(text: string): Checked<number[][]> {
       row.map((cell, c) => {
         const t = cell.trim();
         const v = parseDecimal(t) ?? Number.NaN;
-        if (!Number.isFinite(v)) errs.add(`row ${r + 1}, column ${c + 1}`, t === "" ? "is empty (a hole in the grid)" : `"${t.slice(0, 20)}" is not a height in metres`);
+        if (!Number.isFinite(v))
+          errs.add(
+            `row ${r + 1}, column ${c + 1}`,
+            t === "" ? "is empty (a hole in the grid)" : `"${t.slice(0, 20)}" is not a height in metres`,
+          );
         return v;
       }),
     );
@@ -56,7 +64,11 @@ export function parseHeightGridCsv(text: string): Checked<number[][]> {
 
 /** A CSV of spot heights: rows x,y,z in metres (an optional header line x,y,z; # comments). */
 export function parseSpotHeightsCsv(text: string): Checked<[number, number, number][]> {
-  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ""), { skipEmptyLines: "greedy", comments: "#", delimitersToGuess: [",", ";", "\t"] });
+  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ""), {
+    skipEmptyLines: "greedy",
+    comments: "#",
+    delimitersToGuess: [",", ";", "\t"],
+  });
   let rows = parsed.data;
   if (rows.length > 0 && rows[0]!.map((c) => c.trim().toLowerCase()).join(",") === "x,y,z") rows = rows.slice(1);
   const errs = collector();
@@ -82,8 +94,10 @@ export function parseSpotHeightsCsv(text: string): Checked<[number, number, numb
  * node must lie inside the surveyed area (the convex hull of the points): survey the corners, or send a grid.
  */
 export function gridFromSpotHeights(points: readonly (readonly [number, number, number])[], spacingM: number): Checked<StoredHeightMap> {
-  if (points.length < HEIGHT_MAP_LIMITS.spots.min) return fail("Too few spot heights.", { points: `at least ${HEIGHT_MAP_LIMITS.spots.min} spot heights` });
-  if (points.length > HEIGHT_MAP_LIMITS.spots.max) return fail("Too many spot heights.", { points: `at most ${HEIGHT_MAP_LIMITS.spots.max} spot heights` });
+  if (points.length < HEIGHT_MAP_LIMITS.spots.min)
+    return fail("Too few spot heights.", { points: `at least ${HEIGHT_MAP_LIMITS.spots.min} spot heights` });
+  if (points.length > HEIGHT_MAP_LIMITS.spots.max)
+    return fail("Too many spot heights.", { points: `at most ${HEIGHT_MAP_LIMITS.spots.max} spot heights` });
   const xs = points.map((p) => p[0]);
   const ys = points.map((p) => p[1]);
   const minX = Math.min(...xs);
@@ -94,7 +108,11 @@ export function gridFromSpotHeights(points: readonly (readonly [number, number, 
   const ny = Math.floor((maxY - minY) / spacingM + 1e-9) + 1;
   const size = checkSize<StoredHeightMap>(nx, ny);
   if (size) return size;
-  const delaunay = Delaunator.from([...points], (p) => p[0], (p) => p[1]);
+  const delaunay = Delaunator.from(
+    [...points],
+    (p) => p[0],
+    (p) => p[1],
+  );
   const tri = delaunay.triangles;
   if (tri.length === 0) return fail("The spot heights lie on a line.", { points: "they lie on one line: no surface can be fitted" });
   const heights = Array.from({ length: ny }, () => new Array<number>(nx).fill(Number.NaN));
@@ -159,7 +177,8 @@ export function validateHeightMap(map: StoredHeightMap): Checked<StoredHeightMap
     if (row.length !== nx) errs.add(`row ${r + 1}`, `has ${row.length} values; row 1 has ${nx} (every row needs the same number)`);
     row.forEach((v, c) => {
       if (!Number.isFinite(v)) errs.add(`row ${r + 1}, column ${c + 1}`, "is not a finite height (a hole in the grid)");
-      else if (Math.abs(v) > HEIGHT_MAP_LIMITS.maxAbsHeightM) errs.add(`row ${r + 1}, column ${c + 1}`, `${v} m is beyond ±${HEIGHT_MAP_LIMITS.maxAbsHeightM} m`);
+      else if (Math.abs(v) > HEIGHT_MAP_LIMITS.maxAbsHeightM)
+        errs.add(`row ${r + 1}, column ${c + 1}`, `${v} m is beyond ±${HEIGHT_MAP_LIMITS.maxAbsHeightM} m`);
     });
   });
   if (errs.count > 0) return fail(`The grid has ${errs.count} problem(s).`, errs.errors);
@@ -170,11 +189,19 @@ export function validateHeightMap(map: StoredHeightMap): Checked<StoredHeightMap
       const v = rows[r]![c]!;
       if (c + 1 < nx) {
         const g = (100 * Math.abs(rows[r]![c + 1]! - v)) / h;
-        if (g > max) errs.add(`row ${r + 1}, column ${c + 1}`, `grade ${g.toFixed(1)} % to column ${c + 2} is over ${max} %: check the heights and the spacing`);
+        if (g > max)
+          errs.add(
+            `row ${r + 1}, column ${c + 1}`,
+            `grade ${g.toFixed(1)} % to column ${c + 2} is over ${max} %: check the heights and the spacing`,
+          );
       }
       if (r + 1 < ny) {
         const g = (100 * Math.abs(rows[r + 1]![c]! - v)) / h;
-        if (g > max) errs.add(`row ${r + 1}, column ${c + 1}`, `grade ${g.toFixed(1)} % to row ${r + 2} is over ${max} %: check the heights and the spacing`);
+        if (g > max)
+          errs.add(
+            `row ${r + 1}, column ${c + 1}`,
+            `grade ${g.toFixed(1)} % to row ${r + 2} is over ${max} %: check the heights and the spacing`,
+          );
       }
     }
   }

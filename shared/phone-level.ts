@@ -186,7 +186,8 @@ const wrap360 = (deg: number) => ((deg % 360) + 360) % 360;
  */
 export function headingFromOrientation(e: OrientationSample | null | undefined): number | null {
   if (!e) return null;
-  if (e.webkitCompassHeading != null && Number.isFinite(e.webkitCompassHeading) && e.webkitCompassHeading >= 0) return wrap360(e.webkitCompassHeading);
+  if (e.webkitCompassHeading != null && Number.isFinite(e.webkitCompassHeading) && e.webkitCompassHeading >= 0)
+    return wrap360(e.webkitCompassHeading);
   if (e.absolute !== true || e.alpha == null || !Number.isFinite(e.alpha)) return null;
   return wrap360(360 - e.alpha);
 }

@@ -24,7 +24,8 @@ function putts(lengthFt: number, n: number, made: number): PlanPutt[] {
  * length but one loses nothing there.
  */
 function tourLevelPlayer(except: { lengthFt: number; n: number; made: number }): PlanPutt[] {
-  const at = (lengthFt: number, rate: number, n = 40) => (lengthFt === except.lengthFt ? putts(except.lengthFt, except.n, except.made) : putts(lengthFt, n, Math.round(rate * n)));
+  const at = (lengthFt: number, rate: number, n = 40) =>
+    lengthFt === except.lengthFt ? putts(except.lengthFt, except.n, except.made) : putts(lengthFt, n, Math.round(rate * n));
   return [...at(2, 0.99), ...at(4, 0.88), ...at(8, 0.5), ...at(15, 0.23), ...at(20, 0.15), ...at(40, 0.04)];
 }
 
@@ -32,7 +33,12 @@ const noRounds = { rounds: 0, facedM: [] as number[] };
 
 test("a player weak only at 6–10 ft gets a plan for 6–10 ft alone", () => {
   // 8 ft: 8 of 40 holed (20 %) where the tour holes 50 % (Broadie 2014 [secondary]); tour level everywhere else.
-  const p = buildPracticePlan({ putts: tourLevelPlayer({ lengthFt: 8, n: 40, made: 8 }), course: noRounds, edgesM: EDGES, units: "imperial" });
+  const p = buildPracticePlan({
+    putts: tourLevelPlayer({ lengthFt: 8, n: 40, made: 8 }),
+    course: noRounds,
+    edgesM: EDGES,
+    units: "imperial",
+  });
   expect(p.status).toBe("plan");
   const plan = p as PlanReady;
   expect(plan.targets).toEqual([BAND_6_10]);
@@ -67,13 +73,23 @@ test("a player with too few putts is told to log more first, not given a plan", 
 });
 
 test("a player at tour level everywhere gets no plan: no loss is clear of its interval", () => {
-  const p = buildPracticePlan({ putts: tourLevelPlayer({ lengthFt: -1, n: 0, made: 0 }), course: noRounds, edgesM: EDGES, units: "imperial" });
+  const p = buildPracticePlan({
+    putts: tourLevelPlayer({ lengthFt: -1, n: 0, made: 0 }),
+    course: noRounds,
+    edgesM: EDGES,
+    units: "imperial",
+  });
   expect(p.status).toBe("no-clear-loss");
 });
 
 test("a loss inside its interval is not targeted, however large it looks", () => {
   // 8 ft: 3 of 15 (20 %): Wilson 95 % ≈ 0.07–0.45 reaches the tour's 50 %? No — but 6 of 15 (40 %) spans 0.20–0.64, which does.
-  const p = buildPracticePlan({ putts: tourLevelPlayer({ lengthFt: 8, n: 15, made: 6 }), course: noRounds, edgesM: EDGES, units: "imperial" });
+  const p = buildPracticePlan({
+    putts: tourLevelPlayer({ lengthFt: 8, n: 15, made: 6 }),
+    course: noRounds,
+    edgesM: EDGES,
+    units: "imperial",
+  });
   expect(p.status).toBe("no-clear-loss");
   expect(p.bands[BAND_6_10]!.lossPerPutt).toBeGreaterThan(0);
 });
@@ -115,11 +131,22 @@ test("the published first-putt shares (from memory, docs/sources.md) run from 0 
   expect(publishedFirstPuttShareBelow(0)).toBe(0);
   expect(publishedFirstPuttShareBelow(ft(10))).toBeCloseTo(0.34, 12);
   expect(publishedFirstPuttShareBelow(ft(200))).toBe(1);
-  fc.assert(fc.property(fc.double({ min: 0, max: 40, noNaN: true }), fc.double({ min: 0, max: 40, noNaN: true }), (a, b) => publishedFirstPuttShareBelow(Math.min(a, b)) <= publishedFirstPuttShareBelow(Math.max(a, b))));
+  fc.assert(
+    fc.property(
+      fc.double({ min: 0, max: 40, noNaN: true }),
+      fc.double({ min: 0, max: 40, noNaN: true }),
+      (a, b) => publishedFirstPuttShareBelow(Math.min(a, b)) <= publishedFirstPuttShareBelow(Math.max(a, b)),
+    ),
+  );
 });
 
 test("metric bands give rungs in tenths of a metre inside the band", () => {
-  const p = buildPracticePlan({ putts: tourLevelPlayer({ lengthFt: 8, n: 40, made: 8 }), course: noRounds, edgesM: DEFAULT_BAND_EDGES_M.metric, units: "metric" }) as PlanReady;
+  const p = buildPracticePlan({
+    putts: tourLevelPlayer({ lengthFt: 8, n: 40, made: 8 }),
+    course: noRounds,
+    edgesM: DEFAULT_BAND_EDGES_M.metric,
+    units: "metric",
+  }) as PlanReady;
   expect(p.status).toBe("plan");
   // 8 ft = 2.44 m lies in the 2–3 m band.
   expect(p.targets).toEqual([2]);
@@ -127,21 +154,34 @@ test("metric bands give rungs in tenths of a metre inside the band", () => {
 });
 
 test("the weekly volume gives each target length about 40 putts a week, in at least two sessions", () => {
-  const rungs = (n: number, balls: number) => Array.from({ length: n }, (_, i) => ({ distanceM: 1 + i, balls, passRule: { kind: "make" as const, made: 1 } }));
+  const rungs = (n: number, balls: number) =>
+    Array.from({ length: n }, (_, i) => ({ distanceM: 1 + i, balls, passRule: { kind: "make" as const, made: 1 } }));
   // Two bands, 3 rungs of 4 balls each: 12 putts a band a session → 4 sessions (48 putts a band; 3 would give 36).
-  expect(weeklyVolume({ name: "x", failRule: "repeat", rungs: rungs(6, 4) }, 2)).toEqual({ sessions: 4, puttsPerSession: 24, puttsPerWeek: 96, puttsPerTargetBand: 48 });
+  expect(weeklyVolume({ name: "x", failRule: "repeat", rungs: rungs(6, 4) }, 2)).toEqual({
+    sessions: 4,
+    puttsPerSession: 24,
+    puttsPerWeek: 96,
+    puttsPerTargetBand: 48,
+  });
   expect(weeklyVolume({ name: "x", failRule: "repeat", rungs: rungs(6, 10) }, 2).sessions).toBe(2);
 });
 
 describe("plan properties", () => {
-  const logArb = fc.array(fc.record({ distanceM: fc.double({ min: 0.3, max: 20, noNaN: true }), holed: fc.boolean() }), { minLength: 0, maxLength: 300 });
+  const logArb = fc.array(fc.record({ distanceM: fc.double({ min: 0.3, max: 20, noNaN: true }), holed: fc.boolean() }), {
+    minLength: 0,
+    maxLength: 300,
+  });
   test("a plan targets at most two bands, each with a clear loss, and its ladder is valid", () => {
     fc.assert(
       fc.property(logArb, (log) => {
         const p = buildPracticePlan({ putts: log, course: noRounds, edgesM: EDGES, units: "imperial" });
         if (log.length < MIN_PLAN_PUTTS) return p.status === "log-more";
         if (p.status !== "plan") return true;
-        return p.targets.length <= 2 && p.targets.every((i) => p.bands[i]!.clearLoss && p.bands[i]!.target) && ladderInputSchema.safeParse(p.ladder).success;
+        return (
+          p.targets.length <= 2 &&
+          p.targets.every((i) => p.bands[i]!.clearLoss && p.bands[i]!.target) &&
+          ladderInputSchema.safeParse(p.ladder).success
+        );
       }),
       { numRuns: 60 },
     );
@@ -159,7 +199,12 @@ describe("weekly check", () => {
   });
 
   test("weeks run seven days from the start, the last one up to today", () => {
-    const plan = buildPracticePlan({ putts: tourLevelPlayer({ lengthFt: 8, n: 40, made: 8 }), course: noRounds, edgesM: EDGES, units: "imperial" }) as PlanReady;
+    const plan = buildPracticePlan({
+      putts: tourLevelPlayer({ lengthFt: 8, n: 40, made: 8 }),
+      course: noRounds,
+      edgesM: EDGES,
+      units: "imperial",
+    }) as PlanReady;
     const log = [
       ...putts(8, 20, 4).map((p) => ({ ...p, day: "2026-11-20" })),
       ...putts(8, 20, 15).map((p) => ({ ...p, day: "2026-11-25" })),

@@ -110,7 +110,8 @@ export function analyseBands(input: PlanInput): { bands: PlanBand[]; frequency: 
     const ps = input.putts.filter((p) => inBand(p.distanceM, b));
     const attempts = ps.length;
     const made = ps.filter((p) => p.holed).length;
-    const baselineRate = attempts > 0 ? ps.reduce((s, p) => s + tourOnePuttRate(p.distanceM), 0) / attempts : tourOnePuttRate((b.fromM + bandTop(b)) / 2);
+    const baselineRate =
+      attempts > 0 ? ps.reduce((s, p) => s + tourOnePuttRate(p.distanceM), 0) / attempts : tourOnePuttRate((b.fromM + bandTop(b)) / 2);
     const ci95 = wilsonInterval(made, attempts);
     const rate = attempts > 0 ? made / attempts : null;
     const lossPerPutt = rate === null ? null : baselineRate - rate;
@@ -228,7 +229,8 @@ export function buildPracticePlan(input: PlanInput): PlanProposal {
   if (ranked.length === 0) {
     return {
       status: "no-clear-loss",
-      message: "No length stands out: at every length you have logged enough of, your make rate is within reach of the tour's. Keep practising a mix and check back.",
+      message:
+        "No length stands out: at every length you have logged enough of, your make rate is within reach of the tour's. Keep practising a mix and check back.",
       ...base,
     };
   }
@@ -261,4 +263,3 @@ export function buildPracticePlan(input: PlanInput): PlanProposal {
   };
   return plan;
 }
-

@@ -64,7 +64,14 @@ export function puttWriter(db: Db, options: { maxGroup?: number } = {}) {
         // One putt the database refuses must not take the others down with it: each is tried alone, and only
         // the refused one fails.
         if (group.length === 1) throw error;
-        return await Promise.all(group.map((p) => insertGroup(db, [p]).then(([id]) => id ?? null, (e: unknown) => toError(e))));
+        return await Promise.all(
+          group.map((p) =>
+            insertGroup(db, [p]).then(
+              ([id]) => id ?? null,
+              (e: unknown) => toError(e),
+            ),
+          ),
+        );
       });
       writing = run.catch(() => undefined);
       return await run;

@@ -27,7 +27,6 @@ export const DEMO_GREEN = {
 
 export const DEMO_SQUAD = { name: "Larkspur juniors", description: "Saturday-morning junior squad at Larkspur Heath." };
 
-
 export const DEMO_LADDERS: LadderInput[] = [
   {
     name: "Three-to-nine",

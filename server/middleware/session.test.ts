@@ -12,7 +12,16 @@ function fakeAuth(user: { banned?: boolean; role?: string } | null) {
       getSession: async ({ headers }: { headers: Headers }) => {
         asked.push(headers.get("cookie") ?? "");
         return user
-          ? { user: { id: "u1", name: "Ivo", email: "ivo@example.test", role: user.role ?? "player", emailVerified: true, banned: user.banned ?? false } }
+          ? {
+              user: {
+                id: "u1",
+                name: "Ivo",
+                email: "ivo@example.test",
+                role: user.role ?? "player",
+                emailVerified: true,
+                banned: user.banned ?? false,
+              },
+            }
           : null;
       },
     },

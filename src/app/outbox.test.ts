@@ -71,8 +71,20 @@ test("practice and ladder putts logged offline wait in one entry, and a reloaded
   logPractice(first, "practice-2");
   queueLadderPutt(first, { assignmentId: ASSIGNMENT, clientId: "ladder-2", holed: false, missSide: "left" });
   await vi.waitFor(() => expect(keptIds()).toEqual(["practice-1", "ladder-1", "practice-2", "ladder-2"]));
-  expect(stored()!.mutations.map((m) => m.mutationKey)).toEqual([practiceKeys.addPutt(), coachingKeys.addLadderPutt(), practiceKeys.addPutt(), coachingKeys.addLadderPutt()]);
-  await vi.waitFor(() => expect(first.getMutationCache().getAll().every((m) => m.state.isPaused)).toBe(true));
+  expect(stored()!.mutations.map((m) => m.mutationKey)).toEqual([
+    practiceKeys.addPutt(),
+    coachingKeys.addLadderPutt(),
+    practiceKeys.addPutt(),
+    coachingKeys.addLadderPutt(),
+  ]);
+  await vi.waitFor(() =>
+    expect(
+      first
+        .getMutationCache()
+        .getAll()
+        .every((m) => m.state.isPaused),
+    ).toBe(true),
+  );
 
   // Reload: the stored queue comes back; online, both kinds go out, in the order played, once each.
   network.resetHandlers();
@@ -130,7 +142,13 @@ test("a 409 (the ladder was completed elsewhere) drops that assignment's waiting
 });
 
 test("ladder putts left in an earlier version's queue (one entry per assignment) join the outbox at start", async () => {
-  window.localStorage.setItem(`borrowline.ladder-run.${ASSIGNMENT}`, JSON.stringify([{ clientId: "old-1", holed: false, missSide: "right", missLengthM: -0.3, ready: false }, { clientId: "old-2", holed: true, ready: true }]));
+  window.localStorage.setItem(
+    `borrowline.ladder-run.${ASSIGNMENT}`,
+    JSON.stringify([
+      { clientId: "old-1", holed: false, missSide: "right", missLengthM: -0.3, ready: false },
+      { clientId: "old-2", holed: true, ready: true },
+    ]),
+  );
   const reached = server();
   page();
   await vi.waitFor(() => expect(reached.ladder.map((p) => p.clientId)).toEqual(["old-1", "old-2"]));

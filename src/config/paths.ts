@@ -13,7 +13,10 @@ export const paths = {
   signIn: { path: "/sign-in", href: (next?: string) => withNext("/sign-in", next) },
   signUp: { path: "/sign-up", href: (next?: string) => withNext("/sign-up", next) },
   forgotPassword: { path: "/forgot-password", href: () => "/forgot-password" },
-  resetPassword: { path: "/reset-password", href: (token?: string) => (token ? `/reset-password?token=${encodeURIComponent(token)}` : "/reset-password") },
+  resetPassword: {
+    path: "/reset-password",
+    href: (token?: string) => (token ? `/reset-password?token=${encodeURIComponent(token)}` : "/reset-password"),
+  },
   account: { path: "/account", href: () => "/account" },
 
   // the five flows (reserved; routes are registered as each feature lands)
@@ -76,7 +79,8 @@ export const apiPaths = {
   green: (id: string) => `/api/greens/${encodeURIComponent(id)}`,
   greenSquad: (id: string) => `/api/greens/${encodeURIComponent(id)}/squad`,
   greenStimpReadings: (id: string) => `/api/greens/${encodeURIComponent(id)}/stimp-readings`,
-  greenStimpReading: (id: string, readingId: string) => `/api/greens/${encodeURIComponent(id)}/stimp-readings/${encodeURIComponent(readingId)}`,
+  greenStimpReading: (id: string, readingId: string) =>
+    `/api/greens/${encodeURIComponent(id)}/stimp-readings/${encodeURIComponent(readingId)}`,
   sessions: "/api/sessions",
   practiceSession: (id: string) => `/api/sessions/${encodeURIComponent(id)}`,
   sessionPutts: (id: string) => `/api/sessions/${encodeURIComponent(id)}/putts`,
@@ -101,7 +105,8 @@ export const apiPaths = {
   squadOverviewExport: (id: string) => `/api/coach/squads/${encodeURIComponent(id)}/overview/export`,
   invitationResend: (id: string) => `/api/invitations/${encodeURIComponent(id)}/resend`,
   adminUsers: "/api/admin/users",
-  adminUserAction: (id: string, action: "role" | "ban" | "unban" | "revoke-sessions" | "password-reset") => `/api/admin/users/${encodeURIComponent(id)}/${action}`,
+  adminUserAction: (id: string, action: "role" | "ban" | "unban" | "revoke-sessions" | "password-reset") =>
+    `/api/admin/users/${encodeURIComponent(id)}/${action}`,
   adminAudit: "/api/admin/audit",
   adminCoaching: "/api/admin/coaching",
   // coaching (issue 6)

@@ -10,14 +10,23 @@ function answer(status: number, body?: unknown, contentType = "application/json"
   network.use(
     http.all("*", ({ request }) => {
       seen.push(request.clone());
-      return new HttpResponse(body === undefined ? null : typeof body === "string" ? body : JSON.stringify(body), { status, headers: { "Content-Type": contentType } });
+      return new HttpResponse(body === undefined ? null : typeof body === "string" ? body : JSON.stringify(body), {
+        status,
+        headers: { "Content-Type": contentType },
+      });
     }),
   );
   return seen;
 }
 
 test("a 400 in the API's error shape becomes an ApiError with status, code, message and fields", async () => {
-  answer(400, { error: { code: "VALIDATION_FAILED", message: "Some fields need fixing.", fields: { distanceM: "Must be more than 0", stimpFt: "Must be between 5 and 16" } } });
+  answer(400, {
+    error: {
+      code: "VALIDATION_FAILED",
+      message: "Some fields need fixing.",
+      fields: { distanceM: "Must be more than 0", stimpFt: "Must be between 5 and 16" },
+    },
+  });
   const error = await apiRequest("/api/reads", { method: "POST", body: {} }).catch((e: unknown) => e);
   expect(error).toBeInstanceOf(ApiError);
   expect(error).toMatchObject({
@@ -47,7 +56,11 @@ test("non-string field reasons are dropped and arrays give their first reason", 
 });
 
 test("a flat {code, message} body, as better-auth sends, is understood too", () => {
-  expect(toApiError(401, { code: "UNAUTHORIZED", message: "Sign in first" })).toMatchObject({ status: 401, code: "UNAUTHORIZED", message: "Sign in first" });
+  expect(toApiError(401, { code: "UNAUTHORIZED", message: "Sign in first" })).toMatchObject({
+    status: 401,
+    code: "UNAUTHORIZED",
+    message: "Sign in first",
+  });
 });
 
 test("a JSON body is sent with its content type, same-origin credentials and the chosen method", async () => {
@@ -92,7 +105,10 @@ test("a FormData body is passed through as it is, without a JSON content type", 
 });
 
 test("an error answer keeps its whole body, so extra fields such as row errors can be read", async () => {
-  const body = { error: { code: "unprocessable", message: "2 row(s) have errors" }, errors: [{ row: 1, line: 2, field: "date", message: "missing date" }] };
+  const body = {
+    error: { code: "unprocessable", message: "2 row(s) have errors" },
+    errors: [{ row: 1, line: 2, field: "date", message: "missing date" }],
+  };
   answer(422, body);
   const error = await api.post("/api/csv/putts/import", new FormData()).catch((e: unknown) => e);
   expect(error).toMatchObject({ status: 422, message: "2 row(s) have errors", body });

@@ -124,9 +124,12 @@ export async function apiRequest<T>(url: string, options: RequestOptions = {}): 
 
 export const api = {
   get: <T>(url: string, options?: Omit<RequestOptions, "method" | "body">) => apiRequest<T>(url, { ...options, method: "GET" }),
-  post: <T>(url: string, body?: unknown, options?: Omit<RequestOptions, "method" | "body">) => apiRequest<T>(url, { ...options, method: "POST", body }),
-  put: <T>(url: string, body?: unknown, options?: Omit<RequestOptions, "method" | "body">) => apiRequest<T>(url, { ...options, method: "PUT", body }),
-  patch: <T>(url: string, body?: unknown, options?: Omit<RequestOptions, "method" | "body">) => apiRequest<T>(url, { ...options, method: "PATCH", body }),
+  post: <T>(url: string, body?: unknown, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "POST", body }),
+  put: <T>(url: string, body?: unknown, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "PUT", body }),
+  patch: <T>(url: string, body?: unknown, options?: Omit<RequestOptions, "method" | "body">) =>
+    apiRequest<T>(url, { ...options, method: "PATCH", body }),
   delete: <T>(url: string, options?: Omit<RequestOptions, "method" | "body">) => apiRequest<T>(url, { ...options, method: "DELETE" }),
 };
 

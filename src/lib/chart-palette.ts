@@ -56,9 +56,10 @@ export const TEXT_PAIRS: readonly { text: string; background: string; what: stri
 );
 
 /** Every graphic colour (lines, points, bars, legend swatches) with every background (the 3:1 check). */
-export const GRAPHIC_PAIRS: readonly { colour: string; background: string }[] = [...SERIES.map((s) => s.colour), ...Object.values(ROLE_COLOURS)].flatMap((colour) =>
-  Object.values(CHART_BACKGROUNDS).map((background) => ({ colour, background })),
-);
+export const GRAPHIC_PAIRS: readonly { colour: string; background: string }[] = [
+  ...SERIES.map((s) => s.colour),
+  ...Object.values(ROLE_COLOURS),
+].flatMap((colour) => Object.values(CHART_BACKGROUNDS).map((background) => ({ colour, background })));
 
 /** The id of a series' fill pattern (see ChartPatterns), for `fill="url(#…)"`. */
 export function patternId(i: number): string {

@@ -31,7 +31,10 @@ function kept(mutation: Mutation<unknown, Error, unknown, unknown>, keys: Readon
 export function saveMutations(client: QueryClient, options: MutationPersistenceOptions): void {
   const storage = safeStorage(options);
   if (!storage) return;
-  const { mutations } = dehydrate(client, { shouldDehydrateMutation: (m) => kept(m, options.mutationKeys), shouldDehydrateQuery: () => false });
+  const { mutations } = dehydrate(client, {
+    shouldDehydrateMutation: (m) => kept(m, options.mutationKeys),
+    shouldDehydrateQuery: () => false,
+  });
   try {
     if (mutations.length === 0) storage.removeItem(options.storageKey);
     else storage.setItem(options.storageKey, JSON.stringify({ version: 1, mutations } satisfies Stored));

@@ -1,5 +1,13 @@
 import { expect, test } from "vitest";
-import { decodeReadQuery, decodeReadQueryChecked, defaultReadValues, encodeReadQuery, fromReadRequest, isCompleteReadQuery, toReadRequest } from "./read-url";
+import {
+  decodeReadQuery,
+  decodeReadQueryChecked,
+  defaultReadValues,
+  encodeReadQuery,
+  fromReadRequest,
+  isCompleteReadQuery,
+  toReadRequest,
+} from "./read-url";
 
 test("a read's query is SI, in a fixed key order, and decodes back to the same values", () => {
   const v = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, paceMode: "rollPast" as const, rollPastM: 0.45, entrySpeedMps: 0.8 };

@@ -43,8 +43,10 @@ type PermissionApi = { requestPermission?: () => Promise<"granted" | "denied" | 
 export const TILT_PROBLEM_WORDS: Record<TiltProblem, string> = {
   unsupported: "This browser gives no tilt readings. Type the slope and pick the fall line instead.",
   insecure: "The phone's tilt sensor works only on a secure (https) address.",
-  denied: "The browser was not allowed to read the phone's motion. Allow motion and orientation for this site in its settings, then try again.",
-  "no-readings": "No tilt readings came from this device: a desk computer has no sensor. Measure with a phone on the green, or type the slope and pick the fall line.",
+  denied:
+    "The browser was not allowed to read the phone's motion. Allow motion and orientation for this site in its settings, then try again.",
+  "no-readings":
+    "No tilt readings came from this device: a desk computer has no sensor. Measure with a phone on the green, or type the slope and pick the fall line.",
   "kept-moving": "The phone never lay still for two seconds. Lay it flat on the green and take your hand away.",
 };
 
@@ -155,7 +157,9 @@ export class TiltSensor {
    * that reading, so the reading before a half turn or before walking on is not taken twice. `onSample` sees every
    * sample (to show the live spread); `signal` cancels.
    */
-  waitForStill(opts: { afterMove?: Vec3; signal?: AbortSignal; onSample?: (latest: Vec3 | null) => void } = {}): Promise<HeadedReading | TiltProblem | "cancelled"> {
+  waitForStill(
+    opts: { afterMove?: Vec3; signal?: AbortSignal; onSample?: (latest: Vec3 | null) => void } = {},
+  ): Promise<HeadedReading | TiltProblem | "cancelled"> {
     this.samples = [];
     this.disturbed = !opts.afterMove;
     this.moveFrom = opts.afterMove ?? null;

@@ -39,7 +39,12 @@ export function serve(...handlers: RequestHandler[]): Call[] {
       const url = new URL(request.url);
       const text = await request.clone().text();
       const json = request.headers.get("Content-Type")?.includes("json");
-      calls.push({ method: request.method, path: url.pathname, query: url.searchParams, body: text && json ? JSON.parse(text) : undefined });
+      calls.push({
+        method: request.method,
+        path: url.pathname,
+        query: url.searchParams,
+        body: text && json ? JSON.parse(text) : undefined,
+      });
     }),
   );
   return calls;

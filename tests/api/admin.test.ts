@@ -48,7 +48,12 @@ test("POST /api/admin/users/:id/role moves an account between player and coach a
   const [row] = await server.database.db.select({ role: user.role }).from(user).where(eq(user.id, p.id));
   expect(row!.role).toBe("coach");
   const [entry] = await auditOf(p.id);
-  expect(entry).toMatchObject({ actor: { id: admin.id, email: admin.email }, action: "role.set", target: { id: p.id, email: p.email }, detail: { from: "player", to: "coach" } });
+  expect(entry).toMatchObject({
+    actor: { id: admin.id, email: admin.email },
+    action: "role.set",
+    target: { id: p.id, email: p.email },
+    detail: { from: "player", to: "coach" },
+  });
   expect(Date.parse(entry.createdAt)).toBeGreaterThanOrEqual(before - 1000);
   // Admin is never given here; bad input is a 400 and records nothing.
   const toAdmin = await admin.client.post(`/api/admin/users/${p.id}/role`, { role: "admin" });
@@ -128,5 +133,7 @@ test("GET /api/admin/coaching names the owner of every squad and ladder", async 
   const res = await admin.client.get("/api/admin/coaching");
   expect(res.status).toBe(200);
   expect(res.body.squads).toContainEqual(expect.objectContaining({ id: s1, owner: { id: c1.id, name: "Owner Anna", email: c1.email } }));
-  expect(res.body.ladders).toContainEqual(expect.objectContaining({ id: l2, owner: { id: c2.id, name: "Owner Bert", email: c2.email }, rungs: 3 }));
+  expect(res.body.ladders).toContainEqual(
+    expect.objectContaining({ id: l2, owner: { id: c2.id, name: "Owner Bert", email: c2.email }, rungs: 3 }),
+  );
 });

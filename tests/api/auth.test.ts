@@ -35,7 +35,13 @@ test("POST /api/auth/sign-up/email with accountType coach makes a coach", async 
 test("POST /api/auth/sign-up/email refuses role admin, and accountType admin", async () => {
   const client = new HttpClient(server.url);
   const email = uniqueEmail("sneaky");
-  const withRole = await client.post("/api/auth/sign-up/email", { name: "Sneaky", email, password: TEST_PASSWORD, accountType: "player", role: "admin" });
+  const withRole = await client.post("/api/auth/sign-up/email", {
+    name: "Sneaky",
+    email,
+    password: TEST_PASSWORD,
+    accountType: "player",
+    role: "admin",
+  });
   expect(withRole.status).toBe(400);
   const withType = await client.post("/api/auth/sign-up/email", { name: "Sneaky", email, password: TEST_PASSWORD, accountType: "admin" });
   expect(withType.status).toBe(400);
@@ -60,7 +66,12 @@ test("POST /api/auth/update-user cannot raise one's own role to admin", async ()
 
 test("POST /api/auth/sign-up/email with a taken e-mail is refused", async () => {
   const { email } = await signedUpClient(server);
-  const res = await new HttpClient(server.url).post("/api/auth/sign-up/email", { name: "Again", email, password: TEST_PASSWORD, accountType: "player" });
+  const res = await new HttpClient(server.url).post("/api/auth/sign-up/email", {
+    name: "Again",
+    email,
+    password: TEST_PASSWORD,
+    accountType: "player",
+  });
   expect(res.status).toBe(422);
 });
 

@@ -276,7 +276,13 @@ function ofP1(extra = ""): () => string {
 
 const rows: Row[] = [
   // The local mailbox (no SMTP_URL): every e-mail sent, reset and invitation links included — an admin's alone.
-  { route: "GET /api/dev/mail", target: "all sent mail", expect: { anon: 401, p1: 403, p2: 403, c1: 403, c2: 403, admin: 200 }, reveals: "s1Name", revealsTo: ["admin"] },
+  {
+    route: "GET /api/dev/mail",
+    target: "all sent mail",
+    expect: { anon: 401, p1: 403, p2: 403, c1: 403, c2: 403, admin: 200 },
+    reveals: "s1Name",
+    revealsTo: ["admin"],
+  },
   // Public: the read calculator and the health check need no account.
   { route: "GET /api/health", target: "none", expect: PUBLIC },
   { route: "POST /api/reads/solve", target: "none", body: () => sideHill, expect: PUBLIC },
@@ -839,13 +845,19 @@ test("a green shared with S1: its players and coach see it; only its owner (C1) 
     const where = `as ${who}`;
     expect((await clients[who].get(`/api/greens/${id}`)).status, `GET green ${where}`).toBe(see[who]);
     expect((await clients[who].get(`/api/greens/${id}/height-map`)).status, `GET height map ${where}`).toBe(see[who]);
-    expect((await clients[who].post(`/api/greens/${id}/reads/solve`, { ball: [1, 1], hole: [1, 3], stimpFt: 10 })).status, `solve ${where}`).toBe(see[who]);
+    expect(
+      (await clients[who].post(`/api/greens/${id}/reads/solve`, { ball: [1, 1], hole: [1, 3], stimpFt: 10 })).status,
+      `solve ${where}`,
+    ).toBe(see[who]);
     const listed = (await clients[who].get("/api/greens")).body?.items?.some((g: { id: string }) => g.id === id) ?? false;
     expect(listed, `listed ${where}`).toBe(see[who] === 200);
     if (who === "c1") continue;
     const before = await fingerprint();
     expect((await clients[who].patch(`/api/greens/${id}`, { name: "Taken over" })).status, `PATCH ${where}`).toBe(change[who]);
-    expect((await clients[who].post(`/api/greens/${id}/stimp-readings`, { measuredOn: "2026-05-02", stimpFt: 8 })).status, `reading ${where}`).toBe(change[who]);
+    expect(
+      (await clients[who].post(`/api/greens/${id}/stimp-readings`, { measuredOn: "2026-05-02", stimpFt: 8 })).status,
+      `reading ${where}`,
+    ).toBe(change[who]);
     expect((await clients[who].delete(`/api/greens/${id}`)).status, `DELETE ${where}`).toBe(change[who]);
     expect(await fingerprint(), `${where}: a refused change changed the database`).toBe(before);
   }

@@ -14,12 +14,18 @@ const root = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-backup-"));
 afterAll(() => fs.rmSync(root, { recursive: true, force: true }));
 // A clean environment: vitest itself sets variables (BASE_URL="/", MODE…) that are not the server's.
 const envFor = (dataDir: string) => ({ PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir, LOG_LEVEL: "silent" });
-const serverEnv = (dataDir: string) => readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" });
+const serverEnv = (dataDir: string) =>
+  readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" });
 
 async function signUp(dataDir: string, email: string) {
   const s = await start({ env: serverEnv(dataDir) });
   try {
-    const res = await new HttpClient(s.url).post("/api/auth/sign-up/email", { name: "Backed Up", email, password: TEST_PASSWORD, accountType: "player" });
+    const res = await new HttpClient(s.url).post("/api/auth/sign-up/email", {
+      name: "Backed Up",
+      email,
+      password: TEST_PASSWORD,
+      accountType: "player",
+    });
     expect(res.status).toBe(200);
   } finally {
     await s.close();
@@ -57,20 +63,24 @@ test.skipIf(Boolean(process.env.DATABASE_URL))(
   120_000,
 );
 
-test.skipIf(Boolean(process.env.DATABASE_URL))("backup refuses while a server holds the data directory", async () => {
-  const dataDir = path.join(root, "busy");
-  const s = await start({ env: serverEnv(dataDir) });
-  try {
-    let message = "";
+test.skipIf(Boolean(process.env.DATABASE_URL))(
+  "backup refuses while a server holds the data directory",
+  async () => {
+    const dataDir = path.join(root, "busy");
+    const s = await start({ env: serverEnv(dataDir) });
     try {
-      // Asynchronously: a synchronous child would block this process's event loop, so the server here could not
-      // keep its lock fresh and a slow start of the CLI (> 10 s on a busy machine) would find the lock stale.
-      await execFileAsync("npm", ["run", "--silent", "backup", "--", path.join(root, "x.tar.gz")], { env: envFor(dataDir) });
-    } catch (err) {
-      message = String((err as { stderr?: string }).stderr);
+      let message = "";
+      try {
+        // Asynchronously: a synchronous child would block this process's event loop, so the server here could not
+        // keep its lock fresh and a slow start of the CLI (> 10 s on a busy machine) would find the lock stale.
+        await execFileAsync("npm", ["run", "--silent", "backup", "--", path.join(root, "x.tar.gz")], { env: envFor(dataDir) });
+      } catch (err) {
+        message = String((err as { stderr?: string }).stderr);
+      }
+      expect(message).toMatch(/already using the data directory/);
+    } finally {
+      await s.close();
     }
-    expect(message).toMatch(/already using the data directory/);
-  } finally {
-    await s.close();
-  }
-}, 60_000);
+  },
+  60_000,
+);

@@ -57,7 +57,9 @@ test("notes: a coach leaves a dated note, the player reads it; another coach's p
   expect(post.status).toBe(201);
   expect(post.body).toMatchObject({ playerId: p.id, author: { id: coach.id }, body: "Start the stroke from a still putter." });
   const mine = await p.client.get(`/api/players/${p.id}/notes`);
-  expect(mine.body.notes).toEqual([expect.objectContaining({ body: "Start the stroke from a still putter.", createdAt: post.body.createdAt })]);
+  expect(mine.body.notes).toEqual([
+    expect.objectContaining({ body: "Start the stroke from a still putter.", createdAt: post.body.createdAt }),
+  ]);
   expect((await coach.client.post(`/api/players/${stranger.id}/notes`, { body: "hi" })).status).toBe(404);
   expect((await coach.client.post(`/api/players/${coach.id}/notes`, { body: "to myself" })).status).toBe(404);
   const empty = await coach.client.post(`/api/players/${p.id}/notes`, { body: "   " });
@@ -104,7 +106,7 @@ test("GET /api/coach/squads/:id/overview sets each player's recent putts against
 test("GET /api/coach/squads/:id/overview/export is a CSV whose formula-like text cannot run in a spreadsheet", async () => {
   const coach = await signedUpClient(server, "coach");
   const squadId = await createSquad(coach.client, "Export squad");
-  const evil = await signedUpClient(server, "player", "=HYPERLINK(\"http://x\")");
+  const evil = await signedUpClient(server, "player", '=HYPERLINK("http://x")');
   await server.database.db.insert(squadMembers).values({ squadId, playerId: evil.id });
   const res = await coach.client.get(`/api/coach/squads/${squadId}/overview/export`);
   expect(res.status).toBe(200);
@@ -114,7 +116,7 @@ test("GET /api/coach/squads/:id/overview/export is a CSV whose formula-like text
   expect(parsed[0]![0]).toBe("Player");
   expect(parsed).toHaveLength(2);
   // OWASP "CSV Injection": a cell starting with = is written with a leading ' so it stays text.
-  expect(parsed[1]![0]).toBe("'=HYPERLINK(\"http://x\")");
+  expect(parsed[1]![0]).toBe('\'=HYPERLINK("http://x")');
 });
 
 test("POST /api/invitations/:id/resend e-mails a new link; the old link is withdrawn", async () => {
@@ -131,13 +133,18 @@ test("POST /api/invitations/:id/resend e-mails a new link; the old link is withd
   // The answer's link is the share link for the coach to copy: a different token to the same new invitation.
   const shareToken = new URL(resent.body.link).pathname.split("/").pop()!;
   expect(shareToken).not.toBe(newToken);
-  expect((await new HttpClient(server.url).get(`/api/invitations/${shareToken}`)).body).toMatchObject({ status: "pending", provesAddress: false });
+  expect((await new HttpClient(server.url).get(`/api/invitations/${shareToken}`)).body).toMatchObject({
+    status: "pending",
+    provesAddress: false,
+  });
   expect((await new HttpClient(server.url).get(`/api/invitations/${oldToken}`)).body.status).toBe("revoked");
   expect((await new HttpClient(server.url).get(`/api/invitations/${newToken}`)).body.status).toBe("pending");
 
   // The invited person signs up and follows the new link: joined, and the address counts as confirmed.
   const player = new HttpClient(server.url);
-  expect((await player.post("/api/auth/sign-up/email", { name: "Resent Player", email, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+  expect(
+    (await player.post("/api/auth/sign-up/email", { name: "Resent Player", email, password: TEST_PASSWORD, accountType: "player" })).status,
+  ).toBe(200);
   expect((await player.post(`/api/invitations/${oldToken}/accept`)).status).toBe(409);
   const [unverified] = await server.database.db.select({ v: user.emailVerified }).from(user).where(eq(user.email, email));
   expect(unverified!.v).toBe(false);

@@ -12,7 +12,11 @@ import { puttsCsvForm } from "../factories/csv";
 let server: TestServer;
 beforeAll(async () => {
   server = await startTestServer({
-    rateLimits: { auth: { windowMs: 60_000, limit: 10_000 }, reads: { windowMs: 60_000, limit: 100_000 }, imports: { windowMs: 60_000, limit: 2 } },
+    rateLimits: {
+      auth: { windowMs: 60_000, limit: 10_000 },
+      reads: { windowMs: 60_000, limit: 100_000 },
+      imports: { windowMs: 60_000, limit: 2 },
+    },
     env: { DB_STATEMENT_TIMEOUT_MS: "300" },
   });
 });
@@ -58,7 +62,9 @@ test("GET /api/health and POST /api/sessions/:id/putts are answered while a 50 0
   const stored = await importer.get("/api/putts?pageSize=1");
   expect(stored.body.total).toBe(50_000);
   // And the planner statistics were refreshed by the import itself.
-  const stats = (await server.database.db.execute(sql`select reltuples::float8 as n from pg_class where relname = 'putts'`)) as unknown as { rows: { n: number }[] };
+  const stats = (await server.database.db.execute(sql`select reltuples::float8 as n from pg_class where relname = 'putts'`)) as unknown as {
+    rows: { n: number }[];
+  };
   expect(Number(stats.rows[0]!.n)).toBeGreaterThan(25_000);
 }, 180_000);
 
@@ -76,7 +82,9 @@ test("POST /api/csv/putts/import is rate-limited per user: 429 with the error bo
 test("a statement timeout (SQLSTATE 57014) answers 503 with Retry-After and the error body", async () => {
   const app = express();
   app.get("/slow", () => {
-    throw Object.assign(new Error("Failed query"), { cause: Object.assign(new Error("canceling statement due to statement timeout"), { code: "57014" }) });
+    throw Object.assign(new Error("Failed query"), {
+      cause: Object.assign(new Error("canceling statement due to statement timeout"), { code: "57014" }),
+    });
   });
   app.use(errorHandler(createLogger("silent")));
   const listening = app.listen(0, "127.0.0.1");

@@ -16,14 +16,30 @@ afterAll(async () => {
   await server?.stop();
 });
 
-function form(content: string | Uint8Array, fields: Record<string, string> = {}, name = "putts.csv", type = "text/csv", field = "file"): FormData {
+function form(
+  content: string | Uint8Array,
+  fields: Record<string, string> = {},
+  name = "putts.csv",
+  type = "text/csv",
+  field = "file",
+): FormData {
   const f = new FormData();
   f.append(field, new Blob([content as BlobPart], { type }), name);
   for (const [k, v] of Object.entries(fields)) f.append(k, v);
   return f;
 }
 
-const MAPPING = { date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side", missLength: "Leave (in)", missLengthUnit: "in", breakType: "Break", green: "Green" };
+const MAPPING = {
+  date: "Date",
+  distance: "Distance (ft)",
+  distanceUnit: "ft",
+  holed: "Made",
+  missSide: "Side",
+  missLength: "Leave (in)",
+  missLengthUnit: "in",
+  breakType: "Break",
+  green: "Green",
+};
 const GOOD = [
   "Date,Distance (ft),Made,Side,Leave (in),Break,Green",
   "2024-05-01,10,no,left,-6,uphill,Top green",
@@ -33,8 +49,17 @@ const GOOD = [
 ].join("\n");
 
 async function stored(client: HttpClient) {
-  const [p, s, g] = await Promise.all([client.get("/api/putts?pageSize=200&sort=createdAt"), client.get("/api/sessions"), client.get("/api/greens")]);
-  return { putts: p.body.items, puttCount: p.body.total as number, sessionCount: s.body.total as number, greenCount: g.body.items.length as number };
+  const [p, s, g] = await Promise.all([
+    client.get("/api/putts?pageSize=200&sort=createdAt"),
+    client.get("/api/sessions"),
+    client.get("/api/greens"),
+  ]);
+  return {
+    putts: p.body.items,
+    puttCount: p.body.total as number,
+    sessionCount: s.body.total as number,
+    greenCount: g.body.items.length as number,
+  };
 }
 
 test("POST /api/csv/putts/preview answers the header, the first rows and a suggested mapping", async () => {
@@ -47,8 +72,15 @@ test("POST /api/csv/putts/preview answers the header, the first rows and a sugge
   expect(res.body.suggestedMapping).toEqual(MAPPING);
   // A semicolon file (a spreadsheet in a decimal-comma locale) with metric headers.
   const semi = await client.post("/api/csv/putts/preview", form("day;distance m;holed\n2024-05-01;1.5;true\n"));
-  expect(semi.body).toMatchObject({ delimiter: ";", headers: ["day", "distance m", "holed"], suggestedMapping: { date: "day", distance: "distance m", distanceUnit: "m", holed: "holed" } });
-  const many = await client.post("/api/csv/putts/preview", form(["date,distance,holed", ...Array.from({ length: 30 }, () => "2024-05-01,1,true")].join("\n")));
+  expect(semi.body).toMatchObject({
+    delimiter: ";",
+    headers: ["day", "distance m", "holed"],
+    suggestedMapping: { date: "day", distance: "distance m", distanceUnit: "m", holed: "holed" },
+  });
+  const many = await client.post(
+    "/api/csv/putts/preview",
+    form(["date,distance,holed", ...Array.from({ length: 30 }, () => "2024-05-01,1,true")].join("\n")),
+  );
   expect(many.body.rows).toHaveLength(10);
   expect(many.body.rowCount).toBe(30);
 });
@@ -58,12 +90,21 @@ test("uploads: over 1 MB is 413, not CSV is 415, no file or the wrong field is 4
   const big = await client.post("/api/csv/putts/preview", form("date,distance,holed\n" + "2024-05-01,1,true\n".repeat(70_000)));
   expect(big.status).toBe(413);
   expect(big.body.error.code).toBe("payload_too_large");
-  const png = await client.post("/api/csv/putts/preview", form(new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0]), {}, "photo.png", "image/png"));
+  const png = await client.post(
+    "/api/csv/putts/preview",
+    form(new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0]), {}, "photo.png", "image/png"),
+  );
   expect(png.status).toBe(415);
   expect(png.body.error.code).toBe("unsupported_media_type");
-  const binary = await client.post("/api/csv/putts/preview", form(new Uint8Array([0x64, 0x61, 0, 0, 0x74, 0x65]), {}, "renamed.csv", "text/csv"));
+  const binary = await client.post(
+    "/api/csv/putts/preview",
+    form(new Uint8Array([0x64, 0x61, 0, 0, 0x74, 0x65]), {}, "renamed.csv", "text/csv"),
+  );
   expect(binary.status).toBe(415);
-  const latin1 = await client.post("/api/csv/putts/preview", form(new Uint8Array([0x67, 0x72, 0xfc, 0x6e, 0x0a]), {}, "green.csv", "text/csv"));
+  const latin1 = await client.post(
+    "/api/csv/putts/preview",
+    form(new Uint8Array([0x67, 0x72, 0xfc, 0x6e, 0x0a]), {}, "green.csv", "text/csv"),
+  );
   expect(latin1.status).toBe(415);
   const json = await client.post("/api/csv/putts/preview", { file: "date,distance" });
   expect(json.status).toBe(415);
@@ -75,7 +116,12 @@ test("uploads: over 1 MB is 413, not CSV is 415, no file or the wrong field is 4
   const wrongField = await client.post("/api/csv/putts/preview", form(GOOD, {}, "putts.csv", "text/csv", "upload"));
   expect(wrongField.status).toBe(400);
   expect(wrongField.body.error.fields).toHaveProperty("upload");
-  const headerOnly = await client.post("/api/csv/putts/import", form("Date,Distance (ft),Made\n", { mapping: JSON.stringify({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made" }) }));
+  const headerOnly = await client.post(
+    "/api/csv/putts/import",
+    form("Date,Distance (ft),Made\n", {
+      mapping: JSON.stringify({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made" }),
+    }),
+  );
   expect(headerOnly.status).toBe(400);
   expect(headerOnly.body.error.fields).toHaveProperty("file");
 });
@@ -88,8 +134,19 @@ test("POST /api/csv/putts/import stores the putts in metres, grouped into sessio
   expect(res.body).toEqual({ imported: 4, sessionsCreated: 2, greensCreated: 1, skipped: 0, errors: [] });
   const s = await stored(client);
   expect(s).toMatchObject({ puttCount: 4, sessionCount: 2, greenCount: 2 });
-  expect(s.putts[0]).toMatchObject({ date: "2024-05-01", distanceM: expect.closeTo(10 * METRES_PER_FOOT, 12), holed: false, missSide: "left", missLengthM: expect.closeTo(-6 * METRES_PER_INCH, 12), breakType: "uphill" });
-  expect(s.putts[2]).toMatchObject({ missSide: "right", missLengthM: expect.closeTo(18 * METRES_PER_INCH, 12), breakType: "left-to-right" });
+  expect(s.putts[0]).toMatchObject({
+    date: "2024-05-01",
+    distanceM: expect.closeTo(10 * METRES_PER_FOOT, 12),
+    holed: false,
+    missSide: "left",
+    missLengthM: expect.closeTo(-6 * METRES_PER_INCH, 12),
+    breakType: "uphill",
+  });
+  expect(s.putts[2]).toMatchObject({
+    missSide: "right",
+    missLengthM: expect.closeTo(18 * METRES_PER_INCH, 12),
+    breakType: "left-to-right",
+  });
   const sessions = (await client.get("/api/sessions?sort=date")).body.items;
   // "Top green" matched the existing "top GREEN" (case-insensitive); "Lower green" was created.
   expect(sessions[0]).toMatchObject({ date: "2024-05-01", greenId: existing, putts: 3, tags: ["csv-import"] });
@@ -175,8 +232,22 @@ test("GET /api/csv/putts/export is a CSV attachment: formula-looking text is neu
   // Round trip into another account with the suggested mapping: same putts, same green name.
   const other = (await signedUpClient(server)).client;
   const preview = await other.post("/api/csv/putts/preview", form(res.body as string));
-  expect(preview.body.suggestedMapping).toEqual({ date: "date", green: "green", distance: "distance_m", distanceUnit: "m", holed: "holed", missSide: "miss_side", missLength: "miss_length_m", missLengthUnit: "m", breakType: "break_type", session: "session_id" });
-  const imported = await other.post("/api/csv/putts/import", form(res.body as string, { mapping: JSON.stringify(preview.body.suggestedMapping) }));
+  expect(preview.body.suggestedMapping).toEqual({
+    date: "date",
+    green: "green",
+    distance: "distance_m",
+    distanceUnit: "m",
+    holed: "holed",
+    missSide: "miss_side",
+    missLength: "miss_length_m",
+    missLengthUnit: "m",
+    breakType: "break_type",
+    session: "session_id",
+  });
+  const imported = await other.post(
+    "/api/csv/putts/import",
+    form(res.body as string, { mapping: JSON.stringify(preview.body.suggestedMapping) }),
+  );
   expect(imported.body).toMatchObject({ imported: 3, sessionsCreated: 1, greensCreated: 1, errors: [] });
   expect((await other.get("/api/greens")).body.items[0].name).toBe('=HYPERLINK("http://evil.example","x")');
   const again = (await other.get("/api/csv/putts/export")).body as string;
@@ -186,15 +257,26 @@ test("GET /api/csv/putts/export is a CSV attachment: formula-looking text is neu
 
 test("GET /api/csv/sessions/export neutralises text cells and keeps numbers", async () => {
   const { client } = await signedUpClient(server);
-  const s = await newSession(client, { date: "2024-05-01", stimpFt: 9.5, conditions: "-wet after rain", notes: "@SUM(A1:A9)", tags: ["+drill", "dry"] });
-  await addPutts(client, s, [{ distanceM: 1, holed: true }, { distanceM: 2, holed: false }]);
+  const s = await newSession(client, {
+    date: "2024-05-01",
+    stimpFt: 9.5,
+    conditions: "-wet after rain",
+    notes: "@SUM(A1:A9)",
+    tags: ["+drill", "dry"],
+  });
+  await addPutts(client, s, [
+    { distanceM: 1, holed: true },
+    { distanceM: 2, holed: false },
+  ]);
   const res = await client.get("/api/csv/sessions/export?from=2024-01-01");
   expect(res.status).toBe(200);
   expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="?borrowline-sessions-/);
   const [header, row] = Papa.parse<string[]>(res.body as string, { skipEmptyLines: true }).data;
   expect(header).toEqual(["date", "green", "stimp_ft", "conditions", "tags", "notes", "putts", "holed", "session_id"]);
   expect(row!.slice(0, 8)).toEqual(["2024-05-01", "", "9.5", "'-wet after rain", "'+drill; dry", "'@SUM(A1:A9)", "2", "1"]);
-  expect(((await client.get("/api/csv/sessions/export?from=2024-06-01")).body as string).trim()).toBe("date,green,stimp_ft,conditions,tags,notes,putts,holed,session_id");
+  expect(((await client.get("/api/csv/sessions/export?from=2024-06-01")).body as string).trim()).toBe(
+    "date,green,stimp_ft,conditions,tags,notes,putts,holed,session_id",
+  );
 });
 
 /** Every line of every cell: none may start with = + - @ tab or CR (OWASP, "CSV Injection"). */

@@ -58,7 +58,16 @@ test("started under umask 000, the server keeps DATA_DIR at 0700/0600, and npm r
   });
   const { url } = JSON.parse(line) as { url: string };
   const client = new HttpClient(url);
-  expect((await client.post("/api/auth/sign-up/email", { name: "Private", email: uniqueEmail("private"), password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+  expect(
+    (
+      await client.post("/api/auth/sign-up/email", {
+        name: "Private",
+        email: uniqueEmail("private"),
+        password: TEST_PASSWORD,
+        accountType: "player",
+      })
+    ).status,
+  ).toBe(200);
   expect((await client.post("/api/sessions", { date: "2026-05-01", notes: "written while running" })).status).toBe(201);
   expect(loosePermissions(dataDir), "while running").toEqual([]);
   child.kill("SIGTERM");

@@ -16,7 +16,16 @@ afterAll(() => server.stop());
 
 test("a verification e-mail the fake accepted is already in the database inbox the admin reads", async () => {
   const email = uniqueEmail("inbox");
-  expect((await new HttpClient(server.url).post("/api/auth/sign-up/email", { name: "Inbox Golfer", email, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+  expect(
+    (
+      await new HttpClient(server.url).post("/api/auth/sign-up/email", {
+        name: "Inbox Golfer",
+        email,
+        password: TEST_PASSWORD,
+        accountType: "player",
+      })
+    ).status,
+  ).toBe(200);
   const received = await server.smtpFake!.waitFor((m) => m.to.includes(email));
   // waitFor resolves only after `keep` stored it: the row is there without waiting.
   const rows = (await server.database.db.select().from(devMail)).filter((r) => r.toAddresses.includes(email));
@@ -35,7 +44,15 @@ test(`the inbox keeps the newest ${DEV_INBOX_KEPT} messages, newest first`, asyn
   const base = Date.parse("2030-01-01T00:00:00Z");
   const extra = 5;
   for (let i = 0; i < DEV_INBOX_KEPT + extra; i++) {
-    await keep({ id: String(i), from: "a@example.test", to: [`n${i}@example.test`], subject: `number ${i}`, text: "", html: "", receivedAt: new Date(base + i * 1000).toISOString() });
+    await keep({
+      id: String(i),
+      from: "a@example.test",
+      to: [`n${i}@example.test`],
+      subject: `number ${i}`,
+      text: "",
+      html: "",
+      receivedAt: new Date(base + i * 1000).toISOString(),
+    });
   }
   const inbox = await readInbox(server.database.db);
   expect(inbox).toHaveLength(DEV_INBOX_KEPT);

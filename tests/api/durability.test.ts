@@ -19,7 +19,12 @@ afterAll(() => {
 async function spawnServer(): Promise<{ child: ChildProcess; url: string; exited: Promise<number | null> }> {
   const child = spawn(process.execPath, ["--import", "tsx", "tests/setup/child-server.ts"], {
     // A clean environment: vitest's own variables (BASE_URL="/", …) are not the server's.
-    env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir, BETTER_AUTH_SECRET: "durability-secret-durability-secret-01" },
+    env: {
+      PATH: process.env.PATH,
+      HOME: process.env.HOME,
+      DATA_DIR: dataDir,
+      BETTER_AUTH_SECRET: "durability-secret-durability-secret-01",
+    },
     stdio: ["ignore", "pipe", "inherit"],
   });
   children.push(child);
@@ -40,7 +45,16 @@ test.skipIf(Boolean(process.env.DATABASE_URL))(
   async () => {
     const first = await spawnServer();
     const client = new HttpClient(first.url);
-    expect((await client.post("/api/auth/sign-up/email", { name: "Durable", email: uniqueEmail("durable"), password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+    expect(
+      (
+        await client.post("/api/auth/sign-up/email", {
+          name: "Durable",
+          email: uniqueEmail("durable"),
+          password: TEST_PASSWORD,
+          accountType: "player",
+        })
+      ).status,
+    ).toBe(200);
     const session = await client.post("/api/sessions", { date: "2026-11-30" });
     expect(session.status).toBe(201);
     const sessionId = session.body.id as string;
@@ -91,10 +105,21 @@ test.skipIf(Boolean(process.env.DATABASE_URL))(
   async () => {
     const server = await spawnServer();
     const client = new HttpClient(server.url);
-    expect((await client.post("/api/auth/sign-up/email", { name: "Graceful", email: uniqueEmail("graceful"), password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+    expect(
+      (
+        await client.post("/api/auth/sign-up/email", {
+          name: "Graceful",
+          email: uniqueEmail("graceful"),
+          password: TEST_PASSWORD,
+          accountType: "player",
+        })
+      ).status,
+    ).toBe(200);
     const sessionId = (await client.post("/api/sessions", { date: "2026-11-30" })).body.id as string;
 
-    const inFlight = Array.from({ length: 40 }, (_, i) => client.post(`/api/sessions/${sessionId}/putts`, { distanceM: 2, holed: i % 2 === 0, clientId: crypto.randomUUID() }));
+    const inFlight = Array.from({ length: 40 }, (_, i) =>
+      client.post(`/api/sessions/${sessionId}/putts`, { distanceM: 2, holed: i % 2 === 0, clientId: crypto.randomUUID() }),
+    );
     await new Promise((r) => setTimeout(r, 5));
     server.child.kill("SIGTERM");
     const answers = await Promise.allSettled(inFlight);

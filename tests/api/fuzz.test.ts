@@ -65,12 +65,59 @@ const weirdString = fc.oneof(
   fc.constantFrom("NaN", "Infinity", "-Infinity", "", " ", "null", "=cmd|' /C calc'!A0", "<script>", "' or 1=1 --", "\u0000", "2026-02-30"),
   fc.string({ minLength: 5_000, maxLength: 20_000 }),
 );
-const weirdValue: fc.Arbitrary<unknown> = fc.oneof(weirdNumber, weirdString, fc.boolean(), fc.constant(null), fc.jsonValue({ maxDepth: 3 }));
+const weirdValue: fc.Arbitrary<unknown> = fc.oneof(
+  weirdNumber,
+  weirdString,
+  fc.boolean(),
+  fc.constant(null),
+  fc.jsonValue({ maxDepth: 3 }),
+);
 const likelyKeys = [
-  "distanceM", "slopePct", "fallLineDeg", "stimpFt", "pace", "rollPastM", "entrySpeedMps", "date", "greenId", "notes", "holed",
-  "missSide", "missLengthM", "breakType", "clientId", "name", "description", "email", "playerIds", "squadId", "dueDate", "rungs",
-  "failRule", "units", "read", "label", "level", "putt", "guess", "holes", "measuredOn", "upFt", "downFt", "tags", "conditions",
-  "page", "pageSize", "sort", "from", "to", "bands", "playerId", "mapping", "__proto__", "constructor",
+  "distanceM",
+  "slopePct",
+  "fallLineDeg",
+  "stimpFt",
+  "pace",
+  "rollPastM",
+  "entrySpeedMps",
+  "date",
+  "greenId",
+  "notes",
+  "holed",
+  "missSide",
+  "missLengthM",
+  "breakType",
+  "clientId",
+  "name",
+  "description",
+  "email",
+  "playerIds",
+  "squadId",
+  "dueDate",
+  "rungs",
+  "failRule",
+  "units",
+  "read",
+  "label",
+  "level",
+  "putt",
+  "guess",
+  "holes",
+  "measuredOn",
+  "upFt",
+  "downFt",
+  "tags",
+  "conditions",
+  "page",
+  "pageSize",
+  "sort",
+  "from",
+  "to",
+  "bands",
+  "playerId",
+  "mapping",
+  "__proto__",
+  "constructor",
 ];
 const bodyObject = fc.dictionary(fc.constantFrom(...likelyKeys), weirdValue, { maxKeys: 6 });
 
@@ -79,11 +126,18 @@ const requestArb = fc.record({
   routeIndex: fc.nat(),
   who: fc.constantFrom("player", "coach", "anon"),
   kind: fc.constantFrom<Kind>("json", "json", "json", "malformed", "wrong-type", "oversized", "upload", "big-upload", "none"),
-  fileText: fc.oneof(fc.string({ maxLength: 400 }), fc.constantFrom("date,distance,holed\n2026-11-01,3,yes\n", "\u0000\u0001binary", "a,b\n\"unclosed")),
+  fileText: fc.oneof(
+    fc.string({ maxLength: 400 }),
+    fc.constantFrom("date,distance,holed\n2026-11-01,3,yes\n", "\u0000\u0001binary", 'a,b\n"unclosed'),
+  ),
   body: fc.oneof(bodyObject, weirdValue),
   param: fc.oneof(fc.uuid(), fc.constantFrom("0", "-1", "abc", "%00", "..", "x".repeat(300)), fc.constant("known")),
   knownIndex: fc.nat(),
-  query: fc.dictionary(fc.constantFrom("from", "to", "bands", "page", "pageSize", "sort", "playerId", "window", "limit", "greenId"), weirdString, { maxKeys: 3 }),
+  query: fc.dictionary(
+    fc.constantFrom("from", "to", "bands", "page", "pageSize", "sort", "playerId", "window", "limit", "greenId"),
+    weirdString,
+    { maxKeys: 3 },
+  ),
 });
 
 test(`${RUNS} generated requests across every API route: never a 5xx, always the error shape, refused requests change nothing`, async () => {
@@ -96,7 +150,10 @@ test(`${RUNS} generated requests across every API route: never a 5xx, always the
       seenRoutes.add(`${route.method} ${route.path}`);
       const client = r.who === "player" ? player : r.who === "coach" ? coach : anon;
       const known = knownIds.length > 0 ? knownIds[r.knownIndex % knownIds.length]! : "00000000-0000-4000-8000-000000000000";
-      const url = new URL(fillPath(route.path, () => (r.param === "known" ? known : r.param)), server.url);
+      const url = new URL(
+        fillPath(route.path, () => (r.param === "known" ? known : r.param)),
+        server.url,
+      );
       for (const [k, v] of Object.entries(r.query)) url.searchParams.set(k, v.slice(0, 2000));
       const target = url.pathname + url.search;
 
@@ -206,14 +263,17 @@ test("every string field of a valid body, for every route with text and /api/aut
   const squadId = await createSquad(coach, "Hostile squad");
   const member = await joinedPlayer(server, coach, squadId, "Hostile Member");
   const ladderId = (await ok(coach.post("/api/ladders", { ...THREE_RUNGS, name: "Hostile ladder" }))).id as string;
-  const assignmentId = (await ok(coach.post(`/api/ladders/${ladderId}/assignments`, { playerIds: [member.id] }))).assignments[0].id as string;
+  const assignmentId = (await ok(coach.post(`/api/ladders/${ladderId}/assignments`, { playerIds: [member.id] }))).assignments[0]
+    .id as string;
   const greenId = (await ok(player.post("/api/greens", { name: "Hostile green" }))).id as string;
   const sessionId = (await ok(player.post("/api/sessions", { date: "2026-05-01" }))).id as string;
   // An account of its own for the password change, whose password the accepted requests change.
   const changer = new HttpClient(server.url);
   const changerEmail = uniqueEmail("changer");
   let changerPassword = TEST_PASSWORD;
-  await ok(changer.post("/api/auth/sign-up/email", { name: "Changer", email: changerEmail, password: changerPassword, accountType: "player" }));
+  await ok(
+    changer.post("/api/auth/sign-up/email", { name: "Changer", email: changerEmail, password: changerPassword, accountType: "player" }),
+  );
 
   const ladder = (name: string): Json => ({
     name,
@@ -223,31 +283,137 @@ test("every string field of a valid body, for every route with text and /api/aut
   });
   const cases: Case[] = [
     { route: "POST /api/squads", as: () => coach, path: () => "/api/squads", body: () => ({ name: "Squad", description: "About\nus" }) },
-    { route: "PATCH /api/squads/:id", as: () => coach, path: () => `/api/squads/${squadId}`, body: () => ({ name: "Squad", description: "About" }) },
-    { route: "POST /api/squads/:id/invitations", as: () => coach, path: () => `/api/squads/${squadId}/invitations`, body: () => ({ email: uniqueEmail("inv") }) },
+    {
+      route: "PATCH /api/squads/:id",
+      as: () => coach,
+      path: () => `/api/squads/${squadId}`,
+      body: () => ({ name: "Squad", description: "About" }),
+    },
+    {
+      route: "POST /api/squads/:id/invitations",
+      as: () => coach,
+      path: () => `/api/squads/${squadId}/invitations`,
+      body: () => ({ email: uniqueEmail("inv") }),
+    },
     { route: "POST /api/ladders", as: () => coach, path: () => "/api/ladders", body: () => ladder("Ladder") },
     { route: "PUT /api/ladders/:id", as: () => coach, path: () => `/api/ladders/${ladderId}`, body: () => ladder("Ladder") },
     { route: "POST /api/ladders/:id/copy", as: () => coach, path: () => `/api/ladders/${ladderId}/copy`, body: () => ({ name: "Copy" }) },
-    { route: "POST /api/ladders/:id/assignments", as: () => coach, path: () => `/api/ladders/${ladderId}/assignments`, body: () => ({ playerIds: [member.id], dueDate: "2026-06-01" }) },
-    { route: "POST /api/assignments/:id/putts", as: () => member.client, path: () => `/api/assignments/${assignmentId}/putts`, body: () => ({ holed: false, missSide: "left" }) },
-    { route: "POST /api/players/:playerId/notes", as: () => coach, path: () => `/api/players/${member.id}/notes`, body: () => ({ body: "Firm pace\nfrom six feet" }) },
-    { route: "POST /api/greens", as: () => player, path: () => "/api/greens", body: () => ({ name: "Green", locationNote: "By the\nclubhouse" }) },
-    { route: "PATCH /api/greens/:id", as: () => player, path: () => `/api/greens/${greenId}`, body: () => ({ name: "Green", locationNote: "Note" }) },
-    { route: "POST /api/greens/:id/stimp-readings", as: () => player, path: () => `/api/greens/${greenId}/stimp-readings`, body: () => ({ measuredOn: "2026-05-01", stimpFt: 10, note: "Morning" }) },
-    { route: "POST /api/sessions", as: () => player, path: () => "/api/sessions", body: () => ({ date: "2026-05-01", conditions: "Dry", tags: ["drill"], notes: "Line\nand pace" }), readBack: (a) => `/api/sessions/${a.id}` },
-    { route: "PATCH /api/sessions/:id", as: () => player, path: () => `/api/sessions/${sessionId}`, body: () => ({ conditions: "Wet", tags: ["tag"], notes: "Notes" }) },
-    { route: "POST /api/sessions/:id/putts", as: () => player, path: () => `/api/sessions/${sessionId}/putts`, body: () => ({ distanceM: 2, holed: false, missSide: "left", breakType: "uphill" }) },
-    { route: "POST /api/rounds", as: () => player, path: () => "/api/rounds", body: () => ({ date: "2026-05-01", course: "Heath", notes: "Windy\nday" }) },
-    { route: "POST /api/reads", as: () => player, path: () => "/api/reads", body: () => ({ read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } }, label: "Left edge" }) },
+    {
+      route: "POST /api/ladders/:id/assignments",
+      as: () => coach,
+      path: () => `/api/ladders/${ladderId}/assignments`,
+      body: () => ({ playerIds: [member.id], dueDate: "2026-06-01" }),
+    },
+    {
+      route: "POST /api/assignments/:id/putts",
+      as: () => member.client,
+      path: () => `/api/assignments/${assignmentId}/putts`,
+      body: () => ({ holed: false, missSide: "left" }),
+    },
+    {
+      route: "POST /api/players/:playerId/notes",
+      as: () => coach,
+      path: () => `/api/players/${member.id}/notes`,
+      body: () => ({ body: "Firm pace\nfrom six feet" }),
+    },
+    {
+      route: "POST /api/greens",
+      as: () => player,
+      path: () => "/api/greens",
+      body: () => ({ name: "Green", locationNote: "By the\nclubhouse" }),
+    },
+    {
+      route: "PATCH /api/greens/:id",
+      as: () => player,
+      path: () => `/api/greens/${greenId}`,
+      body: () => ({ name: "Green", locationNote: "Note" }),
+    },
+    {
+      route: "POST /api/greens/:id/stimp-readings",
+      as: () => player,
+      path: () => `/api/greens/${greenId}/stimp-readings`,
+      body: () => ({ measuredOn: "2026-05-01", stimpFt: 10, note: "Morning" }),
+    },
+    {
+      route: "POST /api/sessions",
+      as: () => player,
+      path: () => "/api/sessions",
+      body: () => ({ date: "2026-05-01", conditions: "Dry", tags: ["drill"], notes: "Line\nand pace" }),
+      readBack: (a) => `/api/sessions/${a.id}`,
+    },
+    {
+      route: "PATCH /api/sessions/:id",
+      as: () => player,
+      path: () => `/api/sessions/${sessionId}`,
+      body: () => ({ conditions: "Wet", tags: ["tag"], notes: "Notes" }),
+    },
+    {
+      route: "POST /api/sessions/:id/putts",
+      as: () => player,
+      path: () => `/api/sessions/${sessionId}/putts`,
+      body: () => ({ distanceM: 2, holed: false, missSide: "left", breakType: "uphill" }),
+    },
+    {
+      route: "POST /api/rounds",
+      as: () => player,
+      path: () => "/api/rounds",
+      body: () => ({ date: "2026-05-01", course: "Heath", notes: "Windy\nday" }),
+    },
+    {
+      route: "POST /api/reads",
+      as: () => player,
+      path: () => "/api/reads",
+      body: () => ({ read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } }, label: "Left edge" }),
+    },
     { route: "PATCH /api/me/preferences", as: () => player, path: () => "/api/me/preferences", body: () => ({ units: "metric" }) },
-    { route: "POST /api/training/attempts", as: () => player, path: () => "/api/training/attempts", body: () => ({ level: "club", putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 }, guess: { aimOffsetM: -0.1, flatPuttLengthM: 3.4 } }) },
+    {
+      route: "POST /api/training/attempts",
+      as: () => player,
+      path: () => "/api/training/attempts",
+      body: () => ({
+        level: "club",
+        putt: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10 },
+        guess: { aimOffsetM: -0.1, flatPuttLengthM: 3.4 },
+      }),
+    },
     // better-auth's routes, behind the same guard.
-    { route: "POST /api/auth/sign-up/email", as: () => new HttpClient(server.url), path: () => "/api/auth/sign-up/email", body: () => ({ name: "New Golfer", email: uniqueEmail("hostile"), password: TEST_PASSWORD, accountType: "player" }) },
-    { route: "POST /api/auth/update-user", as: () => player, path: () => "/api/auth/update-user", body: () => ({ name: "Renamed Golfer" }), readBack: () => "/api/me" },
-    { route: "POST /api/auth/sign-in/email", as: () => new HttpClient(server.url), path: () => "/api/auth/sign-in/email", body: () => ({ email: changerEmail, password: "not-the-password" }) },
-    { route: "POST /api/auth/request-password-reset", as: () => new HttpClient(server.url), path: () => "/api/auth/request-password-reset", body: () => ({ email: uniqueEmail("nobody"), redirectTo: "/reset-password" }) },
-    { route: "POST /api/auth/send-verification-email", as: () => new HttpClient(server.url), path: () => "/api/auth/send-verification-email", body: () => ({ email: uniqueEmail("nobody"), callbackURL: "/" }) },
-    { route: "POST /api/auth/reset-password", as: () => new HttpClient(server.url), path: () => "/api/auth/reset-password", body: () => ({ token: "not-a-token", newPassword: "a-new-password" }) },
+    {
+      route: "POST /api/auth/sign-up/email",
+      as: () => new HttpClient(server.url),
+      path: () => "/api/auth/sign-up/email",
+      body: () => ({ name: "New Golfer", email: uniqueEmail("hostile"), password: TEST_PASSWORD, accountType: "player" }),
+    },
+    {
+      route: "POST /api/auth/update-user",
+      as: () => player,
+      path: () => "/api/auth/update-user",
+      body: () => ({ name: "Renamed Golfer" }),
+      readBack: () => "/api/me",
+    },
+    {
+      route: "POST /api/auth/sign-in/email",
+      as: () => new HttpClient(server.url),
+      path: () => "/api/auth/sign-in/email",
+      body: () => ({ email: changerEmail, password: "not-the-password" }),
+    },
+    {
+      route: "POST /api/auth/request-password-reset",
+      as: () => new HttpClient(server.url),
+      path: () => "/api/auth/request-password-reset",
+      body: () => ({ email: uniqueEmail("nobody"), redirectTo: "/reset-password" }),
+    },
+    {
+      route: "POST /api/auth/send-verification-email",
+      as: () => new HttpClient(server.url),
+      path: () => "/api/auth/send-verification-email",
+      body: () => ({ email: uniqueEmail("nobody"), callbackURL: "/" }),
+    },
+    {
+      route: "POST /api/auth/reset-password",
+      as: () => new HttpClient(server.url),
+      path: () => "/api/auth/reset-password",
+      body: () => ({ token: "not-a-token", newPassword: "a-new-password" }),
+    },
     {
       route: "POST /api/auth/change-password",
       as: () => changer,

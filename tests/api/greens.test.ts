@@ -29,7 +29,11 @@ test("POST /api/greens/:id/stimp-readings corrects a two-way reading with Brede'
   const green = (await client.post("/api/greens", { name: "Sloped green" })).body;
   // A. D. Brede, "Measuring Green Speed on Sloped Putting Greens", USGA Green Section Record 28(6), 1990:
   // worked example [secondary, quoted with the formula]: down 981 cm, up 185 cm → 10.2 ft (plain average 19.1 ft).
-  const res = await client.post(`/api/greens/${green.id}/stimp-readings`, { measuredOn: "2024-05-01", upFt: 1.85 / 0.3048, downFt: 9.81 / 0.3048 });
+  const res = await client.post(`/api/greens/${green.id}/stimp-readings`, {
+    measuredOn: "2024-05-01",
+    upFt: 1.85 / 0.3048,
+    downFt: 9.81 / 0.3048,
+  });
   expect(res.status).toBe(201);
   expect(res.body.currentStimpFt).toBeCloseTo(10.2, 1);
   expect(res.body.readings[0]).toMatchObject({ measuredOn: "2024-05-01", upFt: expect.closeTo(6.07, 2), downFt: expect.closeTo(32.19, 2) });

@@ -46,7 +46,16 @@ test("PUT /api/greens/:id/height-map takes a CSV grid and answers its summary; G
   const id = await greenOf(a.id);
   const res = await put(a.client, id, csvForm(fixture("tilted-saddle.csv"), { spacingM: "0.5" }));
   expect(res.status).toBe(200);
-  expect(res.body).toMatchObject({ nx: 25, ny: 25, spacingM: 0.5, originM: [0, 0], widthM: 12, depthM: 12, source: "grid", spotCount: null });
+  expect(res.body).toMatchObject({
+    nx: 25,
+    ny: 25,
+    spacingM: 0.5,
+    originM: [0, 0],
+    widthM: 12,
+    depthM: 12,
+    source: "grid",
+    spotCount: null,
+  });
   // The saddle's steepest node-to-node grade: about 6 % on the east edge (derived from its formula).
   expect(res.body.maxSlopePct).toBeGreaterThan(4);
   expect(res.body.maxSlopePct).toBeLessThan(7);
@@ -69,7 +78,17 @@ test("PUT /api/greens/:id/height-map takes spot heights (CSV or JSON) and interp
   const csv = await put(a.client, id, csvForm(fixture("tilted-saddle-spots.csv"), { spacingM: "0.5", format: "spots" }));
   expect(csv.status).toBe(200);
   expect(csv.body).toMatchObject({ nx: 25, ny: 25, source: "spots", spotCount: 13 });
-  const json = await put(a.client, id, { kind: "spots", spacingM: 1, points: [[0, 0, 0], [4, 0, 0.04], [0, 4, 0], [4, 4, 0.04], [2, 2, 0.02]] });
+  const json = await put(a.client, id, {
+    kind: "spots",
+    spacingM: 1,
+    points: [
+      [0, 0, 0],
+      [4, 0, 0.04],
+      [0, 4, 0],
+      [4, 4, 0.04],
+      [2, 2, 0.02],
+    ],
+  });
   expect(json.status).toBe(200);
   expect(json.body).toMatchObject({ nx: 5, ny: 5, source: "spots", spotCount: 5 });
   // A plane through the spot heights stays that plane (linear interpolation on the triangles): 1 % east.
@@ -81,7 +100,11 @@ test.each([
   ["a hole in the grid", "0,0,0\n0,,0\n0,0,0\n", { "row 2, column 2": "is empty (a hole in the grid)" }],
   ["a NaN", "0,0,0\n0,NaN,0\n0,0,0\n", { "row 2, column 2": '"NaN" is not a height in metres' }],
   ["too few rows", "0,0,0\n", { heightsM: "at least 2×2 heights (got 3×1)" }],
-  ["an absurd slope", "0,0,0\n0,0.2,0\n0,0,0\n", { "row 1, column 2": "grade 20.0 % to row 2 is over 15 %: check the heights and the spacing" }],
+  [
+    "an absurd slope",
+    "0,0,0\n0,0.2,0\n0,0,0\n",
+    { "row 1, column 2": "grade 20.0 % to row 2 is over 15 %: check the heights and the spacing" },
+  ],
 ])("PUT /api/greens/:id/height-map refuses %s with the exact error", async (_what, csv, fields) => {
   const a = await signedUpClient(server);
   const id = await greenOf(a.id);
@@ -100,10 +123,28 @@ test("PUT /api/greens/:id/height-map refuses a grid over the size cap, a bad spa
   const spacing = await put(a.client, id, csvForm("0,0\n0,0\n", { spacingM: "0" }));
   expect(spacing.status).toBe(400);
   expect(spacing.body.error.fields).toHaveProperty("spacingM");
-  const line = await put(a.client, id, { kind: "spots", spacingM: 1, points: [[0, 0, 0], [1, 1, 0], [2, 2, 0], [3, 3, 0]] });
+  const line = await put(a.client, id, {
+    kind: "spots",
+    spacingM: 1,
+    points: [
+      [0, 0, 0],
+      [1, 1, 0],
+      [2, 2, 0],
+      [3, 3, 0],
+    ],
+  });
   expect(line.status).toBe(400);
   expect(line.body.error.fields.points).toMatch(/one line/);
-  const hull = await put(a.client, id, { kind: "spots", spacingM: 0.5, points: [[0, 0, 0], [4, 0, 0], [2, 4, 0], [2, 1, 0]] });
+  const hull = await put(a.client, id, {
+    kind: "spots",
+    spacingM: 0.5,
+    points: [
+      [0, 0, 0],
+      [4, 0, 0],
+      [2, 4, 0],
+      [2, 1, 0],
+    ],
+  });
   expect(hull.status).toBe(400);
   expect(hull.body.error.fields.points).toMatch(/outside the area the spot heights enclose/);
   const ragged = await put(a.client, id, { kind: "grid", spacingM: 1, heightsM: [[0, 0], [0]] });
@@ -122,12 +163,34 @@ test("the height map belongs to the green's owner: another user gets 404 on ever
   const id = await greenOf(owner.id);
   expect((await put(owner.client, id, csvForm(planeCsv(0.01, 0, 5, 1), { spacingM: "1" }))).status).toBe(200);
   expect((await put(other.client, id, csvForm(planeCsv(0.01, 0, 5, 1), { spacingM: "1" }))).status).toBe(404);
-  expect((await put(other.client, id, { kind: "grid", spacingM: 1, heightsM: [[0, 0], [0, 0]] })).status).toBe(404);
+  expect(
+    (
+      await put(other.client, id, {
+        kind: "grid",
+        spacingM: 1,
+        heightsM: [
+          [0, 0],
+          [0, 0],
+        ],
+      })
+    ).status,
+  ).toBe(404);
   expect((await other.client.get(`/api/greens/${id}/height-map`)).status).toBe(404);
   expect((await other.client.delete(`/api/greens/${id}/height-map`)).status).toBe(404);
   expect((await other.client.post(`/api/greens/${id}/reads/solve`, { ball: [1, 1], hole: [1, 3], stimpFt: 10 })).status).toBe(404);
   expect((await owner.client.get("/api/greens/not-a-uuid/height-map")).status).toBe(400);
-  expect((await put(owner.client, "not-a-uuid", { kind: "grid", spacingM: 1, heightsM: [[0, 0], [0, 0]] })).status).toBe(400);
+  expect(
+    (
+      await put(owner.client, "not-a-uuid", {
+        kind: "grid",
+        spacingM: 1,
+        heightsM: [
+          [0, 0],
+          [0, 0],
+        ],
+      })
+    ).status,
+  ).toBe(400);
   // A player in the owner's squad reads the map and solves on it once the green is shared with that squad (not
   // before: a coach's own greens stay theirs), but does not change it.
   const [squad] = await server.database.db.insert(squads).values({ coachId: owner.id, name: "Green squad" }).returning({ id: squads.id });
@@ -155,7 +218,13 @@ test("POST /api/greens/:id/reads/solve on a planar map equals POST /api/reads/so
   const ey = [(hole[0] - ball[0]) / D, (hole[1] - ball[1]) / D] as const;
   const ex = [ey[1], -ey[0]] as const;
   const fallLineDeg = ((Math.atan2(-(gx * ex[0] + gy * ex[1]), -(gx * ey[0] + gy * ey[1])) * 180) / Math.PI + 360) % 360;
-  const planar = await a.client.post("/api/reads/solve", { distanceM: D, slopePct: 100 * Math.hypot(gx, gy), fallLineDeg, stimpFt: 11, pace: { rollPastM: 0.45 } });
+  const planar = await a.client.post("/api/reads/solve", {
+    distanceM: D,
+    slopePct: 100 * Math.hypot(gx, gy),
+    fallLineDeg,
+    stimpFt: 11,
+    pace: { rollPastM: 0.45 },
+  });
   expect(planar.status).toBe(200);
   expect(Math.abs(onMap.body.aimOffsetM - planar.body.aimOffsetM)).toBeLessThan(1e-3);
   expect(Math.abs(onMap.body.launchSpeedMps - planar.body.launchSpeedMps)).toBeLessThan(1e-3);
@@ -181,7 +250,10 @@ test("POST /api/greens/:id/reads/solve on the saddle, and its 400s and 404s", as
   expect(ok.body.rollPastM).toBeCloseTo(0.45, 3);
   const outside = await a.client.post(`/api/greens/${id}/reads/solve`, { ball: [-1, 2], hole: [6, 13], stimpFt: 10 });
   expect(outside.status).toBe(400);
-  expect(outside.body.error.fields).toMatchObject({ ball: expect.stringMatching(/inside the map/), hole: expect.stringMatching(/inside the map/) });
+  expect(outside.body.error.fields).toMatchObject({
+    ball: expect.stringMatching(/inside the map/),
+    hole: expect.stringMatching(/inside the map/),
+  });
   const bad = await a.client.post(`/api/greens/${id}/reads/solve`, { ball: [1], hole: [6, 8], stimpFt: 99 });
   expect(bad.status).toBe(400);
   expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(["ball", "stimpFt"]));

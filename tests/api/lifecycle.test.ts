@@ -27,7 +27,12 @@ async function spawnServer(dataDir: string, prefix: string[] = []): Promise<Chil
   const command = [...prefix, process.execPath, "--import", "tsx", "tests/setup/child-server.ts"];
   const child = spawn(command[0]!, command.slice(1), {
     // A clean environment: vitest's own variables (BASE_URL="/", …) are not the server's.
-    env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir, BETTER_AUTH_SECRET: "lifecycle-secret-lifecycle-secret-0001" },
+    env: {
+      PATH: process.env.PATH,
+      HOME: process.env.HOME,
+      DATA_DIR: dataDir,
+      BETTER_AUTH_SECRET: "lifecycle-secret-lifecycle-secret-0001",
+    },
     stdio: ["ignore", "pipe", "pipe"],
   });
   children.push(child);
@@ -65,21 +70,25 @@ test("GET /api/health and GET / while the server is starting answer 503 with Ret
   }
 });
 
-test.skipIf(!canUnshare)("a server restarted after SIGKILL with the same PID (1, as in a container) starts at once", async () => {
-  const dataDir = path.join(root, "pid1");
-  const first = await spawnServer(dataDir, ["unshare", "--pid", "--fork"]);
-  expect(first.pid).toBe(1);
-  expect((await fetch(first.url + "/api/health")).status).toBe(200);
-  process.kill(first.hostPid, "SIGKILL");
-  await first.exited;
+test.skipIf(!canUnshare)(
+  "a server restarted after SIGKILL with the same PID (1, as in a container) starts at once",
+  async () => {
+    const dataDir = path.join(root, "pid1");
+    const first = await spawnServer(dataDir, ["unshare", "--pid", "--fork"]);
+    expect(first.pid).toBe(1);
+    expect((await fetch(first.url + "/api/health")).status).toBe(200);
+    process.kill(first.hostPid, "SIGKILL");
+    await first.exited;
 
-  // The same PID again, right away: the dead owner's lock is gone with it.
-  const second = await spawnServer(dataDir, ["unshare", "--pid", "--fork"]);
-  expect(second.pid).toBe(1);
-  expect((await fetch(second.url + "/api/health")).status).toBe(200);
-  process.kill(second.hostPid, "SIGKILL");
-  await second.exited;
-}, 90_000);
+    // The same PID again, right away: the dead owner's lock is gone with it.
+    const second = await spawnServer(dataDir, ["unshare", "--pid", "--fork"]);
+    expect(second.pid).toBe(1);
+    expect((await fetch(second.url + "/api/health")).status).toBe(200);
+    process.kill(second.hostPid, "SIGKILL");
+    await second.exited;
+  },
+  90_000,
+);
 
 test.skipIf(!onPglite)(
   "a second server and a backup are refused while the owner's event loop is blocked for 15 s",
@@ -92,7 +101,9 @@ test.skipIf(!onPglite)(
     // Past the 10 s after which the old mkdir lock counted as stale (its refresh timer cannot run meanwhile).
     await new Promise((r) => setTimeout(r, 11_000));
 
-    const second = start({ env: readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" }) });
+    const second = start({
+      env: readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" }),
+    });
     const backup = new Promise<{ status: number | null; stderr: string }>((resolve) => {
       const b = spawn(process.execPath, ["--import", "tsx", "server/cli/backup.ts", path.join(root, "b.tar.gz")], {
         env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir },

@@ -22,13 +22,26 @@ const TRUTH = { angleDeg: 1.6, pace: 0.1 };
 /** Logs a synthetic practice history straight into the database: simulated flat putts of a known dispersion. */
 async function logSimulatedPutts(playerId: string, perDistance: number, seed = 31) {
   const db = server.database.db;
-  const [session] = await db.insert(practiceSessions).values({ playerId, date: "2026-04-01", stimpFt: 10 }).returning({ id: practiceSessions.id });
+  const [session] = await db
+    .insert(practiceSessions)
+    .values({ playerId, date: "2026-04-01", stimpFt: 10 })
+    .returning({ id: practiceSessions.id });
   const random = seededUniform(seed);
   const rows = [];
   for (const distanceM of [1, 1.5, 2, 3, 4, 6, 8, 10]) {
-    const r = simulatePuttOutcomes({ distanceM, slopePct: 0, fallLineDeg: 0, stimpFt: 10, pace: { rollPastM: 0.4 }, dispersion: TRUTH, samples: perDistance, random });
+    const r = simulatePuttOutcomes({
+      distanceM,
+      slopePct: 0,
+      fallLineDeg: 0,
+      stimpFt: 10,
+      pace: { rollPastM: 0.4 },
+      dispersion: TRUTH,
+      samples: perDistance,
+      random,
+    });
     if (!r.ok) throw new Error("flat green must stop");
-    for (const p of r.putts) rows.push({ sessionId: session!.id, playerId, distanceM, holed: p.holed, missSide: p.missSide, missLengthM: p.missLengthM });
+    for (const p of r.putts)
+      rows.push({ sessionId: session!.id, playerId, distanceM, holed: p.holed, missSide: p.missSide, missLengthM: p.missLengthM });
   }
   await db.insert(putts).values(rows);
   return rows.length;
@@ -48,7 +61,11 @@ test("GET /api/players/me/dispersion with no putts answers the prior, flagged", 
   const a = await signedUpClient(server);
   const res = await a.client.get("/api/players/me/dispersion");
   expect(res.status).toBe(200);
-  expect(res.body).toMatchObject({ putts: 0, usedPrior: true, prior: { angleDeg: 1.2, pace: 0.12, why: expect.stringMatching(/club golfer/i) } });
+  expect(res.body).toMatchObject({
+    putts: 0,
+    usedPrior: true,
+    prior: { angleDeg: 1.2, pace: 0.12, why: expect.stringMatching(/club golfer/i) },
+  });
   expect(res.body.angleDeg.estimate).toBeCloseTo(1.2, 2);
   expect(res.body.angleDeg.lo).toBeLessThan(res.body.angleDeg.estimate);
   expect(res.body.angleDeg.hi).toBeGreaterThan(res.body.angleDeg.estimate);
@@ -91,10 +108,20 @@ test("GET /api/players/me/dispersion?playerId= for my squad's coach and an admin
 test("POST /api/reads/make-probability answers the make probability, misses, best pace and the seed", async () => {
   const a = await signedUpClient(server);
   expect((await anon.post("/api/reads/make-probability", { read: sideHill })).status).toBe(401);
-  const res = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: { angleDeg: 1.2, pace: 0.12 }, samples: 4000, seed: 42 });
+  const res = await a.client.post("/api/reads/make-probability", {
+    read: sideHill,
+    dispersion: { angleDeg: 1.2, pace: 0.12 },
+    samples: 4000,
+    seed: 42,
+  });
   expect(res.status).toBe(200);
   const r = res.body;
-  expect(r).toMatchObject({ seed: 42, samples: 4000, secondPuttRiskMax: 0.1, dispersion: { angleDeg: 1.2, pace: 0.12, source: "request" } });
+  expect(r).toMatchObject({
+    seed: 42,
+    samples: 4000,
+    secondPuttRiskMax: 0.1,
+    dispersion: { angleDeg: 1.2, pace: 0.12, source: "request" },
+  });
   expect(r.makeProbability).toBeGreaterThan(0.1);
   expect(r.makeProbability).toBeLessThan(0.9);
   expect(r.makeProbability).toBe(r.defaultPace.makeProbability);
@@ -104,12 +131,21 @@ test("POST /api/reads/make-probability answers the make probability, misses, bes
   expect(r.misses.missProbability).toBeCloseTo(1 - r.makeProbability, 9);
   expect(r.bestPace.secondPuttOver1mProbability).toBeLessThanOrEqual(0.1);
   expect(r.bestPace.meetsRiskLimit).toBe(true);
-  expect(r.bestPace.read).toMatchObject({ aimOffsetM: expect.any(Number), startLineDeg: expect.any(Number), launchSpeedMps: expect.any(Number) });
+  expect(r.bestPace.read).toMatchObject({
+    aimOffsetM: expect.any(Number),
+    startLineDeg: expect.any(Number),
+    launchSpeedMps: expect.any(Number),
+  });
   // A side-hill putt falling right breaks left-to-right: aim left (negative) at every pace.
   expect(r.bestPace.read.aimOffsetM).toBeLessThan(0);
   expect(r.paceCurve.length).toBeGreaterThan(10);
   // Same seed, same answer.
-  const again = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: { angleDeg: 1.2, pace: 0.12 }, samples: 4000, seed: 42 });
+  const again = await a.client.post("/api/reads/make-probability", {
+    read: sideHill,
+    dispersion: { angleDeg: 1.2, pace: 0.12 },
+    samples: 4000,
+    seed: 42,
+  });
   expect(again.body).toEqual(r);
 });
 
@@ -118,7 +154,12 @@ test("POST /api/reads/make-probability picks a seed when none is sent, and retur
   const res = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: { angleDeg: 1, pace: 0.1 }, samples: 500 });
   expect(res.status).toBe(200);
   expect(Number.isInteger(res.body.seed)).toBe(true);
-  const replay = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: { angleDeg: 1, pace: 0.1 }, samples: 500, seed: res.body.seed });
+  const replay = await a.client.post("/api/reads/make-probability", {
+    read: sideHill,
+    dispersion: { angleDeg: 1, pace: 0.1 },
+    samples: 500,
+    seed: res.body.seed,
+  });
   expect(replay.body).toEqual(res.body);
 });
 
@@ -158,7 +199,12 @@ test("POST /api/reads/make-probability: the read error and the green's imperfect
   const a = await signedUpClient(server);
   const stroke = { angleDeg: 0.8, pace: 0.08 };
   const withDefaults = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: stroke, samples: 4000, seed: 9 });
-  const perfect = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: { ...stroke, readSlopePct: 0, greenLateralM: 0 }, samples: 4000, seed: 9 });
+  const perfect = await a.client.post("/api/reads/make-probability", {
+    read: sideHill,
+    dispersion: { ...stroke, readSlopePct: 0, greenLateralM: 0 },
+    samples: 4000,
+    seed: 9,
+  });
   expect(withDefaults.body.dispersion.readSlopePct).toBeGreaterThan(0);
   expect(withDefaults.body.dispersion.greenLateralM).toBeGreaterThan(0);
   expect(withDefaults.body.makeProbability).toBeLessThan(perfect.body.makeProbability);
@@ -180,7 +226,12 @@ test.each([
   ["body", { extra: 1 }],
 ])("POST /api/reads/make-probability refuses a bad %s with a 400 naming it", async (field, change) => {
   const a = await signedUpClient(server);
-  const res = await a.client.post("/api/reads/make-probability", { read: sideHill, dispersion: { angleDeg: 1, pace: 0.1 }, samples: 200, ...change });
+  const res = await a.client.post("/api/reads/make-probability", {
+    read: sideHill,
+    dispersion: { angleDeg: 1, pace: 0.1 },
+    samples: 200,
+    ...change,
+  });
   expect(res.status).toBe(400);
   const named = Object.keys(res.body.error.fields ?? {});
   expect(named.some((k) => k.startsWith(field))).toBe(true);
@@ -188,7 +239,11 @@ test.each([
 
 test("POST /api/reads/make-probability answers 422 when the ball cannot stop", async () => {
   const a = await signedUpClient(server);
-  const res = await a.client.post("/api/reads/make-probability", { read: { ...sideHill, slopePct: 8 }, dispersion: { angleDeg: 1, pace: 0.1 }, samples: 200 });
+  const res = await a.client.post("/api/reads/make-probability", {
+    read: { ...sideHill, slopePct: 8 },
+    dispersion: { angleDeg: 1, pace: 0.1 },
+    samples: 200,
+  });
   expect(res.status).toBe(422);
   expect(res.body.error.fields).toHaveProperty("read.slopePct");
 });
@@ -199,7 +254,10 @@ test("POST /api/reads/make-probability reports my logged rate at about this leng
   expect(none.body.logged).toMatchObject({ attempts: 0, rate: null, ci95: null, oddsOutside: false });
   // 40 putts from 3 m, all holed: a logged rate the odds of a 2 % side-hill 3 m putt cannot match.
   const db = server.database.db;
-  const [session] = await db.insert(practiceSessions).values({ playerId: a.id, date: "2026-04-02", stimpFt: 10 }).returning({ id: practiceSessions.id });
+  const [session] = await db
+    .insert(practiceSessions)
+    .values({ playerId: a.id, date: "2026-04-02", stimpFt: 10 })
+    .returning({ id: practiceSessions.id });
   await db.insert(putts).values(Array.from({ length: 40 }, () => ({ sessionId: session!.id, playerId: a.id, distanceM: 3, holed: true })));
   const res = await a.client.post("/api/reads/make-probability", { read: sideHill, samples: 2000, seed: 1 });
   expect(res.body.logged).toMatchObject({ attempts: 40, made: 40, rate: 1 });

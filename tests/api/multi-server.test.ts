@@ -15,7 +15,9 @@ const children: ChildProcess[] = [];
 const drops: Array<() => Promise<void>> = [];
 afterAll(async () => {
   for (const c of children) if (c.exitCode === null && c.signalCode === null) c.kill("SIGKILL");
-  await Promise.all(children.map((c) => (c.exitCode === null && c.signalCode === null ? new Promise((r) => c.once("exit", r)) : undefined)));
+  await Promise.all(
+    children.map((c) => (c.exitCode === null && c.signalCode === null ? new Promise((r) => c.once("exit", r)) : undefined)),
+  );
   for (const drop of drops) await drop();
 });
 
@@ -24,7 +26,14 @@ type Child = { child: ChildProcess; url: string; exited: Promise<unknown> };
 async function spawnServer(databaseUrl: string, env: Record<string, string> = {}): Promise<Child> {
   const child = spawn(process.execPath, ["--import", "tsx", "tests/setup/child-server.ts"], {
     // The same secret on every server, as the README asks; no DATA_DIR is shared (each gets its own).
-    env: { PATH: process.env.PATH, HOME: process.env.HOME, DATABASE_URL: databaseUrl, BETTER_AUTH_SECRET: "multi-server-secret-multi-server-secret-1", DATA_DIR: `/tmp/borrowline-multi-${crypto.randomUUID()}`, ...env },
+    env: {
+      PATH: process.env.PATH,
+      HOME: process.env.HOME,
+      DATABASE_URL: databaseUrl,
+      BETTER_AUTH_SECRET: "multi-server-secret-multi-server-secret-1",
+      DATA_DIR: `/tmp/borrowline-multi-${crypto.randomUUID()}`,
+      ...env,
+    },
     stdio: ["ignore", "pipe", "inherit"],
   });
   children.push(child);
@@ -48,7 +57,16 @@ test.skipIf(!adminUrl)(
     drops.push(db.drop);
     const [a, b] = await Promise.all([spawnServer(db.url), spawnServer(db.url)]);
     const onA = new HttpClient(a.url);
-    expect((await onA.post("/api/auth/sign-up/email", { name: "Two Servers", email: uniqueEmail("multi"), password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+    expect(
+      (
+        await onA.post("/api/auth/sign-up/email", {
+          name: "Two Servers",
+          email: uniqueEmail("multi"),
+          password: TEST_PASSWORD,
+          accountType: "player",
+        })
+      ).status,
+    ).toBe(200);
     // The session cookie from A is good on B (sessions live in the database; one secret).
     const onB = on(onA, b.url);
     const session = await onB.post("/api/sessions", { date: "2026-12-01" });
@@ -63,7 +81,11 @@ test.skipIf(!adminUrl)(
         const i = sent++;
         const client = (i + k) % 2 === 0 ? onA : onB;
         try {
-          const res = await client.post(`/api/sessions/${sessionId}/putts`, { distanceM: 1 + (i % 9), holed: i % 3 === 0, clientId: crypto.randomUUID() });
+          const res = await client.post(`/api/sessions/${sessionId}/putts`, {
+            distanceM: 1 + (i % 9),
+            holed: i % 3 === 0,
+            clientId: crypto.randomUUID(),
+          });
           if (res.status === 201 || res.status === 200) acknowledged.add(res.body.id as string);
           else if (!(client === onA && killed)) throw new Error(`unexpected ${res.status}`);
         } catch (err) {
@@ -97,53 +119,82 @@ test.skipIf(!adminUrl)(
   120_000,
 );
 
-test.skipIf(!adminUrl)("the sign-in rate limit holds across two servers on one database", async () => {
-  const db = await freshPostgresDatabase(adminUrl!);
-  drops.push(db.drop);
-  const [a, b] = await Promise.all([spawnServer(db.url, { AUTH_LIMIT: "4" }), spawnServer(db.url, { AUTH_LIMIT: "4" })]);
-  const statuses: number[] = [];
-  for (let i = 0; i < 6; i++) {
-    // Alternate servers, as a load balancer would: 3 attempts each, 6 in all against a limit of 4.
-    const res = await new HttpClient(i % 2 === 0 ? a.url : b.url).post("/api/auth/sign-in/email", { email: "nobody@example.test", password: "wrong-password-123" });
-    statuses.push(res.status);
-    if (res.status === 429) expect(res.body.error.code).toBe("too_many_requests");
-  }
-  // Neither server alone saw more than 3, so only a shared count refuses the 5th and 6th.
-  expect(statuses.slice(0, 4).every((s) => s !== 429)).toBe(true);
-  expect(statuses.slice(4)).toEqual([429, 429]);
-  a.child.kill("SIGTERM");
-  b.child.kill("SIGTERM");
-  await Promise.all([a.exited, b.exited]);
-}, 120_000);
+test.skipIf(!adminUrl)(
+  "the sign-in rate limit holds across two servers on one database",
+  async () => {
+    const db = await freshPostgresDatabase(adminUrl!);
+    drops.push(db.drop);
+    const [a, b] = await Promise.all([spawnServer(db.url, { AUTH_LIMIT: "4" }), spawnServer(db.url, { AUTH_LIMIT: "4" })]);
+    const statuses: number[] = [];
+    for (let i = 0; i < 6; i++) {
+      // Alternate servers, as a load balancer would: 3 attempts each, 6 in all against a limit of 4.
+      const res = await new HttpClient(i % 2 === 0 ? a.url : b.url).post("/api/auth/sign-in/email", {
+        email: "nobody@example.test",
+        password: "wrong-password-123",
+      });
+      statuses.push(res.status);
+      if (res.status === 429) expect(res.body.error.code).toBe("too_many_requests");
+    }
+    // Neither server alone saw more than 3, so only a shared count refuses the 5th and 6th.
+    expect(statuses.slice(0, 4).every((s) => s !== 429)).toBe(true);
+    expect(statuses.slice(4)).toEqual([429, 429]);
+    a.child.kill("SIGTERM");
+    b.child.kill("SIGTERM");
+    await Promise.all([a.exited, b.exited]);
+  },
+  120_000,
+);
 
-test.skipIf(!adminUrl)("the local mail fake's inbox is one across servers: mail sent by one is read by an admin on the other", async () => {
-  const db = await freshPostgresDatabase(adminUrl!);
-  drops.push(db.drop);
-  const [a, b] = await Promise.all([spawnServer(db.url), spawnServer(db.url)]);
-  const golfer = uniqueEmail("inbox-a");
-  // The verification e-mail is sent by server A, through A's own local fake.
-  expect((await new HttpClient(a.url).post("/api/auth/sign-up/email", { name: "Mail On A", email: golfer, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
-  const adminEmail = uniqueEmail("inbox-admin");
-  expect((await new HttpClient(b.url).post("/api/auth/sign-up/email", { name: "Admin On B", email: adminEmail, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
-  const client = new pg.Client({ connectionString: db.url });
-  await client.connect();
-  try {
-    await client.query(`update "user" set role = 'admin' where email = $1`, [adminEmail]);
-  } finally {
-    await client.end();
-  }
-  const admin = new HttpClient(b.url);
-  expect((await admin.post("/api/auth/sign-in/email", { email: adminEmail, password: TEST_PASSWORD })).status).toBe(200);
-  // Sending is asynchronous to the sign-up answer: poll B's mailbox briefly for A's message.
-  let seen = false;
-  for (let i = 0; i < 50 && !seen; i++) {
-    const read = await admin.get("/api/dev/mail");
-    expect(read.status).toBe(200);
-    seen = (read.body.messages as { to: string[] }[]).some((m) => m.to.includes(golfer));
-    if (!seen) await new Promise((r) => setTimeout(r, 200));
-  }
-  expect(seen).toBe(true);
-  a.child.kill("SIGTERM");
-  b.child.kill("SIGTERM");
-  await Promise.all([a.exited, b.exited]);
-}, 120_000);
+test.skipIf(!adminUrl)(
+  "the local mail fake's inbox is one across servers: mail sent by one is read by an admin on the other",
+  async () => {
+    const db = await freshPostgresDatabase(adminUrl!);
+    drops.push(db.drop);
+    const [a, b] = await Promise.all([spawnServer(db.url), spawnServer(db.url)]);
+    const golfer = uniqueEmail("inbox-a");
+    // The verification e-mail is sent by server A, through A's own local fake.
+    expect(
+      (
+        await new HttpClient(a.url).post("/api/auth/sign-up/email", {
+          name: "Mail On A",
+          email: golfer,
+          password: TEST_PASSWORD,
+          accountType: "player",
+        })
+      ).status,
+    ).toBe(200);
+    const adminEmail = uniqueEmail("inbox-admin");
+    expect(
+      (
+        await new HttpClient(b.url).post("/api/auth/sign-up/email", {
+          name: "Admin On B",
+          email: adminEmail,
+          password: TEST_PASSWORD,
+          accountType: "player",
+        })
+      ).status,
+    ).toBe(200);
+    const client = new pg.Client({ connectionString: db.url });
+    await client.connect();
+    try {
+      await client.query(`update "user" set role = 'admin' where email = $1`, [adminEmail]);
+    } finally {
+      await client.end();
+    }
+    const admin = new HttpClient(b.url);
+    expect((await admin.post("/api/auth/sign-in/email", { email: adminEmail, password: TEST_PASSWORD })).status).toBe(200);
+    // Sending is asynchronous to the sign-up answer: poll B's mailbox briefly for A's message.
+    let seen = false;
+    for (let i = 0; i < 50 && !seen; i++) {
+      const read = await admin.get("/api/dev/mail");
+      expect(read.status).toBe(200);
+      seen = (read.body.messages as { to: string[] }[]).some((m) => m.to.includes(golfer));
+      if (!seen) await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(seen).toBe(true);
+    a.child.kill("SIGTERM");
+    b.child.kill("SIGTERM");
+    await Promise.all([a.exited, b.exited]);
+  },
+  120_000,
+);

@@ -11,14 +11,18 @@ import { HttpClient } from "../setup/http";
 const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-persist-"));
 afterAll(() => fs.rmSync(dataDir, { recursive: true, force: true }));
 
-const env = () =>
-  readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" });
+const env = () => readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" });
 
 test.skipIf(Boolean(process.env.DATABASE_URL))("data and the session survive a restart on the same DATA_DIR", async () => {
   const email = uniqueEmail("persist");
   const first = await start({ env: env() });
   const client = new HttpClient(first.url);
-  const signUp = await client.post("/api/auth/sign-up/email", { name: "Persistent", email, password: TEST_PASSWORD, accountType: "player" });
+  const signUp = await client.post("/api/auth/sign-up/email", {
+    name: "Persistent",
+    email,
+    password: TEST_PASSWORD,
+    accountType: "player",
+  });
   expect(signUp.status).toBe(200);
   expect((await client.patch("/api/me/preferences", { units: "metric" })).status).toBe(200);
   await first.close();

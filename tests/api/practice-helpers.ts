@@ -6,7 +6,8 @@ import type { TestServer } from "../setup/server";
 /** Squads are another engineer's API: tests insert the rows directly. */
 export async function makeSquad(server: TestServer, coachId: string, playerIds: string[]): Promise<string> {
   const [squad] = await server.database.db.insert(squads).values({ coachId, name: "Test squad" }).returning({ id: squads.id });
-  if (playerIds.length > 0) await server.database.db.insert(squadMembers).values(playerIds.map((playerId) => ({ squadId: squad!.id, playerId })));
+  if (playerIds.length > 0)
+    await server.database.db.insert(squadMembers).values(playerIds.map((playerId) => ({ squadId: squad!.id, playerId })));
   return squad!.id;
 }
 

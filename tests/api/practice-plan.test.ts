@@ -24,9 +24,13 @@ const today = () => new Date().toISOString().slice(0, 10);
 async function logPutts(playerId: string, spec: [lengthFt: number, n: number, made: number][]) {
   const db = server.database.db;
   const [s] = await db.insert(practiceSessions).values({ playerId, date: today() }).returning({ id: practiceSessions.id });
-  await db.insert(putts).values(
-    spec.flatMap(([lengthFt, n, made]) => Array.from({ length: n }, (_, i) => ({ sessionId: s!.id, playerId, distanceM: ft(lengthFt), holed: i < made }))),
-  );
+  await db
+    .insert(putts)
+    .values(
+      spec.flatMap(([lengthFt, n, made]) =>
+        Array.from({ length: n }, (_, i) => ({ sessionId: s!.id, playerId, distanceM: ft(lengthFt), holed: i < made })),
+      ),
+    );
 }
 
 beforeAll(async () => {

@@ -135,7 +135,13 @@ test("the public read API is rate-limited with a 429, Retry-After and the error 
 
 test("POST /api/reads/chart and /solve give the start line, not an offset, past a 60° start line (issue 13: was 1576 cm R)", async () => {
   // 3 m, 7.7 % falling at 30°, Stimp 10, dying pace: the ball must start more than 90° left.
-  const res = await anon.post("/api/reads/chart", { slopePct: 7.7, stimpFt: 10, pace: { rollPastM: 0 }, distances: [3], fallLineDegs: [30] });
+  const res = await anon.post("/api/reads/chart", {
+    slopePct: 7.7,
+    stimpFt: 10,
+    pace: { rollPastM: 0 },
+    distances: [3],
+    fallLineDegs: [30],
+  });
   expect(res.status).toBe(200);
   const cell = res.body.cells[0][0];
   expect(Math.abs(cell.startLineDeg)).toBeGreaterThan(90);

@@ -61,11 +61,15 @@ test(`old cookies are refused on every route within ${SESSION_CACHE_SECONDS} s o
   // Password reset through the e-mailed link.
   const c = await signedUpClient(server, "player");
   stolen["password reset"] = c.client;
-  expect((await new HttpClient(server.url).post("/api/auth/request-password-reset", { email: c.email, redirectTo: "/reset-password" })).status).toBe(200);
+  expect(
+    (await new HttpClient(server.url).post("/api/auth/request-password-reset", { email: c.email, redirectTo: "/reset-password" })).status,
+  ).toBe(200);
   const mail = await server.smtpFake!.waitFor((m) => m.to.includes(c.email) && /reset/i.test(m.subject));
   const token = mail.text.match(/reset-password\/([A-Za-z0-9_-]+)/)?.[1];
   expect(token).toBeDefined();
-  expect((await new HttpClient(server.url).post("/api/auth/reset-password", { token, newPassword: "another-new-password" })).status).toBe(200);
+  expect((await new HttpClient(server.url).post("/api/auth/reset-password", { token, newPassword: "another-new-password" })).status).toBe(
+    200,
+  );
 
   // "Revoke other sessions".
   const d = await signedUpClient(server, "player");
@@ -79,7 +83,15 @@ test(`old cookies are refused on every route within ${SESSION_CACHE_SECONDS} s o
 
   // A role change by an admin: the coach becomes a player.
   const coach = await signedUpClient(server, "coach");
-  expect((await coach.client.post("/api/ladders", { name: "Before", failRule: "restart", rungs: [{ distanceM: 1, balls: 1, passRule: { kind: "make", made: 1 } }] })).status).toBe(201);
+  expect(
+    (
+      await coach.client.post("/api/ladders", {
+        name: "Before",
+        failRule: "restart",
+        rungs: [{ distanceM: 1, balls: 1, passRule: { kind: "make", made: 1 } }],
+      })
+    ).status,
+  ).toBe(201);
   expect((await admin.client.post(`/api/admin/users/${coach.id}/role`, { role: "player" })).status).toBe(200);
 
   for (const [what, client] of Object.entries(stolen)) expect(client.hasCookies(), what).toBe(true);
@@ -87,7 +99,11 @@ test(`old cookies are refused on every route within ${SESSION_CACHE_SECONDS} s o
   await new Promise((resolve) => setTimeout(resolve, SESSION_CACHE_SECONDS * 1000 + 500));
 
   for (const [what, client] of Object.entries(stolen)) await answersAsSignedOut(client, what);
-  const demoted = await coach.client.post("/api/ladders", { name: "After", failRule: "restart", rungs: [{ distanceM: 1, balls: 1, passRule: { kind: "make", made: 1 } }] });
+  const demoted = await coach.client.post("/api/ladders", {
+    name: "After",
+    failRule: "restart",
+    rungs: [{ distanceM: 1, balls: 1, passRule: { kind: "make", made: 1 } }],
+  });
   expect(demoted.status).toBe(403);
   expect((await coach.client.get("/api/me")).body.user.role).toBe("player");
 }, 120_000);

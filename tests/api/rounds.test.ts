@@ -31,8 +31,20 @@ test("POST /api/rounds stores the holes and answers per-round totals with stroke
   expect(res.body.totals).toMatchObject({ holes: 4, putts: 6, onePutts: 1, threePutts: 1, longFirstPutts: 1, longLagsOutside1m: 1 });
   // Broadie, "Putts Gained", 2011 [published]: 1.5 putts from 8 ft, 2.0 from 33 ft; 3 ft 1.04 from the [memory] table.
   expect(res.body.totals.strokesGained).toBeCloseTo(0.5 + (2.0 - 3) + (1.04 - 2), 1);
-  expect(res.body.holes[0]).toMatchObject({ holeNumber: 1, putts: 1, expectedPutts: expect.closeTo(1.5, 6), strokesGained: expect.closeTo(0.5, 6) });
-  expect(res.body.holes[3]).toEqual({ holeNumber: 4, firstPuttM: null, putts: 0, leftAfterFirstM: null, expectedPutts: null, strokesGained: null });
+  expect(res.body.holes[0]).toMatchObject({
+    holeNumber: 1,
+    putts: 1,
+    expectedPutts: expect.closeTo(1.5, 6),
+    strokesGained: expect.closeTo(0.5, 6),
+  });
+  expect(res.body.holes[3]).toEqual({
+    holeNumber: 4,
+    firstPuttM: null,
+    putts: 0,
+    leftAfterFirstM: null,
+    expectedPutts: null,
+    strokesGained: null,
+  });
   const got = await client.get(`/api/rounds/${res.body.id}`);
   expect(got.body).toEqual(res.body);
 });
@@ -57,7 +69,16 @@ test("round and hole validation names the field and stores nothing", async () =>
     [{ date: "2024-06-02", holes: [{ holeNumber: 1, firstPuttM: 3, putts: 7 }] }, "holes.0.putts"],
     [{ date: "2024-06-02", holes: [{ holeNumber: 1, putts: 2 }] }, "holes.0.firstPuttM"],
     [{ date: "2024-06-02", holes: [{ holeNumber: 1, firstPuttM: 3, putts: 1, leftAfterFirstM: 1 }] }, "holes.0.leftAfterFirstM"],
-    [{ date: "2024-06-02", holes: [{ holeNumber: 2, firstPuttM: 3, putts: 2 }, { holeNumber: 2, firstPuttM: 5, putts: 2 }] }, "holes.1.holeNumber"],
+    [
+      {
+        date: "2024-06-02",
+        holes: [
+          { holeNumber: 2, firstPuttM: 3, putts: 2 },
+          { holeNumber: 2, firstPuttM: 5, putts: 2 },
+        ],
+      },
+      "holes.1.holeNumber",
+    ],
     [{ holes: [] }, "date"],
   ];
   for (const [payload, field] of bodies) {
@@ -101,12 +122,21 @@ test("rounds feed the first-putt make rate by distance (GET /api/stats/make-rate
   });
   const res = await client.get("/api/stats/make-rates?source=rounds&bands=1,2");
   expect(res.status).toBe(200);
-  expect(res.body.bands.map((b: { attempts: number; made: number }) => [b.attempts, b.made])).toEqual([[2, 1], [0, 0], [1, 0]]);
+  expect(res.body.bands.map((b: { attempts: number; made: number }) => [b.attempts, b.made])).toEqual([
+    [2, 1],
+    [0, 0],
+    [1, 0],
+  ]);
 });
 
 test("DELETE /api/rounds/:id removes it; other players get 404 on every round id route", async () => {
   const owner = await signedUpClient(server);
-  const id = (await owner.client.post("/api/rounds", { date: "2024-06-01", holes: [{ holeNumber: 1, firstPuttM: 3, putts: 2, leftAfterFirstM: 0.4 }] })).body.id;
+  const id = (
+    await owner.client.post("/api/rounds", {
+      date: "2024-06-01",
+      holes: [{ holeNumber: 1, firstPuttM: 3, putts: 2, leftAfterFirstM: 0.4 }],
+    })
+  ).body.id;
   const other = (await signedUpClient(server)).client;
   expect((await other.get(`/api/rounds/${id}`)).status).toBe(404);
   expect((await other.put(`/api/rounds/${id}/holes/2`, { firstPuttM: 3, putts: 1 })).status).toBe(404);
@@ -146,6 +176,9 @@ test("non-uuid round ids are 400; signed out every round route is 401", async ()
     ["DELETE", `/api/rounds/${OTHER_UUID}`],
     ["PUT", `/api/rounds/${OTHER_UUID}/holes/1`],
   ] as const) {
-    expect((await anon.request(method, url, method === "POST" || method === "PUT" ? { date: "2024-06-01" } : undefined)).status, `${method} ${url}`).toBe(401);
+    expect(
+      (await anon.request(method, url, method === "POST" || method === "PUT" ? { date: "2024-06-01" } : undefined)).status,
+      `${method} ${url}`,
+    ).toBe(401);
   }
 });

@@ -34,7 +34,12 @@ test("GET /api/dev/mail: only a signed-in admin reads sent mail, in production a
       const player = await signedUpClient(s, "player");
       const coach = await signedUpClient(s, "coach");
       const reset = uniqueEmail("victim");
-      await new HttpClient(s.url).post("/api/auth/sign-up/email", { name: "Victim", email: reset, password: TEST_PASSWORD, accountType: "player" });
+      await new HttpClient(s.url).post("/api/auth/sign-up/email", {
+        name: "Victim",
+        email: reset,
+        password: TEST_PASSWORD,
+        accountType: "player",
+      });
       await new HttpClient(s.url).post("/api/auth/request-password-reset", { email: reset, redirectTo: "/reset-password" });
       await s.smtpFake!.waitFor((m) => m.to.includes(reset) && /reset/i.test(m.subject));
       for (const [who, client, status] of [
@@ -106,7 +111,9 @@ test("state-changing /api requests with a cookie need our Origin (or Sec-Fetch-S
   expect((await client.get("/api/me")).body.user.name).toBe("Test Golfer");
   expect((await client.get("/api/me")).body.preferences.units).not.toBe("metric");
   // Our own pages: the Origin of the app, or a browser's same-origin fetch metadata without an Origin.
-  expect((await client.request("POST", "/api/sessions", { date: "2026-05-01" }, { origin: "", "sec-fetch-site": "same-origin" })).status).toBe(201);
+  expect(
+    (await client.request("POST", "/api/sessions", { date: "2026-05-01" }, { origin: "", "sec-fetch-site": "same-origin" })).status,
+  ).toBe(201);
   expect((await client.post("/api/sessions", { date: "2026-05-02" })).status).toBe(201);
   expect(await sessionCount(client)).toBe(before + 2);
   // Reads need no Origin.
@@ -170,7 +177,12 @@ function bigPost(path: string, bytes: number, chunked = false): Promise<{ status
 
 test("/api/auth/* bodies over 100 kB answer 413 at once; /api/health answers meanwhile", async () => {
   const email = uniqueEmail("huge");
-  const big = await new HttpClient(server.url).post("/api/auth/sign-up/email", { name: "x".repeat(150_000), email, password: TEST_PASSWORD, accountType: "player" });
+  const big = await new HttpClient(server.url).post("/api/auth/sign-up/email", {
+    name: "x".repeat(150_000),
+    email,
+    password: TEST_PASSWORD,
+    accountType: "player",
+  });
   expect(big.status).toBe(413);
   expect(big.body).toMatchObject(errorShape);
   expect(await storedUser(email)).toBeUndefined();
@@ -185,7 +197,9 @@ test("/api/auth/* bodies over 100 kB answer 413 at once; /api/health answers mea
     expect(refused.status).toBe(413);
     expect(JSON.parse(refused.body)).toMatchObject(errorShape);
     // The figure for the issue's closing note (a benchmark figure, not an assertion).
-    console.info(`10 MB ${chunked ? "chunked" : "Content-Length"} body refused with 413; concurrent /api/health answered in ${healthMs.toFixed(0)} ms`);
+    console.info(
+      `10 MB ${chunked ? "chunked" : "Content-Length"} body refused with 413; concurrent /api/health answered in ${healthMs.toFixed(0)} ms`,
+    );
   }
 });
 
@@ -219,19 +233,26 @@ test("e-mail is rate-limited per recipient address and per client address: 429 w
   try {
     const anon = new HttpClient(limited.url);
     const email = uniqueEmail("flooded");
-    expect((await anon.post("/api/auth/sign-up/email", { name: "Flooded", email, password: TEST_PASSWORD, accountType: "player" })).status).toBe(200);
+    expect(
+      (await anon.post("/api/auth/sign-up/email", { name: "Flooded", email, password: TEST_PASSWORD, accountType: "player" })).status,
+    ).toBe(200);
     expect((await anon.post("/api/auth/send-verification-email", { email })).status).toBe(200);
     const third = await anon.post("/api/auth/send-verification-email", { email });
     expect(third.status).toBe(429);
     expect(third.body).toMatchObject({ error: { code: "too_many_requests", message: expect.any(String) } });
     expect(Number(third.headers.get("retry-after"))).toBeGreaterThan(0);
-    expect((await new HttpClient(limited.url).post("/api/auth/request-password-reset", { email, redirectTo: "/reset-password" })).status).toBe(429);
+    expect(
+      (await new HttpClient(limited.url).post("/api/auth/request-password-reset", { email, redirectTo: "/reset-password" })).status,
+    ).toBe(429);
     await limited.smtpFake!.waitFor((m) => m.to.includes(email) && m.subject.startsWith("Confirm") && m.id !== "1");
     expect(limited.smtpFake!.messages.filter((m) => m.to.includes(email))).toHaveLength(2);
 
     // Per client address: the same client asking for mail to ever new addresses.
     const statuses: number[] = [];
-    for (let i = 0; i < 3; i++) statuses.push((await anon.post("/api/auth/request-password-reset", { email: uniqueEmail("other"), redirectTo: "/reset-password" })).status);
+    for (let i = 0; i < 3; i++)
+      statuses.push(
+        (await anon.post("/api/auth/request-password-reset", { email: uniqueEmail("other"), redirectTo: "/reset-password" })).status,
+      );
     // Four counted so far from this address (sign-up, verification, refused verification, refused reset); limit 4.
     expect(statuses).toEqual([429, 429, 429]);
   } finally {
@@ -288,7 +309,13 @@ test("POST /api/auth/sign-up/email refuses role, emailVerified and ban fields (4
   for (const [field, value] of Object.entries(FORBIDDEN_FIELDS)) {
     if (field === "accountType") continue; // a sign-up field; "admin" is refused in auth.test.ts
     const email = uniqueEmail("field");
-    const res = await new HttpClient(server.url).post("/api/auth/sign-up/email", { name: "Field", email, password: TEST_PASSWORD, accountType: "player", [field]: value });
+    const res = await new HttpClient(server.url).post("/api/auth/sign-up/email", {
+      name: "Field",
+      email,
+      password: TEST_PASSWORD,
+      accountType: "player",
+      [field]: value,
+    });
     expect(res.status, field).toBe(400);
     expect(res.body.error.fields, field).toHaveProperty(field);
     expect(await storedUser(email), field).toBeUndefined();
@@ -300,7 +327,9 @@ test("no better-auth route lets a player set accountType, role, emailVerified or
     .filter((e) => typeof e?.path === "string" && [e.options?.method].flat().includes("POST"))
     .map((e) => e.path!)
     .filter((p) => !p.includes(":"));
-  expect(routes).toEqual(expect.arrayContaining(["/update-user", "/sign-up/email", "/change-password", "/update-session", "/admin/update-user"]));
+  expect(routes).toEqual(
+    expect.arrayContaining(["/update-user", "/sign-up/email", "/change-password", "/update-session", "/admin/update-user"]),
+  );
   const { email } = await signedUpClient(server, "player");
   const before = await storedUser(email);
   for (const path of routes) {
@@ -330,7 +359,8 @@ test("after the player leaves the squad, the coach no longer reads their assignm
   const { coach, squadId, members } = await coachWithSquad(server, 1);
   const player = members[0]!;
   const ladder = await createLadder(coach.client, THREE_RUNGS);
-  const assignment = (await coach.client.post(`/api/ladders/${ladder}/assignments`, { playerIds: [player.id] })).body.assignments[0].id as string;
+  const assignment = (await coach.client.post(`/api/ladders/${ladder}/assignments`, { playerIds: [player.id] })).body.assignments[0]
+    .id as string;
   const played = await player.client.post(`/api/assignments/${assignment}/putts`, { holed: true });
   expect(played.status).toBe(201);
   const session = (await player.client.post("/api/sessions", { date: "2026-05-01", notes: "mine" })).body.id as string;
@@ -386,7 +416,12 @@ test("better-auth's errors come in our shape: {error: {code, message}}", async (
   const unauth = await anon.post("/api/auth/update-user", { name: "Nobody" });
   expect(unauth.status).toBe(401);
   expect(unauth.body).toMatchObject(errorShape);
-  const short = await anon.post("/api/auth/sign-up/email", { name: "Short", email: uniqueEmail("short"), password: "short", accountType: "player" });
+  const short = await anon.post("/api/auth/sign-up/email", {
+    name: "Short",
+    email: uniqueEmail("short"),
+    password: "short",
+    accountType: "player",
+  });
   expect(short.status).toBe(400);
   expect(short.body).toMatchObject({ error: { code: "password_too_short", message: expect.any(String) } });
 });

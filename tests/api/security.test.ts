@@ -16,7 +16,9 @@ test("passwords never reach the logs, even at trace level", async () => {
   const email = uniqueEmail("logged");
   const secret = "p4ssword-that-must-not-leak";
   const client = new HttpClient(server.url);
-  expect((await client.post("/api/auth/sign-up/email", { name: "Logger", email, password: secret, accountType: "player" })).status).toBe(200);
+  expect((await client.post("/api/auth/sign-up/email", { name: "Logger", email, password: secret, accountType: "player" })).status).toBe(
+    200,
+  );
   await new HttpClient(server.url).post("/api/auth/sign-in/email", { email, password: `${secret}-wrong` });
   await new HttpClient(server.url).post("/api/auth/sign-in/email", { email, password: secret });
   await client.patch("/api/me/preferences", { units: "metric", password: secret });
@@ -38,7 +40,12 @@ test("responses carry helmet's headers and a Content-Security-Policy", async () 
 
 test("a cookie-authenticated POST from a foreign origin is refused by better-auth's origin check", async () => {
   const client = new HttpClient(server.url);
-  await client.post("/api/auth/sign-up/email", { name: "Original", email: uniqueEmail("origin"), password: TEST_PASSWORD, accountType: "player" });
+  await client.post("/api/auth/sign-up/email", {
+    name: "Original",
+    email: uniqueEmail("origin"),
+    password: TEST_PASSWORD,
+    accountType: "player",
+  });
   const forged = await client.request("POST", "/api/auth/update-user", { name: "Forged" }, { origin: "https://evil.example" });
   expect(forged.status).toBe(403);
   expect((await client.get("/api/me")).body.user.name).toBe("Original");

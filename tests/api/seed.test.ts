@@ -43,7 +43,10 @@ test("seeded people signed up (and joined the squad) before their first logged s
   const db = server.database.db;
   for (const p of DEMO_PLAYERS) {
     const [u] = await db.select({ id: user.id, createdAt: user.createdAt }).from(user).where(eq(user.email, p.email));
-    const [first] = await db.select({ day: min(practiceSessions.date) }).from(practiceSessions).where(eq(practiceSessions.playerId, u!.id));
+    const [first] = await db
+      .select({ day: min(practiceSessions.date) })
+      .from(practiceSessions)
+      .where(eq(practiceSessions.playerId, u!.id));
     const [member] = await db.select({ joinedAt: squadMembers.joinedAt }).from(squadMembers).where(eq(squadMembers.playerId, u!.id));
     const firstDay = Date.parse(`${first!.day}T00:00:00Z`);
     expect(u!.createdAt.getTime(), `${p.name} signed up before the first session`).toBeLessThan(firstDay);
@@ -56,9 +59,23 @@ test("seeded people signed up (and joined the squad) before their first logged s
 
 test("the seeded juniors' make rate falls with distance and lies between an amateur curve and the tour's", async () => {
   const db = server.database.db;
-  const ids = (await db.select({ id: user.id }).from(user).where(inArray(user.email, DEMO_PLAYERS.map((p) => p.email)))).map((u) => u.id);
+  const ids = (
+    await db
+      .select({ id: user.id })
+      .from(user)
+      .where(
+        inArray(
+          user.email,
+          DEMO_PLAYERS.map((p) => p.email),
+        ),
+      )
+  ).map((u) => u.id);
   const rows = await db
-    .select({ ft: sql<number>`round(${putts.distanceM} / 0.3048)::int`, n: count(), made: sql<number>`(count(*) filter (where ${putts.holed}))::int` })
+    .select({
+      ft: sql<number>`round(${putts.distanceM} / 0.3048)::int`,
+      n: count(),
+      made: sql<number>`(count(*) filter (where ${putts.holed}))::int`,
+    })
     .from(putts)
     .where(and(inArray(putts.playerId, ids), isNull(putts.assignmentId)))
     .groupBy(sql`1`)
@@ -71,11 +88,19 @@ test("the seeded juniors' make rate falls with distance and lies between an amat
   };
   // Monotone: pooled over neighbouring distances, each range's rate is not above the one before it, beyond
   // what sampling allows (the later range's 95 % Wilson interval reaches down to the earlier one's rate).
-  const ranges: [number, number][] = [[3, 4], [5, 6], [8, 10], [12, 15], [20, 30]];
+  const ranges: [number, number][] = [
+    [3, 4],
+    [5, 6],
+    [8, 10],
+    [12, 15],
+    [20, 30],
+  ];
   const curve = ranges.map(([a, b]) => ({ a, b, ...pooled(a, b) }));
   for (const c of curve) expect(c.n, `${c.a}–${c.b} ft has putts`).toBeGreaterThan(30);
   for (let i = 1; i < curve.length; i++) {
-    expect(curve[i]!.lo, `${curve[i]!.a}–${curve[i]!.b} ft is no better than ${curve[i - 1]!.a}–${curve[i - 1]!.b} ft`).toBeLessThanOrEqual(curve[i - 1]!.rate);
+    expect(curve[i]!.lo, `${curve[i]!.a}–${curve[i]!.b} ft is no better than ${curve[i - 1]!.a}–${curve[i - 1]!.b} ft`).toBeLessThanOrEqual(
+      curve[i - 1]!.rate,
+    );
   }
   // Upper bound, the tour (TOUR_CURVE_SOURCE): at each distance the seed's interval reaches down to the tour rate.
   for (const r of rows) {
@@ -102,7 +127,9 @@ test("the demo's Top green is the squad's: a junior sees it (shared by the coach
   const junior = new HttpClient(server.url);
   expect((await junior.post("/api/auth/sign-in/email", { email: DEMO_PLAYERS[0].email, password: DEMO_PASSWORD })).status).toBe(200);
   const list = await junior.get("/api/greens");
-  const top = (list.body.items as { id: string; name: string; mine: boolean; ownerName: string; squad: { name: string } | null }[]).find((g) => g.name === "Top green");
+  const top = (list.body.items as { id: string; name: string; mine: boolean; ownerName: string; squad: { name: string } | null }[]).find(
+    (g) => g.name === "Top green",
+  );
   expect(top).toMatchObject({ mine: false, ownerName: DEMO_COACH.name, squad: { name: expect.any(String) } });
   const green = await junior.get(`/api/greens/${top!.id}`);
   expect(green.body.readings.length).toBeGreaterThan(0);

@@ -98,8 +98,18 @@ test("GET /api/sessions sorts, filters and paginates on the server", async () =>
   expect((await client.get("/api/sessions?sort=date")).body.items[0].id).toBe(a);
   expect((await client.get("/api/sessions?sort=-putts")).body.items.map((s: { putts: number }) => s.putts)).toEqual([6, 4, 2, 0]);
   // makeRate: empty sessions have no rate and sort last either way.
-  expect((await client.get("/api/sessions?sort=-makeRate")).body.items.map((s: { makeRate: number | null }) => s.makeRate)).toEqual([1, 0.5, 0.25, null]);
-  expect((await client.get("/api/sessions?sort=makeRate")).body.items.map((s: { makeRate: number | null }) => s.makeRate)).toEqual([0.25, 0.5, 1, null]);
+  expect((await client.get("/api/sessions?sort=-makeRate")).body.items.map((s: { makeRate: number | null }) => s.makeRate)).toEqual([
+    1,
+    0.5,
+    0.25,
+    null,
+  ]);
+  expect((await client.get("/api/sessions?sort=makeRate")).body.items.map((s: { makeRate: number | null }) => s.makeRate)).toEqual([
+    0.25,
+    0.5,
+    1,
+    null,
+  ]);
 
   const ranged = await client.get("/api/sessions?from=2024-05-08&to=2024-05-15");
   expect(ranged.body.items.map((s: { id: string }) => s.id)).toEqual([c, b]);
@@ -160,7 +170,13 @@ test("DELETE /api/greens/:id keeps the sessions logged on it and their putts", a
 test("POST /api/sessions/:id/putts stores a putt; the miss rules and distance limits name the field", async () => {
   const { client } = await signedUpClient(server);
   const id = await newSession(client);
-  const ok = await client.post(`/api/sessions/${id}/putts`, { distanceM: 3.2, holed: false, missSide: "right", missLengthM: -0.3, breakType: "uphill" });
+  const ok = await client.post(`/api/sessions/${id}/putts`, {
+    distanceM: 3.2,
+    holed: false,
+    missSide: "right",
+    missLengthM: -0.3,
+    breakType: "uphill",
+  });
   expect(ok.status).toBe(201);
   const cases: [Record<string, unknown>, string][] = [
     [{ distanceM: 2, holed: true, missSide: "left" }, "missSide"],
@@ -181,7 +197,15 @@ test("POST /api/sessions/:id/putts stores a putt; the miss rules and distance li
   }
   const list = await client.get(`/api/sessions/${id}/putts`);
   expect(list.body.items).toHaveLength(1);
-  expect(list.body.items[0]).toMatchObject({ distanceM: 3.2, holed: false, missSide: "right", missLengthM: -0.3, breakType: "uphill", date: "2024-05-01", sessionId: id });
+  expect(list.body.items[0]).toMatchObject({
+    distanceM: 3.2,
+    holed: false,
+    missSide: "right",
+    missLengthM: -0.3,
+    breakType: "uphill",
+    date: "2024-05-01",
+    sessionId: id,
+  });
 });
 
 test("POST /api/sessions/:id/putts with a clientId stores the putt once: a retry answers 200 with the same id", async () => {
@@ -195,7 +219,9 @@ test("POST /api/sessions/:id/putts with a clientId stores the putt once: a retry
   expect(retry.body.id).toBe(first.body.id);
   // Two retries racing each other: still one row.
   const racing = randomUUID();
-  const both = await Promise.all([1, 2, 3].map(() => client.post(`/api/sessions/${id}/putts`, { distanceM: 2, holed: false, clientId: racing })));
+  const both = await Promise.all(
+    [1, 2, 3].map(() => client.post(`/api/sessions/${id}/putts`, { distanceM: 2, holed: false, clientId: racing })),
+  );
   expect(both.map((r) => r.status).sort()).toEqual([200, 200, 201]);
   expect(new Set(both.map((r) => r.body.id)).size).toBe(1);
   expect((await client.get(`/api/sessions/${id}/putts`)).body.items).toHaveLength(2);
@@ -208,19 +234,33 @@ test("GET /api/putts lists all my putts with server-side sorting, filters and pa
   const { client } = await signedUpClient(server);
   const s1 = await newSession(client, { date: "2024-05-01" });
   const s2 = await newSession(client, { date: "2024-05-10" });
-  await addPutts(client, s1, [{ distanceM: 1, holed: true }, { distanceM: 5, holed: false, breakType: "downhill" }]);
-  await addPutts(client, s2, [{ distanceM: 3, holed: true, breakType: "downhill" }, { distanceM: 9, holed: false }, { distanceM: 0.5, holed: true }]);
+  await addPutts(client, s1, [
+    { distanceM: 1, holed: true },
+    { distanceM: 5, holed: false, breakType: "downhill" },
+  ]);
+  await addPutts(client, s2, [
+    { distanceM: 3, holed: true, breakType: "downhill" },
+    { distanceM: 9, holed: false },
+    { distanceM: 0.5, holed: true },
+  ]);
   const all = await client.get("/api/putts?pageSize=2&sort=-distance");
   expect(all.body).toMatchObject({ total: 5, page: 1, pageSize: 2 });
   expect(all.body.items.map((p: { distanceM: number }) => p.distanceM)).toEqual([9, 5]);
-  expect((await client.get("/api/putts?sort=distance&page=3&pageSize=2")).body.items.map((p: { distanceM: number }) => p.distanceM)).toEqual([9]);
+  expect(
+    (await client.get("/api/putts?sort=distance&page=3&pageSize=2")).body.items.map((p: { distanceM: number }) => p.distanceM),
+  ).toEqual([9]);
   expect((await client.get("/api/putts?sort=-date")).body.items[0].date).toBe("2024-05-10");
   expect((await client.get("/api/putts?holed=false")).body.total).toBe(2);
   expect((await client.get("/api/putts?breakType=downhill")).body.total).toBe(2);
   expect((await client.get("/api/putts?minM=1&maxM=5")).body.total).toBe(3);
   expect((await client.get("/api/putts?from=2024-05-05")).body.total).toBe(3);
   expect((await client.get(`/api/putts?sessionId=${s1}`)).body.total).toBe(2);
-  for (const [qs, field] of [["holed=maybe", "holed"], ["minM=5&maxM=1", "maxM"], ["sort=speed", "sort"], ["pageSize=500", "pageSize"]]) {
+  for (const [qs, field] of [
+    ["holed=maybe", "holed"],
+    ["minM=5&maxM=1", "maxM"],
+    ["sort=speed", "sort"],
+    ["pageSize=500", "pageSize"],
+  ]) {
     const res = await client.get(`/api/putts?${qs}`);
     expect(res.status, qs).toBe(400);
     expect(res.body.error.fields).toHaveProperty(field!);

@@ -35,8 +35,26 @@ test("GET /api/stats/make-rates counts per band in SQL, lower edge included, las
   const res = await client.get("/api/stats/make-rates?bands=0.6,1.2,1.8,3,4.5,6,9");
   expect(res.status).toBe(200);
   const bands: BandOut[] = res.body.bands;
-  expect(bands.map((b) => [b.fromM, b.toM])).toEqual([[0, 0.6], [0.6, 1.2], [1.2, 1.8], [1.8, 3], [3, 4.5], [4.5, 6], [6, 9], [9, null]]);
-  expect(counts(bands)).toEqual([[4, 3], [4, 1], [0, 0], [0, 0], [0, 0], [0, 0], [0, 0], [4, 1]]);
+  expect(bands.map((b) => [b.fromM, b.toM])).toEqual([
+    [0, 0.6],
+    [0.6, 1.2],
+    [1.2, 1.8],
+    [1.8, 3],
+    [3, 4.5],
+    [4.5, 6],
+    [6, 9],
+    [9, null],
+  ]);
+  expect(counts(bands)).toEqual([
+    [4, 3],
+    [4, 1],
+    [0, 0],
+    [0, 0],
+    [0, 0],
+    [0, 0],
+    [0, 0],
+    [4, 1],
+  ]);
   expect(bands[0]).toMatchObject({ rate: 0.75, ci95: wilsonInterval(3, 4) });
   expect(bands[2]).toMatchObject({ rate: null, ci95: null });
   // A leading 0 changes nothing.
@@ -48,20 +66,56 @@ test("GET /api/stats/make-rates without bands uses the unit preference: 0-3 … 
   const s = await newSession(client, { date: "2024-05-01" });
   await addPutts(client, s, [...puttsAt(10 * METRES_PER_FOOT, 1, 1), ...puttsAt(2.5, 1, 0)]);
   const imperial = (await client.get("/api/stats/make-rates")).body.bands as BandOut[];
-  expect(imperial.map((b) => [Math.round(b.fromM / METRES_PER_FOOT), b.toM === null ? null : Math.round(b.toM / METRES_PER_FOOT)])).toEqual([
-    [0, 3], [3, 6], [6, 10], [10, 15], [15, 20], [20, 30], [30, null],
-  ]);
+  expect(imperial.map((b) => [Math.round(b.fromM / METRES_PER_FOOT), b.toM === null ? null : Math.round(b.toM / METRES_PER_FOOT)])).toEqual(
+    [
+      [0, 3],
+      [3, 6],
+      [6, 10],
+      [10, 15],
+      [15, 20],
+      [20, 30],
+      [30, null],
+    ],
+  );
   // 10 ft exactly belongs to 10-15 ft; 2.5 m (8.2 ft) to 6-10 ft.
-  expect(counts(imperial)).toEqual([[0, 0], [0, 0], [1, 1], [2, 1], [0, 0], [0, 0], [0, 0]]);
+  expect(counts(imperial)).toEqual([
+    [0, 0],
+    [0, 0],
+    [1, 1],
+    [2, 1],
+    [0, 0],
+    [0, 0],
+    [0, 0],
+  ]);
   await client.patch("/api/me/preferences", { units: "metric" });
   const metric = (await client.get("/api/stats/make-rates")).body.bands as BandOut[];
-  expect(metric.map((b) => [b.fromM, b.toM])).toEqual([[0, 1], [1, 2], [2, 3], [3, 5], [5, 7], [7, 10], [10, null]]);
-  expect(counts(metric)).toEqual([[0, 0], [0, 0], [1, 1], [2, 1], [0, 0], [0, 0], [0, 0]]);
+  expect(metric.map((b) => [b.fromM, b.toM])).toEqual([
+    [0, 1],
+    [1, 2],
+    [2, 3],
+    [3, 5],
+    [5, 7],
+    [7, 10],
+    [10, null],
+  ]);
+  expect(counts(metric)).toEqual([
+    [0, 0],
+    [0, 0],
+    [1, 1],
+    [2, 1],
+    [0, 0],
+    [0, 0],
+    [0, 0],
+  ]);
 });
 
 test("GET /api/stats/make-rates filters by session date, both ends inclusive", async () => {
   const { client } = await signedUpClient(server);
-  for (const [date, made] of [["2024-05-01", 1], ["2024-05-10", 2], ["2024-05-20", 3]] as const) {
+  for (const [date, made] of [
+    ["2024-05-01", 1],
+    ["2024-05-10", 2],
+    ["2024-05-20", 3],
+  ] as const) {
     await addPutts(client, await newSession(client, { date }), puttsAt(1, made, 0));
   }
   const total = (q: string) => client.get(`/api/stats/make-rates?bands=5${q}`).then((r) => (r.body.bands as BandOut[])[0]!.attempts);
@@ -104,19 +158,49 @@ test("GET /api/stats/trend answers per band per ISO week, and rolling windows su
   await addPutts(client, await newSession(client, { date: "2024-05-22" }), puttsAt(1, 3, 0));
   const week = await client.get("/api/stats/trend?bands=2");
   expect(week.status).toBe(200);
-  expect(week.body.bands).toEqual([{ fromM: 0, toM: 2 }, { fromM: 2, toM: null }]);
+  expect(week.body.bands).toEqual([
+    { fromM: 0, toM: 2 },
+    { fromM: 2, toM: null },
+  ]);
   expect(week.body.weeks.map((w: { weekStart: string; bands: BandOut[] }) => [w.weekStart, counts(w.bands)])).toEqual([
-    ["2024-05-06", [[3, 2], [1, 0]]],
-    ["2024-05-20", [[3, 3], [0, 0]]],
+    [
+      "2024-05-06",
+      [
+        [3, 2],
+        [1, 0],
+      ],
+    ],
+    [
+      "2024-05-20",
+      [
+        [3, 3],
+        [0, 0],
+      ],
+    ],
   ]);
   expect(week.body.weeks[1].bands[1]).toMatchObject({ rate: null, ci95: null });
   const rolling = await client.get("/api/stats/trend?bands=2&window=rolling&windowWeeks=3");
   expect(rolling.body.weeks.map((w: { weekStart: string; bands: BandOut[] }) => [w.weekStart, counts(w.bands)])).toEqual([
-    ["2024-05-06", [[3, 2], [1, 0]]],
-    ["2024-05-20", [[6, 5], [1, 0]]],
+    [
+      "2024-05-06",
+      [
+        [3, 2],
+        [1, 0],
+      ],
+    ],
+    [
+      "2024-05-20",
+      [
+        [6, 5],
+        [1, 0],
+      ],
+    ],
   ]);
   const short = await client.get("/api/stats/trend?bands=2&window=rolling&windowWeeks=2");
-  expect(counts(short.body.weeks[1].bands)).toEqual([[3, 3], [0, 0]]);
+  expect(counts(short.body.weeks[1].bands)).toEqual([
+    [3, 3],
+    [0, 0],
+  ]);
 });
 
 test("GET /api/stats/compare sets two periods side by side with a two-proportion z-test", async () => {
@@ -166,12 +250,26 @@ test("GET /api/stats/sessions answers expected putts, strokes gained and the lon
   expect(res.status).toBe(200);
   expect(res.body.total).toBe(2);
   const [s, empty] = res.body.items;
-  const sg = list.reduce((acc, p) => acc + practicePuttValue({ distanceM: p.distanceM, holed: p.holed, missLengthM: p.missLengthM ?? null }).strokesGained, 0);
-  expect(s).toMatchObject({ sessionId: id, date: "2024-05-01", putts: 5, holed: 1, leavesAssumed: 1, longPutts: 3, longPuttsKnown: 2, longLagsOutside1m: 1, longLagOutsideShare: 0.5 });
+  const sg = list.reduce(
+    (acc, p) => acc + practicePuttValue({ distanceM: p.distanceM, holed: p.holed, missLengthM: p.missLengthM ?? null }).strokesGained,
+    0,
+  );
+  expect(s).toMatchObject({
+    sessionId: id,
+    date: "2024-05-01",
+    putts: 5,
+    holed: 1,
+    leavesAssumed: 1,
+    longPutts: 3,
+    longPuttsKnown: 2,
+    longLagsOutside1m: 1,
+    longLagOutsideShare: 0.5,
+  });
   expect(s.strokesGained).toBeCloseTo(sg, 9);
   // Hand check of the first two (Broadie, Putts Gained 2011: E(8 ft) = 1.5; E(3 ft) = 1.04 [memory table]):
   // +0.5 for the holed 8-footer, 1.5 − (1 + 1.04) = −0.54 for the miss leaving 3 ft.
-  const firstTwo = practicePuttValue({ distanceM: 8 * METRES_PER_FOOT, holed: true, missLengthM: null }).strokesGained +
+  const firstTwo =
+    practicePuttValue({ distanceM: 8 * METRES_PER_FOOT, holed: true, missLengthM: null }).strokesGained +
     practicePuttValue({ distanceM: 8 * METRES_PER_FOOT, holed: false, missLengthM: -3 * METRES_PER_FOOT }).strokesGained;
   expect(firstTwo).toBeCloseTo(0.5 - 0.54, 9);
   expect(empty).toMatchObject({ putts: 0, strokesGained: 0, longLagOutsideShare: null });
@@ -183,7 +281,12 @@ test("stats with playerId: a coach sees their squad's players only, a player onl
   const outsider = await signedUpClient(server);
   await makeSquad(server, coach.id, [member.id]);
   await addPutts(member.client, await newSession(member.client), puttsAt(1, 2, 1));
-  const urls = ["/api/stats/make-rates?bands=2", "/api/stats/trend?bands=2", "/api/stats/sessions", "/api/stats/compare?aFrom=2024-01-01&aTo=2024-12-31&bFrom=2024-01-01&bTo=2024-12-31&bands=2"];
+  const urls = [
+    "/api/stats/make-rates?bands=2",
+    "/api/stats/trend?bands=2",
+    "/api/stats/sessions",
+    "/api/stats/compare?aFrom=2024-01-01&aTo=2024-12-31&bFrom=2024-01-01&bTo=2024-12-31&bands=2",
+  ];
   for (const url of urls) {
     const sep = url.includes("?") ? "&" : "?";
     expect((await coach.client.get(`${url}${sep}playerId=${member.id}`)).status, url).toBe(200);
@@ -191,12 +294,21 @@ test("stats with playerId: a coach sees their squad's players only, a player onl
     expect((await outsider.client.get(`${url}${sep}playerId=${member.id}`)).status, url).toBe(403);
   }
   const seen = await coach.client.get(`/api/stats/make-rates?bands=2&playerId=${member.id}`);
-  expect(counts(seen.body.bands)).toEqual([[3, 2], [0, 0]]);
+  expect(counts(seen.body.bands)).toEqual([
+    [3, 2],
+    [0, 0],
+  ]);
   expect(seen.body.playerId).toBe(member.id);
   // The coach's own stats are their own (none).
-  expect(counts((await coach.client.get("/api/stats/make-rates?bands=2")).body.bands)).toEqual([[0, 0], [0, 0]]);
+  expect(counts((await coach.client.get("/api/stats/make-rates?bands=2")).body.bands)).toEqual([
+    [0, 0],
+    [0, 0],
+  ]);
   const admin = await adminClient(server);
-  expect(counts((await admin.client.get(`/api/stats/make-rates?bands=2&playerId=${outsider.id}`)).body.bands)).toEqual([[0, 0], [0, 0]]);
+  expect(counts((await admin.client.get(`/api/stats/make-rates?bands=2&playerId=${outsider.id}`)).body.bands)).toEqual([
+    [0, 0],
+    [0, 0],
+  ]);
   expect((await admin.client.get("/api/stats/make-rates?playerId=nobody")).status).toBe(404);
 });
 
@@ -212,7 +324,15 @@ test("on the demo seed the stats tell its story: the juniors' short putts and la
   try {
     const coach = new HttpClient(seeded.url);
     expect((await coach.post("/api/auth/sign-in/email", { email: DEMO_COACH.email, password: DEMO_PASSWORD })).status).toBe(200);
-    const juniors = await seeded.database.db.select({ id: user.id }).from(user).where(inArray(user.email, DEMO_PLAYERS.map((p) => p.email)));
+    const juniors = await seeded.database.db
+      .select({ id: user.id })
+      .from(user)
+      .where(
+        inArray(
+          user.email,
+          DEMO_PLAYERS.map((p) => p.email),
+        ),
+      );
     expect(juniors).toHaveLength(4);
     const plus = (iso: string, days: number) => new Date(Date.parse(iso) + days * 86_400_000).toISOString().slice(0, 10);
     const squad = { a: [0, 0], b: [0, 0], sgA: 0, sgB: 0, lagA: [0, 0], lagB: [0, 0] };
@@ -220,13 +340,19 @@ test("on the demo seed the stats tell its story: the juniors' short putts and la
     // (the ladder runs the coaching seed adds are practice too).
     const [topGreen] = (await coach.get("/api/greens")).body.items;
     for (const { id } of juniors) {
-      const sessions = (await coach.get(`/api/sessions?playerId=${id}&greenId=${topGreen.id}&sort=date&pageSize=100`)).body.items as { date: string }[];
+      const sessions = (await coach.get(`/api/sessions?playerId=${id}&greenId=${topGreen.id}&sort=date&pageSize=100`)).body.items as {
+        date: string;
+      }[];
       expect(sessions).toHaveLength(12);
       const first = sessions[0]!.date;
       const last = sessions[sessions.length - 1]!.date;
       const [aFrom, aTo, bFrom, bTo] = [first, plus(first, 13), plus(last, -13), last];
       // 0-6 ft: the putts the seed's skill model moves most.
-      const cmp = (await coach.get(`/api/stats/compare?playerId=${id}&bands=${6 * METRES_PER_FOOT}&aFrom=${aFrom}&aTo=${aTo}&bFrom=${bFrom}&bTo=${bTo}`)).body;
+      const cmp = (
+        await coach.get(
+          `/api/stats/compare?playerId=${id}&bands=${6 * METRES_PER_FOOT}&aFrom=${aFrom}&aTo=${aTo}&bFrom=${bFrom}&bTo=${bTo}`,
+        )
+      ).body;
       // Each junior's ~40 short putts a period are too few to show their own gain reliably (the seed rolls them
       // through the physics model, so chance plays its part); the squad's pooled gain below is the story's test.
       const short = cmp.bands[0];

@@ -20,7 +20,17 @@ afterAll(async () => {
 /** A page's pathname, or the first link on the current page whose href matches (a page with an id in its path). */
 type Visit = string | { from: string; link: RegExp };
 
-const SIGNED_OUT: Visit[] = ["/", "/read", "/rehearse", "/chart", "/train", "/sign-in", "/sign-up", "/forgot-password", "/reset-password?token=x"];
+const SIGNED_OUT: Visit[] = [
+  "/",
+  "/read",
+  "/rehearse",
+  "/chart",
+  "/train",
+  "/sign-in",
+  "/sign-up",
+  "/forgot-password",
+  "/reset-password?token=x",
+];
 const PLAYER: Visit[] = [
   "/",
   "/practice",
@@ -54,7 +64,11 @@ async function settle(page: Page) {
   await page.locator("main h1").first().waitFor();
   await page.waitForLoadState("networkidle");
   // Spinners gone: the page's data has arrived.
-  await page.locator('[role="status"][aria-busy="true"]').first().waitFor({ state: "detached", timeout: 10_000 }).catch(() => undefined);
+  await page
+    .locator('[role="status"][aria-busy="true"]')
+    .first()
+    .waitFor({ state: "detached", timeout: 10_000 })
+    .catch(() => undefined);
 }
 
 async function firstLink(page: Page, pattern: RegExp): Promise<string | undefined> {
@@ -68,7 +82,14 @@ async function logRound(page: Page) {
     const r = await fetch("/api/rounds", {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ date: "2026-11-28", course: "Larkspur Heath", holes: [{ holeNumber: 1, firstPuttM: 4, putts: 2, leftAfterFirstM: 0.6 }, { holeNumber: 2, firstPuttM: 1.5, putts: 1 }] }),
+      body: JSON.stringify({
+        date: "2026-11-28",
+        course: "Larkspur Heath",
+        holes: [
+          { holeNumber: 1, firstPuttM: 4, putts: 2, leftAfterFirstM: 0.6 },
+          { holeNumber: 2, firstPuttM: 1.5, putts: 1 },
+        ],
+      }),
     });
     return r.status;
   });
@@ -110,7 +131,14 @@ async function violations(b: Browser, visits: Visit[], unreached: string[]): Pro
  */
 const RUNS: { size: string; viewport: typeof PHONE; people: [string, Visit[]][] }[] = [
   { size: "phone", viewport: PHONE, people: [[DEMO_PLAYERS[1]!.email, PLAYER]] },
-  { size: "desk", viewport: DESKTOP, people: [[DEMO_COACH.email, COACH], [DEMO_ADMIN.email, ADMIN]] },
+  {
+    size: "desk",
+    viewport: DESKTOP,
+    people: [
+      [DEMO_COACH.email, COACH],
+      [DEMO_ADMIN.email, ADMIN],
+    ],
+  },
 ];
 
 for (const { size, viewport, people } of RUNS) {

@@ -76,7 +76,11 @@ function routeClosure(key: string): Set<string> {
     const k = stack.pop()!;
     if (seen.has(k)) continue;
     seen.add(k);
-    for (const i of [...(manifest[k]?.imports ?? []), ...(manifest[k]?.dynamicImports ?? []).filter((d) => !d.startsWith("src/app/routes/"))]) stack.push(i);
+    for (const i of [
+      ...(manifest[k]?.imports ?? []),
+      ...(manifest[k]?.dynamicImports ?? []).filter((d) => !d.startsWith("src/app/routes/")),
+    ])
+      stack.push(i);
   }
   return seen;
 }
@@ -154,14 +158,22 @@ test("in Chromium: JavaScript sent for / and /read ≤ 200 KiB, /stats (signed i
       const r = await visit(route);
       sent[route] = r.jsBytes;
       total[route] = r.bytes;
-      expect(r.urls.filter((u) => /three/i.test(u)), route).toEqual([]);
+      expect(
+        r.urls.filter((u) => /three/i.test(u)),
+        route,
+      ).toEqual([]);
     }
     // Signed in (the cookie set by the page's own fetch), then /stats with its charts.
     await page.evaluate(async () => {
       const res = await fetch("/api/auth/sign-up/email", {
         method: "POST",
         headers: { "content-type": "application/json" },
-        body: JSON.stringify({ name: "Bundle Player", email: `bundle-${Date.now()}@example.test`, password: "bundle-test-password-1", accountType: "player" }),
+        body: JSON.stringify({
+          name: "Bundle Player",
+          email: `bundle-${Date.now()}@example.test`,
+          password: "bundle-test-password-1",
+          accountType: "player",
+        }),
       });
       if (!res.ok) throw new Error(`sign-up ${res.status}`);
       // A few putts, so the page draws its charts.
@@ -169,7 +181,11 @@ test("in Chromium: JavaScript sent for / and /read ≤ 200 KiB, /stats (signed i
       const session = await fetch("/api/sessions", { method: "POST", headers: json, body: JSON.stringify({ date: "2026-11-30" }) });
       const { id } = (await session.json()) as { id: string };
       for (let i = 0; i < 12; i++) {
-        await fetch(`/api/sessions/${id}/putts`, { method: "POST", headers: json, body: JSON.stringify({ distanceM: 1 + (i % 6), holed: i % 2 === 0 }) });
+        await fetch(`/api/sessions/${id}/putts`, {
+          method: "POST",
+          headers: json,
+          body: JSON.stringify({ distanceM: 1 + (i % 6), holed: i % 2 === 0 }),
+        });
       }
     });
     const stats = await visit("/stats");
@@ -178,7 +194,11 @@ test("in Chromium: JavaScript sent for / and /read ≤ 200 KiB, /stats (signed i
     expect(stats.urls.some((u) => /charts-/.test(u))).toBe(true);
     expect(stats.urls.filter((u) => /three/i.test(u))).toEqual([]);
     if (process.env.BUNDLE_DETAIL) console.log(each.join("\n"));
-    console.log(`sent, KiB (JavaScript / everything): ${Object.keys(sent).map((k) => `${k} ${(sent[k]! / 1024).toFixed(0)} / ${(total[k]! / 1024).toFixed(0)}`).join(", ")}`);
+    console.log(
+      `sent, KiB (JavaScript / everything): ${Object.keys(sent)
+        .map((k) => `${k} ${(sent[k]! / 1024).toFixed(0)} / ${(total[k]! / 1024).toFixed(0)}`)
+        .join(", ")}`,
+    );
     expect(sent["/"]).toBeLessThanOrEqual(200 * 1024);
     expect(sent["/read"]).toBeLessThanOrEqual(200 * 1024);
     expect(sent["/stats"]).toBeLessThanOrEqual(300 * 1024);

@@ -83,7 +83,6 @@ test("a coach creates a squad and invites a player by e-mail; the player follows
   await c.getByRole("link", { name: PLAYER.name }).first().waitFor();
   await c.getByText("Joined", { exact: true }).waitFor();
   await screenshot(c, "coaching-squad-member-desktop");
-
 });
 
 test("the coach builds a three-rung ladder and gives it to the squad; the player runs it to the top; the dashboard shows it completed", async () => {
@@ -136,5 +135,4 @@ test("the coach builds a three-rung ladder and gives it to the squad; the player
   await row.getByText("Completed").waitFor();
   await expect(row.getByText("3 / 3").isVisible()).resolves.toBe(true);
   await screenshot(c, "coaching-dashboard-desktop");
-
 });

@@ -83,7 +83,12 @@ test("a page served from another port posts a form and a fetch into a signed-in 
     const res = await fetch("/api/auth/sign-up/email", {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ name: "Target Golfer", email: "target@example.test", password: "target-password-long", accountType: "player" }),
+      body: JSON.stringify({
+        name: "Target Golfer",
+        email: "target@example.test",
+        password: "target-password-long",
+        accountType: "player",
+      }),
     });
     return res.status;
   });

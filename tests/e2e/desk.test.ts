@@ -24,11 +24,13 @@ async function signedIn(who: { email: string }, viewport = DESKTOP): Promise<Bro
   return b;
 }
 
-
 /** The element is fully inside the first screen of the page (no scrolling). */
 async function aboveTheFold(page: Page, name: string | RegExp, role: "button" | "link" = "button") {
   await page.evaluate(() => window.scrollTo(0, 0));
-  const box = await page.getByRole(role, { name, exact: typeof name === "string" }).first().boundingBox();
+  const box = await page
+    .getByRole(role, { name, exact: typeof name === "string" })
+    .first()
+    .boundingBox();
   expect(box, `${String(name)} is on the page`).not.toBeNull();
   const { height } = page.viewportSize()!;
   expect(box!.y, `${String(name)} starts on screen`).toBeGreaterThanOrEqual(0);
@@ -46,7 +48,9 @@ test("the coach opens a player: figures with their intervals drawn, where the st
   // The make-rate chart draws the 95 % interval (a shaded band) and its whiskers.
   await c.locator(".recharts-area-area").first().waitFor();
   expect(await c.locator(".recharts-errorBar line").count(), "whiskers drawn").toBeGreaterThan(0);
-  await expect.poll(() => c.getByTestId("strokes-summary").textContent()).toMatch(new RegExp(`${ivo.name} loses the most strokes from|${ivo.name} holds their own`));
+  await expect
+    .poll(() => c.getByTestId("strokes-summary").textContent())
+    .toMatch(new RegExp(`${ivo.name} loses the most strokes from|${ivo.name} holds their own`));
   await c.getByRole("heading", { name: "Strokes gained per round" }).waitFor();
   // Sessions open onto their putts, read-only.
   await c.getByRole("heading", { name: "Sessions and putts" }).scrollIntoViewIfNeeded();
@@ -185,11 +189,27 @@ async function unnamedTabStops(page: Page): Promise<string[]> {
       .filter((el) => !(el as HTMLButtonElement).disabled && el.getClientRects().length > 0)
       .filter((el) => {
         // A drawing (or an "application") is named by its author only, never by the text drawn inside it.
-        const authorOnly = el instanceof SVGElement || ["application", "img", "figure", "group", "region"].includes(el.getAttribute("role") ?? "");
-        if (authorOnly) return !(el.getAttribute("aria-label")?.trim() || el.getAttribute("aria-labelledby") || el.querySelector(":scope > title")?.textContent?.trim());
-        const labelled = el.getAttribute("aria-labelledby")?.split(" ").some((id) => (document.getElementById(id)?.textContent ?? "").trim() !== "");
+        const authorOnly =
+          el instanceof SVGElement || ["application", "img", "figure", "group", "region"].includes(el.getAttribute("role") ?? "");
+        if (authorOnly)
+          return !(
+            el.getAttribute("aria-label")?.trim() ||
+            el.getAttribute("aria-labelledby") ||
+            el.querySelector(":scope > title")?.textContent?.trim()
+          );
+        const labelled = el
+          .getAttribute("aria-labelledby")
+          ?.split(" ")
+          .some((id) => (document.getElementById(id)?.textContent ?? "").trim() !== "");
         const labels = (el as HTMLInputElement).labels;
-        return !(el.getAttribute("aria-label")?.trim() || labelled || el.getAttribute("title")?.trim() || (el.textContent ?? "").trim() || (labels && labels.length > 0) || (el as HTMLInputElement).placeholder);
+        return !(
+          el.getAttribute("aria-label")?.trim() ||
+          labelled ||
+          el.getAttribute("title")?.trim() ||
+          (el.textContent ?? "").trim() ||
+          (labels && labels.length > 0) ||
+          (el as HTMLInputElement).placeholder
+        );
       })
       .map((el) => el.outerHTML.slice(0, 120));
   });

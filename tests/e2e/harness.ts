@@ -79,7 +79,15 @@ export async function openBrowser(viewport = DESKTOP): Promise<Browser> {
     executablePath: CHROMIUM,
     headless: true,
     viewport,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   // A CSP refusal is reported to the page only; put it in the console so it is watched like the rest.
   await context.addInitScript(() => {

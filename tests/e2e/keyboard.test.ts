@@ -124,7 +124,10 @@ test("a ladder rung by keyboard: open it from My ladders with Enter, hole the la
   const { page } = browser;
   await page.goto(`${server.url}/ladders/mine`);
   // A ladder still to run (a completed one opens read-only, without Holed).
-  const run = page.locator('main a[href^="/ladders/run/"]').filter({ hasText: /^(Start|Continue)$/ }).first();
+  const run = page
+    .locator('main a[href^="/ladders/run/"]')
+    .filter({ hasText: /^(Start|Continue)$/ })
+    .first();
   await tabTo(page, run);
   await page.keyboard.press("Enter");
   await page.waitForURL(/\/ladders\/run\/[0-9a-f-]{36}$/);
@@ -132,7 +135,12 @@ test("a ladder rung by keyboard: open it from My ladders with Enter, hole the la
   const soFar = page.getByText(/^\d+ putts? so far\./);
   const count = async () => Number(/^(\d+)/.exec((await soFar.textContent()) ?? "")?.[1]);
   const start = await count();
-  expect(await page.getByRole("list", { name: "Rungs" }).getByRole("listitem", { name: /playing now/ }).getAttribute("aria-label")).toBe("Rung 3: playing now");
+  expect(
+    await page
+      .getByRole("list", { name: "Rungs" })
+      .getByRole("listitem", { name: /playing now/ })
+      .getAttribute("aria-label"),
+  ).toBe("Rung 3: playing now");
   await tabTo(page, page.getByRole("button", { name: "Holed", exact: true }));
   await page.keyboard.press("Enter");
   await expect.poll(() => focused(page)).toBe("H1: Ladder completed");

@@ -32,7 +32,12 @@ test("a demo junior's plan appears on a phone and, started from the keyboard, be
   await p.getByRole("heading", { name: "Where your strokes go" }).waitFor();
   const rungs = p.getByRole("list", { name: "Rungs of the plan's ladder" }).getByRole("listitem");
   expect(await rungs.count()).toBeGreaterThanOrEqual(3);
-  await expect(p.getByText(/sessions/).first().isVisible()).resolves.toBe(true);
+  await expect(
+    p
+      .getByText(/sessions/)
+      .first()
+      .isVisible(),
+  ).resolves.toBe(true);
   await expect(p.getByRole("link", { name: /level$/ }).isVisible()).resolves.toBe(true);
   // Nothing wider than the phone (the bands table scrolls inside its own region).
   expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
@@ -45,7 +50,10 @@ test("a demo junior's plan appears on a phone and, started from the keyboard, be
   await start.focus();
   await p.keyboard.press("Enter");
   await p.waitForURL(/\/ladders\/run\/[0-9a-f-]{36}$/);
-  await p.getByText(/Rung 1 of \d/).first().waitFor();
+  await p
+    .getByText(/Rung 1 of \d/)
+    .first()
+    .waitFor();
   await screenshot(p, "practice-plan-run-phone");
 
   // Back on the plan page: the plan under way, with its weekly check.

@@ -23,7 +23,10 @@ async function panelShot(locator: Locator, name: string) {
 
 /** The make-rate table's row for a band, as "made / attempts". */
 async function bandCount(page: Page, band: string): Promise<string> {
-  const row = page.getByRole("table", { name: "Make rate by distance band" }).getByRole("row").filter({ has: page.getByRole("rowheader", { name: band, exact: true }) });
+  const row = page
+    .getByRole("table", { name: "Make rate by distance band" })
+    .getByRole("row")
+    .filter({ has: page.getByRole("rowheader", { name: band, exact: true }) });
   return ((await row.getByRole("cell").first().textContent()) ?? "").replace(/\s+/g, " ").trim();
 }
 
@@ -66,7 +69,11 @@ test("on a phone a player logs a short session, sees the 0–3 ft band change, i
     const list = page.getByRole("list", { name: "Putts, newest first" });
     await expect(list.getByRole("listitem").count()).resolves.toBe(3);
     await expect(list.getByRole("listitem").first().textContent()).resolves.toContain("2 ft · Missed left, 12 in short");
-    await list.getByText("saving…").first().waitFor({ state: "detached" }).catch(() => {});
+    await list
+      .getByText("saving…")
+      .first()
+      .waitFor({ state: "detached" })
+      .catch(() => {});
     await page.waitForLoadState("networkidle");
     await expect(list.getByText(/saving|waiting/).count()).resolves.toBe(0);
     await screenshot(page, "practice-logging-phone");
@@ -80,12 +87,18 @@ test("on a phone a player logs a short session, sees the 0–3 ft band change, i
     await page.getByText("based on 3 putts — wide interval").first().waitFor();
     await page.getByText("Tour one-putt rates: M. Broadie, Every Shot Counts (2014), as quoted.").waitFor();
     await page.locator(".recharts-surface").first().waitFor();
-    await panelShot(page.locator("section", { has: page.getByRole("heading", { name: "Make rate by distance" }) }), "practice-stats-band-phone");
+    await panelShot(
+      page.locator("section", { has: page.getByRole("heading", { name: "Make rate by distance" }) }),
+      "practice-stats-band-phone",
+    );
 
     // Import a small CSV with one bad row: the report names it, then the valid rows go in.
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-csv-"));
     const csv = path.join(dir, "my-putts.csv");
-    fs.writeFileSync(csv, ["Date,Distance (ft),Made,Side", "2024-05-01,2,yes,", "2024-05-01,2.5,no,left", "2024-05-01,two,yes,"].join("\n"));
+    fs.writeFileSync(
+      csv,
+      ["Date,Distance (ft),Made,Side", "2024-05-01,2,yes,", "2024-05-01,2.5,no,left", "2024-05-01,two,yes,"].join("\n"),
+    );
     await page.goto(`${server.url}/practice/import`);
     await page.getByLabel("CSV file").setInputFiles(csv);
     await page.getByRole("heading", { name: "my-putts.csv" }).waitFor();

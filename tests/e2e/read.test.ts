@@ -17,7 +17,6 @@ async function panelShot(locator: Locator, name: string) {
   await locator.screenshot({ path: path.join(SHOTS_DIR, `${name}.png`) });
 }
 
-
 test("a signed-out golfer reads a putt on a phone, and the same link in a fresh browser shows the same read", async () => {
   const phone = await openBrowser(PHONE);
   let shared = "";

@@ -25,7 +25,8 @@ async function smallText(page: Page): Promise<{ drawings: string[]; paragraphs: 
     const paragraphs: string[] = [];
     for (const p of document.querySelectorAll<HTMLElement>("main p")) {
       const px = parseFloat(getComputedStyle(p).fontSize);
-      if ((p.textContent ?? "").trim() && p.getClientRects().length > 0 && px < 16) paragraphs.push(`${px}px ${p.textContent?.trim().slice(0, 40)}`);
+      if ((p.textContent ?? "").trim() && p.getClientRects().length > 0 && px < 16)
+        paragraphs.push(`${px}px ${p.textContent?.trim().slice(0, 40)}`);
     }
     return { drawings, paragraphs };
   });

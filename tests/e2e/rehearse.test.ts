@@ -240,7 +240,10 @@ test("read training's labels never overlap, before and after the reveal, in ever
         await page.waitForTimeout(900);
         const rects = await labelRects(page);
         expect(intersecting(rects), `${stage} ${v}: ${JSON.stringify(rects)}`).toEqual([]);
-        expect(rects.some((r) => r.text.includes("Your aim")), `${stage} ${v}`).toBe(true);
+        expect(
+          rects.some((r) => r.text.includes("Your aim")),
+          `${stage} ${v}`,
+        ).toBe(true);
       }
     }
   } finally {

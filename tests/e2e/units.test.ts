@@ -22,21 +22,27 @@ const METRIC = /\b\d+(?:[.,]\d+)? ?(?:m|cm|m\/s)\b|\((?:m|cm|m\/s)\)/;
 /** The page's visible text with its Stimp figures taken out ("Stimp (ft)", "10.2 ft (10 ft 2 in)", "Stimp 9.5"). */
 async function lengthsText(page: Page): Promise<string> {
   const text = await page.locator("main").innerText();
-  return text
-    .replace(/Stimp \(ft\)/g, "")
-    .replace(/Stimp\n[\d.]+ ft/g, "")
-    // The Stimp field's range, under the field ("Green speed, 4–16 ft").
-    .replace(/\bGreen speed, 4(?: to |–)16 ft\b/g, "")
-    .replace(/\d+(?:\.\d+)? ft \(\d+ ft \d+ in\)/g, "")
-    .split("\n")
-    .filter((line) => !/stimp/i.test(line))
-    .join("\n");
+  return (
+    text
+      .replace(/Stimp \(ft\)/g, "")
+      .replace(/Stimp\n[\d.]+ ft/g, "")
+      // The Stimp field's range, under the field ("Green speed, 4–16 ft").
+      .replace(/\bGreen speed, 4(?: to |–)16 ft\b/g, "")
+      .replace(/\d+(?:\.\d+)? ft \(\d+ ft \d+ in\)/g, "")
+      .split("\n")
+      .filter((line) => !/stimp/i.test(line))
+      .join("\n")
+  );
 }
 
 async function settle(page: Page) {
   await page.locator("main h1").first().waitFor();
   await page.waitForLoadState("networkidle");
-  await page.locator('[role="status"][aria-busy="true"]').first().waitFor({ state: "detached", timeout: 10_000 }).catch(() => undefined);
+  await page
+    .locator('[role="status"][aria-busy="true"]')
+    .first()
+    .waitFor({ state: "detached", timeout: 10_000 })
+    .catch(() => undefined);
 }
 
 /** A page's path, or the first link in its main matching `link` (a page with an id in its path). */
@@ -67,7 +73,10 @@ async function expectMetric(page: Page, visits: Visit[]) {
 /** Taps the metric choice as a golfer would: its label (the radio itself is visually hidden). */
 async function chooseMetric(page: Page) {
   await page.locator("label", { has: page.getByRole("radio", { name: /Metres and centimetres/ }) }).click();
-  await page.getByRole("radio", { name: /Metres and centimetres/ }).and(page.locator(":checked")).waitFor({ state: "attached" });
+  await page
+    .getByRole("radio", { name: /Metres and centimetres/ })
+    .and(page.locator(":checked"))
+    .waitFor({ state: "attached" });
 }
 
 test("signed out: metres chosen on the read are kept on every other page", async () => {

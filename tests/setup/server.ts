@@ -51,7 +51,9 @@ export async function freshPostgresDatabase(adminUrl: string): Promise<{ url: st
   };
 }
 
-export async function startTestServer(options: Partial<Omit<StartOptions, "env">> & { env?: Record<string, string> } = {}): Promise<TestServer> {
+export async function startTestServer(
+  options: Partial<Omit<StartOptions, "env">> & { env?: Record<string, string> } = {},
+): Promise<TestServer> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-test-"));
   const pgDb = process.env.DATABASE_URL ? await freshPostgresDatabase(process.env.DATABASE_URL) : undefined;
   const env = readEnv({

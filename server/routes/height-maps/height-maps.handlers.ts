@@ -61,7 +61,9 @@ function uploadedMap(req: Parameters<RequestHandler>[0]): StoredHeightMap {
   }
   const input = parseOrThrow(heightMapInputSchema, req.body ?? {}, "request body");
   if (input.kind === "spots") return orThrow(gridFromSpotHeights(input.points, input.spacingM));
-  const walked = input.walked ? { source: "walked" as const, spotCount: input.heightsM.reduce((n, row) => n + row.length, 0) } : { source: "grid" as const, spotCount: null };
+  const walked = input.walked
+    ? { source: "walked" as const, spotCount: input.heightsM.reduce((n, row) => n + row.length, 0) }
+    : { source: "grid" as const, spotCount: null };
   return orThrow(validateHeightMap({ spacingM: input.spacingM, originM: input.originM, heightsM: input.heightsM, ...walked }));
 }
 

@@ -19,7 +19,17 @@ import {
 import { DEFAULT_BAND_EDGES_M } from "../../../shared/stats/bands";
 import type { UnitSystem } from "../../../shared/units";
 import type { Db } from "../../db/client";
-import { ladderAssignments, ladders, practicePlans, practiceSessions, putts, roundHoles, rounds, user, userPreferences } from "../../db/schema";
+import {
+  ladderAssignments,
+  ladders,
+  practicePlans,
+  practiceSessions,
+  putts,
+  roundHoles,
+  rounds,
+  user,
+  userPreferences,
+} from "../../db/schema";
 import { conflict, notFound } from "../../lib/http-error";
 import { targetPlayerId } from "../../lib/player-access";
 import { currentUser } from "../../middleware/session";

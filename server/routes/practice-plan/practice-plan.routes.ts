@@ -14,13 +14,30 @@ import { adoptPracticePlan, getPracticePlan, startPracticePlan } from "./practic
 export function practicePlanRoutes({ database }: AppDeps) {
   const db = database.db;
   return [
-    defineRoute({ method: "get", path: "/practice-plan", use: [requireUser], query: practicePlanQuerySchema, response: practicePlanResponseSchema }, getPracticePlan(db)),
     defineRoute(
-      { method: "post", path: "/practice-plan/start", use: [requireUser], body: startPlanInputSchema, response: startPlanResponseSchema, status: 201 },
+      { method: "get", path: "/practice-plan", use: [requireUser], query: practicePlanQuerySchema, response: practicePlanResponseSchema },
+      getPracticePlan(db),
+    ),
+    defineRoute(
+      {
+        method: "post",
+        path: "/practice-plan/start",
+        use: [requireUser],
+        body: startPlanInputSchema,
+        response: startPlanResponseSchema,
+        status: 201,
+      },
       startPracticePlan(db),
     ),
     defineRoute(
-      { method: "post", path: "/practice-plan/adopt", use: [requireRole("coach", "admin")], body: adoptPlanInputSchema, response: adoptPlanResponseSchema, status: 201 },
+      {
+        method: "post",
+        path: "/practice-plan/adopt",
+        use: [requireRole("coach", "admin")],
+        body: adoptPlanInputSchema,
+        response: adoptPlanResponseSchema,
+        status: 201,
+      },
       adoptPracticePlan(db),
     ),
   ];

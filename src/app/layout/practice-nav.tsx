@@ -5,8 +5,8 @@ import { practiceNavItems } from "../nav";
 /** Tabs across the practice log's pages: sessions, rounds on the course, greens, make rates, the practice plan. */
 export function PracticeNav() {
   return (
-    <nav aria-label="Practice log" className="mb-6 -mt-2 print:hidden sm:-mt-4">
-      <ul className="grid grid-cols-3 gap-1 sm:grid-cols-5 rounded-xl bg-ink-900/5 p-1 sm:inline-grid">
+    <nav aria-label="Practice log" className="-mt-2 mb-6 sm:-mt-4 print:hidden">
+      <ul className="grid grid-cols-3 gap-1 rounded-xl bg-ink-900/5 p-1 sm:inline-grid sm:grid-cols-5">
         {practiceNavItems.map((item) => (
           <li key={item.to}>
             <NavLink

@@ -147,7 +147,12 @@ test("sampleAtTime writes into the replay's one object, frame after frame, and i
   const ys = [0, 10, 20, 30];
   const out = { x: 0, y: 0, index: 0 };
   let hint = 0;
-  for (const [t, y, index] of [[0.5, 5, 0], [1.5, 15, 1], [2.75, 27.5, 2], [4, 30, 3]] as const) {
+  for (const [t, y, index] of [
+    [0.5, 5, 0],
+    [1.5, 15, 1],
+    [2.75, 27.5, 2],
+    [4, 30, 3],
+  ] as const) {
     const s = sampleAtTime(times, xs, ys, t, hint, out);
     expect(s).toBe(out);
     expect(s).toEqual({ x: y / 10, y, index });

@@ -24,7 +24,12 @@ export function PuttLine({ line, plane }: { line: GreenSceneProps["lines"][numbe
       {/* Opaque, so three.js draws it in the same (opaque) pass as the line, and renderOrder puts it first. */}
       <Line points={points} color="#163a22" lineWidth={width + 3} depthWrite={false} renderOrder={1} />
       {/* The player's own line (or the true one) on top of the others. */}
-      <Line points={points} color={LINE_COLOURS[line.style]} lineWidth={width} renderOrder={line.style === "dying" || line.style === "firm" ? 2 : 3} />
+      <Line
+        points={points}
+        color={LINE_COLOURS[line.style]}
+        lineWidth={width}
+        renderOrder={line.style === "dying" || line.style === "firm" ? 2 : 3}
+      />
     </>
   );
 }

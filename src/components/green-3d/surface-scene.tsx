@@ -12,7 +12,6 @@ import { BALL_RADIUS_M, EYE_HEIGHT_M, FLAGSTICK_M, HOLE_RADIUS_M, SKY } from "./
 import { LINE_COLOURS } from "./scene-types";
 import type { SurfaceSceneProps } from "./surface-types";
 
-
 export default function SurfaceScene(props: SurfaceSceneProps) {
   return (
     <div role="img" aria-label={props.label} className="relative size-full">

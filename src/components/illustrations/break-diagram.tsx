@@ -2,12 +2,7 @@
  *  a wider start line than the firm one. Drawn for the home page; not to scale. */
 export function BreakDiagram({ className }: { className?: string }) {
   return (
-    <svg
-      viewBox="0 0 320 400"
-      role="img"
-      aria-labelledby="break-diagram-title break-diagram-desc"
-      className={className}
-    >
+    <svg viewBox="0 0 320 400" role="img" aria-labelledby="break-diagram-title break-diagram-desc" className={className}>
       <title id="break-diagram-title">How pace changes the read</title>
       <desc id="break-diagram-desc">
         Seen from above, a putt on a green that falls to the right. A dying putt curves more and must start further left than a firm one.

@@ -29,7 +29,10 @@ export type AlertProps = {
 /** A callout. Errors are announced at once (role="alert"); other tones politely (role="status"). */
 export function Alert({ tone = "info", title, children, action, className }: AlertProps) {
   return (
-    <div role={tone === "error" ? "alert" : "status"} className={clsx("flex items-start gap-3 rounded-xl border px-4 py-3", tones[tone], className)}>
+    <div
+      role={tone === "error" ? "alert" : "status"}
+      className={clsx("flex items-start gap-3 rounded-xl border px-4 py-3", tones[tone], className)}
+    >
       <svg aria-hidden="true" viewBox="0 0 20 20" className="mt-0.5 size-5 shrink-0 fill-current">
         <path d={icons[tone]} />
       </svg>

@@ -89,5 +89,10 @@ export function Button({
 export type ButtonLinkProps = LinkProps & { variant?: ButtonVariant; size?: ButtonSize; fullWidth?: boolean };
 
 export function ButtonLink({ variant = "primary", size = "md", fullWidth = false, className, ...rest }: ButtonLinkProps) {
-  return <Link className={buttonClasses(variant, size, clsx(fullWidth && "w-full", typeof className === "string" ? className : undefined))} {...rest} />;
+  return (
+    <Link
+      className={buttonClasses(variant, size, clsx(fullWidth && "w-full", typeof className === "string" ? className : undefined))}
+      {...rest}
+    />
+  );
 }

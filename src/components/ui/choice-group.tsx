@@ -1,7 +1,12 @@
 import { useId, type InputHTMLAttributes, type ReactNode, type Ref } from "react";
 import clsx from "clsx";
 
-export type Choice = { value: string; label: string; description?: ReactNode; /** Shown but not choosable (say why in the description). */ disabled?: boolean };
+export type Choice = {
+  value: string;
+  label: string;
+  description?: ReactNode;
+  /** Shown but not choosable (say why in the description). */ disabled?: boolean;
+};
 
 export type ChoiceGroupProps = {
   legend: ReactNode;

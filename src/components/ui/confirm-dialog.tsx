@@ -15,7 +15,17 @@ export type ConfirmDialogProps = {
 };
 
 /** A modal yes/no question. Focus starts on Cancel (the safe answer); Escape and the backdrop cancel. */
-export function ConfirmDialog({ open, title, children, confirmLabel, cancelLabel = "Cancel", onConfirm, onCancel, busy = false, tone = "danger" }: ConfirmDialogProps) {
+export function ConfirmDialog({
+  open,
+  title,
+  children,
+  confirmLabel,
+  cancelLabel = "Cancel",
+  onConfirm,
+  onCancel,
+  busy = false,
+  tone = "danger",
+}: ConfirmDialogProps) {
   const titleId = useId();
   const bodyId = useId();
   const cancelRef = useRef<HTMLButtonElement>(null);

@@ -5,7 +5,12 @@ export type EmptyStateProps = { title: ReactNode; children?: ReactNode; action?:
 
 export function EmptyState({ title, children, action, className }: EmptyStateProps) {
   return (
-    <div className={clsx("flex flex-col items-center gap-3 rounded-(--radius-card) border-2 border-dashed border-ink-900/15 px-6 py-12 text-center", className)}>
+    <div
+      className={clsx(
+        "flex flex-col items-center gap-3 rounded-(--radius-card) border-2 border-dashed border-ink-900/15 px-6 py-12 text-center",
+        className,
+      )}
+    >
       <svg aria-hidden="true" viewBox="0 0 48 48" className="size-12 text-ink-300">
         <circle cx="24" cy="24" r="9" fill="none" stroke="currentColor" strokeWidth="3" />
         <path d="M6 40 Q 14 26 24 24" fill="none" stroke="currentColor" strokeWidth="3" strokeDasharray="3 5" strokeLinecap="round" />

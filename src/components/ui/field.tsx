@@ -110,7 +110,11 @@ export function SelectField({ label, hint, error, id, options, className, contai
             </option>
           ))}
         </select>
-        <svg aria-hidden="true" viewBox="0 0 20 20" className="pointer-events-none absolute top-1/2 right-4 size-5 -translate-y-1/2 fill-ink-500">
+        <svg
+          aria-hidden="true"
+          viewBox="0 0 20 20"
+          className="pointer-events-none absolute top-1/2 right-4 size-5 -translate-y-1/2 fill-ink-500"
+        >
           <path d="M5.3 7.3a1 1 0 0 1 1.4 0L10 10.6l3.3-3.3a1 1 0 1 1 1.4 1.4l-4 4a1 1 0 0 1-1.4 0l-4-4a1 1 0 0 1 0-1.4Z" />
         </svg>
       </div>

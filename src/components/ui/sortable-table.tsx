@@ -22,8 +22,17 @@ export function SortableTable<T>({ table, rows, caption, className }: SortableTa
               {hg.headers.map((h) => {
                 const dir = h.column.getIsSorted();
                 return (
-                  <th key={h.id} scope="col" aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"} className="px-3 py-2 font-semibold whitespace-nowrap text-ink-700">
-                    <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex min-h-9 items-center gap-1 rounded hover:text-ink-900">
+                  <th
+                    key={h.id}
+                    scope="col"
+                    aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"}
+                    className="px-3 py-2 font-semibold whitespace-nowrap text-ink-700"
+                  >
+                    <button
+                      type="button"
+                      onClick={h.column.getToggleSortingHandler()}
+                      className="inline-flex min-h-9 items-center gap-1 rounded hover:text-ink-900"
+                    >
                       {flexRender(h.column.columnDef.header, h.getContext())}
                       <span aria-hidden="true" className="text-ink-400">
                         {dir === "asc" ? "▲" : dir === "desc" ? "▼" : "↕"}

@@ -10,7 +10,12 @@ export type SpinnerProps = {
 };
 
 export function Spinner({ size = "md", label = "Loading", className }: SpinnerProps) {
-  const ring = <span aria-hidden="true" className={clsx("inline-block animate-spin rounded-full border-current border-r-transparent", sizes[size], className)} />;
+  const ring = (
+    <span
+      aria-hidden="true"
+      className={clsx("inline-block animate-spin rounded-full border-current border-r-transparent", sizes[size], className)}
+    />
+  );
   if (!label) return ring;
   return (
     <span role="status" className="inline-flex items-center gap-2">

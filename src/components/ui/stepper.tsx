@@ -38,15 +38,34 @@ export function Stepper({
   const box = size === "lg" ? "size-16" : "size-14";
   return (
     <div className={clsx("flex items-center gap-3", className)} role="group" aria-label={label}>
-      <button type="button" className={clsx(stepButton, box)} aria-label={decreaseLabel} onClick={onDecrease} disabled={disabled || !canDecrease}>
+      <button
+        type="button"
+        className={clsx(stepButton, box)}
+        aria-label={decreaseLabel}
+        onClick={onDecrease}
+        disabled={disabled || !canDecrease}
+      >
         <svg aria-hidden="true" viewBox="0 0 20 20" className="size-6 fill-current">
           <path d="M4 9h12v2H4z" />
         </svg>
       </button>
-      <output aria-live="polite" className={clsx("min-w-0 flex-1 text-center font-semibold tabular-nums", size === "lg" ? "text-4xl" : "text-2xl", disabled && "opacity-50")}>
+      <output
+        aria-live="polite"
+        className={clsx(
+          "min-w-0 flex-1 text-center font-semibold tabular-nums",
+          size === "lg" ? "text-4xl" : "text-2xl",
+          disabled && "opacity-50",
+        )}
+      >
         {value}
       </output>
-      <button type="button" className={clsx(stepButton, box)} aria-label={increaseLabel} onClick={onIncrease} disabled={disabled || !canIncrease}>
+      <button
+        type="button"
+        className={clsx(stepButton, box)}
+        aria-label={increaseLabel}
+        onClick={onIncrease}
+        disabled={disabled || !canIncrease}
+      >
         <svg aria-hidden="true" viewBox="0 0 20 20" className="size-6 fill-current">
           <path d="M9 4h2v5h5v2h-5v5H9v-5H4V9h5z" />
         </svg>

@@ -11,12 +11,15 @@ export function CoachPlayerRoute() {
   const { playerId = "" } = useParams();
   return (
     <RequireAuth roles={["coach", "admin"]}>
-      <PlayerPage playerId={playerId} stats={(player) => (
+      <PlayerPage
+        playerId={playerId}
+        stats={(player) => (
           <>
             <PracticePlanView playerId={player.id} mode="coach" />
             <StatsBody player={player} />
           </>
-        )} />
+        )}
+      />
     </RequireAuth>
   );
 }

@@ -28,17 +28,20 @@ export const useAdminUsers = (q: UsersQuery) => useQuery(usersQueryOptions(q));
 export const useAudit = (page: number) =>
   useQuery({
     queryKey: adminKeys.audit(page),
-    queryFn: ({ signal }) => api.get<{ entries: AuditEntry[]; total: number; page: number; pageSize: number }>(apiPaths.adminAudit, { query: { page }, signal }),
+    queryFn: ({ signal }) =>
+      api.get<{ entries: AuditEntry[]; total: number; page: number; pageSize: number }>(apiPaths.adminAudit, { query: { page }, signal }),
     placeholderData: keepPreviousData,
   });
 
-export const useAdminCoaching = () => useQuery({ queryKey: adminKeys.coaching(), queryFn: ({ signal }) => api.get<AdminCoaching>(apiPaths.adminCoaching, { signal }) });
+export const useAdminCoaching = () =>
+  useQuery({ queryKey: adminKeys.coaching(), queryFn: ({ signal }) => api.get<AdminCoaching>(apiPaths.adminCoaching, { signal }) });
 
 /** One admin action on one account; every list of the admin screens is refreshed after it (the audit too). */
 export function useAdminAction() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ userId, action, body }: { userId: string; action: AdminActionName; body?: unknown }) => api.post<AdminUser | undefined>(apiPaths.adminUserAction(userId, action), body),
+    mutationFn: ({ userId, action, body }: { userId: string; action: AdminActionName; body?: unknown }) =>
+      api.post<AdminUser | undefined>(apiPaths.adminUserAction(userId, action), body),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: adminKeys.all }),
   });
 }

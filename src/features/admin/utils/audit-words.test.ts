@@ -13,8 +13,14 @@ const entry = (over: Partial<AuditEntry>): AuditEntry => ({
 });
 
 test("each action reads as a plain sentence", () => {
-  expect(auditWords(entry({ action: "role.set", detail: { from: "player", to: "coach" } }))).toBe("changed the role of lee@example.test from player to coach");
-  expect(auditWords(entry({ action: "user.ban", detail: { reason: "Shared the account" } }))).toBe("banned lee@example.test (“Shared the account”)");
+  expect(auditWords(entry({ action: "role.set", detail: { from: "player", to: "coach" } }))).toBe(
+    "changed the role of lee@example.test from player to coach",
+  );
+  expect(auditWords(entry({ action: "user.ban", detail: { reason: "Shared the account" } }))).toBe(
+    "banned lee@example.test (“Shared the account”)",
+  );
   expect(auditWords(entry({ action: "sessions.revoke" }))).toBe("signed lee@example.test out everywhere");
-  expect(auditWords(entry({ action: "password-reset.send", target: { id: null, email: null } }))).toBe("sent an account that no longer exists a password-reset e-mail");
+  expect(auditWords(entry({ action: "password-reset.send", target: { id: null, email: null } }))).toBe(
+    "sent an account that no longer exists a password-reset e-mail",
+  );
 });

@@ -23,14 +23,20 @@ test("a signed-out visitor is sent to sign in, with the page to come back to", a
 });
 
 test("a signed-in user sees the page", async () => {
-  const me = { user: { id: "u1", name: "Ivo Marsh", email: "ivo@example.test", role: "player", emailVerified: true }, preferences: { units: "metric" } };
+  const me = {
+    user: { id: "u1", name: "Ivo Marsh", email: "ivo@example.test", role: "player", emailVerified: true },
+    preferences: { units: "metric" },
+  };
   network.use(meAnswer(me));
   renderRoute(<RequireAuth>{(m) => `Hello ${m.user.name}`}</RequireAuth>, { at: "/account" });
   expect(await screen.findByText("Hello Ivo Marsh")).toBeInTheDocument();
 });
 
 test("a page for coaches is hidden from a player", async () => {
-  const me = { user: { id: "u1", name: "Ivo Marsh", email: "ivo@example.test", role: "player", emailVerified: true }, preferences: { units: "metric" } };
+  const me = {
+    user: { id: "u1", name: "Ivo Marsh", email: "ivo@example.test", role: "player", emailVerified: true },
+    preferences: { units: "metric" },
+  };
   network.use(meAnswer(me));
   renderRoute(<RequireAuth roles={["coach"]}>Squad page</RequireAuth>, { at: "/squads" });
   expect(await screen.findByText("This page is for coach accounts.")).toBeInTheDocument();

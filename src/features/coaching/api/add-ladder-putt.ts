@@ -31,12 +31,15 @@ async function sendLadderPutt({ assignmentId, ...input }: QueuedLadderPutt): Pro
 const scopeOf = (assignmentId: string) => `ladder:${assignmentId}`;
 
 function isFor(assignmentId: string) {
-  return (m: Mutation<unknown, Error, unknown, unknown>) => (m.state.variables as QueuedLadderPutt | undefined)?.assignmentId === assignmentId;
+  return (m: Mutation<unknown, Error, unknown, unknown>) =>
+    (m.state.variables as QueuedLadderPutt | undefined)?.assignmentId === assignmentId;
 }
 
 /** This assignment's putts not yet stored (waiting or on their way), oldest first. */
 export function pendingLadderPutts(client: QueryClient, assignmentId: string) {
-  return client.getMutationCache().findAll({ mutationKey: coachingKeys.addLadderPutt(), status: "pending", predicate: isFor(assignmentId) });
+  return client
+    .getMutationCache()
+    .findAll({ mutationKey: coachingKeys.addLadderPutt(), status: "pending", predicate: isFor(assignmentId) });
 }
 
 /**
@@ -85,7 +88,10 @@ export function queueLadderPutt(client: QueryClient, putt: QueuedLadderPutt): vo
  * localStorage). Returns "taken back", "on its way" (the caller waits for its answer, then asks the server), or
  * "none" when nothing is waiting.
  */
-export function takeBackLadderPutt(client: QueryClient, assignmentId: string): { outcome: "taken back" | "none" } | { outcome: "on its way"; settled: Promise<boolean> } {
+export function takeBackLadderPutt(
+  client: QueryClient,
+  assignmentId: string,
+): { outcome: "taken back" | "none" } | { outcome: "on its way"; settled: Promise<boolean> } {
   const last = pendingLadderPutts(client, assignmentId).at(-1);
   if (!last) return { outcome: "none" };
   // Only a first try still out has to be waited for; one that failed before may be retried for a long time.
@@ -112,7 +118,8 @@ function settledOk(client: QueryClient, m: Mutation<unknown, Error, unknown, unk
 /** Forgets this assignment's failed putts once they have been shown (a new putt or an undo clears the message). */
 export function dismissLadderPuttErrors(client: QueryClient, assignmentId: string): void {
   const cache = client.getMutationCache();
-  for (const m of cache.findAll({ mutationKey: coachingKeys.addLadderPutt(), status: "error", predicate: isFor(assignmentId) })) cache.remove(m);
+  for (const m of cache.findAll({ mutationKey: coachingKeys.addLadderPutt(), status: "error", predicate: isFor(assignmentId) }))
+    cache.remove(m);
 }
 
 /** Ladder putts left in the queue of an earlier version (one localStorage entry per assignment) join the outbox. */
@@ -120,7 +127,9 @@ export function adoptOldLadderQueues(client: QueryClient, storage: Storage = win
   const PREFIX = "borrowline.ladder-run.";
   let adopted = 0;
   try {
-    const keys = Array.from({ length: storage.length }, (_, i) => storage.key(i)).filter((k): k is string => k?.startsWith(PREFIX) ?? false);
+    const keys = Array.from({ length: storage.length }, (_, i) => storage.key(i)).filter(
+      (k): k is string => k?.startsWith(PREFIX) ?? false,
+    );
     for (const key of keys) {
       const assignmentId = key.slice(PREFIX.length);
       let list: unknown;

@@ -14,6 +14,10 @@ export function useAssignLadder() {
   return useMutation({
     mutationFn: assignLadder,
     meta: { errorToast: false },
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: coachingKeys.coach() }), queryClient.invalidateQueries({ queryKey: coachingKeys.squads() })]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: coachingKeys.coach() }),
+        queryClient.invalidateQueries({ queryKey: coachingKeys.squads() }),
+      ]),
   });
 }

@@ -32,6 +32,9 @@ export function useCreateInvitations() {
     mutationFn: createInvitations,
     meta: { errorToast: false },
     onSettled: (_data, _error, { squadId }) =>
-      Promise.all([queryClient.invalidateQueries({ queryKey: coachingKeys.invitations(squadId) }), queryClient.invalidateQueries({ queryKey: coachingKeys.squads() })]),
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: coachingKeys.invitations(squadId) }),
+        queryClient.invalidateQueries({ queryKey: coachingKeys.squads() }),
+      ]),
   });
 }

@@ -12,7 +12,11 @@ export function getCoachedPlayer(playerId: string, signal?: AbortSignal): Promis
 }
 
 export function coachedPlayerQueryOptions(playerId: string) {
-  return queryOptions({ queryKey: coachingKeys.coachPlayer(playerId), queryFn: ({ signal }) => getCoachedPlayer(playerId, signal), meta: { errorToast: false } });
+  return queryOptions({
+    queryKey: coachingKeys.coachPlayer(playerId),
+    queryFn: ({ signal }) => getCoachedPlayer(playerId, signal),
+    meta: { errorToast: false },
+  });
 }
 
 export function useCoachedPlayer(playerId: string) {

@@ -14,7 +14,10 @@ export function coachSquadsQueryOptions() {
 }
 
 export function mySquadsQueryOptions() {
-  return queryOptions({ queryKey: [...coachingKeys.squads(), "member"] as const, queryFn: ({ signal }) => getSquads<SquadMembership>(signal) });
+  return queryOptions({
+    queryKey: [...coachingKeys.squads(), "member"] as const,
+    queryFn: ({ signal }) => getSquads<SquadMembership>(signal),
+  });
 }
 
 /** The squads a coach runs. */

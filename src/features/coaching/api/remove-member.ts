@@ -12,6 +12,10 @@ export function useRemoveMember() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: removeMember,
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: coachingKeys.squads() }), queryClient.invalidateQueries({ queryKey: coachingKeys.coach() })]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: coachingKeys.squads() }),
+        queryClient.invalidateQueries({ queryKey: coachingKeys.coach() }),
+      ]),
   });
 }

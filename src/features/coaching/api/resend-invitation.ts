@@ -14,6 +14,9 @@ export function useResendInvitation() {
   return useMutation({
     mutationFn: resendInvitation,
     onSuccess: (_r, { squadId }) =>
-      Promise.all([queryClient.invalidateQueries({ queryKey: coachingKeys.invitations(squadId) }), queryClient.invalidateQueries({ queryKey: coachingKeys.squads() })]),
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: coachingKeys.invitations(squadId) }),
+        queryClient.invalidateQueries({ queryKey: coachingKeys.squads() }),
+      ]),
   });
 }

@@ -13,6 +13,9 @@ export function useRevokeInvitation() {
   return useMutation({
     mutationFn: revokeInvitation,
     onSuccess: (_void, { squadId }) =>
-      Promise.all([queryClient.invalidateQueries({ queryKey: coachingKeys.invitations(squadId) }), queryClient.invalidateQueries({ queryKey: coachingKeys.squads() })]),
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: coachingKeys.invitations(squadId) }),
+        queryClient.invalidateQueries({ queryKey: coachingKeys.squads() }),
+      ]),
   });
 }

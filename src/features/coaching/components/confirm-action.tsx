@@ -17,7 +17,17 @@ export type ConfirmActionProps = {
 };
 
 /** A destructive action in two steps: the button, then a question with "Yes, …" and "Keep". */
-export function ConfirmAction({ label, ariaLabel, question, confirmLabel, pendingLabel, pending, onConfirm, variant = "ghost", size = "sm" }: ConfirmActionProps) {
+export function ConfirmAction({
+  label,
+  ariaLabel,
+  question,
+  confirmLabel,
+  pendingLabel,
+  pending,
+  onConfirm,
+  variant = "ghost",
+  size = "sm",
+}: ConfirmActionProps) {
   const [asking, setAsking] = useState(false);
   if (!asking) {
     return (

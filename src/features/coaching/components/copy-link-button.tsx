@@ -25,7 +25,13 @@ export function CopyLinkButton({ link, label = "Copy link" }: { link: string; la
         {state === "copied" ? "Link copied" : label}
       </Button>
       {state === "manual" ? (
-        <input readOnly aria-label="Invitation link" value={link} onFocus={(e) => e.currentTarget.select()} className="w-full rounded-lg border border-ink-900/15 px-2 py-1 text-sm" />
+        <input
+          readOnly
+          aria-label="Invitation link"
+          value={link}
+          onFocus={(e) => e.currentTarget.select()}
+          className="w-full rounded-lg border border-ink-900/15 px-2 py-1 text-sm"
+        />
       ) : null}
       <span className="sr-only" aria-live="polite">
         {state === "copied" ? "The invitation link is on the clipboard." : ""}

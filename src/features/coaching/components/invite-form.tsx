@@ -7,7 +7,15 @@ import { parseEmails } from "../utils/parse-emails";
 function CopyLinkButton({ link, email }: { link: string; email: string }) {
   const [state, setState] = useState<"idle" | "copied" | "failed">("idle");
   if (state === "failed") {
-    return <input readOnly value={link} aria-label={`Invitation link for ${email}`} onFocus={(e) => e.currentTarget.select()} className="min-w-0 flex-1 rounded-lg border border-ink-900/15 bg-white px-2 py-1 text-sm" />;
+    return (
+      <input
+        readOnly
+        value={link}
+        aria-label={`Invitation link for ${email}`}
+        onFocus={(e) => e.currentTarget.select()}
+        className="min-w-0 flex-1 rounded-lg border border-ink-900/15 bg-white px-2 py-1 text-sm"
+      />
+    );
   }
   const copy = () => {
     if (typeof navigator === "undefined" || !navigator.clipboard) return setState("failed");
@@ -47,7 +55,12 @@ export function InviteForm({ squadId, squadName }: { squadId: string; squadName:
     const result = await invite.mutateAsync({ squadId, emails: valid });
     setOutcomes(result);
     // Keep only the addresses that did not go out, so they can be fixed and sent again.
-    setText(result.filter((o) => !o.ok).map((o) => o.email).join("\n"));
+    setText(
+      result
+        .filter((o) => !o.ok)
+        .map((o) => o.email)
+        .join("\n"),
+    );
   };
 
   const sent = outcomes?.filter((o): o is Extract<InviteOutcome, { ok: true }> => o.ok) ?? [];
@@ -84,7 +97,10 @@ export function InviteForm({ squadId, squadName }: { squadId: string; squadName:
       </Button>
       {sent.length > 0 ? (
         <Alert tone="success" title={`Invitation${sent.length === 1 ? "" : "s"} sent`}>
-          <p>E-mailed to {sent.map((o) => o.email).join(", ")}. You can also pass each link on yourself: it works once, for that address only.</p>
+          <p>
+            E-mailed to {sent.map((o) => o.email).join(", ")}. You can also pass each link on yourself: it works once, for that address
+            only.
+          </p>
           <ul className="mt-2 flex flex-col gap-2">
             {sent.map((o) => (
               <li key={o.email} className="flex flex-wrap items-center gap-2">

@@ -14,9 +14,16 @@ afterEach(() => {
 });
 
 const TOKEN = "t".repeat(43);
-const preview = (status: string) => ({ squad: { name: "Larkspur juniors" }, coach: { name: "Dana Whitcombe" }, email: "ivo@example.test", status, expiresAt: "2030-01-15T00:00:00.000Z" });
+const preview = (status: string) => ({
+  squad: { name: "Larkspur juniors" },
+  coach: { name: "Dana Whitcombe" },
+  email: "ivo@example.test",
+  status,
+  expiresAt: "2030-01-15T00:00:00.000Z",
+});
 const signedOut = meAnswer(null);
-const signedIn = (email: string, role = "player") => meAnswer({ user: { id: "u1", name: "Ivo Marsh", email, role, emailVerified: true }, preferences: { units: "imperial" } });
+const signedIn = (email: string, role = "player") =>
+  meAnswer({ user: { id: "u1", name: "Ivo Marsh", email, role, emailVerified: true }, preferences: { units: "imperial" } });
 const invitation = (status: string) => http.get(`/api/invitations/${TOKEN}`, () => HttpResponse.json(preview(status)));
 const unknownToken = http.get(`/api/invitations/${TOKEN}`, () => apiError(404, "not_found", "Invitation was not found."));
 
@@ -29,7 +36,10 @@ test("signed out: the preview, then a player account or sign-in that comes back 
   renderJoin(signedOut, invitation("pending"));
   expect(await screen.findByRole("heading", { level: 1, name: "Larkspur juniors" })).toBeInTheDocument();
   expect(screen.getByText("ivo@example.test")).toBeInTheDocument();
-  expect(await screen.findByRole("link", { name: "I already have an account — sign in" })).toHaveAttribute("href", `/sign-in?next=${encodeURIComponent(`/join/${TOKEN}`)}`);
+  expect(await screen.findByRole("link", { name: "I already have an account — sign in" })).toHaveAttribute(
+    "href",
+    `/sign-in?next=${encodeURIComponent(`/join/${TOKEN}`)}`,
+  );
   await userEvent.setup().click(screen.getByRole("button", { name: "Create your player account" }));
   expect(screen.getByLabelText("E-mail")).toHaveValue("ivo@example.test");
   expect(screen.queryByRole("radio")).not.toBeInTheDocument();
@@ -40,7 +50,10 @@ test("signed in with the invited e-mail: one button joins the squad", async () =
     signedIn("IVO@example.test"),
     invitation("pending"),
     http.post(`/api/invitations/${TOKEN}/accept`, () =>
-      HttpResponse.json({ squad: { id: "s1", name: "Larkspur juniors", coach: { id: "c1", name: "Dana Whitcombe" } }, joinedAt: "2030-01-01T00:00:00.000Z" }),
+      HttpResponse.json({
+        squad: { id: "s1", name: "Larkspur juniors", coach: { id: "c1", name: "Dana Whitcombe" } },
+        joinedAt: "2030-01-01T00:00:00.000Z",
+      }),
     ),
   );
   await userEvent.setup().click(await screen.findByRole("button", { name: "Join Larkspur juniors" }));

@@ -17,7 +17,10 @@ beforeEach(() => {
     http.post("/api/ladders", async ({ request }) => {
       const body = (await request.json()) as object;
       posted.push(body);
-      return HttpResponse.json({ ...body, id: "11111111-1111-4111-8111-111111111111", builtIn: false, ownerId: "c1", createdAt: "x", updatedAt: "x" }, { status: 201 });
+      return HttpResponse.json(
+        { ...body, id: "11111111-1111-4111-8111-111111111111", builtIn: false, ownerId: "c1", createdAt: "x", updatedAt: "x" },
+        { status: 201 },
+      );
     }),
   );
   // jsdom lays nothing out; dnd-kit's keyboard sensor moves by measured boxes, so give each rung a 100 px row.
@@ -33,10 +36,16 @@ afterEach(() => {
 });
 
 function renderBuilder() {
-  return renderRoute(<LadderBuilder units="imperial" />, { at: "/ladders/new", routes: [{ path: "/ladders/:id", element: <p>Ladder page</p> }] });
+  return renderRoute(<LadderBuilder units="imperial" />, {
+    at: "/ladders/new",
+    routes: [{ path: "/ladders/:id", element: <p>Ladder page</p> }],
+  });
 }
 
-const previewLines = () => within(screen.getByTestId("ladder-preview-rungs")).getAllByRole("listitem").map((li) => li.querySelector("p")?.textContent);
+const previewLines = () =>
+  within(screen.getByTestId("ladder-preview-rungs"))
+    .getAllByRole("listitem")
+    .map((li) => li.querySelector("p")?.textContent);
 
 test("the preview reads each rung's rule in words, as the player will see it", () => {
   renderBuilder();
@@ -110,5 +119,7 @@ test("a valid ladder is sent in metres and the coach lands on its page", async (
   await user.click(screen.getByRole("radio", { name: /Drop one rung/ }));
   await user.click(screen.getByRole("button", { name: "Save ladder" }));
   expect(await screen.findByText("Ladder page")).toBeInTheDocument();
-  expect(posted).toEqual([{ name: "Short game", failRule: "drop-one", rungs: [{ distanceM: 0.914, balls: 5, passRule: { kind: "make", made: 3 } }] }]);
+  expect(posted).toEqual([
+    { name: "Short game", failRule: "drop-one", rungs: [{ distanceM: 0.914, balls: 5, passRule: { kind: "make", made: 3 } }] },
+  ]);
 });

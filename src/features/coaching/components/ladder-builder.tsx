@@ -2,7 +2,16 @@ import { useMemo, useState } from "react";
 import { useFieldArray, useForm, useWatch, get, type FieldErrors, type Resolver } from "react-hook-form";
 import { useNavigate } from "react-router";
 import { toast } from "sonner";
-import { DndContext, KeyboardSensor, PointerSensor, closestCenter, useSensor, useSensors, type Announcements, type DragEndEvent } from "@dnd-kit/core";
+import {
+  DndContext,
+  KeyboardSensor,
+  PointerSensor,
+  closestCenter,
+  useSensor,
+  useSensors,
+  type Announcements,
+  type DragEndEvent,
+} from "@dnd-kit/core";
 import { SortableContext, sortableKeyboardCoordinates, verticalListSortingStrategy } from "@dnd-kit/sortable";
 import { FAIL_RULES, rungSchema, type Ladder, type LadderInput } from "../../../../shared/schemas/ladders";
 import type { UnitSystem } from "../../../../shared/units";
@@ -10,7 +19,16 @@ import { Alert, Button, Card, ChoiceGroup, InputField } from "../../../component
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useSaveLadder } from "../api/save-ladder";
-import { emptyLadderForm, ladderToForm, nextRung, rungToInput, serverFieldsToForm, validateLadderForm, type LadderFormErrors, type LadderFormValues } from "../utils/ladder-form";
+import {
+  emptyLadderForm,
+  ladderToForm,
+  nextRung,
+  rungToInput,
+  serverFieldsToForm,
+  validateLadderForm,
+  type LadderFormErrors,
+  type LadderFormValues,
+} from "../utils/ladder-form";
 import { FAIL_RULE_WORDS } from "../utils/rule-words";
 import { LadderPreview, type PreviewRung } from "./ladder-preview";
 import { RungEditor } from "./rung-editor";
@@ -65,13 +83,21 @@ export function LadderBuilder({ units, ladder, onSaved }: LadderBuilderProps) {
   const { fields, append, insert, remove, move } = useFieldArray({ control, name: "rungs" });
   const watched = useWatch({ control }) as LadderFormValues;
 
-  const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 6 } }), useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }));
+  const sensors = useSensors(
+    useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
+    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
+  );
 
   const rungNumber = (id: string | number) => fields.findIndex((f) => f.id === id) + 1;
   const announcements: Announcements = {
-    onDragStart: ({ active }) => `Picked up rung ${rungNumber(active.id)}. Use the up and down arrows to move it, space to drop it, escape to cancel.`,
-    onDragOver: ({ active, over }) => (over ? `Rung ${rungNumber(active.id)} is over position ${rungNumber(over.id)}.` : `Rung ${rungNumber(active.id)} is not over a position.`),
-    onDragEnd: ({ active, over }) => (over ? `Rung ${rungNumber(active.id)} dropped at position ${rungNumber(over.id)}.` : `Rung ${rungNumber(active.id)} dropped.`),
+    onDragStart: ({ active }) =>
+      `Picked up rung ${rungNumber(active.id)}. Use the up and down arrows to move it, space to drop it, escape to cancel.`,
+    onDragOver: ({ active, over }) =>
+      over
+        ? `Rung ${rungNumber(active.id)} is over position ${rungNumber(over.id)}.`
+        : `Rung ${rungNumber(active.id)} is not over a position.`,
+    onDragEnd: ({ active, over }) =>
+      over ? `Rung ${rungNumber(active.id)} dropped at position ${rungNumber(over.id)}.` : `Rung ${rungNumber(active.id)} dropped.`,
     onDragCancel: ({ active }) => `Moving rung ${rungNumber(active.id)} was cancelled.`,
   };
 
@@ -109,13 +135,24 @@ export function LadderBuilder({ units, ladder, onSaved }: LadderBuilderProps) {
   const rootRungsError = (get(errors, "rungs.root") as { message?: string } | undefined)?.message;
 
   return (
-    <form noValidate onSubmit={handleSubmit(onSubmit)} aria-label={ladder ? `Edit ${ladder.name}` : "New ladder"} className="grid gap-6 lg:grid-cols-[1.4fr_1fr]">
+    <form
+      noValidate
+      onSubmit={handleSubmit(onSubmit)}
+      aria-label={ladder ? `Edit ${ladder.name}` : "New ladder"}
+      className="grid gap-6 lg:grid-cols-[1.4fr_1fr]"
+    >
       <div className="flex min-w-0 flex-col gap-6">
         {errors.root?.message ? <Alert tone="error">{errors.root.message}</Alert> : null}
         <Card>
           <div className="flex flex-col gap-4">
             <InputField label="Ladder name" autoComplete="off" error={errors.name?.message} {...register("name")} />
-            <InputField label="Description (optional)" hint="What the ladder trains, in a sentence the player will read." autoComplete="off" error={errors.description?.message} {...register("description")} />
+            <InputField
+              label="Description (optional)"
+              hint="What the ladder trains, in a sentence the player will read."
+              autoComplete="off"
+              error={errors.description?.message}
+              {...register("description")}
+            />
             <ChoiceGroup legend="When a rung is missed" columns={1} choices={failChoices} inputProps={register("failRule")} />
           </div>
         </Card>
@@ -132,7 +169,13 @@ export function LadderBuilder({ units, ladder, onSaved }: LadderBuilderProps) {
             sensors={sensors}
             collisionDetection={closestCenter}
             onDragEnd={onDragEnd}
-            accessibility={{ announcements, screenReaderInstructions: { draggable: "To move a rung, press space or enter, move it with the up and down arrows, and press space or enter again to drop it. Escape cancels." } }}
+            accessibility={{
+              announcements,
+              screenReaderInstructions: {
+                draggable:
+                  "To move a rung, press space or enter, move it with the up and down arrows, and press space or enter again to drop it. Escape cancels.",
+              },
+            }}
           >
             <SortableContext items={fields.map((f) => f.id)} strategy={verticalListSortingStrategy}>
               <ol className="flex flex-col gap-3">
@@ -157,7 +200,12 @@ export function LadderBuilder({ units, ladder, onSaved }: LadderBuilderProps) {
           <p role="status" aria-live="polite" className="sr-only">
             {moved}
           </p>
-          <Button variant="secondary" onClick={() => append(nextRung(getValues("rungs").at(-1), units))} className="self-start" disabled={fields.length >= 20}>
+          <Button
+            variant="secondary"
+            onClick={() => append(nextRung(getValues("rungs").at(-1), units))}
+            className="self-start"
+            disabled={fields.length >= 20}
+          >
             Add a rung
           </Button>
         </section>
@@ -173,7 +221,13 @@ export function LadderBuilder({ units, ladder, onSaved }: LadderBuilderProps) {
       </div>
 
       <div className="lg:sticky lg:top-24 lg:self-start">
-        <LadderPreview name={watched.name ?? ""} description={watched.description} failRule={watched.failRule ?? "repeat"} rungs={preview} units={units} />
+        <LadderPreview
+          name={watched.name ?? ""}
+          description={watched.description}
+          failRule={watched.failRule ?? "repeat"}
+          rungs={preview}
+          units={units}
+        />
       </div>
     </form>
   );

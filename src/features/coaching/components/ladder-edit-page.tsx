@@ -13,7 +13,11 @@ export function LadderEditPage({ ladderId }: { ladderId?: string }) {
     return (
       <>
         <title>New ladder · Borrowline</title>
-        <PageHeader eyebrow={<TextLink to={paths.ladders.href()}>Ladders</TextLink>} title="New ladder" description="Set the rungs from short to long; the preview shows what your players will read." />
+        <PageHeader
+          eyebrow={<TextLink to={paths.ladders.href()}>Ladders</TextLink>}
+          title="New ladder"
+          description="Set the rungs from short to long; the preview shows what your players will read."
+        />
         <LadderBuilder units={units} />
       </>
     );
@@ -22,11 +26,19 @@ export function LadderEditPage({ ladderId }: { ladderId?: string }) {
     <QueryState query={ladder} label="Loading the ladder">
       {() =>
         ladder.data!.builtIn ? (
-          <PageHeader title={ladder.data!.name} description="Borrowline ladders cannot be changed. Copy it from its page to make a version of your own." actions={<ButtonLink to={paths.ladder.href(ladderId)}>Open the ladder</ButtonLink>} />
+          <PageHeader
+            title={ladder.data!.name}
+            description="Borrowline ladders cannot be changed. Copy it from its page to make a version of your own."
+            actions={<ButtonLink to={paths.ladder.href(ladderId)}>Open the ladder</ButtonLink>}
+          />
         ) : (
           <>
             <title>{`Edit ${ladder.data!.name} · Borrowline`}</title>
-            <PageHeader eyebrow={<TextLink to={paths.ladders.href()}>Ladders</TextLink>} title={`Edit ${ladder.data!.name}`} description="Players who already have this ladder keep the copy they were given." />
+            <PageHeader
+              eyebrow={<TextLink to={paths.ladders.href()}>Ladders</TextLink>}
+              title={`Edit ${ladder.data!.name}`}
+              description="Players who already have this ladder keep the copy they were given."
+            />
             <LadderBuilder units={units} ladder={ladder.data!} />
           </>
         )

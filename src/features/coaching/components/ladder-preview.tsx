@@ -31,7 +31,10 @@ export function LadderPreview({ name, description, failRule, rungs, units, class
           const shorter = rung && i > 0 && rungs[i - 1] && rung.distanceM < rungs[i - 1]!.distanceM;
           return (
             <li key={i} className="flex items-start gap-3 rounded-xl bg-sand-50/5 px-3 py-2.5">
-              <span aria-hidden="true" className="mt-0.5 flex size-7 shrink-0 items-center justify-center rounded-full bg-coral-500 text-sm font-semibold text-ink-950">
+              <span
+                aria-hidden="true"
+                className="mt-0.5 flex size-7 shrink-0 items-center justify-center rounded-full bg-coral-500 text-sm font-semibold text-ink-950"
+              >
                 {i + 1}
               </span>
               <div className="min-w-0">
@@ -40,9 +43,13 @@ export function LadderPreview({ name, description, failRule, rungs, units, class
                   {rung ? rungInWords(rung, units) : "Not complete yet"}
                 </p>
                 {rung && (rung.breakType || rung.note) ? (
-                  <p className="text-sm text-sand-300">{[rung.breakType ? BREAK_TYPE_WORDS[rung.breakType] : null, rung.note].filter(Boolean).join(" · ")}</p>
+                  <p className="text-sm text-sand-300">
+                    {[rung.breakType ? BREAK_TYPE_WORDS[rung.breakType] : null, rung.note].filter(Boolean).join(" · ")}
+                  </p>
                 ) : null}
-                {shorter ? <p className="text-sm text-coral-300">Shorter than rung {i}: players usually climb from short to long.</p> : null}
+                {shorter ? (
+                  <p className="text-sm text-coral-300">Shorter than rung {i}: players usually climb from short to long.</p>
+                ) : null}
               </div>
             </li>
           );

@@ -47,7 +47,14 @@ function LadderCard({ ladder, showOwner = false }: { ladder: Ladder; showOwner?:
           Give to players
         </ButtonLink>
         {ladder.builtIn ? (
-          <Button size="sm" variant="secondary" loading={copy.isPending} loadingText="Copying…" onClick={doCopy} aria-label={`Copy ${ladder.name} to my ladders`}>
+          <Button
+            size="sm"
+            variant="secondary"
+            loading={copy.isPending}
+            loadingText="Copying…"
+            onClick={doCopy}
+            aria-label={`Copy ${ladder.name} to my ladders`}
+          >
             Copy to my ladders
           </Button>
         ) : (
@@ -55,7 +62,14 @@ function LadderCard({ ladder, showOwner = false }: { ladder: Ladder; showOwner?:
             <ButtonLink to={paths.ladderEdit.href(ladder.id)} size="sm" variant="secondary" aria-label={`Edit ${ladder.name}`}>
               Edit
             </ButtonLink>
-            <Button size="sm" variant="ghost" loading={copy.isPending} loadingText="Copying…" onClick={doCopy} aria-label={`Copy ${ladder.name}`}>
+            <Button
+              size="sm"
+              variant="ghost"
+              loading={copy.isPending}
+              loadingText="Copying…"
+              onClick={doCopy}
+              aria-label={`Copy ${ladder.name}`}
+            >
               Copy
             </Button>
             <ConfirmAction
@@ -102,7 +116,10 @@ export function LaddersPage() {
                   Your ladders
                 </h2>
                 {own.length === 0 ? (
-                  <EmptyState title="No ladders of your own yet" action={<ButtonLink to={paths.ladderNew.href()}>Build a ladder</ButtonLink>}>
+                  <EmptyState
+                    title="No ladders of your own yet"
+                    action={<ButtonLink to={paths.ladderNew.href()}>Build a ladder</ButtonLink>}
+                  >
                     Build one from scratch, or copy one of the Borrowline ladders below and change it.
                   </EmptyState>
                 ) : (

@@ -65,9 +65,13 @@ function storeAndAnswer(body: { holed: boolean }) {
 
 /** The ladder putts kept in the outbox on this phone (localStorage), oldest first. */
 const keptOnPhone = () =>
-  ((JSON.parse(window.localStorage.getItem(OUTBOX_STORAGE_KEY) ?? "null") as { mutations: { state: { variables: { clientId: string } } }[] } | null)?.mutations ?? []).map(
-    (m) => m.state.variables.clientId,
-  );
+  (
+    (
+      JSON.parse(window.localStorage.getItem(OUTBOX_STORAGE_KEY) ?? "null") as {
+        mutations: { state: { variables: { clientId: string } } }[];
+      } | null
+    )?.mutations ?? []
+  ).map((m) => m.state.variables.clientId);
 
 let client: QueryClient;
 let stopOutbox: () => void;

@@ -22,7 +22,10 @@ function RungTrack({ total, current, completed }: { total: number; current: numb
           <li
             key={i}
             aria-label={`Rung ${i + 1}: ${state === "passed" ? "passed" : state === "current" ? "playing now" : "ahead"}`}
-            className={clsx("h-2.5 flex-1 rounded-full", state === "passed" ? "bg-ok-600" : state === "current" ? "bg-coral-500" : "bg-ink-900/10")}
+            className={clsx(
+              "h-2.5 flex-1 rounded-full",
+              state === "passed" ? "bg-ok-600" : state === "current" ? "bg-coral-500" : "bg-ink-900/10",
+            )}
           />
         );
       })}
@@ -34,12 +37,17 @@ function SyncStatus({ run }: { run: LadderRun }) {
   if (run.waiting) {
     return (
       <p className="text-sm text-warn-800">
-        No connection. {run.pendingCount} putt{run.pendingCount === 1 ? " is" : "s are"} kept on this phone and sent when you are back online.
+        No connection. {run.pendingCount} putt{run.pendingCount === 1 ? " is" : "s are"} kept on this phone and sent when you are back
+        online.
       </p>
     );
   }
   const sending = run.pendingCount - (run.openMiss ? 1 : 0);
-  return <p className="text-sm text-ink-500">{sending > 0 ? "Saving…" : run.openMiss ? "The miss is saved after its details" : "Every putt saved"}</p>;
+  return (
+    <p className="text-sm text-ink-500">
+      {sending > 0 ? "Saving…" : run.openMiss ? "The miss is saved after its details" : "Every putt saved"}
+    </p>
+  );
 }
 
 function Stat({ label, value }: { label: string; value: number }) {
@@ -86,7 +94,17 @@ function Completed({ assignment, run, onUndo, undoing, readOnly }: CompletedProp
   );
 }
 
-function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDetail; run: LadderRun; units: UnitSystem; readOnly: boolean }) {
+function Runner({
+  assignment,
+  run,
+  units,
+  readOnly,
+}: {
+  assignment: AssignmentDetail;
+  run: LadderRun;
+  units: UnitSystem;
+  readOnly: boolean;
+}) {
   const [moment, setMoment] = useState<(Moment & { n: number }) | null>(null);
   const [undoing, setUndoing] = useState(false);
   // Undo on the completed screen reopens the ladder: its own Undo button takes the focus the reopened one had.
@@ -138,7 +156,13 @@ function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDe
 
       <div role="status" aria-live="polite" aria-atomic="true" className="min-h-0">
         {moment ? (
-          <p key={moment.n} className={clsx("rounded-xl px-4 py-3 text-center text-lg font-semibold", moment.tone === "failed" ? "bg-coral-100 text-coral-800" : "bg-ok-50 text-ok-800")}>
+          <p
+            key={moment.n}
+            className={clsx(
+              "rounded-xl px-4 py-3 text-center text-lg font-semibold",
+              moment.tone === "failed" ? "bg-coral-100 text-coral-800" : "bg-ok-50 text-ok-800",
+            )}
+          >
             {moment.text}
           </p>
         ) : null}
@@ -150,7 +174,11 @@ function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDe
         </p>
         <p className="mt-1 text-6xl font-semibold tracking-tight tabular-nums sm:text-7xl">{formatLength(rung.distanceM, units)}</p>
         <p className="mt-2 text-xl font-medium">{passRuleWords(rung.passRule, rung.balls)}</p>
-        {rung.breakType || rung.note ? <p className="mt-1 text-sand-300">{[rung.breakType ? BREAK_TYPE_WORDS[rung.breakType] : null, rung.note].filter(Boolean).join(" · ")}</p> : null}
+        {rung.breakType || rung.note ? (
+          <p className="mt-1 text-sand-300">
+            {[rung.breakType ? BREAK_TYPE_WORDS[rung.breakType] : null, rung.note].filter(Boolean).join(" · ")}
+          </p>
+        ) : null}
         <dl className={clsx("mt-5 grid gap-2", rung.passRule.kind === "in-a-row" ? "grid-cols-3" : "grid-cols-2")}>
           <Stat label="Balls left" value={p.ballsLeft} />
           <Stat label="Holed" value={p.holed} />
@@ -162,10 +190,18 @@ function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDe
         <Alert tone="info">This is {assignment.player.name}&rsquo;s ladder. Only they can log its putts.</Alert>
       ) : (
         <div className="grid grid-cols-2 gap-3">
-          <button type="button" onClick={() => play(true)} className="min-h-20 rounded-(--radius-card) bg-ok-600 text-2xl font-semibold text-white shadow-(--shadow-card) active:bg-ok-800">
+          <button
+            type="button"
+            onClick={() => play(true)}
+            className="min-h-20 rounded-(--radius-card) bg-ok-600 text-2xl font-semibold text-white shadow-(--shadow-card) active:bg-ok-800"
+          >
             Holed
           </button>
-          <button type="button" onClick={() => play(false)} className="min-h-20 rounded-(--radius-card) bg-white text-2xl font-semibold text-ink-900 shadow-(--shadow-card) ring-2 ring-ink-900/15 active:bg-sand-200">
+          <button
+            type="button"
+            onClick={() => play(false)}
+            className="min-h-20 rounded-(--radius-card) bg-white text-2xl font-semibold text-ink-900 shadow-(--shadow-card) ring-2 ring-ink-900/15 active:bg-sand-200"
+          >
             Missed
           </button>
         </div>
@@ -183,8 +219,16 @@ function Runner({ assignment, run, units, readOnly }: { assignment: AssignmentDe
       {run.error ? <Alert tone="error">{run.error}</Alert> : null}
 
       <div className="flex flex-wrap items-center justify-between gap-3 border-t border-ink-900/10 pt-3">
-        {readOnly ? <span /> : (
-          <Button ref={undoButton} variant="ghost" onClick={() => void undo()} aria-disabled={p.puttsTaken === 0 || undefined} pending={undoing}>
+        {readOnly ? (
+          <span />
+        ) : (
+          <Button
+            ref={undoButton}
+            variant="ghost"
+            onClick={() => void undo()}
+            aria-disabled={p.puttsTaken === 0 || undefined}
+            pending={undoing}
+          >
             Undo last putt
           </Button>
         )}
@@ -202,7 +246,12 @@ export function RunPage({ assignmentId }: { assignmentId: string }) {
   const run = useLadderRun(assignmentId);
   const { units } = useUnits();
   const me = useMe();
-  if (!run.assignment && run.query.isError && isApiError(run.query.error) && (run.query.error.status === 404 || run.query.error.status === 400)) {
+  if (
+    !run.assignment &&
+    run.query.isError &&
+    isApiError(run.query.error) &&
+    (run.query.error.status === 404 || run.query.error.status === 400)
+  ) {
     return (
       <EmptyState title="Ladder not found" action={<ButtonLink to={paths.myLadders.href()}>My ladders</ButtonLink>}>
         This ladder is not one of yours, or it no longer exists.
@@ -213,7 +262,12 @@ export function RunPage({ assignmentId }: { assignmentId: string }) {
     <div className="mx-auto w-full max-w-xl">
       <title>{run.assignment ? `${run.assignment.ladder.name} · Borrowline` : "Ladder · Borrowline"}</title>
       {run.assignment && run.progress ? (
-        <Runner assignment={run.assignment} run={run} units={units} readOnly={Boolean(me.data && me.data.user.id !== run.assignment.player.id)} />
+        <Runner
+          assignment={run.assignment}
+          run={run}
+          units={units}
+          readOnly={Boolean(me.data && me.data.user.id !== run.assignment.player.id)}
+        />
       ) : (
         <QueryState query={run.query} label="Loading the ladder">
           {() => null}

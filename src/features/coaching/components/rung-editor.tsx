@@ -60,25 +60,51 @@ export function RungEditor({ id, index, count, units, register, errors, passKind
       ref={setNodeRef}
       data-rung-index={index}
       style={{ transform: CSS.Translate.toString(transform), transition }}
-      className={clsx("rounded-(--radius-card) bg-white p-4 ring-1 ring-ink-900/10 sm:p-5", isDragging && "relative z-10 shadow-xl ring-2 ring-coral-500")}
+      className={clsx(
+        "rounded-(--radius-card) bg-white p-4 ring-1 ring-ink-900/10 sm:p-5",
+        isDragging && "relative z-10 shadow-xl ring-2 ring-coral-500",
+      )}
       aria-label={`Rung ${n}`}
     >
       <div className="mb-3 flex items-center gap-2">
         <DragHandle label={`Drag rung ${n}`} ref={setActivatorNodeRef} {...attributes} {...listeners} />
         <h3 className="text-lg font-semibold tracking-tight">Rung {n}</h3>
         <div className="ml-auto flex flex-wrap justify-end gap-1">
-          <Button size="sm" variant="ghost" aria-label={`Move rung ${n} up`} aria-disabled={first} onClick={() => !first && onMove(index, index - 1)}>
+          <Button
+            size="sm"
+            variant="ghost"
+            aria-label={`Move rung ${n} up`}
+            aria-disabled={first}
+            onClick={() => !first && onMove(index, index - 1)}
+          >
             Up
           </Button>
-          <Button size="sm" variant="ghost" aria-label={`Move rung ${n} down`} aria-disabled={last} onClick={() => !last && onMove(index, index + 1)}>
+          <Button
+            size="sm"
+            variant="ghost"
+            aria-label={`Move rung ${n} down`}
+            aria-disabled={last}
+            onClick={() => !last && onMove(index, index + 1)}
+          >
             Down
           </Button>
         </div>
       </div>
       <div className="grid grid-cols-2 gap-4">
-        <InputField label={`Distance (${longUnitLabel(units)})`} inputMode="decimal" autoComplete="off" error={err("distance")} {...register(`rungs.${index}.distance`)} />
+        <InputField
+          label={`Distance (${longUnitLabel(units)})`}
+          inputMode="decimal"
+          autoComplete="off"
+          error={err("distance")}
+          {...register(`rungs.${index}.distance`)}
+        />
         <InputField label="Balls" inputMode="numeric" autoComplete="off" error={err("balls")} {...register(`rungs.${index}.balls`)} />
-        <SelectField label="Pass rule" options={ruleOptions} containerClassName="col-span-2 sm:col-span-1" {...register(`rungs.${index}.passKind`)} />
+        <SelectField
+          label="Pass rule"
+          options={ruleOptions}
+          containerClassName="col-span-2 sm:col-span-1"
+          {...register(`rungs.${index}.passKind`)}
+        />
         <InputField
           label={passKind === "make" ? "Holed needed" : "Holed in a row"}
           containerClassName="col-span-2 sm:col-span-1"
@@ -87,8 +113,19 @@ export function RungEditor({ id, index, count, units, register, errors, passKind
           error={err("need")}
           {...register(`rungs.${index}.need`)}
         />
-        <SelectField label="Break (optional)" options={breakOptions} containerClassName="col-span-2 sm:col-span-1" {...register(`rungs.${index}.breakType`)} />
-        <InputField label="Note for the player (optional)" containerClassName="col-span-2 sm:col-span-1" autoComplete="off" error={err("note")} {...register(`rungs.${index}.note`)} />
+        <SelectField
+          label="Break (optional)"
+          options={breakOptions}
+          containerClassName="col-span-2 sm:col-span-1"
+          {...register(`rungs.${index}.breakType`)}
+        />
+        <InputField
+          label="Note for the player (optional)"
+          containerClassName="col-span-2 sm:col-span-1"
+          autoComplete="off"
+          error={err("note")}
+          {...register(`rungs.${index}.note`)}
+        />
       </div>
       <div className="mt-3 flex flex-wrap gap-2 border-t border-ink-900/10 pt-3">
         <Button size="sm" variant="secondary" onClick={() => onDuplicate(index)} aria-label={`Duplicate rung ${n}`}>

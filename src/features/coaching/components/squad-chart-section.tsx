@@ -26,10 +26,18 @@ export function SquadChartSection({ squads, squadId }: { squads: Squad[]; squadI
       <div className="flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
         <div>
           <CardTitle>Make rates across the squad</CardTitle>
-          <p className="mt-1 text-ink-500">Share of putts holed in each distance band, from every logged putt (practice and ladders). Bands with no putts are left out.</p>
+          <p className="mt-1 text-ink-500">
+            Share of putts holed in each distance band, from every logged putt (practice and ladders). Bands with no putts are left out.
+          </p>
         </div>
         {withPlayers.length > 1 ? (
-          <SelectField label="Squad" value={squad.id} onChange={(e) => setChosen(e.target.value)} options={withPlayers.map((s) => ({ value: s.id, label: s.name }))} containerClassName="sm:w-60" />
+          <SelectField
+            label="Squad"
+            value={squad.id}
+            onChange={(e) => setChosen(e.target.value)}
+            options={withPlayers.map((s) => ({ value: s.id, label: s.name }))}
+            containerClassName="sm:w-60"
+          />
         ) : null}
       </div>
       <div className="mt-4">
@@ -38,7 +46,11 @@ export function SquadChartSection({ squads, squadId }: { squads: Squad[]; squadI
         ) : data.rows.length === 0 ? (
           <p className="text-ink-500">No putts logged by {squad.name} yet.</p>
         ) : (
-          <ErrorBoundary fallback={() => <p className="text-sm text-ink-500">The chart could not be drawn here. Each player&rsquo;s page lists their rates.</p>}>
+          <ErrorBoundary
+            fallback={() => (
+              <p className="text-sm text-ink-500">The chart could not be drawn here. Each player&rsquo;s page lists their rates.</p>
+            )}
+          >
             <Suspense fallback={<Spinner label="Loading the chart" />}>
               <SquadChart data={data} />
             </Suspense>

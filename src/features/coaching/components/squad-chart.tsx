@@ -25,7 +25,16 @@ export default function SquadChart({ data }: { data: SquadChartData }) {
           />
           <Legend {...legendProps} iconType="square" />
           {data.series.map((s, i) => (
-            <Bar key={s.dataKey} dataKey={s.dataKey} name={s.name} fill={`url(#${patternId(i)})`} stroke="#131b2e" strokeWidth={0.5} radius={[3, 3, 0, 0]} isAnimationActive={false} />
+            <Bar
+              key={s.dataKey}
+              dataKey={s.dataKey}
+              name={s.name}
+              fill={`url(#${patternId(i)})`}
+              stroke="#131b2e"
+              strokeWidth={0.5}
+              radius={[3, 3, 0, 0]}
+              isAnimationActive={false}
+            />
           ))}
         </BarChart>
       </ResponsiveContainer>

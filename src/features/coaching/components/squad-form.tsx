@@ -42,7 +42,13 @@ export function SquadForm({ defaultValues, submitLabel, pendingLabel, onSubmit, 
     <form noValidate onSubmit={handleSubmit(submit)} className="flex flex-col gap-4" aria-label={submitLabel}>
       {errors.root?.message ? <Alert tone="error">{errors.root.message}</Alert> : null}
       <InputField label="Squad name" autoComplete="off" error={errors.name?.message} {...register("name")} />
-      <InputField label="Description (optional)" hint="Who is in it and when you meet, e.g. Saturday juniors." autoComplete="off" error={errors.description?.message} {...register("description")} />
+      <InputField
+        label="Description (optional)"
+        hint="Who is in it and when you meet, e.g. Saturday juniors."
+        autoComplete="off"
+        error={errors.description?.message}
+        {...register("description")}
+      />
       <div className="flex flex-wrap gap-2">
         <Button type="submit" loading={isSubmitting} loadingText={pendingLabel}>
           {submitLabel}

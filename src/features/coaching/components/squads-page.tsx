@@ -38,7 +38,11 @@ export function SquadsPage({ viewerId }: { viewerId: string }) {
   const navigate = useNavigate();
   return (
     <>
-      <PageHeader eyebrow="Coaching" title="Squads" description="The players you coach. Invite them by e-mail; once they join, you can give them ladders and follow their progress." />
+      <PageHeader
+        eyebrow="Coaching"
+        title="Squads"
+        description="The players you coach. Invite them by e-mail; once they join, you can give them ladders and follow their progress."
+      />
       <div className="grid gap-6 lg:grid-cols-[1.6fr_1fr]">
         <section aria-labelledby="squads-list-title">
           <QueryState query={squads} label="Loading your squads">
@@ -51,7 +55,9 @@ export function SquadsPage({ viewerId }: { viewerId: string }) {
                       Your squads
                     </h2>
                     {own.length === 0 ? (
-                      <EmptyState title="No squads yet">Create your first squad with the form, then invite your players by e-mail.</EmptyState>
+                      <EmptyState title="No squads yet">
+                        Create your first squad with the form, then invite your players by e-mail.
+                      </EmptyState>
                     ) : (
                       <ul className="grid gap-4 sm:grid-cols-2">
                         {own.map((sq) => (

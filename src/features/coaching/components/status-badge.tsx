@@ -13,5 +13,15 @@ const tones: Record<BadgeTone, string> = {
 
 /** A small status word in a pill; the word carries the meaning, the colour only helps. */
 export function Badge({ tone = "neutral", children, className }: { tone?: BadgeTone; children: ReactNode; className?: string }) {
-  return <span className={clsx("inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold whitespace-nowrap ring-1", tones[tone], className)}>{children}</span>;
+  return (
+    <span
+      className={clsx(
+        "inline-flex items-center rounded-full px-2.5 py-0.5 text-xs font-semibold whitespace-nowrap ring-1",
+        tones[tone],
+        className,
+      )}
+    >
+      {children}
+    </span>
+  );
 }

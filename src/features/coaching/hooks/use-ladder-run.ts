@@ -44,7 +44,10 @@ export function useLadderRun(assignmentId: string): LadderRun {
   const client = useQueryClient();
   const query = useAssignment(assignmentId);
   const mine = useMutationState({
-    filters: { mutationKey: coachingKeys.addLadderPutt(), predicate: (m) => (m.state.variables as QueuedLadderPutt | undefined)?.assignmentId === assignmentId },
+    filters: {
+      mutationKey: coachingKeys.addLadderPutt(),
+      predicate: (m) => (m.state.variables as QueuedLadderPutt | undefined)?.assignmentId === assignmentId,
+    },
     select: queued,
   });
   const pending = mine.filter((q) => q.status === "pending");

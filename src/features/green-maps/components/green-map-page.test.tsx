@@ -19,7 +19,18 @@ const me = {
   user: { id: "u1", name: "Ivo", email: "ivo@example.com", role: "player", emailVerified: true },
   preferences: { units: "metric" },
 };
-const green = { id: GREEN_ID, name: "Top green", locationNote: null, currentStimpFt: 9.5, createdAt: "2026-01-01T00:00:00Z", squad: null, ownerName: "Test Golfer", mine: true, hasHeightMap: true, readings: [] };
+const green = {
+  id: GREEN_ID,
+  name: "Top green",
+  locationNote: null,
+  currentStimpFt: 9.5,
+  createdAt: "2026-01-01T00:00:00Z",
+  squad: null,
+  ownerName: "Test Golfer",
+  mine: true,
+  hasHeightMap: true,
+  readings: [],
+};
 // A 12 m × 12 m plane falling to the east, 5 × 5 heights 3 m apart, origin at (0, 0).
 const heightsM = Array.from({ length: 5 }, () => [0.12, 0.09, 0.06, 0.03, 0]);
 const heightMap = {
@@ -42,7 +53,9 @@ const surfaceRead = {
   aimOffsetM: -0.41,
   entrySpeedMps: 0.7,
   rollPastM: 0.45,
-  flatPuttLengthM: 7.15, aimGiven: "offset", aimNote: null,
+  flatPuttLengthM: 7.15,
+  aimGiven: "offset",
+  aimNote: null,
   breaks: "right-to-left",
   capture: { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.6, marginMps: 0.9 },
   path: [
@@ -198,7 +211,11 @@ test("the map draws slope as equal ticks along the fall line, coloured by steepn
   expect(Math.max(...lengths) - Math.min(...lengths)).toBeLessThan(1e-6);
   expect(svg.querySelector("marker")).toBeNull();
   const key = screen.getAllByRole("list", { name: "Slope colours" })[0]!;
-  expect(within(key).getAllByRole("listitem").map((li) => li.textContent)).toEqual(["under 1 %", "1–2 %", "2–3 %", "3 % or more"]);
+  expect(
+    within(key)
+      .getAllByRole("listitem")
+      .map((li) => li.textContent),
+  ).toEqual(["under 1 %", "1–2 %", "2–3 %", "3 % or more"]);
 });
 
 test("a green without a map asks for none; after an upload the green is asked again and its map drawn at once", async () => {
@@ -216,7 +233,19 @@ test("a green without a map asks for none; after an upload the green is asked ag
     }),
     http.put(`/api/greens/${GREEN_ID}/height-map`, () => {
       stored = true;
-      return HttpResponse.json({ nx: 5, ny: 5, spacingM: 3, originM: [0, 0], widthM: 12, depthM: 12, minHeightM: 0, maxHeightM: 0.12, maxSlopePct: 1, source: "grid", spotCount: null });
+      return HttpResponse.json({
+        nx: 5,
+        ny: 5,
+        spacingM: 3,
+        originM: [0, 0],
+        widthM: 12,
+        depthM: 12,
+        minHeightM: 0,
+        maxHeightM: 0.12,
+        maxSlopePct: 1,
+        source: "grid",
+        spotCount: null,
+      });
     }),
   );
   renderRoute(<GreenMapPage greenId={GREEN_ID} />, { at: "/greens/x/map" });

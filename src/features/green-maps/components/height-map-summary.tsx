@@ -9,7 +9,17 @@ function signedShort(m: number, units: UnitSystem): string {
 }
 
 /** Size, spacing, height range and the steepest grade of the stored map, and (for the green's owner) a two-step delete. */
-export function HeightMapSummary({ greenId, summary, units, canEdit = true }: { greenId: string; summary: Summary; units: UnitSystem; canEdit?: boolean }) {
+export function HeightMapSummary({
+  greenId,
+  summary,
+  units,
+  canEdit = true,
+}: {
+  greenId: string;
+  summary: Summary;
+  units: UnitSystem;
+  canEdit?: boolean;
+}) {
   const remove = useDeleteHeightMap(greenId);
   const [confirming, setConfirming] = useState(false);
   return (

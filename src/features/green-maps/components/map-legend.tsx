@@ -33,8 +33,8 @@ export function MapLegend({
       {ticks ? (
         <div className="flex flex-col gap-1.5">
           <p>
-            Each short tick lies along the fall line, its bead at the low end; its colour says how steep the ground is there (all ticks
-            are the same length):
+            Each short tick lies along the fall line, its bead at the low end; its colour says how steep the ground is there (all ticks are
+            the same length):
           </p>
           <ul className="flex flex-wrap gap-x-4 gap-y-1" aria-label="Slope colours">
             {SLOPE_BANDS.map((b) => (

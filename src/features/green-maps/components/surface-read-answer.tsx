@@ -26,8 +26,8 @@ export function SurfaceReadAnswer({ read, units, updating }: { read: SurfaceRead
         Aim {aimWords(read.aimOffsetM, units, read.startLineDeg)}
       </p>
       <p className="text-sm text-ink-600">
-        {read.aimOffsetM === null ? "Judge it by the start direction" : holeWidthsWords(read.aimOffsetM)}; start line {Math.abs(read.startLineDeg).toFixed(1)}° {side} of the straight line.{" "}
-        {BREAK_WORDS[read.breaks] ?? ""}.
+        {read.aimOffsetM === null ? "Judge it by the start direction" : holeWidthsWords(read.aimOffsetM)}; start line{" "}
+        {Math.abs(read.startLineDeg).toFixed(1)}° {side} of the straight line. {BREAK_WORDS[read.breaks] ?? ""}.
       </p>
       <dl className="grid grid-cols-2 gap-3">
         <div className="rounded-xl bg-white p-3 ring-1 ring-ink-900/5">

@@ -49,7 +49,11 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
   const [problem, setProblem] = useState<WalkProblem | null>(null);
   const [waiting, setWaiting] = useState(false);
   const abort = useRef<AbortController | null>(null);
-  const state = useRef<{ sensorTilt: Gradient; lastUp: Vec3 | null; readings: (Gradient | null)[] }>({ sensorTilt: [0, 0], lastUp: null, readings: [] });
+  const state = useRef<{ sensorTilt: Gradient; lastUp: Vec3 | null; readings: (Gradient | null)[] }>({
+    sensorTilt: [0, 0],
+    lastUp: null,
+    readings: [],
+  });
 
   const stopWaiting = () => {
     abort.current?.abort();
@@ -137,7 +141,8 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
     const count = (v: number | null) => v !== null && Number.isInteger(v) && v >= L.minSpotsPerSide && v <= L.maxSpotsPerSide;
     if (!count(nx)) errors.nx = `Enter a whole number from ${L.minSpotsPerSide} to ${L.maxSpotsPerSide}.`;
     if (!count(ny)) errors.ny = `Enter a whole number from ${L.minSpotsPerSide} to ${L.maxSpotsPerSide}.`;
-    if (spacingM === null || spacingM < L.spacingM.min || spacingM > L.spacingM.max) errors.spacing = `Enter ${L.spacingM.min}–${L.spacingM.max} m (a pace or two).`;
+    if (spacingM === null || spacingM < L.spacingM.min || spacingM > L.spacingM.max)
+      errors.spacing = `Enter ${L.spacingM.min}–${L.spacingM.max} m (a pace or two).`;
     setSetupErrors(errors);
     if (Object.keys(errors).length > 0) return;
     const problemNow = await sensor.start();
@@ -193,9 +198,30 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
           </p>
         )}
         <div className="grid grid-cols-3 gap-3">
-          <InputField label="Across" hint="Spots a row" inputMode="numeric" value={text.nx} onChange={(e) => setText((t) => ({ ...t, nx: e.target.value }))} error={setupErrors.nx} />
-          <InputField label="Rows" hint={facing === "north" && !compassWhyNot ? "Northward" : "Toward the mark"} inputMode="numeric" value={text.ny} onChange={(e) => setText((t) => ({ ...t, ny: e.target.value }))} error={setupErrors.ny} />
-          <InputField label="Apart (m)" hint="A pace or two" inputMode="decimal" value={text.spacing} onChange={(e) => setText((t) => ({ ...t, spacing: e.target.value }))} error={setupErrors.spacing} />
+          <InputField
+            label="Across"
+            hint="Spots a row"
+            inputMode="numeric"
+            value={text.nx}
+            onChange={(e) => setText((t) => ({ ...t, nx: e.target.value }))}
+            error={setupErrors.nx}
+          />
+          <InputField
+            label="Rows"
+            hint={facing === "north" && !compassWhyNot ? "Northward" : "Toward the mark"}
+            inputMode="numeric"
+            value={text.ny}
+            onChange={(e) => setText((t) => ({ ...t, ny: e.target.value }))}
+            error={setupErrors.ny}
+          />
+          <InputField
+            label="Apart (m)"
+            hint="A pace or two"
+            inputMode="decimal"
+            value={text.spacing}
+            onChange={(e) => setText((t) => ({ ...t, spacing: e.target.value }))}
+            error={setupErrors.spacing}
+          />
         </div>
         <ChoiceGroup
           legend="Which way the phone lies"
@@ -203,7 +229,11 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
           value={compassWhyNot ? "mark" : facing}
           onValueChange={(v) => setFacing(v as Facing)}
           choices={[
-            { value: "mark", label: "Top edge toward a fixed mark", description: "Works on every phone: the flag, a tree, a bunker's lip." },
+            {
+              value: "mark",
+              label: "Top edge toward a fixed mark",
+              description: "Works on every phone: the flag, a tree, a bunker's lip.",
+            },
             {
               value: "north",
               label: "Any way round, by the compass",
@@ -260,7 +290,9 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
                 {nextStepWords(current, grid)} Lay the phone flat at {spotWords(current, grid.nx, "north")}, any way round, and let go.
               </p>
               <p className="text-ink-600">
-                {heading === null ? "Waiting for the compass…" : `The phone's top edge points ${heading.toFixed(0)}° (${compassPoint(heading)}).`}
+                {heading === null
+                  ? "Waiting for the compass…"
+                  : `The phone's top edge points ${heading.toFixed(0)}° (${compassPoint(heading)}).`}
               </p>
             </>
           ) : (
@@ -284,12 +316,20 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
         ) : null}
       </div>
 
-      <WalkGrid grid={grid} readings={readings} current={stage === "review" ? null : current} residual={residual} onRedo={stage === "review" ? (k) => void walkFrom(grid, k, true) : undefined} />
+      <WalkGrid
+        grid={grid}
+        readings={readings}
+        current={stage === "review" ? null : current}
+        residual={residual}
+        onRedo={stage === "review" ? (k) => void walkFrom(grid, k, true) : undefined}
+      />
 
       {stage === "review" && fit ? (
         saveError ? (
           <Alert tone="error" title="Could not save the map">
-            {isApiError(saveError) && Object.keys(saveError.fields).length > 0 ? Object.values(saveError.fields).join("; ") : saveError.message}
+            {isApiError(saveError) && Object.keys(saveError.fields).length > 0
+              ? Object.values(saveError.fields).join("; ")
+              : saveError.message}
           </Alert>
         ) : null
       ) : null}
@@ -326,4 +366,3 @@ export function WalkGreen({ greenId, replacing }: { greenId: string; replacing: 
     </section>
   );
 }
-

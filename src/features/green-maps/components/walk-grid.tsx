@@ -29,7 +29,10 @@ export function WalkGrid({
   const rows = Array.from({ length: grid.ny }, (_, r) => grid.ny - 1 - r);
   return (
     <div className="overflow-x-auto">
-      <table className="border-separate border-spacing-1 text-xs" aria-label={grid.facing === "north" ? "Walked spots, the north row first" : "Walked spots, the row toward the mark first"}>
+      <table
+        className="border-separate border-spacing-1 text-xs"
+        aria-label={grid.facing === "north" ? "Walked spots, the north row first" : "Walked spots, the row toward the mark first"}
+      >
         <tbody>
           {rows.map((j) => (
             <tr key={j}>
@@ -41,7 +44,11 @@ export function WalkGrid({
                 const label = g ? `${slopeAndFallLine(g).slopePct.toFixed(1)} %` : k === current ? "here" : "·";
                 const cell = clsx(
                   "flex h-12 min-w-14 flex-col items-center justify-center rounded-lg border-2 px-1 tabular-nums",
-                  k === current ? "border-coral-500 bg-coral-50 font-semibold" : g ? "border-ink-900/20 bg-white" : "border-dashed border-ink-900/20",
+                  k === current
+                    ? "border-coral-500 bg-coral-50 font-semibold"
+                    : g
+                      ? "border-ink-900/20 bg-white"
+                      : "border-dashed border-ink-900/20",
                   suspect && "border-bad-600 bg-bad-50 text-bad-800",
                 );
                 return (
@@ -49,7 +56,10 @@ export function WalkGrid({
                     {onRedo && g ? (
                       <button
                         type="button"
-                        className={clsx(cell, "w-full focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500")}
+                        className={clsx(
+                          cell,
+                          "w-full focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500",
+                        )}
                         aria-label={`${spotWords(k, grid.nx, grid.facing)}: slope ${label}, misfit ${res?.toFixed(1) ?? "?"} %${suspect ? ", worth measuring again" : ""}. Measure it again.`}
                         onClick={() => onRedo(k)}
                       >

@@ -42,7 +42,13 @@ export function slopeTicks(surface: HeightSurface, bounds: Bounds, perSide = 9):
       if (!(slopePct >= FLAT_PCT)) continue;
       const ux = -g[0] / grade;
       const uy = -g[1] / grade;
-      out.push({ at: [x, y], from: [x - ux * half, y - uy * half], to: [x + ux * half, y + uy * half], slopePct, band: slopeBand(slopePct) });
+      out.push({
+        at: [x, y],
+        from: [x - ux * half, y - uy * half],
+        to: [x + ux * half, y + uy * half],
+        slopePct,
+        band: slopeBand(slopePct),
+      });
     }
   }
   return out;

@@ -65,7 +65,12 @@ test("the best pace sits beside the read's own, and its button hands that roll-p
 
 test("with few putts logged the panel says it leans on typical club-golfer values", async () => {
   stubApi(
-    () => HttpResponse.json(fakeOdds({ dispersion: { angleDeg: 1.2, pace: 0.12, source: "my-putts", putts: 0, usedPrior: true, readSlopePct: 0.5, greenLateralM: 0.02 } })),
+    () =>
+      HttpResponse.json(
+        fakeOdds({
+          dispersion: { angleDeg: 1.2, pace: 0.12, source: "my-putts", putts: 0, usedPrior: true, readSlopePct: 0.5, greenLateralM: 0.02 },
+        }),
+      ),
     fakeDispersion({ putts: 0, usedPrior: true }),
   );
   renderPanel();
@@ -93,7 +98,16 @@ test("odds outside the player's own logged rate come with the reason, never sile
   stubApi(() =>
     HttpResponse.json(
       fakeOdds({
-        logged: { fromM: 2.4, toM: 3.75, attempts: 40, made: 36, rate: 0.9, ci95: [0.77, 0.96], oddsOutside: true, why: "These odds are for this putt: its slope." },
+        logged: {
+          fromM: 2.4,
+          toM: 3.75,
+          attempts: 40,
+          made: 36,
+          rate: 0.9,
+          ci95: [0.77, 0.96],
+          oddsOutside: true,
+          why: "These odds are for this putt: its slope.",
+        },
       }),
     ),
   );

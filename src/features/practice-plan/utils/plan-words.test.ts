@@ -20,7 +20,15 @@ test("a rate shows its 95 % range; strokes say lost or gained", () => {
 test("the plan's ladder is named in the reader's units, whatever units the plan was built in", () => {
   const ft = METRES_PER_FOOT;
   // An imperial player's bands (edges in whole feet); targets are the 6–10 ft and 15–20 ft bands.
-  const plan = { bands: [{ fromM: 3 * ft, toM: 6 * ft }, { fromM: 6 * ft, toM: 10 * ft }, { fromM: 10 * ft, toM: 15 * ft }, { fromM: 15 * ft, toM: 20 * ft }], targets: [1, 3] };
+  const plan = {
+    bands: [
+      { fromM: 3 * ft, toM: 6 * ft },
+      { fromM: 6 * ft, toM: 10 * ft },
+      { fromM: 10 * ft, toM: 15 * ft },
+      { fromM: 15 * ft, toM: 20 * ft },
+    ],
+    targets: [1, 3],
+  };
   // 6 ft = 1.8288 m, 10 ft = 3.048 m, 15 ft = 4.572 m, 20 ft = 6.096 m (hand-computed), to one decimal.
   expect(planLadderName(plan, "metric")).toBe("Practice plan: 1.8–3 m and 4.6–6.1 m");
   expect(planLadderName(plan, "imperial")).toBe("Practice plan: 6–10 ft and 15–20 ft");

@@ -15,7 +15,10 @@ export function bandLabel(b: { fromM: number; toM: number | null }, units: UnitS
  * The plan's ladder's name in the reader's units: "Practice plan: 6–10 ft and 10–15 ft". The server names it in the
  * player's units; a coach (or the player, since) in other units would read feet among metres (issue 18).
  */
-export function planLadderName(plan: { bands: readonly { fromM: number; toM: number | null }[]; targets: readonly number[] }, units: UnitSystem): string {
+export function planLadderName(
+  plan: { bands: readonly { fromM: number; toM: number | null }[]; targets: readonly number[] },
+  units: UnitSystem,
+): string {
   return `Practice plan: ${plan.targets.map((i) => bandLabel(plan.bands[i]!, units)).join(" and ")}`;
 }
 

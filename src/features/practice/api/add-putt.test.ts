@@ -7,7 +7,13 @@ import { registerPuttMutations, undoQueuedPutt, type NewPutt } from "./add-putt"
 import { practiceKeys } from "./keys";
 
 const SESSION = "11111111-1111-4111-8111-111111111111";
-const putt = (clientId: string, holed = true): NewPutt => ({ sessionId: SESSION, clientId, distanceM: 1.5, holed, loggedAt: new Date().toISOString() });
+const putt = (clientId: string, holed = true): NewPutt => ({
+  sessionId: SESSION,
+  clientId,
+  distanceM: 1.5,
+  holed,
+  loggedAt: new Date().toISOString(),
+});
 
 /** A page's query client with the putt defaults registered and the outbox kept in localStorage. */
 function newClient() {
@@ -23,7 +29,8 @@ function run(client: QueryClient, v: NewPutt) {
   return m.execute(v).catch(() => undefined);
 }
 
-const stored = () => JSON.parse(window.localStorage.getItem(OUTBOX_STORAGE_KEY) ?? "null") as { mutations: { state: { variables: NewPutt } }[] } | null;
+const stored = () =>
+  JSON.parse(window.localStorage.getItem(OUTBOX_STORAGE_KEY) ?? "null") as { mutations: { state: { variables: NewPutt } }[] } | null;
 
 beforeEach(() => {
   window.localStorage.clear();
@@ -41,7 +48,14 @@ test("a putt logged offline waits in localStorage and a fresh page sends it, onc
   await vi.waitFor(() => expect(stored()?.mutations.map((m) => m.state.variables.clientId)).toEqual(["c-1", "c-2"]));
   // offlineFirst: the first putt was tried once and then paused; the second waits its turn behind it.
   await vi.waitFor(() => expect(tried).toHaveLength(1));
-  await vi.waitFor(() => expect(first.getMutationCache().getAll().map((m) => m.state.isPaused)).toEqual([true, true]));
+  await vi.waitFor(() =>
+    expect(
+      first
+        .getMutationCache()
+        .getAll()
+        .map((m) => m.state.isPaused),
+    ).toEqual([true, true]),
+  );
   await new Promise((r) => setTimeout(r, 30));
   expect(tried).toHaveLength(1);
   stop();

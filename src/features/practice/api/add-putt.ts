@@ -86,7 +86,9 @@ export function registerPuttMutations(client: QueryClient, options: { retryDelay
       await client.cancelQueries({ queryKey: key });
       const previous = client.getQueryData<SessionPutts>(key);
       const sessionDate = previous?.items[0]?.date;
-      client.setQueryData<SessionPutts>(key, (old) => ({ items: [...(old?.items ?? []).filter((p) => p.clientId !== v.clientId), pendingPutt(v, sessionDate)] }));
+      client.setQueryData<SessionPutts>(key, (old) => ({
+        items: [...(old?.items ?? []).filter((p) => p.clientId !== v.clientId), pendingPutt(v, sessionDate)],
+      }));
       return { previous };
     },
     onError: (error, v) => {
@@ -141,7 +143,11 @@ export function usePuttQueue(): QueuedPutt[] {
 /** Putts of a session that failed for good (already rolled back), newest last. */
 export function useFailedPutts(sessionId: string): QueuedPutt[] {
   return useMutationState({
-    filters: { mutationKey: practiceKeys.addPutt(), status: "error", predicate: (m) => (m.state.variables as NewPutt | undefined)?.sessionId === sessionId },
+    filters: {
+      mutationKey: practiceKeys.addPutt(),
+      status: "error",
+      predicate: (m) => (m.state.variables as NewPutt | undefined)?.sessionId === sessionId,
+    },
     select: queued,
   });
 }
@@ -160,7 +166,9 @@ export function dismissFailedPutts(client: QueryClient, sessionId: string): void
  */
 export function undoQueuedPutt(client: QueryClient, clientId: string): boolean {
   const cache = client.getMutationCache();
-  const m = cache.findAll({ mutationKey: practiceKeys.addPutt(), status: "pending" }).find((x) => (x.state.variables as NewPutt).clientId === clientId);
+  const m = cache
+    .findAll({ mutationKey: practiceKeys.addPutt(), status: "pending" })
+    .find((x) => (x.state.variables as NewPutt).clientId === clientId);
   if (!m) return false;
   undone.add(clientId);
   const v = m.state.variables as NewPutt;

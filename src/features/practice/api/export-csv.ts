@@ -11,5 +11,7 @@ export function exportCsv(kind: ExportKind, range: { from?: string; to?: string 
 }
 
 export function useExportCsv() {
-  return useMutation({ mutationFn: ({ kind, range }: { kind: ExportKind; range?: { from?: string; to?: string } }) => exportCsv(kind, range) });
+  return useMutation({
+    mutationFn: ({ kind, range }: { kind: ExportKind; range?: { from?: string; to?: string } }) => exportCsv(kind, range),
+  });
 }

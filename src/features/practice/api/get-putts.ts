@@ -25,7 +25,11 @@ export function getPutts(params: PuttListParams, signal?: AbortSignal): Promise<
 }
 
 export function puttsQueryOptions(params: PuttListParams) {
-  return queryOptions({ queryKey: practiceKeys.puttList(params), queryFn: ({ signal }) => getPutts(params, signal), placeholderData: keepPreviousData });
+  return queryOptions({
+    queryKey: practiceKeys.puttList(params),
+    queryFn: ({ signal }) => getPutts(params, signal),
+    placeholderData: keepPreviousData,
+  });
 }
 
 export function usePutts(params: PuttListParams) {

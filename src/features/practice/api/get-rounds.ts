@@ -13,7 +13,11 @@ export function getRounds(page: number, signal?: AbortSignal): Promise<Page<Roun
 }
 
 export function roundsQueryOptions(page: number) {
-  return queryOptions({ queryKey: practiceKeys.roundList(page), queryFn: ({ signal }) => getRounds(page, signal), placeholderData: keepPreviousData });
+  return queryOptions({
+    queryKey: practiceKeys.roundList(page),
+    queryFn: ({ signal }) => getRounds(page, signal),
+    placeholderData: keepPreviousData,
+  });
 }
 
 export function useRounds(page: number) {

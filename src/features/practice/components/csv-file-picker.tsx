@@ -48,7 +48,8 @@ export function FilePicker({ onFile, busy }: { onFile: (f: File) => void; busy: 
         Choose a file
       </Button>
       <p className="max-w-md text-sm text-ink-500">
-        One putt per row with a header row: at least the day, the distance and whether it was holed. Up to 1 MB. Borrowline’s own putts export imports as it is.
+        One putt per row with a header row: at least the day, the distance and whether it was holed. Up to 1 MB. Borrowline’s own putts
+        export imports as it is.
       </p>
     </div>
   );

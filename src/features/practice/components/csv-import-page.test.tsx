@@ -7,7 +7,10 @@ import { renderRoute } from "../../../testing/render";
 import { http, HttpResponse, meAnswer, network, watchUploads, type JsonBodyType } from "../../../testing/network";
 import { CsvImportPage } from "./csv-import-page";
 
-const me = { user: { id: "u1", name: "Ivo", email: "ivo@example.test", role: "player", emailVerified: true }, preferences: { units: "imperial" } };
+const me = {
+  user: { id: "u1", name: "Ivo", email: "ivo@example.test", role: "player", emailVerified: true },
+  preferences: { units: "imperial" },
+};
 const preview = {
   headers: ["Date", "Distance (ft)", "Made", "Side", "Green"],
   rows: [
@@ -57,7 +60,17 @@ const file = () => new File(["Date,Distance (ft),Made\n"], "putts.csv", { type: 
 test("the mapping is prefilled from the suggestion, and a refused import lists each bad row with its field and why", async () => {
   const api = stubApi({
     imports: [
-      { status: 422, body: { error: { code: "unprocessable", message: "2 row(s) have errors; nothing was imported.", fields: { file: "2 invalid row(s)" } }, imported: 0, sessionsCreated: 0, greensCreated: 0, skipped: 2, errors: rowErrors } },
+      {
+        status: 422,
+        body: {
+          error: { code: "unprocessable", message: "2 row(s) have errors; nothing was imported.", fields: { file: "2 invalid row(s)" } },
+          imported: 0,
+          sessionsCreated: 0,
+          greensCreated: 0,
+          skipped: 2,
+          errors: rowErrors,
+        },
+      },
       { status: 200, body: { imported: 1, sessionsCreated: 1, greensCreated: 1, skipped: 2, errors: rowErrors } },
     ],
   });
@@ -78,14 +91,27 @@ test("the mapping is prefilled from the suggestion, and a refused import lists e
 
   const report = await screen.findByRole("table", { name: "Rows that could not be imported" });
   const rows = within(report).getAllByRole("row").slice(1);
-  expect(rows.map((r) => within(r).getAllByRole("cell").map((c) => c.textContent))).toEqual([
+  expect(
+    rows.map((r) =>
+      within(r)
+        .getAllByRole("cell")
+        .map((c) => c.textContent),
+    ),
+  ).toEqual([
     ["2", "3", "Distance", '"three" is not a number'],
     ["3", "4", "Day", '"May 2" is not a date as YYYY-MM-DD'],
     ["3", "4", "Holed", '"maybe" is not yes/no, true/false, 1/0 or holed/missed'],
   ]);
   expect(screen.getByText(/2 of 3 rows have problems/)).toBeInTheDocument();
   expect(api.calls.find((c) => c.url === "/api/csv/putts/import")?.fields).toMatchObject({ skipInvalid: "false", file: "file:putts.csv" });
-  expect(JSON.parse(api.calls.find((c) => c.url === "/api/csv/putts/import")!.fields.mapping!)).toEqual({ date: "Date", distance: "Distance (ft)", distanceUnit: "ft", holed: "Made", missSide: "Side", green: "Green" });
+  expect(JSON.parse(api.calls.find((c) => c.url === "/api/csv/putts/import")!.fields.mapping!)).toEqual({
+    date: "Date",
+    distance: "Distance (ft)",
+    distanceUnit: "ft",
+    holed: "Made",
+    missSide: "Side",
+    green: "Green",
+  });
 
   await user.click(screen.getByRole("button", { name: "Import the 1 valid rows only" }));
   expect(await screen.findByText("Imported 1 putt")).toBeInTheDocument();
@@ -104,7 +130,12 @@ test("a required column left unmapped stops the import before anything is sent",
 });
 
 test("too large and not-CSV uploads are explained in plain words", async () => {
-  stubApi({ preview: { status: 413, body: { error: { code: "payload_too_large", message: "The file is larger than 1 MB.", fields: { file: "at most 1 MB" } } } } });
+  stubApi({
+    preview: {
+      status: 413,
+      body: { error: { code: "payload_too_large", message: "The file is larger than 1 MB.", fields: { file: "at most 1 MB" } } },
+    },
+  });
   const user = userEvent.setup();
   renderRoute(<CsvImportPage />, { at: "/practice/import" });
   await user.upload(screen.getByLabelText("CSV file"), file());
@@ -114,6 +145,8 @@ test("too large and not-CSV uploads are explained in plain words", async () => {
   stubApi({ preview: { status: 415, body: { error: { code: "unsupported_media_type", message: "Upload a CSV file (got image/png)." } } } });
   renderRoute(<CsvImportPage />, { at: "/practice/import" });
   // The picker offers CSV files only, but a dropped file (or "All files" in the picker) can be anything.
-  await userEvent.setup({ applyAccept: false }).upload(screen.getByLabelText("CSV file"), new File(["x"], "photo.png", { type: "image/png" }));
+  await userEvent
+    .setup({ applyAccept: false })
+    .upload(screen.getByLabelText("CSV file"), new File(["x"], "photo.png", { type: "image/png" }));
   expect(await screen.findByRole("alert")).toHaveTextContent("That file is not a CSV.");
 });

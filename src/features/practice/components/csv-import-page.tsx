@@ -5,7 +5,15 @@ import { paths } from "../../../config/paths";
 import { rowErrorsOf, useImportCsv } from "../api/import-csv";
 import { usePreviewCsv } from "../api/preview-csv";
 import { useUnits } from "../../auth/hooks/use-units";
-import { COLUMN_FIELDS, fieldLabel, initialMapping, toCsvMapping, uploadProblem, validRowCount, type MappingState } from "../utils/csv-mapping";
+import {
+  COLUMN_FIELDS,
+  fieldLabel,
+  initialMapping,
+  toCsvMapping,
+  uploadProblem,
+  validRowCount,
+  type MappingState,
+} from "../utils/csv-mapping";
 import { CsvExportButtons } from "./csv-export-buttons";
 import { FilePicker } from "./csv-file-picker";
 
@@ -187,8 +195,16 @@ export function CsvImportPage() {
             <CardTitle>{file.name}</CardTitle>
             <p className="mt-1 mb-4 text-sm text-ink-500">
               {preview.data.rowCount} {preview.data.rowCount === 1 ? "row" : "rows"} of putts
-              {preview.data.rows.length < preview.data.rowCount ? `; the first ${preview.data.rows.length} are shown` : ""}. Columns separated by{" "}
-              {preview.data.delimiter === "," ? "commas" : preview.data.delimiter === ";" ? "semicolons" : preview.data.delimiter === "\t" ? "tabs" : `“${preview.data.delimiter}”`}.
+              {preview.data.rows.length < preview.data.rowCount ? `; the first ${preview.data.rows.length} are shown` : ""}. Columns
+              separated by{" "}
+              {preview.data.delimiter === ","
+                ? "commas"
+                : preview.data.delimiter === ";"
+                  ? "semicolons"
+                  : preview.data.delimiter === "\t"
+                    ? "tabs"
+                    : `“${preview.data.delimiter}”`}
+              .
             </p>
             <PreviewTable preview={preview.data} />
           </Card>
@@ -196,10 +212,14 @@ export function CsvImportPage() {
           <Card>
             <CardTitle>Which column holds what</CardTitle>
             <p className="mt-1 mb-4 text-sm text-ink-500">Filled in from the column names; check them, then import.</p>
-            <MappingForm preview={preview.data} mapping={mapping} onChange={(m) => {
-              setMapping(m);
-              importer.reset();
-            }} />
+            <MappingForm
+              preview={preview.data}
+              mapping={mapping}
+              onChange={(m) => {
+                setMapping(m);
+                importer.reset();
+              }}
+            />
             {check && !check.ok ? (
               <Alert tone="warning" className="mt-4">
                 {check.missing.length > 0 ? `Choose a column for ${check.missing.join(", ")}. ` : ""}
@@ -207,7 +227,14 @@ export function CsvImportPage() {
               </Alert>
             ) : null}
             <div className="mt-5 flex flex-wrap gap-2">
-              <Button variant="accent" size="lg" onClick={() => run(false)} disabled={!check?.ok} loading={importer.isPending && importer.variables?.skipInvalid === false} loadingText="Importing…">
+              <Button
+                variant="accent"
+                size="lg"
+                onClick={() => run(false)}
+                disabled={!check?.ok}
+                loading={importer.isPending && importer.variables?.skipInvalid === false}
+                loadingText="Importing…"
+              >
                 Import {preview.data.rowCount} {preview.data.rowCount === 1 ? "row" : "rows"}
               </Button>
             </div>
@@ -219,13 +246,20 @@ export function CsvImportPage() {
         <Card>
           <CardTitle>Nothing was imported yet</CardTitle>
           <Alert tone="error" className="mt-3">
-            {new Set(refused.errors.map((e) => e.row)).size} of {preview.data?.rowCount ?? "the"} rows have problems. Fix them in the file and import again, or import the valid rows only.
+            {new Set(refused.errors.map((e) => e.row)).size} of {preview.data?.rowCount ?? "the"} rows have problems. Fix them in the file
+            and import again, or import the valid rows only.
           </Alert>
           <div className="mt-4">
             <RowErrorTable errors={refused.errors} />
           </div>
           <div className="mt-4 flex flex-wrap gap-2">
-            <Button variant="primary" onClick={() => run(true)} loading={importer.isPending} loadingText="Importing…" disabled={validRowCount(preview.data?.rowCount ?? 0, refused.errors) === 0}>
+            <Button
+              variant="primary"
+              onClick={() => run(true)}
+              loading={importer.isPending}
+              loadingText="Importing…"
+              disabled={validRowCount(preview.data?.rowCount ?? 0, refused.errors) === 0}
+            >
               Import the {validRowCount(preview.data?.rowCount ?? 0, refused.errors)} valid rows only
             </Button>
           </div>

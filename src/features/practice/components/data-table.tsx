@@ -47,10 +47,17 @@ export function DataTable<T>({ table, caption, fetching = false, total, noun, em
                       key={header.id}
                       scope="col"
                       aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : sortable ? "none" : undefined}
-                      className={clsx("px-3 py-2 font-semibold whitespace-nowrap first:pl-4", (header.column.columnDef.meta as { align?: string } | undefined)?.align === "right" && "text-right")}
+                      className={clsx(
+                        "px-3 py-2 font-semibold whitespace-nowrap first:pl-4",
+                        (header.column.columnDef.meta as { align?: string } | undefined)?.align === "right" && "text-right",
+                      )}
                     >
                       {sortable ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="-mx-1 inline-flex min-h-11 items-center gap-1.5 rounded-md px-1 hover:text-ink-900">
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className="-mx-1 inline-flex min-h-11 items-center gap-1.5 rounded-md px-1 hover:text-ink-900"
+                        >
                           {label}
                           <SortIcon dir={dir} />
                         </button>
@@ -69,7 +76,10 @@ export function DataTable<T>({ table, caption, fetching = false, total, noun, em
                 {row.getVisibleCells().map((cell) => (
                   <td
                     key={cell.id}
-                    className={clsx("px-3 py-2 align-middle first:pl-4", (cell.column.columnDef.meta as { align?: string } | undefined)?.align === "right" && "text-right tabular-nums")}
+                    className={clsx(
+                      "px-3 py-2 align-middle first:pl-4",
+                      (cell.column.columnDef.meta as { align?: string } | undefined)?.align === "right" && "text-right tabular-nums",
+                    )}
                   >
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>

@@ -11,9 +11,26 @@ vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
 
 const GREEN_ID = "6c9c2f0e-6f5e-4c1f-9d4e-0a1b2c3d4e5f";
 const SQUAD_ID = "7d9c2f0e-6f5e-4c1f-9d4e-0a1b2c3d4e5f";
-const reading = { id: "8e9c2f0e-6f5e-4c1f-9d4e-0a1b2c3d4e5f", measuredOn: "2026-05-01", stimpFt: 10.5, upFt: null, downFt: null, note: null };
-const base = { id: GREEN_ID, name: "Top green", locationNote: null, currentStimpFt: 10.5, createdAt: "2026-01-01T00:00:00Z", readings: [reading] };
-const me = { user: { id: "u1", name: "Coach Ash", email: "ash@example.com", role: "coach", emailVerified: true }, preferences: { units: "metric" } };
+const reading = {
+  id: "8e9c2f0e-6f5e-4c1f-9d4e-0a1b2c3d4e5f",
+  measuredOn: "2026-05-01",
+  stimpFt: 10.5,
+  upFt: null,
+  downFt: null,
+  note: null,
+};
+const base = {
+  id: GREEN_ID,
+  name: "Top green",
+  locationNote: null,
+  currentStimpFt: 10.5,
+  createdAt: "2026-01-01T00:00:00Z",
+  readings: [reading],
+};
+const me = {
+  user: { id: "u1", name: "Coach Ash", email: "ash@example.com", role: "coach", emailVerified: true },
+  preferences: { units: "metric" },
+};
 
 let calls: Call[] = [];
 
@@ -57,7 +74,11 @@ test("the coach who keeps a green shares it with a squad, then takes it back", a
   expect(screen.getByText(/Only you see this green/)).toBeInTheDocument();
   await user.selectOptions(select, "Juniors");
   await user.click(screen.getByRole("button", { name: "Share" }));
-  await waitFor(() => expect(calls.filter((c) => c.method === "PUT")).toMatchObject([{ path: `/api/greens/${GREEN_ID}/squad`, method: "PUT", body: { squadId: SQUAD_ID } }]));
+  await waitFor(() =>
+    expect(calls.filter((c) => c.method === "PUT")).toMatchObject([
+      { path: `/api/greens/${GREEN_ID}/squad`, method: "PUT", body: { squadId: SQUAD_ID } },
+    ]),
+  );
   expect(await screen.findByText(/Shared with Juniors: its players see this green/)).toBeInTheDocument();
   await user.selectOptions(screen.getByRole("combobox", { name: "Shared with" }), "Nobody (only me)");
   await user.click(screen.getByRole("button", { name: "Stop sharing" }));

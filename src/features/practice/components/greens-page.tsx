@@ -76,7 +76,11 @@ export function GreensPage() {
   return (
     <div className="flex flex-col gap-6">
       <title>Greens · Borrowline</title>
-      <PageHeader eyebrow="Practice log" title="Greens" description="The putting surfaces you practise on, yours and your squad’s, with their measured speed. A session on a green starts from its latest Stimp." />
+      <PageHeader
+        eyebrow="Practice log"
+        title="Greens"
+        description="The putting surfaces you practise on, yours and your squad’s, with their measured speed. A session on a green starts from its latest Stimp."
+      />
       {greens.isPending ? <PageSpinner label="Loading your greens" /> : null}
       {greens.isError ? (
         <Alert tone="error" title="Could not load your greens">
@@ -85,7 +89,8 @@ export function GreensPage() {
       ) : null}
       {greens.data && greens.data.items.length === 0 ? (
         <EmptyState title="No greens yet">
-          Add the practice green you use most; measure its speed with a Stimpmeter when you can. A green your coach shares with your squad shows here too.
+          Add the practice green you use most; measure its speed with a Stimpmeter when you can. A green your coach shares with your squad
+          shows here too.
         </EmptyState>
       ) : null}
       {greens.data && greens.data.items.length > 0 ? (
@@ -98,7 +103,11 @@ export function GreensPage() {
               >
                 <span className="flex flex-col gap-0.5">
                   <span className="text-lg font-semibold">{g.name}</span>
-                  {g.squad ? <span className="text-sm text-ink-600">{g.mine ? `Shared with ${g.squad.name}` : `Shared with ${g.squad.name} by ${g.ownerName}`}</span> : null}
+                  {g.squad ? (
+                    <span className="text-sm text-ink-600">
+                      {g.mine ? `Shared with ${g.squad.name}` : `Shared with ${g.squad.name} by ${g.ownerName}`}
+                    </span>
+                  ) : null}
                 </span>
                 <span className="flex items-baseline justify-between gap-2 text-sm text-ink-500">
                   <span className="truncate">{g.locationNote ?? `Added ${formatDate(g.createdAt.slice(0, 10))}`}</span>

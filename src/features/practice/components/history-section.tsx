@@ -30,7 +30,10 @@ export function HistorySection() {
               role="tab"
               aria-selected={tab === t.id}
               onClick={() => tab !== t.id && change(switchTab(query, t.id))}
-              className={clsx("min-h-11 rounded-lg px-4 text-sm font-medium", tab === t.id ? "bg-white text-ink-900 shadow-sm" : "text-ink-600 hover:text-ink-900")}
+              className={clsx(
+                "min-h-11 rounded-lg px-4 text-sm font-medium",
+                tab === t.id ? "bg-white text-ink-900 shadow-sm" : "text-ink-600 hover:text-ink-900",
+              )}
             >
               {t.label}
             </button>
@@ -38,7 +41,11 @@ export function HistorySection() {
         </div>
       </div>
       <div role="tabpanel" aria-label={tab === "sessions" ? "Sessions" : "Putts"}>
-        {tab === "sessions" ? <SessionsTable query={query} onQueryChange={change} /> : <PuttsTable query={query} onQueryChange={change} units={units} />}
+        {tab === "sessions" ? (
+          <SessionsTable query={query} onQueryChange={change} />
+        ) : (
+          <PuttsTable query={query} onQueryChange={change} units={units} />
+        )}
       </div>
     </section>
   );

@@ -12,7 +12,9 @@ export function PracticePage() {
         eyebrow="Practice log"
         title="Practice"
         // Phone first: on a phone the header stays short so "Start logging" shows without scrolling.
-        description={<span className="hidden sm:inline">Log putts on the practice green as you hit them; every putt feeds your make rates.</span>}
+        description={
+          <span className="hidden sm:inline">Log putts on the practice green as you hit them; every putt feeds your make rates.</span>
+        }
         actions={
           <span className="hidden sm:block">
             <ButtonLink to={paths.practiceImport.href()} variant="secondary" size="sm">

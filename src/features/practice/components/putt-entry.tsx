@@ -6,7 +6,13 @@ import { ChipGroup, Stepper } from "../../../components/ui";
 import { DISTANCE_PICKS, distanceLabel, MISS_PICKS, missLabel, samePick, stepDistanceM, stepMissM } from "../utils/distances";
 import { BREAK_LABELS } from "../utils/putt-text";
 
-export type PuttDraft = { distanceM: number; holed: boolean; missSide: MissSide | null; missLengthM: number | null; breakType: BreakType | null };
+export type PuttDraft = {
+  distanceM: number;
+  holed: boolean;
+  missSide: MissSide | null;
+  missLengthM: number | null;
+  breakType: BreakType | null;
+};
 
 export type PuttEntryProps = {
   units: UnitSystem;
@@ -75,7 +81,7 @@ export function PuttEntry({ units, distanceM, onDistanceChange, breakType, onBre
       <button
         type="button"
         onClick={logHoled}
-        className="min-h-20 w-full rounded-2xl bg-ok-600 px-6 text-2xl font-semibold text-white shadow-sm transition-colors hover:bg-ok-800 active:bg-ok-800 focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500"
+        className="min-h-20 w-full rounded-2xl bg-ok-600 px-6 text-2xl font-semibold text-white shadow-sm transition-colors hover:bg-ok-800 focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500 active:bg-ok-800"
       >
         Holed
       </button>
@@ -110,7 +116,11 @@ export function PuttEntry({ units, distanceM, onDistanceChange, breakType, onBre
         </div>
         <div className={clsx("flex flex-col gap-2", !finish && "opacity-60")}>
           <ChipGroup
-            legend={finish ? `How far ${finish === "short" ? "short" : "past"} (${shortUnitLabel(units)})` : `How far (${shortUnitLabel(units)}), after short or long`}
+            legend={
+              finish
+                ? `How far ${finish === "short" ? "short" : "past"} (${shortUnitLabel(units)})`
+                : `How far (${shortUnitLabel(units)}), after short or long`
+            }
             columns={4}
             disabled={!finish}
             options={missPicks.map((v) => ({ value: v, label: String(v) }))}
@@ -131,7 +141,8 @@ export function PuttEntry({ units, distanceM, onDistanceChange, breakType, onBre
         </div>
         {needsLength ? (
           <p id="miss-needs-length" className="text-sm text-ink-700" role="status">
-            Pick how far {finish === "short" ? "short" : "long"} it finished, or tap {finish === "short" ? "Short" : "Long"} again to log the miss without it.
+            Pick how far {finish === "short" ? "short" : "long"} it finished, or tap {finish === "short" ? "Short" : "Long"} again to log
+            the miss without it.
           </p>
         ) : null}
         <button
@@ -139,7 +150,7 @@ export function PuttEntry({ units, distanceM, onDistanceChange, breakType, onBre
           onClick={logMissed}
           disabled={needsLength}
           aria-describedby={needsLength ? "miss-needs-length" : undefined}
-          className="min-h-16 w-full rounded-2xl bg-ink-900 disabled:cursor-not-allowed disabled:opacity-50 px-6 text-xl font-semibold text-sand-50 transition-colors hover:bg-ink-700 active:bg-ink-800 focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500"
+          className="min-h-16 w-full rounded-2xl bg-ink-900 px-6 text-xl font-semibold text-sand-50 transition-colors hover:bg-ink-700 focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-coral-500 active:bg-ink-800 disabled:cursor-not-allowed disabled:opacity-50"
         >
           Missed{missSummary ? " " : null}
           {missSummary ? <span className="block text-sm font-normal text-sand-200">{missSummary}</span> : null}

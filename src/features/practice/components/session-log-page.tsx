@@ -209,7 +209,15 @@ export function SessionLogPage({ sessionId }: { sessionId: string }) {
         onLog={log}
       />
 
-      <Button variant="secondary" size="lg" fullWidth onClick={undo} aria-disabled={!last || undefined} pending={deletePutt.isPending} className="min-h-14">
+      <Button
+        variant="secondary"
+        size="lg"
+        fullWidth
+        onClick={undo}
+        aria-disabled={!last || undefined}
+        pending={deletePutt.isPending}
+        className="min-h-14"
+      >
         Undo last putt
       </Button>
 

@@ -58,7 +58,9 @@ export function StartSessionForm() {
 
   // The green of the latest session (or a single own green) is the likely one: pick it.
   const listed = new Set(greens.data?.items.map((g) => g.id) ?? []);
-  const likely = recent.data?.items.find((x) => x.greenId && listed.has(x.greenId))?.greenId ?? (greens.data?.items.length === 1 ? greens.data.items[0]!.id : null);
+  const likely =
+    recent.data?.items.find((x) => x.greenId && listed.has(x.greenId))?.greenId ??
+    (greens.data?.items.length === 1 ? greens.data.items[0]!.id : null);
   useEffect(() => {
     if (likely && getValues("greenId") === "") setValue("greenId", likely);
   }, [likely, getValues, setValue]);
@@ -126,9 +128,16 @@ export function StartSessionForm() {
           />
         </div>
         <details className="group rounded-xl border-2 border-ink-900/10 bg-white/60 px-4 py-1 open:pb-4">
-          <summary className="flex min-h-12 cursor-pointer items-center font-medium text-ink-800">Conditions, tags and notes (optional)</summary>
+          <summary className="flex min-h-12 cursor-pointer items-center font-medium text-ink-800">
+            Conditions, tags and notes (optional)
+          </summary>
           <div className="mt-2 flex flex-col gap-4">
-            <InputField label="Conditions" placeholder="e.g. firm after a dry week, light breeze" error={formState.errors.conditions?.message ?? fieldErrors.conditions} {...register("conditions")} />
+            <InputField
+              label="Conditions"
+              placeholder="e.g. firm after a dry week, light breeze"
+              error={formState.errors.conditions?.message ?? fieldErrors.conditions}
+              {...register("conditions")}
+            />
             <Controller
               control={control}
               name="tags"

@@ -26,7 +26,10 @@ test("Brede's example: down 981 cm and up 185 cm show a corrected Stimp of 10.2 
   expect(screen.getByText(/a plain average would say 19\.1 ft/)).toBeInTheDocument();
 
   await user.click(screen.getByRole("button", { name: "Save 10.2 ft" }));
-  expect(onSave).toHaveBeenCalledWith({ upFt: expect.closeTo(BREDE_1990.upM / 0.3048, 9), downFt: expect.closeTo(BREDE_1990.downM / 0.3048, 9) });
+  expect(onSave).toHaveBeenCalledWith({
+    upFt: expect.closeTo(BREDE_1990.upM / 0.3048, 9),
+    downFt: expect.closeTo(BREDE_1990.downM / 0.3048, 9),
+  });
 });
 
 test("in feet and inches, rolls the wrong way round are caught before anything is saved", async () => {

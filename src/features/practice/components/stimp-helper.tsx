@@ -6,7 +6,19 @@ import { formatRoll, stimpFeetAndInches, rollFt, twoWayStimp, type RollText } fr
 
 export const STIMP_CAUTION = "Measure green speed only where the course allows it and off the line of play.";
 
-function RollInputs({ legend, hint, value, onChange, units }: { legend: string; hint: string; value: RollText; onChange: (v: RollText) => void; units: UnitSystem }) {
+function RollInputs({
+  legend,
+  hint,
+  value,
+  onChange,
+  units,
+}: {
+  legend: string;
+  hint: string;
+  value: RollText;
+  onChange: (v: RollText) => void;
+  units: UnitSystem;
+}) {
   const [major, minor] = units === "imperial" ? ["ft", "in"] : ["m", "cm"];
   return (
     <fieldset className="flex flex-col gap-1.5">
@@ -67,8 +79,8 @@ export function StimpHelper({ units, onSave, saving = false }: StimpHelperProps)
   return (
     <div className="flex flex-col gap-4">
       <p className="text-sm text-ink-600">
-        On a slope a single roll is too long downhill and too short uphill. Roll from the same spot both ways (average three balls each way) and enter how far the
-        balls rolled; the harmonic mean of the two gives the green’s speed as if it were level (Brede, 1990).
+        On a slope a single roll is too long downhill and too short uphill. Roll from the same spot both ways (average three balls each way)
+        and enter how far the balls rolled; the harmonic mean of the two gives the green’s speed as if it were level (Brede, 1990).
       </p>
       <div className="grid gap-4 sm:grid-cols-2">
         <RollInputs legend="Up-slope roll" hint="The balls rolled up the slope" value={up} onChange={setUp} units={units} />
@@ -82,7 +94,8 @@ export function StimpHelper({ units, onSave, saving = false }: StimpHelperProps)
               {stimpFeetAndInches(result.stimpFt)}
             </p>
             <p className="mt-1 text-sm text-sand-200">
-              From {formatRoll(result.upFt, units)} up and {formatRoll(result.downFt, units)} down; a plain average would say {result.plainAverageFt.toFixed(1)} ft.
+              From {formatRoll(result.upFt, units)} up and {formatRoll(result.downFt, units)} down; a plain average would say{" "}
+              {result.plainAverageFt.toFixed(1)} ft.
             </p>
           </>
         ) : (
@@ -90,7 +103,14 @@ export function StimpHelper({ units, onSave, saving = false }: StimpHelperProps)
         )}
       </div>
       <Alert tone="warning">{STIMP_CAUTION}</Alert>
-      <Button variant="primary" disabled={!result.ok} loading={saving} loadingText="Saving…" onClick={() => result.ok && onSave({ upFt: result.upFt, downFt: result.downFt })} className="sm:self-start">
+      <Button
+        variant="primary"
+        disabled={!result.ok}
+        loading={saving}
+        loadingText="Saving…"
+        onClick={() => result.ok && onSave({ upFt: result.upFt, downFt: result.downFt })}
+        className="sm:self-start"
+      >
         {result.ok ? `Save ${formatStimp(result.stimpFt)} ft` : "Save the reading"}
       </Button>
     </div>

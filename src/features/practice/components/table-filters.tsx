@@ -30,7 +30,17 @@ export function DateRangeFilter({ from, to, onChange }: { from?: string; to?: st
   );
 }
 
-export function SelectFilter({ label, value, options, onChange }: { label: string; value: string; options: ReadonlyArray<{ value: string; label: string }>; onChange: (v: string) => void }) {
+export function SelectFilter({
+  label,
+  value,
+  options,
+  onChange,
+}: {
+  label: string;
+  value: string;
+  options: ReadonlyArray<{ value: string; label: string }>;
+  onChange: (v: string) => void;
+}) {
   return <SelectField label={label} value={value} options={options} onChange={(e) => onChange(e.target.value)} />;
 }
 
@@ -46,7 +56,17 @@ function parse(text: string, units: UnitSystem): number | undefined | null {
 }
 
 /** Shortest and longest putt in the user's unit; applied on Enter or when the field is left. Sends metres. */
-export function DistanceRangeFilter({ minM, maxM, units, onChange }: { minM?: number; maxM?: number; units: UnitSystem; onChange: (minM?: number, maxM?: number) => void }) {
+export function DistanceRangeFilter({
+  minM,
+  maxM,
+  units,
+  onChange,
+}: {
+  minM?: number;
+  maxM?: number;
+  units: UnitSystem;
+  onChange: (minM?: number, maxM?: number) => void;
+}) {
   const [text, setText] = useState({ min: shown(minM, units), max: shown(maxM, units), key: `${minM}|${maxM}|${units}` });
   const key = `${minM}|${maxM}|${units}`;
   if (text.key !== key) setText({ min: shown(minM, units), max: shown(maxM, units), key });
@@ -67,8 +87,23 @@ export function DistanceRangeFilter({ minM, maxM, units, onChange }: { minM?: nu
   };
   return (
     <>
-      <InputField label={`Shortest putt (${unit})`} inputMode="decimal" value={text.min} error={error} onChange={(e) => setText({ ...text, min: e.target.value })} onBlur={apply} onKeyDown={onKey} />
-      <InputField label={`Longest putt (${unit})`} inputMode="decimal" value={text.max} onChange={(e) => setText({ ...text, max: e.target.value })} onBlur={apply} onKeyDown={onKey} />
+      <InputField
+        label={`Shortest putt (${unit})`}
+        inputMode="decimal"
+        value={text.min}
+        error={error}
+        onChange={(e) => setText({ ...text, min: e.target.value })}
+        onBlur={apply}
+        onKeyDown={onKey}
+      />
+      <InputField
+        label={`Longest putt (${unit})`}
+        inputMode="decimal"
+        value={text.max}
+        onChange={(e) => setText({ ...text, max: e.target.value })}
+        onBlur={apply}
+        onKeyDown={onKey}
+      />
     </>
   );
 }

@@ -67,7 +67,8 @@ export function fieldLabel(field: string): string {
 export function uploadProblem(error: unknown): string {
   if (error instanceof ApiError) {
     if (error.status === 413) return "That file is too large: the limit is 1 MB. Split it into smaller files and import them one by one.";
-    if (error.status === 415) return "That file is not a CSV. In your spreadsheet choose Save as / Download as “CSV (UTF-8)”, then try again.";
+    if (error.status === 415)
+      return "That file is not a CSV. In your spreadsheet choose Save as / Download as “CSV (UTF-8)”, then try again.";
     if (error.status === 0) return error.message;
     const fields = Object.values(error.fields);
     return fields.length > 0 && !/invalid row/.test(fields[0]!) ? `${error.message} (${fields.join("; ")})` : error.message;

@@ -13,7 +13,11 @@ export type HoleDraft = { firstPuttM: number; putts: number; leftAfterFirstM: nu
 export function holeBody(d: HoleDraft): HoleBody {
   if (d.putts === 0) return { putts: 0 };
   if (d.putts === 1) return { firstPuttM: d.firstPuttM, putts: 1, leftAfterFirstM: null };
-  return { firstPuttM: d.firstPuttM, putts: d.putts, leftAfterFirstM: d.leftAfterFirstM !== null && d.leftAfterFirstM > 0 ? d.leftAfterFirstM : null };
+  return {
+    firstPuttM: d.firstPuttM,
+    putts: d.putts,
+    leftAfterFirstM: d.leftAfterFirstM !== null && d.leftAfterFirstM > 0 ? d.leftAfterFirstM : null,
+  };
 }
 
 /** The hole to show next: the first one without an entry after the last entered, else the first gap, else 18. */

@@ -10,13 +10,20 @@ export const BREAK_LABELS: Record<BreakType, string> = {
   straight: "Straight",
 };
 
-export type PuttLike = { distanceM: number; holed: boolean; missSide: MissSide | null; missLengthM: number | null; breakType: BreakType | null };
+export type PuttLike = {
+  distanceM: number;
+  holed: boolean;
+  missSide: MissSide | null;
+  missLengthM: number | null;
+  breakType: BreakType | null;
+};
 
 /** "left, 30 cm short" / "12 in long" / "" for a miss without details. */
 export function missText(p: Pick<PuttLike, "missSide" | "missLengthM">, units: UnitSystem): string {
   const parts: string[] = [];
   if (p.missSide) parts.push(p.missSide);
-  if (p.missLengthM !== null && p.missLengthM !== 0) parts.push(`${formatShort(p.missLengthM, units)} ${p.missLengthM < 0 ? "short" : "long"}`);
+  if (p.missLengthM !== null && p.missLengthM !== 0)
+    parts.push(`${formatShort(p.missLengthM, units)} ${p.missLengthM < 0 ? "short" : "long"}`);
   return parts.join(", ");
 }
 
@@ -29,7 +36,9 @@ export function resultText(p: PuttLike, units: UnitSystem): string {
 
 /** One line for a list: "8 ft · Missed left, 12 in long · Uphill". */
 export function puttLine(p: PuttLike, units: UnitSystem): string {
-  return [formatLength(p.distanceM, units), resultText(p, units), p.breakType ? BREAK_LABELS[p.breakType] : null].filter(Boolean).join(" · ");
+  return [formatLength(p.distanceM, units), resultText(p, units), p.breakType ? BREAK_LABELS[p.breakType] : null]
+    .filter(Boolean)
+    .join(" · ");
 }
 
 export type Tally = { putts: number; holed: number; rate: number | null };

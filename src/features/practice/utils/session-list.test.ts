@@ -24,7 +24,11 @@ const queued = (clientId: string, loggedAt: string, paused = true, sessionId = S
 test("queued putts the cache lacks (restored after a reload) are listed once, in logging order, as waiting", () => {
   const rows = listedPutts(
     [stored("a", "c-a", "2024-05-01T10:00:00Z"), stored("pending:c-b", "c-b", "2024-05-01T10:01:00Z")],
-    [queued("c-b", "2024-05-01T10:01:00Z", false), queued("c-c", "2024-05-01T10:02:00Z"), queued("c-x", "2024-05-01T09:00:00Z", true, "other")],
+    [
+      queued("c-b", "2024-05-01T10:01:00Z", false),
+      queued("c-c", "2024-05-01T10:02:00Z"),
+      queued("c-x", "2024-05-01T09:00:00Z", true, "other"),
+    ],
     S,
   );
   expect(rows.map((r) => [r.clientId, r.saved])).toEqual([

@@ -39,8 +39,7 @@ export function formatRoll(ft: number, units: UnitSystem): string {
 }
 
 export type TwoWayResult =
-  | { ok: true; stimpFt: number; plainAverageFt: number; upFt: number; downFt: number }
-  | { ok: false; reason: string };
+  { ok: true; stimpFt: number; plainAverageFt: number; upFt: number; downFt: number } | { ok: false; reason: string };
 
 /**
  * The corrected Stimp of two rolls in opposite directions on a slope: S = 2·S↑·S↓/(S↑ + S↓)
@@ -52,12 +51,16 @@ export function twoWayStimp(upFt: number | null, downFt: number | null): TwoWayR
     ["up-slope", upFt],
     ["down-slope", downFt],
   ] as const) {
-    if (v < ONE_WAY_LIMITS.minFt || v > ONE_WAY_LIMITS.maxFt) return { ok: false, reason: `The ${name} roll must be ${ONE_WAY_LIMITS.minFt}–${ONE_WAY_LIMITS.maxFt} ft.` };
+    if (v < ONE_WAY_LIMITS.minFt || v > ONE_WAY_LIMITS.maxFt)
+      return { ok: false, reason: `The ${name} roll must be ${ONE_WAY_LIMITS.minFt}–${ONE_WAY_LIMITS.maxFt} ft.` };
   }
   if (upFt > downFt) return { ok: false, reason: "The up-slope roll is longer than the down-slope one: check which is which." };
   const stimpFt = stimpFromTwoWays(upFt, downFt);
   if (stimpFt < STIMP_LIMITS.minFt || stimpFt > STIMP_LIMITS.maxFt) {
-    return { ok: false, reason: `These rolls give ${stimpFt.toFixed(1)} ft, outside ${STIMP_LIMITS.minFt}–${STIMP_LIMITS.maxFt} ft: check both.` };
+    return {
+      ok: false,
+      reason: `These rolls give ${stimpFt.toFixed(1)} ft, outside ${STIMP_LIMITS.minFt}–${STIMP_LIMITS.maxFt} ft: check both.`,
+    };
   }
   return { ok: true, stimpFt, plainAverageFt: (upFt + downFt) / 2, upFt, downFt };
 }

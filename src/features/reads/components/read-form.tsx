@@ -154,7 +154,11 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
   const setMeasured = (m: Measured) => {
     const slopeText = formatNumber(m.slopePct, 1);
     const fallText = formatNumber(m.fallLineDeg, 0);
-    memory.current = { ...memory.current, slope: { text: slopeText, si: m.slopePct }, fallLine: { text: fallText, si: normaliseDeg(m.fallLineDeg) } };
+    memory.current = {
+      ...memory.current,
+      slope: { text: slopeText, si: m.slopePct },
+      fallLine: { text: fallText, si: normaliseDeg(m.fallLineDeg) },
+    };
     setValue("slope", slopeText, { shouldValidate: true, shouldDirty: true, shouldTouch: true });
     setValue("fallLine", fallText, { shouldValidate: true, shouldDirty: true, shouldTouch: true });
     debounced.cancel();

@@ -246,7 +246,13 @@ test("a 422 is shown as 'would not stop' with the steepest stoppable slope, not 
 test("a 400 from the API is shown beside the field it names", async () => {
   stubApi(() =>
     HttpResponse.json(
-      { error: { code: "BAD_REQUEST", message: "The request body is not valid.", fields: { distanceM: "distanceM must be at least 0.3 m" } } },
+      {
+        error: {
+          code: "BAD_REQUEST",
+          message: "The request body is not valid.",
+          fields: { distanceM: "distanceM must be at least 0.3 m" },
+        },
+      },
       { status: 400 },
     ),
   );

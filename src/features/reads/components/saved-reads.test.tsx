@@ -10,20 +10,33 @@ import { ReadPage } from "./read-page";
 
 vi.mock("../../../lib/auth-client", () => ({ authClient: {} }));
 
-const me = { user: { id: "u1", name: "Leena Park", email: "leena@example.test", role: "player", emailVerified: true }, preferences: { units: "metric" } };
+const me = {
+  user: { id: "u1", name: "Leena Park", email: "leena@example.test", role: "player", emailVerified: true },
+  preferences: { units: "metric" },
+};
 const result = {
   launchSpeedMps: 1.9,
   startLineDeg: -5,
   aimOffsetM: -0.27,
   entrySpeedMps: 0.67,
   rollPastM: 0.45,
-  flatPuttLengthM: 2.95, aimGiven: "offset", aimNote: null,
+  flatPuttLengthM: 2.95,
+  aimGiven: "offset",
+  aimNote: null,
   breaks: "left-to-right",
   capture: { holed: true, outcome: "holed", maxCaptureSpeedMps: 1.64, marginMps: 0.97 },
   model: { name: "m", v0Mps: 1.83, rollingDecelMps2: 0.55, gravityDecelMps2: 0.14, maxStoppableSlopePct: 7.86 },
 };
 
-type Saved = { id: string; label: string | null; greenId: string | null; greenName: string | null; input: unknown; result: unknown; createdAt: string };
+type Saved = {
+  id: string;
+  label: string | null;
+  greenId: string | null;
+  greenName: string | null;
+  input: unknown;
+  result: unknown;
+  createdAt: string;
+};
 let saved: Saved[] = [];
 let posted: unknown[] = [];
 let greensAnswer: { status: number; body: unknown } = { status: 404, body: { error: { code: "NOT_FOUND", message: "Not found" } } };
@@ -45,13 +58,29 @@ beforeEach(() => {
   window.localStorage.clear();
   network.use(
     meAnswer(me),
-    http.post("/api/reads/solve", () => HttpResponse.json({ ...result, path: [[0, 0], [0, 3]] })),
+    http.post("/api/reads/solve", () =>
+      HttpResponse.json({
+        ...result,
+        path: [
+          [0, 0],
+          [0, 3],
+        ],
+      }),
+    ),
     http.get("/api/greens", () => HttpResponse.json(greensAnswer.body as JsonBodyType, { status: greensAnswer.status })),
     http.get("/api/reads", () => HttpResponse.json({ items: saved })),
     http.post("/api/reads", async ({ request }) => {
       const body = (await request.json()) as { read: unknown; label?: string; greenId?: string };
       posted.push(body);
-      const row = { id: "22222222-2222-4222-8222-222222222222", label: body.label ?? null, greenId: body.greenId ?? null, greenName: body.greenId ? "Top green" : null, input: body.read, result, createdAt: "2025-05-02T10:00:00.000Z" };
+      const row = {
+        id: "22222222-2222-4222-8222-222222222222",
+        label: body.label ?? null,
+        greenId: body.greenId ?? null,
+        greenName: body.greenId ? "Top green" : null,
+        input: body.read,
+        result,
+        createdAt: "2025-05-02T10:00:00.000Z",
+      };
       saved = [row, ...saved];
       return HttpResponse.json(row as JsonBodyType, { status: 201 });
     }),
@@ -87,7 +116,12 @@ test("a signed-in player sees lengths in their account's units, saves a read wit
   await user.type(screen.getByLabelText("Label (optional)"), "  Practice green, left of the flag ");
   await user.click(screen.getByRole("button", { name: "Save this read" }));
   expect(await screen.findByText("Saved. It is in your list below.")).toBeInTheDocument();
-  expect(posted).toEqual([{ read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } }, label: "Practice green, left of the flag" }]);
+  expect(posted).toEqual([
+    {
+      read: { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } },
+      label: "Practice green, left of the flag",
+    },
+  ]);
   const list = await screen.findByRole("region", { name: "Saved reads" });
   expect(await within(list).findByText("Practice green, left of the flag")).toBeInTheDocument();
 });

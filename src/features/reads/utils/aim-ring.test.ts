@@ -82,7 +82,16 @@ test("a side whose ball cannot stop is counted as missing, not drawn", () => {
     canStop: true,
     cells: [
       [
-        { ok: true, aimGiven: "offset", distanceM: 1, fallLineDeg: 0, aimOffsetM: 0, startLineDeg: 0, launchSpeedMps: 1, entrySpeedMps: 0.5 },
+        {
+          ok: true,
+          aimGiven: "offset",
+          distanceM: 1,
+          fallLineDeg: 0,
+          aimOffsetM: 0,
+          startLineDeg: 0,
+          launchSpeedMps: 1,
+          entrySpeedMps: 0.5,
+        },
         { ok: false, distanceM: 1, fallLineDeg: 90, reason: "cannot-stop" },
       ],
     ],

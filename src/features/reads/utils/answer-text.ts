@@ -1,6 +1,15 @@
 // The answer in words, in the user's units. Signed lengths: + = the golfer's right.
 import { HOLE_DIAMETER_M, formatLength, toShortUnit, type UnitSystem } from "../../../../shared/units";
-import { AIM_CENTRE_M, STOPPED_AT_HOLE_MPS, formatSpeed, holeWidthsWords, paceWords, sideOf, startLineAimText, stimpText } from "../../../../shared/format";
+import {
+  AIM_CENTRE_M,
+  STOPPED_AT_HOLE_MPS,
+  formatSpeed,
+  holeWidthsWords,
+  paceWords,
+  sideOf,
+  startLineAimText,
+  stimpText,
+} from "../../../../shared/format";
 
 export { paceWords };
 

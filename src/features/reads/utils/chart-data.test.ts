@@ -17,7 +17,16 @@ const answer: BreakChartAnswer = {
   canStop: true,
   cells: [
     [
-      { ok: true, aimGiven: "offset", distanceM: feetToMetres(3), fallLineDeg: 0, aimOffsetM: 0.001, startLineDeg: 0, launchSpeedMps: 1, entrySpeedMps: 0.6 },
+      {
+        ok: true,
+        aimGiven: "offset",
+        distanceM: feetToMetres(3),
+        fallLineDeg: 0,
+        aimOffsetM: 0.001,
+        startLineDeg: 0,
+        launchSpeedMps: 1,
+        entrySpeedMps: 0.6,
+      },
       {
         ok: true,
         aimGiven: "offset",
@@ -40,7 +49,16 @@ const answer: BreakChartAnswer = {
       },
     ],
     [
-      { ok: true, aimGiven: "offset", distanceM: feetToMetres(6), fallLineDeg: 0, aimOffsetM: 0, startLineDeg: 0, launchSpeedMps: 1.4, entrySpeedMps: 0.6 },
+      {
+        ok: true,
+        aimGiven: "offset",
+        distanceM: feetToMetres(6),
+        fallLineDeg: 0,
+        aimOffsetM: 0,
+        startLineDeg: 0,
+        launchSpeedMps: 1.4,
+        entrySpeedMps: 0.6,
+      },
       {
         ok: true,
         aimGiven: "offset",

@@ -29,10 +29,16 @@ export function ReadNumbers({ read, units }: { read: Read; units: UnitSystem }) 
         detail={`${read.aimOffsetM === null ? "judge it by the start direction" : holeWidthsWords(read.aimOffsetM)}; start line ${Math.abs(read.startLineDeg).toFixed(1)}° ${Math.abs(read.startLineDeg) < 0.05 ? "" : side}; ${breakWords(read.breaks)}`}
       />
       <Row term="Roll-past" value={`${rollPastWords(read.rollPastM, units)} past`} detail="if it misses" />
-      <Row term="Flat-putt length" value={formatLength(Math.max(0, read.flatPuttLengthM), units)} detail="hit it as hard as a flat putt this long" />
+      <Row
+        term="Flat-putt length"
+        value={formatLength(Math.max(0, read.flatPuttLengthM), units)}
+        detail="hit it as hard as a flat putt this long"
+      />
       <Row
         term="At the hole"
-        value={read.entrySpeedMps < STOPPED_AT_HOLE_MPS ? "Just reaches it, dying" : `Still rolling, ${formatSpeed(read.entrySpeedMps, units)}`}
+        value={
+          read.entrySpeedMps < STOPPED_AT_HOLE_MPS ? "Just reaches it, dying" : `Still rolling, ${formatSpeed(read.entrySpeedMps, units)}`
+        }
         detail={`${formatSpeed(read.launchSpeedMps, units)} off the putter`}
       />
     </dl>

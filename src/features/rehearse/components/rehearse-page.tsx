@@ -45,7 +45,8 @@ export function RehearsePage() {
       />
       {replaced.length > 0 ? (
         <Alert tone="warning" className="mb-4">
-          Some numbers in the link could not be used ({replaced.map((k) => READ_WORDS[k]).join(", ")}), so the usual values stand in for them.
+          Some numbers in the link could not be used ({replaced.map((k) => READ_WORDS[k]).join(", ")}), so the usual values stand in for
+          them.
         </Alert>
       ) : null}
       {fromEntrySpeedMps !== null ? (
@@ -56,8 +57,8 @@ export function RehearsePage() {
       ) : null}
       {clampedRollPastM !== null ? (
         <Alert tone="info" className="mb-4">
-          The read finishes {formatShort(clampedRollPastM, units)} past; the pace control stops at {formatShort(putt.rollPastM, units)}, so the
-          firmest pace here is shown.
+          The read finishes {formatShort(clampedRollPastM, units)} past; the pace control stops at {formatShort(putt.rollPastM, units)}, so
+          the firmest pace here is shown.
         </Alert>
       ) : null}
       <RehearseView
@@ -261,4 +262,3 @@ function RehearseView({ putt, units, onPuttChange, onPaceSettled }: ViewProps) {
 function puttWords(p: RehearsePutt, units: UnitSystem): string {
   return `${formatLength(p.distanceM, units)}, ${formatSlope(p.slopePct)}, ${stimpText(p.stimpFt)}, the green ${fallLineWords(p.fallLineDeg)}`;
 }
-

@@ -54,7 +54,13 @@ test("the rehearsed green is typed from the shared read schema, so a new schema 
   expectTypeOf<RehearseGreen>().toMatchTypeOf<Omit<ReadInput, "pace">>();
   expectTypeOf<RehearseGreen>().toMatchTypeOf<ScenePutt>();
   // An extra field survives greenOf in its type, not only at run time.
-  expectTypeOf(greenOf({ ...putt, rollPastM: 0.45, windMps: 3 })).toEqualTypeOf<{ distanceM: number; slopePct: number; fallLineDeg: number; stimpFt: number; windMps: number }>();
+  expectTypeOf(greenOf({ ...putt, rollPastM: 0.45, windMps: 3 })).toEqualTypeOf<{
+    distanceM: number;
+    slopePct: number;
+    fallLineDeg: number;
+    stimpFt: number;
+    windMps: number;
+  }>();
 });
 
 test("an extra field of the read input reaches solveRead and the replay's simulateRoll unchanged", () => {

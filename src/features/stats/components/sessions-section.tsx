@@ -28,7 +28,9 @@ export function SessionsSection({ from, to, playerId, units }: { from?: string; 
     <div className="flex flex-col gap-4">
       <div className="grid gap-3 sm:grid-cols-2">
         <div className="rounded-xl bg-white p-4 ring-1 ring-ink-900/5">
-          <p className="text-sm text-ink-500">Long putts ({lagLength(6, units)} or more) that finished outside {lagLength(1, units)}</p>
+          <p className="text-sm text-ink-500">
+            Long putts ({lagLength(6, units)} or more) that finished outside {lagLength(1, units)}
+          </p>
           <p className="text-3xl font-semibold tabular-nums">{lags.share === null ? "–" : `${Math.round(lags.share * 100)} %`}</p>
           <p className="text-sm text-ink-500">
             {lags.known > 0

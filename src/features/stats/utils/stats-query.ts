@@ -37,7 +37,13 @@ export function statsView(q: URLSearchParams, today: string): StatsView {
   const ww = parseDecimal(q.get("ww"));
   const windowWeeks = ww !== null && Number.isInteger(ww) && ww >= 2 && ww <= 12 ? ww : 4;
   const tb = q.get("tb");
-  const trendBands = tb === null ? null : tb.split(",").map(parseDecimal).filter((n): n is number => n !== null && Number.isInteger(n) && n >= 0 && n < 21);
+  const trendBands =
+    tb === null
+      ? null
+      : tb
+          .split(",")
+          .map(parseDecimal)
+          .filter((n): n is number => n !== null && Number.isInteger(n) && n >= 0 && n < 21);
 
   // Compare: by default the last four weeks against the four before them.
   let bTo = date(q, "bTo") ?? today;

@@ -34,8 +34,8 @@ export function EyeCheck() {
       <div>
         <h2 className="text-lg font-semibold tracking-tight">Check your eye on a real green</h2>
         <p className="text-sm text-ink-600">
-          Stand behind a putt, say how steep it is and which way it falls, then let the phone measure it. Reading slopes by eye is the
-          skill this trains.
+          Stand behind a putt, say how steep it is and which way it falls, then let the phone measure it. Reading slopes by eye is the skill
+          this trains.
         </p>
       </div>
       <div className="grid gap-4 sm:grid-cols-2">

@@ -29,8 +29,26 @@ export default function HistoryChart({ rows, window }: { rows: HistoryRow[]; win
             wrapperStyle={{ fontSize: 13 }}
             iconSize={12}
           />
-          <Line type="monotone" dataKey="score" legendType={seriesLook(0).shape} stroke={seriesLook(0).colour} strokeOpacity={0.5} strokeWidth={1.5} dot={seriesDot(0, 36)} isAnimationActive={false} />
-          <Line type="monotone" dataKey="rollingMean" legendType="plainline" stroke={seriesLook(1).colour} strokeDasharray={seriesLook(1).dash} strokeWidth={3} dot={false} isAnimationActive={false} />
+          <Line
+            type="monotone"
+            dataKey="score"
+            legendType={seriesLook(0).shape}
+            stroke={seriesLook(0).colour}
+            strokeOpacity={0.5}
+            strokeWidth={1.5}
+            dot={seriesDot(0, 36)}
+            isAnimationActive={false}
+          />
+          <Line
+            type="monotone"
+            dataKey="rollingMean"
+            legendType="plainline"
+            stroke={seriesLook(1).colour}
+            strokeDasharray={seriesLook(1).dash}
+            strokeWidth={3}
+            dot={false}
+            isAnimationActive={false}
+          />
         </LineChart>
       </ResponsiveContainer>
     </div>

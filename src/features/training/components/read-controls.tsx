@@ -1,6 +1,16 @@
 // The player's read: an aim (slider, or an amount and a side) and a pace as a flat-putt length (slider or a number).
 import { useId, useState } from "react";
-import { formatLength, fromLongUnit, fromShortUnit, longUnitLabel, parseDecimal, shortUnitLabel, toLongUnit, toShortUnit, type UnitSystem } from "../../../../shared/units";
+import {
+  formatLength,
+  fromLongUnit,
+  fromShortUnit,
+  longUnitLabel,
+  parseDecimal,
+  shortUnitLabel,
+  toLongUnit,
+  toShortUnit,
+  type UnitSystem,
+} from "../../../../shared/units";
 import { aimWords } from "../../../components/green-3d/words";
 
 const inputClass =

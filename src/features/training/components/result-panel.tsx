@@ -26,7 +26,8 @@ function aimErrorWords(e: Ok, units: UnitSystem): string {
 
 function paceErrorWords(e: Ok, distanceM: number, units: UnitSystem): string {
   const share = Math.round((Math.abs(e.paceErrorM) / distanceM) * 100);
-  if (Math.abs(e.paceErrorM) < 0.02) return `Your pace was spot on: hit it as hard as a flat ${formatLength(e.truth.flatPuttLengthM, units)} putt.`;
+  if (Math.abs(e.paceErrorM) < 0.02)
+    return `Your pace was spot on: hit it as hard as a flat ${formatLength(e.truth.flatPuttLengthM, units)} putt.`;
   return `You hit it as hard as a flat ${formatLength(e.yours.flatPuttLengthM, units)} putt; it needed a flat ${formatLength(e.truth.flatPuttLengthM, units)} putt, so you were ${lengthWords(e.paceErrorM, units)} ${e.paceErrorM > 0 ? "firmer" : "softer"} than needed (${share} % of the putt's length).`;
 }
 
@@ -34,7 +35,17 @@ function paceErrorWords(e: Ok, distanceM: number, units: UnitSystem): string {
  * The score and what it is made of, in words. `scored` false (a second read of a putt whose line was seen): no
  * score, the same account of the roll.
  */
-export function ResultPanel({ result, distanceM, units, scored = true }: { result: Ok; distanceM: number; units: UnitSystem; scored?: boolean }) {
+export function ResultPanel({
+  result,
+  distanceM,
+  units,
+  scored = true,
+}: {
+  result: Ok;
+  distanceM: number;
+  units: UnitSystem;
+  scored?: boolean;
+}) {
   return (
     <section aria-labelledby="training-result" className="flex flex-col gap-3 rounded-(--radius-card) bg-ink-900 p-4 text-sand-50 sm:p-5">
       {scored ? (

@@ -75,8 +75,7 @@ test("after the reveal a putt can be read again, but that read is not scored or 
 });
 
 test("a putt the server says was scored before (409) is shown as practice, without a score", async () => {
-  attemptAnswer = () =>
-    apiError(409, "conflict", "already scored", { details: { reason: "already-scored", attemptId: "a0" } });
+  attemptAnswer = () => apiError(409, "conflict", "already scored", { details: { reason: "already-scored", attemptId: "a0" } });
   renderRoute(<TrainPage />, { at: "/train?level=club&seed=77&n=2" });
   await userEvent.click(await screen.findByRole("button", { name: "Reveal the line" }));
   await screen.findByText(/You were scored on this putt before/);
