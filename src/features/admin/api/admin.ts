@@ -1,7 +1,7 @@
 // The admin screens' API (server/routes/admin): users through better-auth's admin plugin, the audit list,
 // and every coach's squads and ladders.
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { AdminCoaching, AdminUser, AdminUsers, AuditEntry } from "../../../../shared/schemas/admin";
+import type { AdminCoaching, AdminUser, AdminUsers, AuditEntry } from "#shared/schemas/admin";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 

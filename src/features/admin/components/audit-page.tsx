@@ -1,4 +1,4 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { Alert, Button, EmptyState, PageHeader } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";

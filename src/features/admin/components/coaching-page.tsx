@@ -1,4 +1,4 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { Alert, Button, Card, CardTitle, EmptyState, PageHeader } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useAdminCoaching } from "../api/admin";

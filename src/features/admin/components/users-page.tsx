@@ -1,4 +1,4 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { toast } from "sonner";
 import { Alert, Button, ConfirmDialog, EmptyState, InputField, PageHeader, SelectField } from "../../../components/ui";

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import type { AuditEntry } from "../../../../shared/schemas/admin";
+import type { AuditEntry } from "#shared/schemas/admin";
 import { auditWords } from "./audit-words";
 
 const entry = (over: Partial<AuditEntry>): AuditEntry => ({

@@ -1,4 +1,4 @@
-import type { AuditEntry } from "../../../../shared/schemas/admin";
+import type { AuditEntry } from "#shared/schemas/admin";
 
 /** One audit entry in plain words: "changed the role of lee@… from player to coach". */
 export function auditWords(e: AuditEntry): string {

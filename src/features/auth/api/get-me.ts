@@ -3,9 +3,9 @@ import { api, ApiError } from "../../../lib/api-client";
 import { apiPaths } from "../../../config/paths";
 import { authKeys } from "./keys";
 
-import type { Role } from "../../../../shared/roles";
-import type { Me, MeResponse, MeUser, Preferences } from "../../../../shared/schemas/me";
-import type { UnitSystem } from "../../../../shared/units";
+import type { Role } from "#shared/roles";
+import type { Me, MeResponse, MeUser, Preferences } from "#shared/schemas/me";
+import type { UnitSystem } from "#shared/units";
 export type { Role };
 /** The answer's types come from shared/schemas/me.ts (the route's response schema); nothing is declared twice. */
 export type Units = UnitSystem;

@@ -1,5 +1,5 @@
 import { useCallback, useSyncExternalStore } from "react";
-import { UNIT_SYSTEMS, type UnitSystem } from "../../../../shared/units";
+import { UNIT_SYSTEMS, type UnitSystem } from "#shared/units";
 import { useMe } from "../api/get-me";
 import { useUpdatePreferences } from "../api/update-preferences";
 

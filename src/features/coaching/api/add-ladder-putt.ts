@@ -3,7 +3,7 @@
 // each carries its clientId, so a repeat is stored once. The run screen folds the waiting putts onto the server's
 // last answer with the shared engine (hooks/use-ladder-run.ts).
 import type { Mutation, QueryClient } from "@tanstack/react-query";
-import type { AssignmentDetail, LadderPuttInput } from "../../../../shared/schemas/assignments";
+import type { AssignmentDetail, LadderPuttInput } from "#shared/schemas/assignments";
 import { apiPaths } from "../../../config/paths";
 import { api, isApiError } from "../../../lib/api-client";
 import { enqueue, outboxRetry, outboxRetryDelay } from "../../../lib/outbox";

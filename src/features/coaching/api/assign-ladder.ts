@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { AssignInput, Assignment } from "../../../../shared/schemas/assignments";
+import type { AssignInput, Assignment } from "#shared/schemas/assignments";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { coachingKeys } from "./keys";

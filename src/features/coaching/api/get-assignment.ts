@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { AssignmentDetail } from "../../../../shared/schemas/assignments";
+import type { AssignmentDetail } from "#shared/schemas/assignments";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { coachingKeys } from "./keys";

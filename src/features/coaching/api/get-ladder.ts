@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { Ladder } from "../../../../shared/schemas/ladders";
+import type { Ladder } from "#shared/schemas/ladders";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { coachingKeys } from "./keys";

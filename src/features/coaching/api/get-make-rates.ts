@@ -1,5 +1,5 @@
 import { queryOptions, useQueries, useQuery } from "@tanstack/react-query";
-import type { MakeRates } from "../../../../shared/schemas/stats";
+import type { MakeRates } from "#shared/schemas/stats";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { coachingKeys } from "./keys";

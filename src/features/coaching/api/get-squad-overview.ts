@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import type { SquadOverview } from "../../../../shared/schemas/squads";
+import type { SquadOverview } from "#shared/schemas/squads";
 import { apiPaths } from "../../../config/paths";
 import { api, downloadFile } from "../../../lib/api-client";
 import { coachingKeys } from "./keys";

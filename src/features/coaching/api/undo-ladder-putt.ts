@@ -1,4 +1,4 @@
-import type { AssignmentDetail } from "../../../../shared/schemas/assignments";
+import type { AssignmentDetail } from "#shared/schemas/assignments";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { Squad, SquadPatch } from "../../../../shared/schemas/squads";
+import type { Squad, SquadPatch } from "#shared/schemas/squads";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { coachingKeys } from "./keys";

@@ -1,7 +1,7 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useId, useState, type FormEvent } from "react";
-import type { Assignment } from "../../../../shared/schemas/assignments";
-import type { Ladder } from "../../../../shared/schemas/ladders";
+import type { Assignment } from "#shared/schemas/assignments";
+import type { Ladder } from "#shared/schemas/ladders";
 import {
   Alert,
   Button,

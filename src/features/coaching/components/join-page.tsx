@@ -1,7 +1,7 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
-import type { InvitationPreview } from "../../../../shared/schemas/squads";
+import type { InvitationPreview } from "#shared/schemas/squads";
 import { Alert, Button, ButtonLink, Card, PageSpinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";

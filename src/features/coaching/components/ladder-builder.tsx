@@ -13,8 +13,8 @@ import {
   type DragEndEvent,
 } from "@dnd-kit/core";
 import { SortableContext, sortableKeyboardCoordinates, verticalListSortingStrategy } from "@dnd-kit/sortable";
-import { FAIL_RULES, rungSchema, type Ladder, type LadderInput } from "../../../../shared/schemas/ladders";
-import type { UnitSystem } from "../../../../shared/units";
+import { FAIL_RULES, rungSchema, type Ladder, type LadderInput } from "#shared/schemas/ladders";
+import type { UnitSystem } from "#shared/units";
 import { Alert, Button, Card, ChoiceGroup, InputField } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";

@@ -1,7 +1,7 @@
 import clsx from "clsx";
-import type { FailRule, PassRule } from "../../../../shared/schemas/ladders";
-import type { BreakType } from "../../../../shared/schemas/putts";
-import { formatLength, type UnitSystem } from "../../../../shared/units";
+import type { FailRule, PassRule } from "#shared/schemas/ladders";
+import type { BreakType } from "#shared/schemas/putts";
+import { formatLength, type UnitSystem } from "#shared/units";
 import { BREAK_TYPE_WORDS, FAIL_RULE_WORDS, rungInWords } from "../utils/rule-words";
 
 export type PreviewRung = { distanceM: number; balls: number; passRule: PassRule; breakType?: BreakType; note?: string } | null;

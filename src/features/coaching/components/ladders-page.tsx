@@ -1,6 +1,6 @@
 import { useNavigate } from "react-router";
 import { toast } from "sonner";
-import type { Ladder } from "../../../../shared/schemas/ladders";
+import type { Ladder } from "#shared/schemas/ladders";
 import { Button, ButtonLink, EmptyState, PageHeader, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useCopyLadder } from "../api/copy-ladder";

@@ -1,8 +1,8 @@
-import { parseDecimal } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
 import { useEffect, useEffectEvent, useId, useState } from "react";
 import clsx from "clsx";
-import type { MissSide } from "../../../../shared/schemas/putts";
-import { fromShortUnit, shortUnitLabel, type UnitSystem } from "../../../../shared/units";
+import type { MissSide } from "#shared/schemas/putts";
+import { fromShortUnit, shortUnitLabel, type UnitSystem } from "#shared/units";
 import { Button } from "../../../components/ui";
 
 type Length = "short" | "long";

@@ -1,7 +1,7 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import clsx from "clsx";
-import type { Assignment } from "../../../../shared/schemas/assignments";
-import { formatLength } from "../../../../shared/units";
+import type { Assignment } from "#shared/schemas/assignments";
+import { formatLength } from "#shared/units";
 import { ButtonLink, EmptyState, PageHeader } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useMyAssignments } from "../api/get-my-assignments";

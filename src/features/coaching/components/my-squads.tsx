@@ -1,4 +1,4 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { toast } from "sonner";
 import { Alert, Card, CardTitle, Spinner } from "../../../components/ui";
 import { useLeaveSquad } from "../api/leave-squad";

@@ -1,7 +1,7 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { toast } from "sonner";
-import { NOTE_MAX } from "../../../../shared/schemas/notes";
+import { NOTE_MAX } from "#shared/schemas/notes";
 import { Alert, Button, Card, CardTitle } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useAddNote, useNotes } from "../api/notes";

@@ -1,7 +1,7 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import type { ReactNode } from "react";
-import type { Assignment } from "../../../../shared/schemas/assignments";
-import { formatLength, type UnitSystem } from "../../../../shared/units";
+import type { Assignment } from "#shared/schemas/assignments";
+import { formatLength, type UnitSystem } from "#shared/units";
 import { Card, CardTitle, EmptyState, PageHeader, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";

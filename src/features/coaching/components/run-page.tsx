@@ -1,8 +1,8 @@
 import { useEffect, useRef, useState } from "react";
 import clsx from "clsx";
-import { step } from "../../../../shared/ladder-engine";
-import type { AssignmentDetail } from "../../../../shared/schemas/assignments";
-import { formatLength, type UnitSystem } from "../../../../shared/units";
+import { step } from "#shared/ladder-engine";
+import type { AssignmentDetail } from "#shared/schemas/assignments";
+import { formatLength, type UnitSystem } from "#shared/units";
 import { Alert, Button, ButtonLink, EmptyState, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";

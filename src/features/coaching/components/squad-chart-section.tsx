@@ -1,5 +1,5 @@
 import { lazy, Suspense, useState } from "react";
-import type { Squad } from "../../../../shared/schemas/squads";
+import type { Squad } from "#shared/schemas/squads";
 import { Alert, Card, CardTitle, ErrorBoundary, SelectField, Spinner } from "../../../components/ui";
 import { useSquadMakeRates } from "../api/get-make-rates";
 import { useUnits } from "../../auth/hooks/use-units";

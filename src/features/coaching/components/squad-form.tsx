@@ -1,7 +1,7 @@
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
-import { squadInputSchema, type SquadInput } from "../../../../shared/schemas/squads";
+import { squadInputSchema, type SquadInput } from "#shared/schemas/squads";
 import { Alert, Button, InputField } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
 

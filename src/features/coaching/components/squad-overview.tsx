@@ -1,4 +1,4 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useMemo, useState } from "react";
 import { toast } from "sonner";
 import {

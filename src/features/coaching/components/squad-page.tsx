@@ -1,8 +1,8 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { useNavigate } from "react-router";
 import { toast } from "sonner";
-import type { Invitation, InvitationStatus, Squad } from "../../../../shared/schemas/squads";
+import type { Invitation, InvitationStatus, Squad } from "#shared/schemas/squads";
 import { Alert, Button, ButtonLink, Card, CardTitle, EmptyState, PageHeader, Spinner, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useDeleteSquad } from "../api/delete-squad";

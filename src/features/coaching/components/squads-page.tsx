@@ -1,6 +1,6 @@
 import { Link, useNavigate } from "react-router";
 import { toast } from "sonner";
-import type { Squad } from "../../../../shared/schemas/squads";
+import type { Squad } from "#shared/schemas/squads";
 import { Card, CardTitle, EmptyState, PageHeader } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useCreateSquad } from "../api/create-squad";

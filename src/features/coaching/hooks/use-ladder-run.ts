@@ -1,8 +1,8 @@
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useMutationState, useQueryClient, type Mutation } from "@tanstack/react-query";
-import { step, type LadderProgress } from "../../../../shared/ladder-engine";
-import type { AssignmentDetail } from "../../../../shared/schemas/assignments";
-import type { MissSide } from "../../../../shared/schemas/putts";
+import { step, type LadderProgress } from "#shared/ladder-engine";
+import type { AssignmentDetail } from "#shared/schemas/assignments";
+import type { MissSide } from "#shared/schemas/putts";
 import { isApiError } from "../../../lib/api-client";
 import { dismissLadderPuttErrors, queueLadderPutt, takeBackLadderPutt, type QueuedLadderPutt } from "../api/add-ladder-putt";
 import { useAssignment } from "../api/get-assignment";

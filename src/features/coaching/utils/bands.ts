@@ -1,4 +1,4 @@
-import { toLongUnit, longUnitLabel, type UnitSystem } from "../../../../shared/units";
+import { toLongUnit, longUnitLabel, type UnitSystem } from "#shared/units";
 
 function edge(m: number, units: UnitSystem): string {
   return String(Math.round(toLongUnit(m, units) * 10) / 10);

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import type { AssignmentSummary } from "../../../../shared/schemas/assignments";
+import type { AssignmentSummary } from "#shared/schemas/assignments";
 import type { CoachedPlayer } from "../api/get-coached-players";
 import { dashboardRows, filterRows } from "./dashboard-rows";
 

@@ -1,10 +1,10 @@
 // The ladder builder's form values (lengths in the user's unit, numbers as typed) and their way to and from
 // the API's LadderInput (SI). Validation is the shared schema's; its messages are placed beside the fields.
-import { parseDecimal } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
 import type { z } from "zod";
-import { holedToPass, ladderInputSchema, type FailRule, type Ladder, type LadderInput } from "../../../../shared/schemas/ladders";
-import type { BreakType } from "../../../../shared/schemas/putts";
-import { formatLength, fromLongUnit, longUnitLabel, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import { holedToPass, ladderInputSchema, type FailRule, type Ladder, type LadderInput } from "#shared/schemas/ladders";
+import type { BreakType } from "#shared/schemas/putts";
+import { formatLength, fromLongUnit, longUnitLabel, toLongUnit, type UnitSystem } from "#shared/units";
 
 export type RungFormValues = {
   /** Distance in the user's long unit (ft or m), as typed. */

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import type { SquadOverview } from "../../../../shared/schemas/squads";
+import type { SquadOverview } from "#shared/schemas/squads";
 import { overviewRows, sgTrendWord } from "./overview-rows";
 
 const overview: SquadOverview = {

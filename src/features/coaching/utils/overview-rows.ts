@@ -1,5 +1,5 @@
 // The squad overview (GET /api/coach/squads/:id/overview) as flat table rows: numbers to sort by, words to show.
-import type { SquadOverview } from "../../../../shared/schemas/squads";
+import type { SquadOverview } from "#shared/schemas/squads";
 
 export type OverviewBand = { recent: number | null; past: number | null; recentN: number; pastN: number; change: number | null };
 export type OverviewRow = {

@@ -1,4 +1,4 @@
-import { invitationInputSchema } from "../../../../shared/schemas/squads";
+import { invitationInputSchema } from "#shared/schemas/squads";
 
 /** Addresses typed or pasted into the invite box: split on commas, semicolons, spaces or lines; each checked
  *  with the shared invitation schema; repeats (in any case) kept once. */

@@ -1,6 +1,6 @@
 import { expect, test } from "vitest";
-import { initialProgress, step } from "../../../../shared/ladder-engine";
-import { feetToMetres } from "../../../../shared/units";
+import { initialProgress, step } from "#shared/ladder-engine";
+import { feetToMetres } from "#shared/units";
 import { ladderSpan, momentWords, passRuleWords, rungInWords, statusKey } from "./rule-words";
 
 const ft = feetToMetres;

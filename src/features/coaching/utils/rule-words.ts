@@ -1,9 +1,9 @@
 // Pass rules, fail rules and rung outcomes in plain words, as coaches and players read them.
-import type { LadderProgress } from "../../../../shared/ladder-engine";
-import type { AssignmentStatus } from "../../../../shared/schemas/assignments";
-import { unknownRule, type FailRule, type PassRule } from "../../../../shared/schemas/ladders";
-import type { BreakType } from "../../../../shared/schemas/putts";
-import { formatLength, type UnitSystem } from "../../../../shared/units";
+import type { LadderProgress } from "#shared/ladder-engine";
+import type { AssignmentStatus } from "#shared/schemas/assignments";
+import { unknownRule, type FailRule, type PassRule } from "#shared/schemas/ladders";
+import type { BreakType } from "#shared/schemas/putts";
+import { formatLength, type UnitSystem } from "#shared/units";
 
 type RungLike = { distanceM: number; balls: number; passRule: PassRule };
 

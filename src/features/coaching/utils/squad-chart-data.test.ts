@@ -1,6 +1,6 @@
 import { expect, test } from "vitest";
-import type { BandRate } from "../../../../shared/schemas/stats";
-import { feetToMetres } from "../../../../shared/units";
+import type { BandRate } from "#shared/schemas/stats";
+import { feetToMetres } from "#shared/units";
 import { playerChartData, squadChartData } from "./squad-chart-data";
 
 const ft = feetToMetres;

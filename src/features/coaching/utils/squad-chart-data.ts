@@ -1,6 +1,6 @@
 // Shapes the make rates of a squad's players into grouped bars: one group per distance band, one bar per player.
-import type { BandRate } from "../../../../shared/schemas/stats";
-import type { UnitSystem } from "../../../../shared/units";
+import type { BandRate } from "#shared/schemas/stats";
+import type { UnitSystem } from "#shared/units";
 import { bandLabel } from "./bands";
 
 export type SquadChartSeries = { playerId: string; name: string; dataKey: string };

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { DevMailList, DevMailMessage } from "../../../../shared/schemas/system";
+import type { DevMailList, DevMailMessage } from "#shared/schemas/system";
 import { api, ApiError } from "../../../lib/api-client";
 import { apiPaths } from "../../../config/paths";
 import { useMe } from "../../auth/api/get-me";

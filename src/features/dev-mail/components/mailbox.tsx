@@ -1,4 +1,4 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { Alert, Button, Card, EmptyState, PageSpinner, textLinkClasses } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
 import { useDevMail, type DevMailMessage } from "../api/get-dev-mail";

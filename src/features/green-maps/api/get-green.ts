@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { Green } from "../../../../shared/schemas/greens";
+import type { Green } from "#shared/schemas/greens";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { greenMapsKeys } from "./keys";

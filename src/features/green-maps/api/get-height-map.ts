@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { HeightMapResponse } from "../../../../shared/schemas/height-map";
+import type { HeightMapResponse } from "#shared/schemas/height-map";
 import { apiPaths } from "../../../config/paths";
 import { api, ApiError } from "../../../lib/api-client";
 import { greenMapsKeys } from "./keys";

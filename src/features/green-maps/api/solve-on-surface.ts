@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import type { SurfaceReadResponse, SurfaceSolveRequest } from "../../../../shared/schemas/height-map";
+import type { SurfaceReadResponse, SurfaceSolveRequest } from "#shared/schemas/height-map";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { greenMapsKeys } from "./keys";

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { HeightMapSummary } from "../../../../shared/schemas/height-map";
+import type { HeightMapSummary } from "#shared/schemas/height-map";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { greenMapsKeys } from "./keys";

@@ -1,6 +1,6 @@
 // A green's height map: upload it, see its summary, tap the ball and the hole on the map, and get the read on that
 // real surface (POST /api/greens/:id/reads/solve), drawn on the map and in 3D.
-import type { HeightMapResponse } from "../../../../shared/schemas/height-map";
+import type { HeightMapResponse } from "#shared/schemas/height-map";
 import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";

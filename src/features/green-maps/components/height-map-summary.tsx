@@ -1,6 +1,6 @@
 import { useState } from "react";
-import type { HeightMapSummary as Summary } from "../../../../shared/schemas/height-map";
-import { formatLength, formatShort, type UnitSystem } from "../../../../shared/units";
+import type { HeightMapSummary as Summary } from "#shared/schemas/height-map";
+import { formatLength, formatShort, type UnitSystem } from "#shared/units";
 import { Button } from "../../../components/ui";
 import { useDeleteHeightMap } from "../api/delete-height-map";
 

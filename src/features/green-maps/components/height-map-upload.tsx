@@ -1,6 +1,6 @@
 // Upload a height map: a CSV grid (rows north to south, with its spacing and south-west corner) or spot heights
 // (x,y,z rows), sent as multipart to PUT /api/greens/:id/height-map. The server's row and column errors are listed.
-import { parseDecimal } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
 import { useId, useState, type FormEvent } from "react";
 import { Alert, Button, ChoiceGroup, InputField } from "../../../components/ui";
 import { useUploadHeightMap } from "../api/upload-height-map";

@@ -1,5 +1,5 @@
 // The key to the map and the 3D view, in plain words.
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { SLOPE_BANDS } from "../utils/slope-ticks";
 
 export function stepWords(m: number, units: UnitSystem): string {

@@ -1,12 +1,12 @@
 // The map of a green with a height map (green-map-page.tsx): place the ball and the hole (tap or keyboard), and see
 // the read on that real surface drawn on the map and in 3D.
-import { parseDecimal } from "../../../../shared/units";
-import { formatStimp } from "../../../../shared/format";
+import { parseDecimal } from "#shared/units";
+import { formatStimp } from "#shared/format";
 import { useMemo, useState } from "react";
 import clsx from "clsx";
-import { surfaceFromGrid } from "../../../../physics";
-import type { HeightMapResponse } from "../../../../shared/schemas/height-map";
-import { formatLength, formatShort, shortUnitLabel, type UnitSystem } from "../../../../shared/units";
+import { surfaceFromGrid } from "#physics";
+import type { HeightMapResponse } from "#shared/schemas/height-map";
+import { formatLength, formatShort, shortUnitLabel, type UnitSystem } from "#shared/units";
 import { aimWords } from "../../../components/green-3d/words";
 import { CameraButtons } from "../../../components/green-3d/camera-buttons";
 import { contourIntervalM } from "../../../components/green-3d/frame";

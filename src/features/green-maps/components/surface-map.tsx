@@ -4,7 +4,7 @@
 import { useId, useMemo, type MouseEvent } from "react";
 import { scaleStep } from "../../../components/putt-diagram/putt-diagram";
 import { contourLines, type HeightRaster } from "../../../components/green-3d/surface-grid";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { mapLayout, screenToGreen } from "../utils/map-view";
 import { shadingDataUrl } from "../utils/shading-image";
 import { SLOPE_BANDS, type SlopeTick } from "../utils/slope-ticks";

@@ -1,5 +1,5 @@
-import { atHoleText } from "../../../../shared/format";
-import { formatLength, formatShort, type UnitSystem } from "../../../../shared/units";
+import { atHoleText } from "#shared/format";
+import { formatLength, formatShort, type UnitSystem } from "#shared/units";
 import { aimWords, holeWidthsWords } from "../../../components/green-3d/words";
 import type { SurfaceReadResponse } from "../api/solve-on-surface";
 

@@ -5,9 +5,9 @@
 // Over 300 lines on purpose (issue 16): one flow (setup, the half turn, the walk, the review) whose stages share the
 // tilt sensor, the compass and the readings taken so far; the grid of spots is its own file (walk-grid.tsx).
 import { useMemo, useRef, useState, type FormEvent } from "react";
-import { SUSPECT_RESIDUAL_PCT, WALK_LIMITS, heightsFromGradients, walkedHeightMap } from "../../../../shared/gradient-map";
-import { correctedGradient, halfTurn, phoneToNorthGradient, type Gradient, type Vec3 } from "../../../../shared/phone-level";
-import { parseDecimal } from "../../../../shared/units";
+import { SUSPECT_RESIDUAL_PCT, WALK_LIMITS, heightsFromGradients, walkedHeightMap } from "#shared/gradient-map";
+import { correctedGradient, halfTurn, phoneToNorthGradient, type Gradient, type Vec3 } from "#shared/phone-level";
+import { parseDecimal } from "#shared/units";
 import { useTiltSensor } from "../../../components/measure/use-tilt-sensor";
 import { Alert, Button, ChoiceGroup, InputField, Spinner } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";

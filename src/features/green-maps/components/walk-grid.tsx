@@ -1,7 +1,7 @@
 // The grid of spots of a walked green (walk-green.tsx), as the golfer sees it, and each spot's place in words.
 import clsx from "clsx";
-import { SUSPECT_RESIDUAL_PCT } from "../../../../shared/gradient-map";
-import { slopeAndFallLine, type Gradient } from "../../../../shared/phone-level";
+import { SUSPECT_RESIDUAL_PCT } from "#shared/gradient-map";
+import { slopeAndFallLine, type Gradient } from "#shared/phone-level";
 
 export type Facing = "mark" | "north";
 export type Grid = { nx: number; ny: number; spacingM: number; facing: Facing };

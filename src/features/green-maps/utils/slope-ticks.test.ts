@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { surfaceFromGrid } from "../../../../physics";
+import { surfaceFromGrid } from "#physics";
 import { SLOPE_BANDS, slopeBand, slopeTicks } from "./slope-ticks";
 
 const bounds = { minX: 0, maxX: 8, minY: 0, maxY: 8 };

@@ -1,6 +1,6 @@
 // The slope on the map, our own way: short ticks of one length laid along the fall line, a bead at the low end, each
 // coloured by how steep the ground is there (a few named bands). Steepness is read from the colour, never the length.
-import type { HeightSurface } from "../../../../physics";
+import type { HeightSurface } from "#physics";
 import type { Bounds } from "../../../components/green-3d/surface-grid";
 
 /** The steepness bands, gentlest first: `maxPct` is the band's upper edge. Colours of our own, keyed in the legend. */

@@ -1,9 +1,9 @@
 // The body of POST /api/greens/:id/reads/solve from what the page holds: the tapped ball and hole (green frame,
 // metres), the Stimp text and the roll-past text in the user's short unit. Null with a reason when it cannot be asked.
-import { parseDecimal } from "../../../../shared/units";
-import { READ_LIMITS } from "../../../../shared/schemas/reads";
-import type { SurfaceSolveRequest } from "../../../../shared/schemas/height-map";
-import { fromShortUnit, type UnitSystem } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
+import { READ_LIMITS } from "#shared/schemas/reads";
+import type { SurfaceSolveRequest } from "#shared/schemas/height-map";
+import { fromShortUnit, type UnitSystem } from "#shared/units";
 
 export const MIN_PUTT_M = 0.3;
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { DispersionResponse } from "../../../../shared/schemas/make-probability";
+import type { DispersionResponse } from "#shared/schemas/make-probability";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { makeProbabilityKeys } from "./keys";

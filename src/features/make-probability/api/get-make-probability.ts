@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import type { MakeProbabilityRequest, MakeProbabilityResponse } from "../../../../shared/schemas/make-probability";
-import type { ReadRequest } from "../../../../shared/schemas/reads";
+import type { MakeProbabilityRequest, MakeProbabilityResponse } from "#shared/schemas/make-probability";
+import type { ReadRequest } from "#shared/schemas/reads";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { makeProbabilityKeys } from "./keys";

@@ -3,7 +3,7 @@
 // since they all finish in the same place. Putt frame, to scale: ball below, hole at (0, D).
 import { useId } from "react";
 import clsx from "clsx";
-import { HOLE_DIAMETER_M, type UnitSystem } from "../../../../shared/units";
+import { HOLE_DIAMETER_M, type UnitSystem } from "#shared/units";
 import { scaleStep } from "../../../components/putt-diagram/putt-diagram";
 
 export const SECOND_PUTT_RING_M = 1;

@@ -2,9 +2,9 @@
 // (POST /api/reads/make-probability), their best pace with a button to use it, the spread used and where it comes
 // from, and where 100 simulated putts finish. While the fall-line dial is dragged a Web Worker simulates the putt
 // for instant feedback; the numbers the panel settles on always come from the API.
-import { formatCount } from "../../../../shared/format";
-import type { ReadRequest } from "../../../../shared/schemas/reads";
-import { formatShort, type UnitSystem } from "../../../../shared/units";
+import { formatCount } from "#shared/format";
+import type { ReadRequest } from "#shared/schemas/reads";
+import { formatShort, type UnitSystem } from "#shared/units";
 import { Alert, Button, Spinner, TextLink } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
 import { useMyDispersion } from "../api/get-dispersion";

@@ -1,6 +1,6 @@
 // A make-probability answer shaped exactly as POST /api/reads/make-probability sends it (see
 // server/routes/make-probability/make-probability.handlers.ts), for component tests.
-import type { DispersionResponse, MakeProbabilityResponse } from "../../../../shared/schemas/make-probability";
+import type { DispersionResponse, MakeProbabilityResponse } from "#shared/schemas/make-probability";
 
 /** 100 finishes: the first `holed` in the hole at (0, 3), then misses spread round it, every fifth beyond 1 m. */
 export function fakeFinishes(holed: number, distanceM = 3): { finishes: [number, number][]; finishHoled: boolean[] } {

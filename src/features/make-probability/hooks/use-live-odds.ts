@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from "react";
-import type { Dispersion } from "../../../../shared/schemas/make-probability";
-import type { ReadRequest } from "../../../../shared/schemas/reads";
+import type { Dispersion } from "#shared/schemas/make-probability";
+import type { ReadRequest } from "#shared/schemas/reads";
 import type { LiveOdds, LiveOddsRequest } from "../utils/live-odds";
 
 /**

@@ -1,6 +1,6 @@
 import { expect, test } from "vitest";
-import { makeProbability } from "../../../../physics";
-import { seededUniform } from "../../../../shared/seeded-random";
+import { makeProbability } from "#physics";
+import { seededUniform } from "#shared/seeded-random";
 import { simulateLiveOdds } from "./live-odds";
 
 const read = { distanceM: 3, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.45 } };

@@ -1,10 +1,10 @@
 // The quick estimate shown while the fall-line dial is dragged: physics' pure Monte Carlo on the shared seeded
 // generator, run in a Web Worker (odds.worker.ts) so the page keeps its 60 fps. The committed answer always comes
 // from POST /api/reads/make-probability.
-import { makeProbability } from "../../../../physics";
-import type { Dispersion } from "../../../../shared/schemas/make-probability";
-import type { ReadRequest } from "../../../../shared/schemas/reads";
-import { seededUniform } from "../../../../shared/seeded-random";
+import { makeProbability } from "#physics";
+import type { Dispersion } from "#shared/schemas/make-probability";
+import type { ReadRequest } from "#shared/schemas/reads";
+import { seededUniform } from "#shared/seeded-random";
 
 import { LIVE_SAMPLES } from "./live-samples";
 

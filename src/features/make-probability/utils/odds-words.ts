@@ -1,7 +1,7 @@
 // Plain words for the odds panel. Probabilities in [0, 1]; spreads as the API gives them (start line in degrees,
 // pace as the σ of ln(actual ÷ intended roll length), shown as a percentage of the roll).
-import { formatCount } from "../../../../shared/format";
-import { formatShort, type UnitSystem } from "../../../../shared/units";
+import { formatCount } from "#shared/format";
+import { formatShort, type UnitSystem } from "#shared/units";
 
 /** "34 %", "under 1 %", "over 99 %": a whole percentage, never a false 0 or 100. */
 export function percentWords(p: number): string {

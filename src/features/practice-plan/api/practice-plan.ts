@@ -1,5 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { AdoptPlanResponse, PracticePlanResponse, StartPlanResponse } from "../../../../shared/schemas/practice-plan";
+import type { AdoptPlanResponse, PracticePlanResponse, StartPlanResponse } from "#shared/schemas/practice-plan";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 

@@ -1,8 +1,8 @@
 import { useNavigate } from "react-router";
-import { formatDate } from "../../../../shared/format";
-import type { PlanBand, PlanReady, PracticePlanResponse } from "../../../../shared/schemas/practice-plan";
-import { TRAINING_LEVELS } from "../../../../shared/training";
-import { formatLength, type UnitSystem } from "../../../../shared/units";
+import { formatDate } from "#shared/format";
+import type { PlanBand, PlanReady, PracticePlanResponse } from "#shared/schemas/practice-plan";
+import { TRAINING_LEVELS } from "#shared/training";
+import { formatLength, type UnitSystem } from "#shared/units";
 import { Alert, Button, ButtonLink, Card, EmptyState, PageSpinner, TableScroller, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";

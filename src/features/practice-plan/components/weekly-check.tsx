@@ -1,7 +1,7 @@
 // The weekly check of a running practice plan (plan-view.tsx): each target band's week against the weeks before.
-import { formatDate } from "../../../../shared/format";
-import type { ActivePlan } from "../../../../shared/schemas/practice-plan";
-import { type UnitSystem } from "../../../../shared/units";
+import { formatDate } from "#shared/format";
+import type { ActivePlan } from "#shared/schemas/practice-plan";
+import { type UnitSystem } from "#shared/units";
 import { ButtonLink, Card, TableScroller } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { bandLabel, MOVE_TEXT, planLadderName, rateWithRange } from "../utils/plan-words";

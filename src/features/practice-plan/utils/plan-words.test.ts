@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { METRES_PER_FOOT } from "../../../../shared/units";
+import { METRES_PER_FOOT } from "#shared/units";
 import { bandLabel, planLadderName, passRuleText, rateWithRange, strokesWords } from "./plan-words";
 
 test("bands read in the user's units, the last one open-ended", () => {

@@ -1,7 +1,7 @@
 // Plain words for the practice plan's numbers, in the user's units.
-import type { BandMove, PlanBand } from "../../../../shared/schemas/practice-plan";
-import type { FailRule, PassRule } from "../../../../shared/schemas/ladders";
-import { longUnitLabel, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import type { BandMove, PlanBand } from "#shared/schemas/practice-plan";
+import type { FailRule, PassRule } from "#shared/schemas/ladders";
+import { longUnitLabel, toLongUnit, type UnitSystem } from "#shared/units";
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
 

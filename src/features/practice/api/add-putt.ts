@@ -1,6 +1,6 @@
 import { useMutation, useMutationState, type Mutation, type QueryClient } from "@tanstack/react-query";
 import { toast } from "sonner";
-import type { BreakType, MissSide, Putt } from "../../../../shared/schemas/putts";
+import type { BreakType, MissSide, Putt } from "#shared/schemas/putts";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { outboxRetry, outboxRetryDelay } from "../../../lib/outbox";

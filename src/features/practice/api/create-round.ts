@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { Round, RoundInput } from "../../../../shared/schemas/rounds";
+import type { Round, RoundInput } from "#shared/schemas/rounds";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { SessionInput } from "../../../../shared/schemas/sessions";
+import type { SessionInput } from "#shared/schemas/sessions";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { Putt } from "../../../../shared/schemas/putts";
+import type { Putt } from "#shared/schemas/putts";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import type { SessionPutts } from "./get-session-putts";

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import type { BreakType, Putt } from "../../../../shared/schemas/putts";
-import type { Page } from "../../../../shared/schemas/sessions";
+import type { BreakType, Putt } from "#shared/schemas/putts";
+import type { Page } from "#shared/schemas/sessions";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

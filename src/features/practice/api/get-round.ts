@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { Round } from "../../../../shared/schemas/rounds";
+import type { Round } from "#shared/schemas/rounds";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

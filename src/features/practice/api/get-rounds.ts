@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import type { RoundSummary } from "../../../../shared/schemas/rounds";
-import type { Page } from "../../../../shared/schemas/sessions";
+import type { RoundSummary } from "#shared/schemas/rounds";
+import type { Page } from "#shared/schemas/sessions";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

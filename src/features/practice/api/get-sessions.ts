@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import type { Page, SessionItem } from "../../../../shared/schemas/sessions";
+import type { Page, SessionItem } from "#shared/schemas/sessions";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

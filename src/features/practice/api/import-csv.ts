@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { CsvImportResult, CsvMapping, CsvRowError } from "../../../../shared/schemas/putts";
+import type { CsvImportResult, CsvMapping, CsvRowError } from "#shared/schemas/putts";
 import { apiPaths } from "../../../config/paths";
 import { api, ApiError } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

@@ -1,5 +1,5 @@
 import { useMutation } from "@tanstack/react-query";
-import type { CsvPreview } from "../../../../shared/schemas/putts";
+import type { CsvPreview } from "#shared/schemas/putts";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 

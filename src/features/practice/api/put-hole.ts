@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { HoleBody, Round } from "../../../../shared/schemas/rounds";
+import type { HoleBody, Round } from "#shared/schemas/rounds";
 import { apiPaths } from "../../../config/paths";
 import { api, ApiError } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { Green, GreenShare } from "../../../../shared/schemas/greens";
+import type { Green, GreenShare } from "#shared/schemas/greens";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { practiceKeys } from "./keys";

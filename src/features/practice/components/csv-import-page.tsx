@@ -1,5 +1,5 @@
 import { useState } from "react";
-import type { CsvImportResult, CsvPreview, CsvRowError } from "../../../../shared/schemas/putts";
+import type { CsvImportResult, CsvPreview, CsvRowError } from "#shared/schemas/putts";
 import { Alert, Button, ButtonLink, Card, CardTitle, PageHeader, SelectField, TableScroller } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { rowErrorsOf, useImportCsv } from "../api/import-csv";

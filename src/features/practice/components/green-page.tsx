@@ -1,7 +1,7 @@
-import { stimpText } from "../../../../shared/format";
+import { stimpText } from "#shared/format";
 import { useState } from "react";
 import { useNavigate } from "react-router";
-import type { Green } from "../../../../shared/schemas/greens";
+import type { Green } from "#shared/schemas/greens";
 import { Alert, Button, ButtonLink, Card, ConfirmDialog, InputField, PageHeader, PageSpinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";

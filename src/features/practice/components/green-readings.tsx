@@ -1,8 +1,8 @@
 // A green's dated Stimp readings on its page (green-page.tsx): the form that adds one and the list that shows them.
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
-import type { Green, StimpReading } from "../../../../shared/schemas/greens";
-import { STIMP_LIMITS } from "../../../../shared/schemas/greens";
+import type { Green, StimpReading } from "#shared/schemas/greens";
+import { STIMP_LIMITS } from "#shared/schemas/greens";
 import { Alert, Button, Card, CardTitle, ChipGroup, ConfirmDialog, InputField } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
 import { errorMessage } from "../../../lib/query-client";
@@ -12,7 +12,7 @@ import { useUnits } from "../../auth/hooks/use-units";
 import { todayIso } from "../utils/dates";
 import { formatRoll, stimpFeetAndInches } from "../utils/stimp";
 import { STIMP_CAUTION, StimpHelper } from "./stimp-helper";
-import { parseDecimal } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
 
 export function ReadingForm({ greenId }: { greenId: string }) {
   const { units } = useUnits();

@@ -1,6 +1,6 @@
 // A green's sharing card on its page (green-page.tsx): the owner, a coach, shares it with one of their squads.
 import { useState } from "react";
-import type { Green } from "../../../../shared/schemas/greens";
+import type { Green } from "#shared/schemas/greens";
 import { Alert, Button, Card, CardTitle, SelectField } from "../../../components/ui";
 import { isApiError } from "../../../lib/api-client";
 import { errorMessage } from "../../../lib/query-client";

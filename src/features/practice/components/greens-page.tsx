@@ -1,4 +1,4 @@
-import { formatDate, stimpText } from "../../../../shared/format";
+import { formatDate, stimpText } from "#shared/format";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Link, useNavigate } from "react-router";

@@ -1,8 +1,8 @@
 // One hole of a round on the round page (round-page.tsx): its first-putt length and putt count, entered and saved.
 import { useState } from "react";
 import clsx from "clsx";
-import type { Round } from "../../../../shared/schemas/rounds";
-import { formatLength, fromLongUnit, longUnitLabel, type UnitSystem } from "../../../../shared/units";
+import type { Round } from "#shared/schemas/rounds";
+import { formatLength, fromLongUnit, longUnitLabel, type UnitSystem } from "#shared/units";
 import { Alert, Button, ChipGroup, Stepper } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useSaveHole } from "../api/put-hole";

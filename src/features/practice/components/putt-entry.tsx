@@ -1,7 +1,7 @@
 import { useState } from "react";
 import clsx from "clsx";
-import { BREAK_TYPES, type BreakType, type MissSide } from "../../../../shared/schemas/putts";
-import { fromLongUnit, fromShortUnit, longUnitLabel, shortUnitLabel, type UnitSystem } from "../../../../shared/units";
+import { BREAK_TYPES, type BreakType, type MissSide } from "#shared/schemas/putts";
+import { fromLongUnit, fromShortUnit, longUnitLabel, shortUnitLabel, type UnitSystem } from "#shared/units";
 import { ChipGroup, Stepper } from "../../../components/ui";
 import { DISTANCE_PICKS, distanceLabel, MISS_PICKS, missLabel, samePick, stepDistanceM, stepMissM } from "../utils/distances";
 import { BREAK_LABELS } from "../utils/putt-text";

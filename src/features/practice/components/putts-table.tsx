@@ -1,4 +1,4 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useMemo, useState } from "react";
 import {
   getCoreRowModel,
@@ -8,8 +8,8 @@ import {
   type SortingState,
   type Updater,
 } from "@tanstack/react-table";
-import { BREAK_TYPES, type Putt } from "../../../../shared/schemas/putts";
-import { formatLength, type UnitSystem } from "../../../../shared/units";
+import { BREAK_TYPES, type Putt } from "#shared/schemas/putts";
+import { formatLength, type UnitSystem } from "#shared/units";
 import { Alert, ConfirmDialog, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";

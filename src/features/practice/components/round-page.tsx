@@ -1,9 +1,9 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { useNavigate } from "react-router";
 import clsx from "clsx";
-import type { Round, RoundHole } from "../../../../shared/schemas/rounds";
-import { formatLength } from "../../../../shared/units";
+import type { Round, RoundHole } from "#shared/schemas/rounds";
+import { formatLength } from "#shared/units";
 import { Alert, Button, ButtonLink, ConfirmDialog, PageSpinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";

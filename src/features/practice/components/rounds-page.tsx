@@ -1,4 +1,4 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { Link, useNavigate } from "react-router";
 import { Alert, Button, Card, CardTitle, EmptyState, InputField, PageHeader, PageSpinner } from "../../../components/ui";

@@ -1,9 +1,9 @@
-import { formatDate, stimpText } from "../../../../shared/format";
+import { formatDate, stimpText } from "#shared/format";
 import { useEffect, useMemo, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import clsx from "clsx";
-import type { BreakType } from "../../../../shared/schemas/putts";
-import { formatLength, fromLongUnit, parseDecimal, type UnitSystem } from "../../../../shared/units";
+import type { BreakType } from "#shared/schemas/putts";
+import { formatLength, fromLongUnit, parseDecimal, type UnitSystem } from "#shared/units";
 import { Alert, Button, ButtonLink, PageSpinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";

@@ -1,4 +1,4 @@
-import { formatDate, formatStimp } from "../../../../shared/format";
+import { formatDate, formatStimp } from "#shared/format";
 import { useMemo, useState } from "react";
 import {
   getCoreRowModel,
@@ -8,7 +8,7 @@ import {
   type SortingState,
   type Updater,
 } from "@tanstack/react-table";
-import type { SessionItem } from "../../../../shared/schemas/sessions";
+import type { SessionItem } from "#shared/schemas/sessions";
 import { Alert, ButtonLink, ConfirmDialog, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { errorMessage } from "../../../lib/query-client";

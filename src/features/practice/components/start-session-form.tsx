@@ -1,10 +1,10 @@
-import { formatStimp, stimpText } from "../../../../shared/format";
+import { formatStimp, stimpText } from "#shared/format";
 import { useEffect, useRef } from "react";
 import { Controller, useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useNavigate } from "react-router";
 import { z } from "zod";
-import { STIMP_LIMITS } from "../../../../shared/schemas/greens";
+import { STIMP_LIMITS } from "#shared/schemas/greens";
 import { Alert, Button, Card, CardTitle, InputField, SelectField, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
@@ -13,7 +13,7 @@ import { useCreateSession } from "../api/create-session";
 import { useGreens } from "../api/get-greens";
 import { useSessions } from "../api/get-sessions";
 import { todayIso } from "../utils/dates";
-import { parseDecimal } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
 
 export const SESSION_TAGS = ["damp", "dry", "windy", "after mowing", "after rolling", "hollow-tined"] as const;
 

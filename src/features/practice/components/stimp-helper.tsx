@@ -1,6 +1,6 @@
-import { formatStimp } from "../../../../shared/format";
+import { formatStimp } from "#shared/format";
 import { useState } from "react";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { Alert, Button, InputField } from "../../../components/ui";
 import { formatRoll, stimpFeetAndInches, rollFt, twoWayStimp, type RollText } from "../utils/stimp";
 

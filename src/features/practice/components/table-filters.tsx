@@ -1,5 +1,5 @@
 import { useState, type KeyboardEvent, type ReactNode } from "react";
-import { fromLongUnit, longUnitLabel, parseDecimal, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import { fromLongUnit, longUnitLabel, parseDecimal, toLongUnit, type UnitSystem } from "#shared/units";
 import { Button, InputField, SelectField } from "../../../components/ui";
 
 /** Filters in a panel that folds away on a phone; says how many are on. */

@@ -1,5 +1,5 @@
 // The CSV import's column mapping as the screen edits it, and what the server's answer means for the player.
-import type { CsvMapping, CsvPreview, CsvRowError } from "../../../../shared/schemas/putts";
+import type { CsvMapping, CsvPreview, CsvRowError } from "#shared/schemas/putts";
 import { ApiError } from "../../../lib/api-client";
 
 export type ColumnField = "date" | "distance" | "holed" | "missSide" | "missLength" | "breakType" | "green" | "session";

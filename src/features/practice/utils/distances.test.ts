@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { METRES_PER_FOOT, METRES_PER_INCH } from "../../../../shared/units";
+import { METRES_PER_FOOT, METRES_PER_INCH } from "#shared/units";
 import { distanceLabel, missLabel, samePick, stepDistanceM, stepMissM } from "./distances";
 
 test("the stepper moves a whole foot, or a quarter metre, and stays on its grid", () => {

@@ -1,6 +1,6 @@
 // Distance steps and quick picks for logging on the green, in the player's units; stored in metres.
-import { fromLongUnit, fromShortUnit, toLongUnit, toShortUnit, type UnitSystem } from "../../../../shared/units";
-import { PUTT_LIMITS } from "../../../../shared/schemas/putts";
+import { fromLongUnit, fromShortUnit, toLongUnit, toShortUnit, type UnitSystem } from "#shared/units";
+import { PUTT_LIMITS } from "#shared/schemas/putts";
 
 /** Quick picks for a putt's length: feet, or metres. */
 export const DISTANCE_PICKS: Record<UnitSystem, readonly number[]> = {

@@ -1,6 +1,6 @@
 // Logging a round on the course, hole by hole: what a few taps turn into for PUT /api/rounds/:id/holes/:n.
-import type { HoleBody, RoundHole } from "../../../../shared/schemas/rounds";
-import type { UnitSystem } from "../../../../shared/units";
+import type { HoleBody, RoundHole } from "#shared/schemas/rounds";
+import type { UnitSystem } from "#shared/units";
 
 /** Leave after the first putt: feet, or metres. */
 export const LEAVE_PICKS: Record<UnitSystem, readonly number[]> = { imperial: [1, 2, 3, 4, 6, 10], metric: [0.3, 0.6, 1, 1.5, 2, 3] };

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { METRES_PER_FOOT, METRES_PER_INCH } from "../../../../shared/units";
+import { METRES_PER_FOOT, METRES_PER_INCH } from "#shared/units";
 import { percent, puttLine, resultText, tally, waitingText } from "./putt-text";
 
 const base = { distanceM: 8 * METRES_PER_FOOT, holed: false, missSide: null, missLengthM: null, breakType: null } as const;

@@ -1,6 +1,6 @@
 // Words for a logged putt and for a session's running tally.
-import type { BreakType, MissSide } from "../../../../shared/schemas/putts";
-import { formatLength, formatShort, type UnitSystem } from "../../../../shared/units";
+import type { BreakType, MissSide } from "#shared/schemas/putts";
+import { formatLength, formatShort, type UnitSystem } from "#shared/units";
 
 export const BREAK_LABELS: Record<BreakType, string> = {
   uphill: "Uphill",

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import type { Putt } from "../../../../shared/schemas/putts";
+import type { Putt } from "#shared/schemas/putts";
 import type { NewPutt } from "../api/add-putt";
 import { listedPutts } from "./session-list";
 

@@ -1,6 +1,6 @@
 // What the logging screen lists: the putts the server (or the optimistic update) has, plus queued putts restored
 // after a reload that the cache does not know yet, in the order they were logged.
-import type { Putt } from "../../../../shared/schemas/putts";
+import type { Putt } from "#shared/schemas/putts";
 import { pendingPutt, type NewPutt } from "../api/add-putt";
 
 export type ListedPutt = Putt & { saved: "yes" | "waiting" | "sending" };

@@ -1,8 +1,8 @@
 // The Stimp helper's arithmetic: two rolls on a slope entered in ft + in or m + cm, corrected with Brede's formula
 // (physics owns it, and the server uses the same function on save).
-import { stimpFromTwoWays } from "../../../../physics";
-import { ONE_WAY_LIMITS, STIMP_LIMITS } from "../../../../shared/schemas/greens";
-import { METRES_PER_FOOT, parseDecimal, type UnitSystem } from "../../../../shared/units";
+import { stimpFromTwoWays } from "#physics";
+import { ONE_WAY_LIMITS, STIMP_LIMITS } from "#shared/schemas/greens";
+import { METRES_PER_FOOT, parseDecimal, type UnitSystem } from "#shared/units";
 
 /** One roll as typed: feet and inches, or metres and centimetres. Empty parts count as 0. */
 export type RollText = { major: string; minor: string };

@@ -1,11 +1,11 @@
 // The history tables keep their state in the URL query (a shared link or a reload shows the same rows):
 // tab, sort, page and the filters. The server sorts, filters and pages; these turn the query into API params.
 import type { SortingState } from "@tanstack/react-table";
-import { BREAK_TYPES, PUTT_SORTS, type BreakType } from "../../../../shared/schemas/putts";
-import { SESSION_SORTS } from "../../../../shared/schemas/sessions";
+import { BREAK_TYPES, PUTT_SORTS, type BreakType } from "#shared/schemas/putts";
+import { SESSION_SORTS } from "#shared/schemas/sessions";
 import type { PuttListParams, PuttSort } from "../api/get-putts";
 import type { SessionListParams, SessionSort } from "../api/get-sessions";
-import { parseDecimal } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
 
 export const SESSION_PAGE_SIZE = 20;
 export const PUTT_PAGE_SIZE = 25;

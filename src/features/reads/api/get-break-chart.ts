@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import type { ChartRequest, ChartResponse } from "../../../../shared/schemas/reads";
+import type { ChartRequest, ChartResponse } from "#shared/schemas/reads";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { readsKeys } from "./keys";

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { apiPaths } from "../../../config/paths";
 import { ApiError, api } from "../../../lib/api-client";
-import type { GreenList } from "../../../../shared/schemas/greens";
+import type { GreenList } from "#shared/schemas/greens";
 import { readsKeys } from "./keys";
 
 /** What saving a read needs of a green. */

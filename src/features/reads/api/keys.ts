@@ -1,5 +1,5 @@
 // Query keys for reads. Mutations invalidate `readsKeys.saved()`; everything here sits under `readsKeys.all`.
-import type { ChartRequest, ReadRequest } from "../../../../shared/schemas/reads";
+import type { ChartRequest, ReadRequest } from "#shared/schemas/reads";
 
 export const readsKeys = {
   all: ["reads"] as const,

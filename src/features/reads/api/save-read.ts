@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { SavedRead, SaveReadInput } from "../../../../shared/schemas/reads";
+import type { SavedRead, SaveReadInput } from "#shared/schemas/reads";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { readsKeys } from "./keys";

@@ -1,7 +1,7 @@
 // The aim-spot picture: a plan of the green around the hole (uphill at the top) with, for each length, the aim spots
 // of putts coming from every side joined into one closed line. A chosen side is picked out, with its numbers.
 import { useId, useState } from "react";
-import { formatShort, toShortUnit, shortUnitLabel, type UnitSystem } from "../../../../shared/units";
+import { formatShort, toShortUnit, shortUnitLabel, type UnitSystem } from "#shared/units";
 import { BALL_SIDES, aimRings, gridStepM, type AimRing } from "../utils/aim-ring";
 import type { BreakChartAnswer } from "../utils/chart-data";
 import { distanceHeading } from "../utils/chart-data";

@@ -1,6 +1,6 @@
 import { useEffect, useState } from "react";
-import type { ReadResponse } from "../../../../shared/schemas/reads";
-import { formatLength, formatShort, type UnitSystem } from "../../../../shared/units";
+import type { ReadResponse } from "#shared/schemas/reads";
+import { formatLength, formatShort, type UnitSystem } from "#shared/units";
 import { aimWords } from "../utils/answer-text";
 
 export type AnswerBarProps = { read: ReadResponse | undefined; cannotStop: boolean; units: UnitSystem; targetId: string };

@@ -1,7 +1,7 @@
 import { useState } from "react";
 import clsx from "clsx";
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { longUnitLabel, shortUnitLabel, type UnitSystem } from "../../../../shared/units";
+import { longUnitLabel, shortUnitLabel, type UnitSystem } from "#shared/units";
 import { seriesKey, toChartSeries, type BreakChartAnswer } from "../utils/chart-data";
 import { directionHeading } from "../utils/directions";
 

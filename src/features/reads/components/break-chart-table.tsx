@@ -1,6 +1,6 @@
 import clsx from "clsx";
 import { TableScroller } from "../../../components/ui";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { toChartTable, type BreakChartAnswer } from "../utils/chart-data";
 
 export type BreakChartTableProps = { answer: BreakChartAnswer; units: UnitSystem; caption: string };

@@ -2,7 +2,7 @@ import { lazy, Suspense, useEffect, useLayoutEffect, useMemo, useRef } from "rea
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useSearchParams } from "react-router";
-import type { ChartRequest } from "../../../../shared/schemas/reads";
+import type { ChartRequest } from "#shared/schemas/reads";
 import { Alert, Button, ButtonLink, Card, ErrorBoundary, InputField, PageHeader, PageSpinner, Spinner } from "../../../components/ui";
 import { useBreakChart } from "../api/get-break-chart";
 import { useUnits } from "../../auth/hooks/use-units";
@@ -17,7 +17,7 @@ import {
   type ChartFormValues,
   type ExactMemory,
 } from "../utils/read-form";
-import { formatSlope, formatSpeed, stimpText } from "../../../../shared/format";
+import { formatSlope, formatSpeed, stimpText } from "#shared/format";
 import { paths } from "../../../config/paths";
 import { decodeReadQueryChecked, encodeReadQuery, isCompleteReadQuery, type ReadValues } from "../../../lib/read-url";
 import { ringFallLineDegs, ringLengthsM } from "../utils/aim-ring";

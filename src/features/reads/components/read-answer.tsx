@@ -1,7 +1,7 @@
 import clsx from "clsx";
 import { PuttDiagram } from "../../../components/putt-diagram/putt-diagram";
-import type { ReadResponse } from "../../../../shared/schemas/reads";
-import type { UnitSystem } from "../../../../shared/units";
+import type { ReadResponse } from "#shared/schemas/reads";
+import type { UnitSystem } from "#shared/units";
 import { aimWords, captureWords, paceWords } from "../utils/answer-text";
 import { breakWords } from "../utils/directions";
 

@@ -6,7 +6,7 @@ import { useForm, useWatch, type FieldErrors } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import clsx from "clsx";
 import { Button, InputField } from "../../../components/ui";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { useDebouncedCallback } from "../hooks/use-debounced-callback";
 import { NAMED_DIRECTIONS, describeFallLine, normaliseDeg } from "../utils/directions";
 import {

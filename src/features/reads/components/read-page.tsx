@@ -4,16 +4,16 @@ import { useSearchParams } from "react-router";
 // millisecond a read), so the line follows the finger at 60 fps; the answer the page commits to always comes from
 // POST /api/reads/solve through TanStack Query once the dial is let go or typing pauses. The engine is fetched the
 // first time the dial moves, not with the page (issue 18: the first page loads only what it shows).
-import type { solveRead as SolveRead } from "../../../../physics/solve-read";
-import type { ReadRequest, ReadResponse } from "../../../../shared/schemas/reads";
-import type { UnitSystem } from "../../../../shared/units";
+import type { solveRead as SolveRead } from "#physics/solve-read";
+import type { ReadRequest, ReadResponse } from "#shared/schemas/reads";
+import type { UnitSystem } from "#shared/units";
 import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useSolveRead } from "../api/solve-read";
 import { useUnits } from "../../auth/hooks/use-units";
 import { cannotStopWords } from "../utils/answer-text";
-import { maxStoppableSlopeOf } from "../../../../shared/errors";
+import { maxStoppableSlopeOf } from "#shared/errors";
 import { formFieldForApi, type NumericField } from "../utils/read-form";
 import { decodeReadQuery, encodeReadQuery, isCompleteReadQuery, toReadRequest, type ReadValues } from "../../../lib/read-url";
 import { AnswerBar } from "./answer-bar";
@@ -24,7 +24,7 @@ import { SaveReadPanel } from "./save-read-panel";
 import { UnitsSwitch } from "./units-switch";
 
 let engine: Promise<typeof SolveRead> | null = null;
-const loadEngine = () => (engine ??= import("../../../../physics/solve-read").then((m) => m.solveRead));
+const loadEngine = () => (engine ??= import("#physics/solve-read").then((m) => m.solveRead));
 
 function previewRead(solve: typeof SolveRead | null, values: ReadValues | null): ReadResponse | null {
   if (!solve || !values) return null;

@@ -1,7 +1,7 @@
-import { stimpText } from "../../../../shared/format";
+import { stimpText } from "#shared/format";
 import { useId, useState, type FormEvent } from "react";
 import { Alert, Button, InputField, SelectField } from "../../../components/ui";
-import type { ReadRequest } from "../../../../shared/schemas/reads";
+import type { ReadRequest } from "#shared/schemas/reads";
 import { useGreenChoices } from "../api/get-greens";
 import { useSaveRead } from "../api/save-read";
 

@@ -1,10 +1,10 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { Alert, Button, ButtonLink, EmptyState, Spinner } from "../../../components/ui";
 import { paths } from "../../../config/paths";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { useDeleteRead } from "../api/delete-read";
-import type { SavedRead } from "../../../../shared/schemas/reads";
+import type { SavedRead } from "#shared/schemas/reads";
 import { useSavedReads } from "../api/get-saved-reads";
 import { aimWords, readInputSummary } from "../utils/answer-text";
 import { describeFallLine } from "../utils/directions";

@@ -1,6 +1,6 @@
 import { useId } from "react";
 import clsx from "clsx";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 
 const options: ReadonlyArray<{ value: UnitSystem; label: string; long: string }> = [
   { value: "imperial", label: "ft · in", long: "Feet and inches" },

@@ -1,6 +1,6 @@
 import { expect, test } from "vitest";
-import { breakChart } from "../../../../physics";
-import { feetToMetres } from "../../../../shared/units";
+import { breakChart } from "#physics";
+import { feetToMetres } from "#shared/units";
 import type { BreakChartAnswer } from "./chart-data";
 import { RING_BEARINGS_DEG, aimRings, fallLineForBearing, ringFallLineDegs, ringLengthsM, spotOnPlan } from "./aim-ring";
 

@@ -5,7 +5,7 @@
 // Plan frame (metres, hole at the origin): y points uphill (against the fall line), x to the right of a person
 // standing below the hole looking up the slope. A ball sits at bearing β, clockwise from straight uphill of the
 // hole: β = 0 is a ball above the hole (a downhill putt), 90 to its right, 180 below it (an uphill putt).
-import { feetToMetres, type UnitSystem } from "../../../../shared/units";
+import { feetToMetres, type UnitSystem } from "#shared/units";
 import type { BreakChartAnswer } from "./chart-data";
 
 /** Lengths the picture draws: 3, 6, 10, 15 and 20 ft, or 1, 2, 3, 5 and 7 m. */

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { HOLE_DIAMETER_M, inchesToMetres } from "../../../../shared/units";
+import { HOLE_DIAMETER_M, inchesToMetres } from "#shared/units";
 import { aOrAn, aimWords, formatAim, captureWords, cannotStopWords, paceWords } from "./answer-text";
 
 test("an aim outside the hole is given from the edge, and from the centre in hole widths", () => {

@@ -1,5 +1,5 @@
 // The answer in words, in the user's units. Signed lengths: + = the golfer's right.
-import { HOLE_DIAMETER_M, formatLength, toShortUnit, type UnitSystem } from "../../../../shared/units";
+import { HOLE_DIAMETER_M, formatLength, toShortUnit, type UnitSystem } from "#shared/units";
 import {
   AIM_CENTRE_M,
   STOPPED_AT_HOLE_MPS,
@@ -9,7 +9,7 @@ import {
   sideOf,
   startLineAimText,
   stimpText,
-} from "../../../../shared/format";
+} from "#shared/format";
 
 export { paceWords };
 

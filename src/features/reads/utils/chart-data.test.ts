@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { feetToMetres } from "../../../../shared/units";
+import { feetToMetres } from "#shared/units";
 import {
   CHART_DIRECTIONS_DEG,
   cannotStopCount,

@@ -1,7 +1,7 @@
 // Pure data shaping for the break chart: what to ask the API for, and how to lay its answer out as a table and as
 // chart series in the user's units.
-import { feetToMetres, metresToFeet, shortUnitLabel, toShortUnit, type UnitSystem } from "../../../../shared/units";
-import type { ChartCellAnswer, ChartResponse } from "../../../../shared/schemas/reads";
+import { feetToMetres, metresToFeet, shortUnitLabel, toShortUnit, type UnitSystem } from "#shared/units";
+import type { ChartCellAnswer, ChartResponse } from "#shared/schemas/reads";
 import { directionHeading } from "./directions";
 
 /** Every 30°, clockwise from straight downhill. */

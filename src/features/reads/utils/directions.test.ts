@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { solveRead } from "../../../../physics";
+import { solveRead } from "#physics";
 import { NAMED_DIRECTIONS, angleFromPoint, describeFallLine, directionHeading, fallLineValueText, normaliseDeg } from "./directions";
 
 // What each named direction means is checked against the engine itself: "downhill" names must give a putt that

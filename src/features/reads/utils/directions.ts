@@ -4,7 +4,7 @@
 // golfer (an uphill putt), 270 = it falls to the left. So 45° lies between "away" and "right": downhill, falling
 // right; 135° lies between "right" and "toward you": uphill, falling right.
 
-import { describeFallLine } from "../../../../shared/format";
+import { describeFallLine } from "#shared/format";
 
 export type NamedDirection = { deg: number; label: string; detail: string };
 

@@ -1,7 +1,7 @@
 // The read and the chart worked out in the browser, with the same physics and in the same shape as the server's
 // answer: used when the server cannot be reached (no signal on the course), loaded only then.
 import type { z } from "zod";
-import { answerChart, answerRead } from "../../../../shared/read-answers";
+import { answerChart, answerRead } from "#shared/read-answers";
 import {
   chartRequestSchema,
   readRequestSchema,
@@ -9,7 +9,7 @@ import {
   type ChartResponse,
   type ReadRequest,
   type ReadResponse,
-} from "../../../../shared/schemas/reads";
+} from "#shared/schemas/reads";
 import { toApiError } from "../../../lib/api-client";
 
 /** The server's 400 for input it would refuse, so the page explains it the same way offline. */

@@ -1,6 +1,6 @@
 import { expect, test } from "vitest";
 import fc from "fast-check";
-import { READ_LIMITS } from "../../../../shared/schemas/reads";
+import { READ_LIMITS } from "#shared/schemas/reads";
 import { convertFormValues, fieldLimits, formFieldForApi, fromFormValues, parseNumber, readFormSchema, toFormValues } from "./read-form";
 import { defaultReadValues, toReadRequest } from "../../../lib/read-url";
 

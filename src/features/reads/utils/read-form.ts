@@ -2,7 +2,7 @@
 // never drifts: a field remembers the exact SI value behind the text it shows, and while the text is unchanged
 // that exact value is used (10 ft → "3.05 m" → back to "10 ft", not 10.01).
 import { z } from "zod";
-import { READ_LIMITS } from "../../../../shared/schemas/reads";
+import { READ_LIMITS } from "#shared/schemas/reads";
 import {
   fromLongUnit,
   fromShortUnit,
@@ -14,7 +14,7 @@ import {
   toLongUnit,
   toShortUnit,
   type UnitSystem,
-} from "../../../../shared/units";
+} from "#shared/units";
 import type { PaceMode, ReadValues } from "../../../lib/read-url";
 
 export type ReadFormValues = {

@@ -1,5 +1,5 @@
 import { useId } from "react";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { paceFeel, rollPastWords } from "../utils/pace-words";
 import { ROLL_PAST_RANGE_M } from "../utils/rehearse-putt";
 

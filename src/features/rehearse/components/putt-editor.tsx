@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from "react";
-import { READ_LIMITS } from "../../../../shared/schemas/reads";
-import { fromLongUnit, longUnitLabel, parseDecimal, toLongUnit, type UnitSystem } from "../../../../shared/units";
-import { formatNumber } from "../../../../shared/format";
+import { READ_LIMITS } from "#shared/schemas/reads";
+import { fromLongUnit, longUnitLabel, parseDecimal, toLongUnit, type UnitSystem } from "#shared/units";
+import { formatNumber } from "#shared/format";
 import { Button, InputField } from "../../../components/ui";
 import type { RehearsePutt } from "../utils/rehearse-putt";
 

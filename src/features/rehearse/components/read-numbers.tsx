@@ -1,6 +1,6 @@
-import { STOPPED_AT_HOLE_MPS, formatSpeed } from "../../../../shared/format";
-import type { Read } from "../../../../physics";
-import { formatLength, type UnitSystem } from "../../../../shared/units";
+import { STOPPED_AT_HOLE_MPS, formatSpeed } from "#shared/format";
+import type { Read } from "#physics";
+import { formatLength, type UnitSystem } from "#shared/units";
 import { aimWords, holeWidthsWords } from "../../../components/green-3d/words";
 import { rollPastWords } from "../utils/pace-words";
 

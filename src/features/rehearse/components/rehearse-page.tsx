@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useState } from "react";
 import { useSearchParams } from "react-router";
-import { formatLength, formatSlope, formatSpeed, stimpText } from "../../../../shared/format";
-import { formatShort, type UnitSystem } from "../../../../shared/units";
+import { formatLength, formatSlope, formatSpeed, stimpText } from "#shared/format";
+import { formatShort, type UnitSystem } from "#shared/units";
 import { CameraButtons } from "../../../components/green-3d/camera-buttons";
 import { contourIntervalM, greenShape, heightRange } from "../../../components/green-3d/frame";
 import { GreenView } from "../../../components/green-3d/green-view";

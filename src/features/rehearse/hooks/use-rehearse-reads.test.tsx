@@ -3,9 +3,9 @@
 import "@testing-library/jest-dom/vitest";
 import { cleanup, renderHook, screen } from "@testing-library/react";
 import { afterEach, expect, expectTypeOf, test, vi } from "vitest";
-import * as physics from "../../../../physics";
-import type { ReadInput } from "../../../../physics";
-import type { ReadRequest } from "../../../../shared/schemas/reads";
+import * as physics from "#physics";
+import type { ReadInput } from "#physics";
+import type { ReadRequest } from "#shared/schemas/reads";
 import type { GreenViewProps } from "../../../components/green-3d/green-view";
 import type { ScenePutt } from "../../../components/green-3d/scene-types";
 import { renderRoute } from "../../../testing/render";
@@ -13,7 +13,7 @@ import { RehearsePage } from "../components/rehearse-page";
 import type { RehearsePutt } from "../utils/rehearse-putt";
 import { greenOf, replayOf, useRehearseReads, type RehearseGreen } from "./use-rehearse-reads";
 
-vi.mock("../../../../physics", async (importOriginal) => {
+vi.mock("#physics", async (importOriginal) => {
   const actual = await importOriginal<typeof physics>();
   return { ...actual, solveRead: vi.fn(actual.solveRead), simulateRoll: vi.fn(actual.simulateRoll) };
 });

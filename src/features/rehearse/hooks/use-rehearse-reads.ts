@@ -1,6 +1,6 @@
 import { useMemo } from "react";
-import { simulateRoll, solveRead, type Read, type ReadResult } from "../../../../physics";
-import type { ReadRequest } from "../../../../shared/schemas/reads";
+import { simulateRoll, solveRead, type Read, type ReadResult } from "#physics";
+import type { ReadRequest } from "#shared/schemas/reads";
 import type { Replay } from "../../../components/green-3d/scene-types";
 import { ROLL_PAST_RANGE_M } from "../utils/rehearse-putt";
 

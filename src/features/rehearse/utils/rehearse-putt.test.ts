@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { solveRead } from "../../../../physics";
+import { solveRead } from "#physics";
 import { ROLL_PAST_RANGE_M, decodeRehearse, encodeRehearse } from "./rehearse-putt";
 
 test("a read's link decodes to that putt in SI, and encodes back to the same link", () => {

@@ -1,8 +1,8 @@
 // The putt on the rehearse page: a read with its pace as a roll-past (the pace control's own scale). Its URL is
 // the one read codec (src/lib/read-url.ts), so a read, a chart and rehearse link to each other unchanged.
-import { solveRead } from "../../../../physics/solve-read";
-import type { ReadRequest } from "../../../../shared/schemas/reads";
-import type { UnitSystem } from "../../../../shared/units";
+import { solveRead } from "#physics/solve-read";
+import type { ReadRequest } from "#shared/schemas/reads";
+import type { UnitSystem } from "#shared/units";
 import { decodeReadQueryChecked, encodeReadQuery, type ReadKey, type ReadValues } from "../../../lib/read-url";
 
 /** The read input of the shared schema with its pace as a roll-past (a field added to the schema is part of it). */

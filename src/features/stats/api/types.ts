@@ -1,7 +1,7 @@
 // The stats API's answers (server/routes/stats/stats.handlers.ts) and the parameters the page sends.
 // The answers' types are the routes' response schemas (shared/schemas/stats.ts, rounds.ts): none is declared here.
-import type { Page } from "../../../../shared/schemas/sessions";
-import type { RoundSummary } from "../../../../shared/schemas/rounds";
+import type { Page } from "#shared/schemas/sessions";
+import type { RoundSummary } from "#shared/schemas/rounds";
 import type {
   BandRate,
   Baseline,
@@ -15,8 +15,8 @@ import type {
   SessionStats,
   StatSource,
   Trend,
-} from "../../../../shared/schemas/stats";
-import type { Rate } from "../../../../shared/stats/wilson";
+} from "#shared/schemas/stats";
+import type { Rate } from "#shared/stats/wilson";
 
 export type {
   BandRate,

@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { longUnitLabel, type UnitSystem } from "../../../../shared/units";
+import { longUnitLabel, type UnitSystem } from "#shared/units";
 import { Button, InputField } from "../../../components/ui";
 import { bandLabel, DEFAULT_BAND_EDGES_M, edgesFromText, edgesToText } from "../utils/bands";
 

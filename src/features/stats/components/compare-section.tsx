@@ -1,6 +1,6 @@
-import { formatDate } from "../../../../shared/format";
+import { formatDate } from "#shared/format";
 import clsx from "clsx";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { Alert, InputField, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useCompare } from "../api/get-compare";

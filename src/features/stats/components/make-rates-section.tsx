@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { Alert, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useBaseline } from "../api/get-baseline";

@@ -1,4 +1,4 @@
-import type { UnitSystem } from "../../../../shared/units";
+import type { UnitSystem } from "#shared/units";
 import { Alert, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useMisses } from "../api/get-misses";

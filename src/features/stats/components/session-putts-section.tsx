@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { useQuery } from "@tanstack/react-query";
-import type { Putt } from "../../../../shared/schemas/putts";
-import { formatLength, formatShort, type UnitSystem } from "../../../../shared/units";
+import type { Putt } from "#shared/schemas/putts";
+import { formatLength, formatShort, type UnitSystem } from "#shared/units";
 import { Alert, Button } from "../../../components/ui";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";

@@ -1,4 +1,4 @@
-import { formatLength, type UnitSystem } from "../../../../shared/units";
+import { formatLength, type UnitSystem } from "#shared/units";
 import { Alert, TableScroller } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useSessionStats } from "../api/get-session-stats";

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { METRES_PER_FOOT } from "../../../../shared/units";
+import { METRES_PER_FOOT } from "#shared/units";
 import { bandLabel, bandsParam, DEFAULT_BAND_EDGES_M, edgesFromParam, edgesFromText, edgesToText } from "./bands";
 
 test("bands are labelled in the user's unit, the last one open-ended", () => {

@@ -1,6 +1,6 @@
 // Band edges as the player edits them (in feet or metres) and as the API takes them (metres, comma-separated).
-import { MAX_BAND_EDGE_M, MAX_BAND_EDGES, DEFAULT_BAND_EDGES_M } from "../../../../shared/stats/bands";
-import { fromLongUnit, longUnitLabel, toLongUnit, type UnitSystem } from "../../../../shared/units";
+import { MAX_BAND_EDGE_M, MAX_BAND_EDGES, DEFAULT_BAND_EDGES_M } from "#shared/stats/bands";
+import { fromLongUnit, longUnitLabel, toLongUnit, type UnitSystem } from "#shared/units";
 
 export { DEFAULT_BAND_EDGES_M };
 

@@ -1,8 +1,8 @@
 import { expect, test } from "vitest";
-import { TOUR_ONE_PUTT_RATE } from "../../../../shared/stats/baseline";
-import { twoProportionZTest } from "../../../../shared/stats/two-proportion";
-import { rateOf, wilsonInterval } from "../../../../shared/stats/wilson";
-import { METRES_PER_FOOT } from "../../../../shared/units";
+import { TOUR_ONE_PUTT_RATE } from "#shared/stats/baseline";
+import { twoProportionZTest } from "#shared/stats/two-proportion";
+import { rateOf, wilsonInterval } from "#shared/stats/wilson";
+import { METRES_PER_FOOT } from "#shared/units";
 import type { Compare, SessionStat, Trend } from "../api/types";
 import {
   compareRows,

@@ -1,8 +1,8 @@
 // Pure data shaping for the make-rate charts and tables: what the API answers, laid out per band in the user's
 // units, with the tour baseline beside it and the cautions a small sample needs.
-import { formatDate } from "../../../../shared/format";
-import { interpolateBaseline, type BaselineSeries } from "../../../../shared/stats/baseline";
-import type { UnitSystem } from "../../../../shared/units";
+import { formatDate } from "#shared/format";
+import { interpolateBaseline, type BaselineSeries } from "#shared/stats/baseline";
+import type { UnitSystem } from "#shared/units";
 import type { BandRate, Compare, Rate, SessionStat, Trend } from "../api/types";
 import { bandLabel } from "./bands";
 

@@ -1,8 +1,8 @@
 // The make-rates page keeps its choices in the URL query, so a reload or a shared link shows the same view.
-import { STAT_SOURCES, type StatSource } from "../../../../shared/schemas/stats";
+import { STAT_SOURCES, type StatSource } from "#shared/schemas/stats";
 import type { CompareParams, StatsParams, TrendParams } from "../api/types";
 import { bandsParam, edgesFromParam } from "./bands";
-import { parseDecimal } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
 
 const ISO = /^\d{4}-\d{2}-\d{2}$/;
 const date = (q: URLSearchParams, k: string) => {

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import type { MissBand } from "../../../../shared/schemas/stats";
+import type { MissBand } from "#shared/schemas/stats";
 import { missLean, strokesSummary } from "./strokes-summary";
 
 const band = (fromM: number, toM: number | null, over: Partial<MissBand>): MissBand => ({

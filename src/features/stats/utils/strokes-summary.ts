@@ -1,7 +1,7 @@
 // The plain-language summary of where a player loses the most strokes against the tour baseline, from the
 // per-band misses and strokes (GET /api/stats/misses). Pure, so it is tested without the page.
-import type { MissBand } from "../../../../shared/schemas/stats";
-import type { UnitSystem } from "../../../../shared/units";
+import type { MissBand } from "#shared/schemas/stats";
+import type { UnitSystem } from "#shared/units";
 import { bandLabel } from "./bands";
 
 /** Below this many putts a band is too thin to single out. */

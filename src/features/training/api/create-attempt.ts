@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { CreateAttemptInput, CreateAttemptResponse } from "../../../../shared/schemas/training";
+import type { CreateAttemptInput, CreateAttemptResponse } from "#shared/schemas/training";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { trainingKeys } from "./keys";

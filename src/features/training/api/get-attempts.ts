@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import type { AttemptList } from "../../../../shared/schemas/training";
+import type { AttemptList } from "#shared/schemas/training";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";
 import { trainingKeys } from "./keys";

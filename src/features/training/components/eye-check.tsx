@@ -1,7 +1,7 @@
 // Read training on a real green: the golfer writes down the slope and fall line they see, then measures them with
 // the phone (components/measure) and sees how far their eye was off.
 import { useState } from "react";
-import { parseDecimal } from "../../../../shared/units";
+import { parseDecimal } from "#shared/units";
 import { fallLineWords } from "../../../components/green-3d/words";
 import { MeasureOnGreen, type Measured } from "../../../components/measure/measure-on-green";
 import { Card, InputField, SelectField } from "../../../components/ui";

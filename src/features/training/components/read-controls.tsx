@@ -10,7 +10,7 @@ import {
   toLongUnit,
   toShortUnit,
   type UnitSystem,
-} from "../../../../shared/units";
+} from "#shared/units";
 import { aimWords } from "../../../components/green-3d/words";
 
 const inputClass =

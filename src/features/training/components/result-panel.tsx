@@ -1,5 +1,5 @@
-import { TARGET_ROLL_PAST_M, type Evaluation } from "../../../../shared/training";
-import { formatLength, formatShort, type UnitSystem } from "../../../../shared/units";
+import { TARGET_ROLL_PAST_M, type Evaluation } from "#shared/training";
+import { formatLength, formatShort, type UnitSystem } from "#shared/units";
 import { aimWords, holeWidthsWords } from "../../../components/green-3d/words";
 
 type Ok = Extract<Evaluation, { ok: true }>;

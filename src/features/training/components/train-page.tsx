@@ -1,8 +1,8 @@
 import { useEffect } from "react";
 import { useSearchParams } from "react-router";
 import clsx from "clsx";
-import { TRAINING_LEVELS, TRAINING_LEVEL_IDS, levelDescription, type TrainingLevelId } from "../../../../shared/training";
-import { parseDecimal, type UnitSystem } from "../../../../shared/units";
+import { TRAINING_LEVELS, TRAINING_LEVEL_IDS, levelDescription, type TrainingLevelId } from "#shared/training";
+import { parseDecimal, type UnitSystem } from "#shared/units";
 import { PageHeader, PageSpinner } from "../../../components/ui";
 import { useMe } from "../../auth/api/get-me";
 import { useUnits } from "../../auth/hooks/use-units";

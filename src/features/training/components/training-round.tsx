@@ -1,7 +1,7 @@
 // One putt of a training round (train-page.tsx): the green in 3D, the player's read, and how it compares.
 import { useMemo, useState, type KeyboardEvent } from "react";
-import { TRAINING_LEVELS, evaluateAttempt, type Evaluation, type TrainingLevelId } from "../../../../shared/training";
-import { formatLength, fromShortUnit, type UnitSystem } from "../../../../shared/units";
+import { TRAINING_LEVELS, evaluateAttempt, type Evaluation, type TrainingLevelId } from "#shared/training";
+import { formatLength, fromShortUnit, type UnitSystem } from "#shared/units";
 import { CameraButtons } from "../../../components/green-3d/camera-buttons";
 import { contourIntervalM, greenShape, heightRange } from "../../../components/green-3d/frame";
 import { GreenView } from "../../../components/green-3d/green-view";

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
-import { TRAINING_LEVELS, TRAINING_LEVEL_IDS } from "../../../../shared/training";
-import { seededUniform } from "../../../../shared/seeded-random";
+import { TRAINING_LEVELS, TRAINING_LEVEL_IDS } from "#shared/training";
+import { seededUniform } from "#shared/seeded-random";
 import { generatePutt, roundPutt } from "./putt-generator";
 
 test("the same seed gives the same putt (a fresh generator each time)", () => {

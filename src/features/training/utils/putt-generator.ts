@@ -1,8 +1,8 @@
 // Random putts for read training, from a seeded generator passed in: the same seed gives the same round, so a
 // round can be replayed from its link (/train?level=club&seed=12345&n=3). The generator is the app's one seeded
 // generator (shared/seeded-random.ts, pure-rand).
-import { seededUniform } from "../../../../shared/seeded-random";
-import { TRAINING_LEVELS, type Range, type TrainingLevelId, type TrainingPutt } from "../../../../shared/training";
+import { seededUniform } from "#shared/seeded-random";
+import { TRAINING_LEVELS, type Range, type TrainingLevelId, type TrainingPutt } from "#shared/training";
 
 /** A random number source in [0, 1). */
 export type Rng = () => number;
