@@ -1,5 +1,7 @@
 // The read on a green that is not a plane: the launch speed and start line whose roll on a height map's surface
 // (surface-roll.ts) passes through the hole at the pace asked for.
+// Over 300 lines on purpose (issue 16): one shooting solver, its fall-backs and the answer it builds share the
+// tolerances and the rolls already made; the roll itself is surface-roll.ts.
 import type { Capture } from "./capture";
 import type { HeightSurface } from "./height-surface";
 import { aimOf, cannotStop, flatPuttLengthM, type AimGiven, type BreakDirection, type Pace } from "./read-types";
