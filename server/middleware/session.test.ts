@@ -64,3 +64,13 @@ test("an unknown role reads as player", async () => {
   const { auth } = fakeAuth({ role: "superuser" });
   expect(await run(loadSession(auth, sessionMemo()), "s=x")).toMatchObject({ role: "player" });
 });
+
+test("the memo holds at most its byte budget, however many and however long the cookie headers sent", async () => {
+  const { auth } = fakeAuth(null);
+  const memo = sessionMemo({ maxBytes: 64 * 1024 });
+  const handler = loadSession(auth, memo);
+  for (let i = 0; i < 200; i++) await run(handler, `junk${i}=${"x".repeat(8_000)}`);
+  const held = [...memo.keys()].reduce((bytes, cookie) => bytes + cookie.length, 0);
+  expect(held).toBeLessThanOrEqual(64 * 1024);
+  expect(memo.size).toBeGreaterThan(0);
+});

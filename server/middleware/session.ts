@@ -18,12 +18,15 @@ declare module "express-serve-static-core" {
  * better-auth's signed cookie cache). Without it every request asked better-auth, which verified two signatures,
  * looked the session up in the database once the cookie's own copy was over 5 s old (a phone logging putts every
  * few seconds, always) and signed a fresh copy that never reached the browser: 43 % of the server's CPU for a
- * putt (5.1 → 2.9 ms, `npm run bench:load`, steady scenario). Keyed by the whole header, so only the exact cookies that were checked are trusted; a ban, a sign-out or a
- * role change still reaches every route within 5 s, on every server.
+ * putt (5.1 → 2.9 ms, `npm run bench:load`, steady scenario). Keyed by the whole header, so only the exact
+ * cookies that were checked are trusted; a ban, a sign-out or a role change still reaches every route within 5 s,
+ * on every server.
  */
-export function sessionMemo(options: { max?: number; ttlMs?: number } = {}) {
+export function sessionMemo(options: { maxBytes?: number; ttlMs?: number } = {}) {
   return new LRUCache<string, { user: SessionUser | null }>({
-    max: options.max ?? 10_000,
+    // Bounded by the bytes of the headers kept (a header may be up to 16 kB): 8 MB at most, whatever is sent.
+    maxSize: options.maxBytes ?? 8 * 1024 * 1024,
+    sizeCalculation: (_entry, cookie) => cookie.length + 200,
     ttl: options.ttlMs ?? SESSION_CACHE_SECONDS * 1000,
     ttlAutopurge: false,
   });
