@@ -86,6 +86,30 @@ export default tseslint.config(
     },
   },
   {
+    // react-three-fiber's two performance rules (as @react-three/eslint-plugin's no-new-in-loop and
+    // no-clone-in-loop; that plugin declares eslint 8 as its peer): nothing allocated inside a frame callback.
+    files: ["src/components/green-3d/**/*.tsx", "src/features/**/components/**/*.tsx"],
+    ignores: ["**/*.test.tsx"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        NO_ENUM,
+        {
+          selector: "MemberExpression[object.name='process'][property.name='env']",
+          message: "Read the environment through server/env.ts.",
+        },
+        {
+          selector: "CallExpression[callee.name='useFrame'] NewExpression",
+          message: "No `new` inside useFrame (60 times a second): allocate once outside and reuse it.",
+        },
+        {
+          selector: "CallExpression[callee.name='useFrame'] CallExpression[callee.property.name='clone']",
+          message: "No .clone() inside useFrame: copy into an object made once outside.",
+        },
+      ],
+    },
+  },
+  {
     files: ["src/**/*.{ts,tsx}"],
     plugins: { "react-hooks": reactHooks },
     rules: { ...reactHooks.configs.recommended.rules },
