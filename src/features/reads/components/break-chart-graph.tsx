@@ -70,11 +70,13 @@ export function BreakChartGraph({ answer, units }: BreakChartGraphProps) {
         </div>
       </fieldset>
       <div
-        className="h-80 w-full sm:h-96"
+        className="w-full"
         role="img"
         aria-label={`Aim offset in ${short} against distance in ${longUnitLabel(units)}, one line per direction; below zero is left of the hole.`}
       >
-        <ResponsiveContainer width="100%" height="100%">
+        {/* A height in pixels, not "100%": while the card is hidden (print, a suspended page) the box measures 0 × 0
+            for a moment, and recharts warns about a chart of no size; with a fixed height it never has none. */}
+        <ResponsiveContainer width="100%" height={352}>
           <LineChart data={data} margin={{ top: 8, right: 12, bottom: 24, left: 4 }}>
             <CartesianGrid stroke="rgb(19 27 46 / 0.08)" />
             <XAxis
