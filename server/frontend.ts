@@ -26,11 +26,31 @@ export function serveBuiltClient(distDir = path.join(root, "dist")) {
     app.use(
       expressStaticGzip(distDir, { enableBrotli: true, orderPreference: ["br", "gzip"], index: false, serveStatic: { index: false } }),
     );
-    app.get("/{*any}", (_req, res) => {
+    const drawnPages = prerenderedPages(distDir);
+    app.get("/{*any}", (req, res) => {
       res.setHeader("Cache-Control", "no-cache");
-      res.sendFile(indexHtml);
+      // A first page drawn at build time (scripts/prerender.ts), only for a bare URL and a visitor without a session
+      // cookie: the drawing is of a signed-out visitor's first view, and the browser hydrates it as that.
+      res.setHeader("Vary", "Cookie");
+      const drawn = drawnPages.get(req.path);
+      const bare = !req.originalUrl.includes("?");
+      res.sendFile(drawn && bare && !hasSessionCookie(req.headers.cookie) ? drawn : indexHtml);
     });
   };
+}
+
+/** better-auth's session cookie, under its plain or its `__Secure-` name. */
+export function hasSessionCookie(cookieHeader: string | undefined): boolean {
+  return cookieHeader !== undefined && /(^|;\s*)(__Secure-)?better-auth\.session_token=/.test(cookieHeader);
+}
+
+/** URL path → the drawn page's file, from dist/prerendered/pages.json (absent in a build without it: none drawn). */
+function prerenderedPages(distDir: string): Map<string, string> {
+  const dir = path.join(distDir, "prerendered");
+  const list = path.join(dir, "pages.json");
+  if (!fs.existsSync(list)) return new Map();
+  const pages = JSON.parse(fs.readFileSync(list, "utf8")) as Record<string, string>;
+  return new Map(Object.entries(pages).map(([url, file]) => [url, path.join(dir, file)]));
 }
 
 /** Development: Vite in middleware mode inside the same Express server (one origin, hot reload). */

@@ -1,11 +1,21 @@
 import { useEffect, useState, type ReactNode } from "react";
 import { QueryClientProvider } from "@tanstack/react-query";
 import { Toaster } from "sonner";
+import { meQueryOptions } from "../features/auth/api/get-me";
 import { createQueryClient, startOnlineState } from "../lib/query-client";
 import { startOutbox } from "./outbox";
 
-export function AppProvider({ children }: { children: ReactNode }) {
-  const [queryClient] = useState(createQueryClient);
+/**
+ * `signedOut`: known from the start that nobody is signed in — a page the server drew for a visitor without a session
+ * cookie (src/prerender.tsx). The account check then has its answer at once, so the first render is the page itself
+ * and not "checking account".
+ */
+export function AppProvider({ children, signedOut = false }: { children: ReactNode; signedOut?: boolean }) {
+  const [queryClient] = useState(() => {
+    const client = createQueryClient();
+    if (signedOut) client.setQueryData(meQueryOptions().queryKey, null);
+    return client;
+  });
   // Putts logged on the green (practice and ladder) wait in localStorage until the server has them; resume that
   // queue at start (or, opened with no signal, when the connection comes back).
   useEffect(() => {

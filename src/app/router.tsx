@@ -1,5 +1,4 @@
-import { useMemo } from "react";
-import { createBrowserRouter, RouterProvider, type RouteObject } from "react-router";
+import { createBrowserRouter, matchRoutes, type RouteObject } from "react-router";
 import { PageSpinner } from "../components/ui";
 import { paths } from "../config/paths";
 import { AppShell } from "./layout/app-shell";
@@ -68,7 +67,22 @@ export function createAppRoutes(): RouteObject[] {
   ];
 }
 
-export function AppRouter() {
-  const router = useMemo(() => createBrowserRouter(createAppRoutes()), []);
-  return <RouterProvider router={router} />;
+/**
+ * The browser's router. On a page the server sent already drawn (src/prerender.tsx), the route modules the URL matches
+ * are loaded first, so the router's first render is the page itself, as drawn, and not its loading placeholder:
+ * React can then hydrate the HTML instead of replacing it (React Router's guidance for lazy routes with server
+ * rendering).
+ */
+export async function createAppRouter({ drawn }: { drawn: boolean }) {
+  const routes = createAppRoutes();
+  if (drawn) {
+    const lazyMatches = (matchRoutes(routes, window.location) ?? []).filter((m) => typeof m.route.lazy === "function");
+    await Promise.all(
+      lazyMatches.map(async ({ route }) => {
+        const module = await (route.lazy as () => Promise<Partial<RouteObject>>)();
+        Object.assign(route, { ...module, lazy: undefined });
+      }),
+    );
+  }
+  return createBrowserRouter(routes);
 }

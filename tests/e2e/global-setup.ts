@@ -4,5 +4,8 @@ import { execFileSync } from "node:child_process";
 export default function setup() {
   if (process.env.E2E_SKIP_BUILD === "1") return;
   // vitest sets NODE_ENV=test, and vite build then ships React's development build: test what `npm start` ships.
-  execFileSync("npx", ["vite", "build", "--logLevel", "warn"], { stdio: "inherit", env: { ...process.env, NODE_ENV: "production" } });
+  const env = { ...process.env, NODE_ENV: "production" };
+  execFileSync("npx", ["vite", "build", "--logLevel", "warn"], { stdio: "inherit", env });
+  // The first pages drawn at build time ("/" and "/read"), as `npm run build` makes them.
+  execFileSync("npx", ["tsx", "scripts/prerender.ts"], { stdio: "inherit", env });
 }

@@ -1,5 +1,6 @@
 // @vitest-environment jsdom
 import "@testing-library/jest-dom/vitest";
+import { StrictMode } from "react";
 import { afterEach, expect, test } from "vitest";
 import { cleanup, render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
@@ -52,4 +53,14 @@ test("a change of the query alone (typing into a read) leaves focus in the field
   await userEvent.type(field, "12");
   await new Promise((r) => setTimeout(r, 100));
   expect(field).toHaveFocus();
+});
+
+test("the first load leaves focus alone, even when React runs the effect twice (StrictMode, as in development)", async () => {
+  render(<StrictMode>{app()}</StrictMode>);
+  const heading = screen.getByRole("heading", { name: "First page" });
+  // Past the frames in which a heading would be focused.
+  await new Promise((r) => setTimeout(r, 150));
+  expect(heading).not.toHaveFocus();
+  await userEvent.click(screen.getByRole("link", { name: "Go on" }));
+  await expect.poll(() => document.activeElement).toBe(await screen.findByRole("heading", { name: "Second page" }));
 });

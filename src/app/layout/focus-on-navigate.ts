@@ -33,12 +33,12 @@ export function focusHeadingWhenReady(root: () => HTMLElement | null, waitMs = W
 /** In the app shell: focus the new page's h1 inside `#main` after each change of path. */
 export function useFocusHeadingOnNavigate(): void {
   const { pathname } = useLocation();
-  const first = useRef(true);
+  // The path focus was last settled for: the first load's own path is never a navigation, even when React runs the
+  // effect twice (StrictMode in development).
+  const settled = useRef(pathname);
   useEffect(() => {
-    if (first.current) {
-      first.current = false;
-      return;
-    }
+    if (settled.current === pathname) return;
+    settled.current = pathname;
     return focusHeadingWhenReady(() => document.getElementById("main"));
   }, [pathname]);
 }

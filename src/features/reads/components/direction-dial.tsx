@@ -24,9 +24,12 @@ export function snapDeg(deg: number): number {
   return normaliseDeg(Math.abs(d - nearest) <= 4 ? nearest : Math.round(d));
 }
 
+/** A point on the dial, to 0.01 of a viewBox unit: Node's and the browser's sine can differ in the last bit, and
+ *  the dial drawn at build time (src/prerender.tsx) must be the one the browser draws when it hydrates the page. */
 function polar(deg: number, r: number): [number, number] {
   const rad = (deg * Math.PI) / 180;
-  return [C + r * Math.sin(rad), C - r * Math.cos(rad)];
+  const hundredths = (v: number) => Math.round(v * 100) / 100;
+  return [hundredths(C + r * Math.sin(rad)), hundredths(C - r * Math.cos(rad))];
 }
 
 /**

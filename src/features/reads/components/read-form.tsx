@@ -68,6 +68,12 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
     defaultValues: initial.values,
   });
   const errors: FieldErrors<ReadFormValues> = formState.errors;
+  // A registered field with its first value written into the HTML too: the page drawn at build time
+  // (src/prerender.tsx) shows the read's values before any script runs, not empty boxes.
+  const field = <K extends "distance" | "slope" | "stimp" | "rollPast" | "fallLine" | "entrySpeed">(name: K) => ({
+    ...register(name),
+    defaultValue: initial.values[name],
+  });
 
   const currentSi = useCallback(() => fromFormValues(getValues(), textUnits.current, memory.current), [getValues]);
   const isValid = useCallback(() => readFormSchema(textUnits.current).safeParse(getValues()).success, [getValues]);
@@ -191,7 +197,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
           autoComplete="off"
           hint="Ball to hole"
           error={err("distance")}
-          {...register("distance")}
+          {...field("distance")}
         />
         <InputField
           label="Slope (%)"
@@ -199,7 +205,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
           autoComplete="off"
           hint={slopeNote ?? "Most greens: 1–3 %"}
           error={err("slope")}
-          {...register("slope")}
+          {...field("slope")}
         />
         <InputField
           label="Stimp (ft)"
@@ -207,7 +213,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
           autoComplete="off"
           hint={`Green speed, ${limitsHint("stimp")}`}
           error={err("stimp")}
-          {...register("stimp")}
+          {...field("stimp")}
         />
         <InputField
           label={`Past the hole (${unitLabel("rollPast", units)})`}
@@ -217,7 +223,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
           error={paceMode === "rollPast" ? err("rollPast") : undefined}
           readOnly={paceMode === "entrySpeed"}
           className={paceMode === "entrySpeed" ? "opacity-50" : undefined}
-          {...register("rollPast")}
+          {...field("rollPast")}
         />
       </div>
       <MeasureOnGreen onMeasured={setMeasured} />
@@ -282,7 +288,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
               hint="0 straight downhill, 90 falls right, 180 uphill, 270 falls left"
               error={err("fallLine")}
               containerClassName="max-w-xs"
-              {...register("fallLine")}
+              {...field("fallLine")}
             />
           </div>
         </div>
@@ -315,7 +321,7 @@ export function ReadForm({ units, values, onCommit, onLive, serverErrors = {}, s
             className={paceMode !== "entrySpeed" ? "opacity-50" : undefined}
             error={paceMode === "entrySpeed" ? err("entrySpeed") : undefined}
             containerClassName="max-w-xs"
-            {...register("entrySpeed")}
+            {...field("entrySpeed")}
           />
         </div>
       </details>

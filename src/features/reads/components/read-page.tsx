@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useState, type ReactNode } from "react";
+import { useCallback, useEffect, useMemo, useState, useSyncExternalStore, type ReactNode } from "react";
 import { useSearchParams } from "react-router";
 // The live preview while the dial is dragged is computed in the browser with the physics engine itself (about a
 // millisecond a read), so the line follows the finger at 60 fps; the answer the page commits to always comes from
@@ -39,9 +39,18 @@ function BesideRead({ signedIn, children }: { signedIn: boolean; children: React
   return signedIn ? <Card>{children}</Card> : <div>{children}</div>;
 }
 
+const noSubscription = () => () => {};
+
 function CopyLinkButton() {
   const [copied, setCopied] = useState(false);
-  if (typeof navigator === "undefined" || !navigator.clipboard) return null;
+  // Shown once the page runs in a browser that offers the clipboard (a secure page): the page drawn at build time
+  // (src/prerender.tsx) has no clipboard, and the browser's hydrating render must match it, then add the button.
+  const canCopy = useSyncExternalStore(
+    noSubscription,
+    () => Boolean(navigator.clipboard),
+    () => false,
+  );
+  if (!canCopy) return null;
   return (
     <Button
       variant="ghost"

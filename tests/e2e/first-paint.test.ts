@@ -1,0 +1,116 @@
+// The first pages a visitor lands on ("/" and "/read") come drawn from the build (scripts/prerender.ts), so their text
+// paints when the HTML and CSS arrive; the browser then hydrates them (src/main.tsx). A hydration that does not match
+// is a page error in production React, which the harness's console check fails on (harness.ts, checkQuiet).
+import { afterAll, beforeAll, expect, test } from "vitest";
+import { DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
+import { PHONE, openBrowser, screenshot, signInWithForm, startAppServer } from "./harness";
+import type { TestServer } from "../setup/server";
+
+let server: TestServer;
+beforeAll(async () => {
+  server = await startAppServer({ SEED: "1" });
+});
+afterAll(async () => {
+  await server?.stop();
+});
+
+/** The text inside #root of the HTML the server sends (tags stripped), "" when #root is empty. */
+async function drawnText(
+  path: string,
+  headers: Record<string, string> = {},
+): Promise<{ text: string; title: string | undefined; vary: string | null }> {
+  const res = await fetch(`${server.url}${path}`, { headers });
+  expect(res.status).toBe(200);
+  const html = await res.text();
+  const root = html.slice(html.indexOf('<div id="root">'), html.indexOf("<noscript>"));
+  const head = html.slice(0, html.indexOf("</head>"));
+  return {
+    text: root
+      .replace(/<[^>]+>/g, " ")
+      .replace(/\s+/g, " ")
+      .trim(),
+    title: /<title>([^<]*)<\/title>/.exec(head)?.[1],
+    vary: res.headers.get("vary"),
+  };
+}
+
+test("a visitor without a session gets / and /read already drawn, with their headings, and nobody else does", async () => {
+  const home = await drawnText("/");
+  expect(home.text).toMatch(/Know where to start the ball, and how firmly to roll it\./);
+  expect(home.text).toMatch(/Sign in/);
+  const read = await drawnText("/read");
+  expect(read.text).toMatch(/Where to start it, and how firmly/);
+  expect(read.text).toMatch(/Distance \(ft\)/);
+  // The tab is named for the page before any script runs, and the page's title is not left in the body.
+  expect(read.title).toBe("Read a putt · Borrowline");
+  expect(home.title).toMatch(/^Borrowline — /);
+  expect(read.text).not.toContain("Read a putt · Borrowline");
+  expect(read.vary).toMatch(/Cookie/i);
+
+  // Someone with a session sees their own page, drawn by the browser: the drawing is of a signed-out visit.
+  expect((await drawnText("/read", { Cookie: "better-auth.session_token=abc.def" })).text).toBe("");
+  expect((await drawnText("/", { Cookie: "theme=x; __Secure-better-auth.session_token=abc.def" })).text).toBe("");
+  // A shared read's link carries its own values: drawn by the browser, never the drawing of the defaults.
+  expect((await drawnText("/read?d=6.096&s=2&f=225&st=10")).text).toBe("");
+  // Pages not drawn at build time stay the empty shell.
+  expect((await drawnText("/chart")).text).toBe("");
+});
+
+test("before any script has run, the drawn /read already shows its heading, form and footer", async () => {
+  const phone = await openBrowser(PHONE);
+  try {
+    const { page } = phone;
+    // No script ever arrives: what shows is what the HTML and CSS alone paint.
+    await page.route("**/*.js", (route) => route.abort());
+    phone.allow(/^console error: Failed to load resource: net::ERR_FAILED$/);
+    await page.goto(`${server.url}/read`);
+    expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("Where to start it, and how firmly");
+    await expect.poll(() => page.getByLabel("Distance (ft)").inputValue()).toBe("10");
+    expect(await page.getByText(/Grain, wind and contours are yours to judge/).isVisible()).toBe(true);
+    await screenshot(page, "first-paint-read-before-scripts");
+  } finally {
+    await phone.close();
+  }
+});
+
+test("the drawn /read hydrates without a mismatch, then honours a visitor's metric choice and reads a typed putt", async () => {
+  const phone = await openBrowser(PHONE);
+  try {
+    const { page } = phone;
+    // Chosen on an earlier visit: the drawing is in feet, the page switches once it runs.
+    await phone.context.addInitScript(() => window.localStorage.setItem("borrowline.units", "metric"));
+    await page.goto(`${server.url}/read`);
+    await page.getByLabel("Distance (m)").waitFor();
+    await page.getByTestId("aim-headline").waitFor();
+    await page.getByLabel("Distance (m)").fill("6");
+    await page.waitForURL(/d=6&/);
+    await page
+      .getByRole("status")
+      .filter({ hasText: "Updating" })
+      .waitFor({ state: "detached" })
+      .catch(() => {});
+    expect(await page.getByTestId("aim-headline").textContent()).toMatch(/\d+ cm /);
+    // The copy button needs the clipboard, which a drawing at build time does not have: added after hydration.
+    await page.getByRole("button", { name: "Copy link to this read" }).waitFor();
+    await screenshot(page, "first-paint-read-metric");
+    expect(phone.unexpected()).toEqual([]);
+  } finally {
+    await phone.close();
+  }
+});
+
+test("from the drawn home page a golfer signs in, and the page knows them", async () => {
+  const phone = await openBrowser(PHONE);
+  try {
+    const { page } = phone;
+    await page.goto(`${server.url}/`);
+    await page.getByRole("heading", { level: 1 }).waitFor();
+    const ivo = DEMO_PLAYERS[0]!;
+    await signInWithForm(page, server.url, ivo.email, DEMO_PASSWORD);
+    await page.goto(`${server.url}/`);
+    await page.getByText("Signed in as").first().waitFor({ state: "attached" });
+    expect(phone.unexpected()).toEqual([]);
+  } finally {
+    await phone.close();
+  }
+});
