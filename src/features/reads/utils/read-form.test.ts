@@ -85,3 +85,15 @@ test("the API's field names map to the form's fields", () => {
   expect(formFieldForApi("pace.rollPastM")).toBe("rollPast");
   expect(formFieldForApi("body")).toBeUndefined();
 });
+
+test("the form's schema is built once per unit system, and each keeps its own limits", () => {
+  expect(readFormSchema("metric")).toBe(readFormSchema("metric"));
+  expect(readFormSchema("imperial")).toBe(readFormSchema("imperial"));
+  expect(readFormSchema("metric")).not.toBe(readFormSchema("imperial"));
+  // 20 is a fine distance in feet and metres; 40 is not a distance in metres a putt is read at (limit 30 m).
+  const base = { slope: "2", fallLine: "90", stimp: "10", paceMode: "rollPast" as const, rollPast: "40", entrySpeed: "" };
+  expect(readFormSchema("imperial").safeParse({ ...base, distance: "40" }).success).toBe(true);
+  const metric = readFormSchema("metric").safeParse({ ...base, distance: "40" });
+  expect(metric.success).toBe(false);
+  expect(metric.error?.issues.map((i) => i.path.join("."))).toEqual(["distance"]);
+});

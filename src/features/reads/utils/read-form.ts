@@ -120,8 +120,8 @@ function numberField(field: NumericField, units: UnitSystem) {
   }, message);
 }
 
-/** The form's schema, with the API's limits (shared/schemas/reads.ts) in the user's units. */
-export function readFormSchema(units: UnitSystem) {
+function buildReadFormSchema(units: UnitSystem) {
+  const pace = { rollPast: numberField("rollPast", units), entrySpeed: numberField("entrySpeed", units) };
   return z
     .object({
       distance: numberField("distance", units),
@@ -135,9 +135,19 @@ export function readFormSchema(units: UnitSystem) {
     .superRefine((v, ctx) => {
       // Only the pace in use is checked.
       const field = v.paceMode === "entrySpeed" ? "entrySpeed" : "rollPast";
-      if (!numberField(field, units).safeParse(v[field]).success)
-        ctx.addIssue({ code: "custom", path: [field], message: rangeMessage(field, units) });
+      if (!pace[field].safeParse(v[field]).success) ctx.addIssue({ code: "custom", path: [field], message: rangeMessage(field, units) });
     });
+}
+
+const formSchemas = new Map<UnitSystem, ReturnType<typeof buildReadFormSchema>>();
+
+/** The form's schema, with the API's limits (shared/schemas/reads.ts) in the user's units. Built once per unit system:
+ *  the form asks for it on every render and keystroke, and building zod schemas is a measurable part of the page's
+ *  first load on a phone (profiled at 4× CPU slowdown). */
+export function readFormSchema(units: UnitSystem) {
+  let schema = formSchemas.get(units);
+  if (!schema) formSchemas.set(units, (schema = buildReadFormSchema(units)));
+  return schema;
 }
 
 const SI_KEYS: Record<NumericField, Exclude<keyof ReadValues, "paceMode">> = {
