@@ -8,7 +8,7 @@ import "@fontsource/lexend/600.css";
 import "@fontsource/lexend/700.css";
 import "./index.css";
 import { App } from "./app/app";
-import { createAppRouter } from "./app/router";
+import { createAppRouter, createHydratingRouter } from "./app/router";
 
 const container = document.getElementById("root");
 if (!container) throw new Error("Missing #root element in index.html");
@@ -16,10 +16,14 @@ if (!container) throw new Error("Missing #root element in index.html");
 // A first page the server sent already drawn (src/prerender.tsx: "/" and "/read", only for a visitor without a session
 // cookie, so nobody is signed in) is hydrated; every other page is drawn here.
 const drawn = container.firstElementChild !== null;
-void createAppRouter({ drawn }).then((router) => {
-  const app = <App router={<RouterProvider router={router} />} signedOut={drawn} />;
+if (drawn) {
   // Hydrating inside a transition lets React do it in slices that yield to the browser (a tap on the drawn page is
-  // not held up behind one long task); a page drawn here has nothing on screen yet, so it renders at once.
-  if (drawn) startTransition(() => void hydrateRoot(container, app));
-  else createRoot(container).render(app);
-});
+  // not held up behind one long task).
+  void createHydratingRouter().then((router) =>
+    startTransition(() => void hydrateRoot(container, <App router={<RouterProvider router={router} />} signedOut />)),
+  );
+} else {
+  // Drawn here, at once, as the entry runs. Starting it a microtask later (after an await or a then) made
+  // tests/e2e/offline.test.ts see putts sent while offline; why is not understood yet (see DEVELOPERS, 2026-12-03).
+  createRoot(container).render(<App router={<RouterProvider router={createAppRouter()} />} />);
+}

@@ -67,22 +67,25 @@ export function createAppRoutes(): RouteObject[] {
   ];
 }
 
+/** The browser's router, for a page drawn here (created at once, so the first render happens as the entry runs). */
+export function createAppRouter() {
+  return createBrowserRouter(createAppRoutes());
+}
+
 /**
- * The browser's router. On a page the server sent already drawn (src/prerender.tsx), the route modules the URL matches
- * are loaded first, so the router's first render is the page itself, as drawn, and not its loading placeholder:
+ * The browser's router for a page the server sent already drawn (src/prerender.tsx): the route modules the URL matches
+ * are loaded first, so the router's first render is the page itself, as drawn, and not its loading placeholder —
  * React can then hydrate the HTML instead of replacing it (React Router's guidance for lazy routes with server
  * rendering).
  */
-export async function createAppRouter({ drawn }: { drawn: boolean }) {
+export async function createHydratingRouter() {
   const routes = createAppRoutes();
-  if (drawn) {
-    const lazyMatches = (matchRoutes(routes, window.location) ?? []).filter((m) => typeof m.route.lazy === "function");
-    await Promise.all(
-      lazyMatches.map(async ({ route }) => {
-        const module = await (route.lazy as () => Promise<Partial<RouteObject>>)();
-        Object.assign(route, { ...module, lazy: undefined });
-      }),
-    );
-  }
+  const lazyMatches = (matchRoutes(routes, window.location) ?? []).filter((m) => typeof m.route.lazy === "function");
+  await Promise.all(
+    lazyMatches.map(async ({ route }) => {
+      const module = await (route.lazy as () => Promise<Partial<RouteObject>>)();
+      Object.assign(route, { ...module, lazy: undefined });
+    }),
+  );
   return createBrowserRouter(routes);
 }
