@@ -8,14 +8,14 @@ import { pathToFileURL } from "node:url";
 import react from "@vitejs/plugin-react";
 import { build } from "vite";
 
-export const PRERENDERED_PAGES = [
+const PRERENDERED_PAGES = [
   { url: "/", module: "src/app/routes/home.tsx", file: "home.html" },
   { url: "/read", module: "src/app/routes/read.tsx", file: "read.html" },
 ] as const;
 
 const FIRST_PAINT_FONTS = [400, 500, 600];
 
-type ManifestEntry = { file: string; imports?: string[]; css?: string[] };
+type ManifestEntry = { file: string; imports?: string[] };
 
 const root = path.resolve(import.meta.dirname, "..");
 const dist = path.join(root, "dist");

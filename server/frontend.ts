@@ -1,6 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
+import { getSessionCookie } from "better-auth/cookies";
 import type { Express } from "express";
 import expressStaticGzip from "express-static-gzip";
 
@@ -34,14 +35,10 @@ export function serveBuiltClient(distDir = path.join(root, "dist")) {
       res.setHeader("Vary", "Cookie");
       const drawn = drawnPages.get(req.path);
       const bare = !req.originalUrl.includes("?");
-      res.sendFile(drawn && bare && !hasSessionCookie(req.headers.cookie) ? drawn : indexHtml);
+      const session = req.headers.cookie ? getSessionCookie(new Headers({ cookie: req.headers.cookie })) : null;
+      res.sendFile(drawn && bare && !session ? drawn : indexHtml);
     });
   };
-}
-
-/** better-auth's session cookie, under its plain or its `__Secure-` name. */
-export function hasSessionCookie(cookieHeader: string | undefined): boolean {
-  return cookieHeader !== undefined && /(^|;\s*)(__Secure-)?better-auth\.session_token=/.test(cookieHeader);
 }
 
 /** URL path → the drawn page's file, from dist/prerendered/pages.json (absent in a build without it: none drawn). */
