@@ -1,6 +1,5 @@
 import { useState } from "react";
 import { toast } from "sonner";
-import { authClient } from "../../../lib/auth-client";
 import { paths } from "../../../config/paths";
 import { useMe } from "../api/get-me";
 import { describeAuthError } from "../utils/auth-errors";
@@ -35,6 +34,8 @@ export function VerifyEmailNotice() {
   const resend = async () => {
     setSending(true);
     try {
+      // better-auth's client is loaded when it is needed, not with every first page (the notice is in the shell).
+      const { authClient } = await import("../../../lib/auth-client");
       const { error } = await authClient.sendVerificationEmail({ email: user.email, callbackURL: paths.home.href() });
       if (error) toast.error(describeAuthError(error, "Could not send the e-mail.").message);
       else toast.success(`Sent a new confirmation link to ${user.email}.`);

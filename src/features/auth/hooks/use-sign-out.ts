@@ -1,7 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useNavigate } from "react-router";
 import { toast } from "sonner";
-import { authClient } from "../../../lib/auth-client";
 import { paths } from "../../../config/paths";
 import { clearOfflineApiCache } from "../../../lib/offline-cache";
 import { authKeys } from "../api/keys";
@@ -12,6 +11,8 @@ export function useSignOut() {
   const navigate = useNavigate();
   return useMutation({
     mutationFn: async () => {
+      // better-auth's client is loaded when it is needed: the top bar is on every first page, signing out is rare.
+      const { authClient } = await import("../../../lib/auth-client");
       const { error } = await authClient.signOut();
       if (error) throw new Error(describeAuthError(error, "Could not sign out. Please try again.").message);
     },
