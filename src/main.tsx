@@ -23,7 +23,6 @@ if (drawn) {
     startTransition(() => void hydrateRoot(container, <App router={<RouterProvider router={router} />} signedOut />)),
   );
 } else {
-  // Drawn here, at once, as the entry runs. Starting it a microtask later (after an await or a then) made
-  // tests/e2e/offline.test.ts see putts sent while offline; why is not understood yet (see DEVELOPERS, 2026-12-03).
+  // Drawn here, at once, as the entry runs (nothing to wait for: the matched route loads as the router starts).
   createRoot(container).render(<App router={<RouterProvider router={createAppRouter()} />} />);
 }
