@@ -13,3 +13,4 @@ export { ErrorBoundary, type ErrorBoundaryProps } from "./error-boundary";
 export { ChipGroup, type ChipGroupProps, type ChipOption } from "./chip-group";
 export { Stepper, type StepperProps } from "./stepper";
 export { TableScroller, type TableScrollerProps } from "./table-scroller";
+export { CopyLinkButton, type CopyLinkButtonProps } from "./copy-link-button";

@@ -1,35 +1,7 @@
 import { useId, useState, type FormEvent } from "react";
-import { Alert, Button } from "../../../components/ui";
+import { Alert, Button, CopyLinkButton } from "../../../components/ui";
 import { useCreateInvitations, type InviteOutcome } from "../api/create-invitations";
 import { parseEmails } from "../utils/parse-emails";
-
-/** Copies an invitation link, or shows it to copy by hand where the clipboard is not available. */
-function CopyLinkButton({ link, email }: { link: string; email: string }) {
-  const [state, setState] = useState<"idle" | "copied" | "failed">("idle");
-  if (state === "failed") {
-    return (
-      <input
-        readOnly
-        value={link}
-        aria-label={`Invitation link for ${email}`}
-        onFocus={(e) => e.currentTarget.select()}
-        className="min-w-0 flex-1 rounded-lg border border-ink-900/15 bg-white px-2 py-1 text-sm"
-      />
-    );
-  }
-  const copy = () => {
-    if (typeof navigator === "undefined" || !navigator.clipboard) return setState("failed");
-    navigator.clipboard.writeText(link).then(
-      () => setState("copied"),
-      () => setState("failed"),
-    );
-  };
-  return (
-    <Button size="sm" variant="secondary" onClick={copy} aria-label={`Copy the invitation link for ${email}`}>
-      {state === "copied" ? "Link copied" : "Copy link"}
-    </Button>
-  );
-}
 
 /** One or several e-mail addresses; each gets its own link by e-mail. Shows what went out and what did not. */
 export function InviteForm({ squadId, squadName }: { squadId: string; squadName: string }) {
@@ -105,7 +77,11 @@ export function InviteForm({ squadId, squadName }: { squadId: string; squadName:
             {sent.map((o) => (
               <li key={o.email} className="flex flex-wrap items-center gap-2">
                 <span className="font-medium break-all">{o.email}</span>
-                <CopyLinkButton link={o.link} email={o.email} />
+                <CopyLinkButton
+                  link={o.link}
+                  linkName={`the invitation link for ${o.email}`}
+                  accessibleName={`Copy the invitation link for ${o.email}`}
+                />
               </li>
             ))}
           </ul>

@@ -3,7 +3,18 @@ import { useState } from "react";
 import { useNavigate } from "react-router";
 import { toast } from "sonner";
 import type { Invitation, InvitationStatus, Squad } from "#shared/schemas/squads";
-import { Alert, Button, ButtonLink, Card, CardTitle, EmptyState, PageHeader, Spinner, TextLink } from "../../../components/ui";
+import {
+  Alert,
+  Button,
+  ButtonLink,
+  Card,
+  CardTitle,
+  CopyLinkButton,
+  EmptyState,
+  PageHeader,
+  Spinner,
+  TextLink,
+} from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { useDeleteSquad } from "../api/delete-squad";
 import { useInvitations } from "../api/get-invitations";
@@ -13,7 +24,6 @@ import { useResendInvitation } from "../api/resend-invitation";
 import { useRevokeInvitation } from "../api/revoke-invitation";
 import { useUpdateSquad } from "../api/update-squad";
 import { ConfirmAction } from "./confirm-action";
-import { CopyLinkButton } from "./copy-link-button";
 import { InviteForm } from "./invite-form";
 import { QueryState } from "./query-state";
 import { SquadForm } from "./squad-form";
@@ -105,7 +115,7 @@ function InvitationRow({ invitation, squadId }: { invitation: Invitation; squadI
             {resend.isPending ? "Sending…" : "Resend"}
           </Button>
         ) : null}
-        {resend.data ? <CopyLinkButton link={resend.data.link} label="Copy the new link" /> : null}
+        {resend.data ? <CopyLinkButton link={resend.data.link} linkName="the new invitation link" label="Copy the new link" /> : null}
         {invitation.status === "pending" ? (
           <ConfirmAction
             label="Withdraw"

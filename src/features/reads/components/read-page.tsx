@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useState, useSyncExternalStore, type ReactNode } from "react";
+import { useCallback, useEffect, useMemo, useState, type ReactNode } from "react";
 import { useSearchParams } from "react-router";
 // The live preview while the dial is dragged is computed in the browser with the physics engine itself (about a
 // millisecond a read), so the line follows the finger at 60 fps; the answer the page commits to always comes from
@@ -7,7 +7,7 @@ import { useSearchParams } from "react-router";
 import type { solveRead as SolveRead } from "#physics/solve-read";
 import type { ReadRequest, ReadResponse } from "#shared/schemas/reads";
 import type { UnitSystem } from "#shared/units";
-import { Alert, Button, ButtonLink, Card, PageHeader, PageSpinner, TextLink } from "../../../components/ui";
+import { Alert, Button, ButtonLink, Card, CopyLinkButton, PageHeader, PageSpinner, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";
 import { isApiError } from "../../../lib/api-client";
 import { useSolveRead } from "../api/solve-read";
@@ -37,32 +37,6 @@ function previewRead(solve: typeof SolveRead | null, values: ReadValues | null):
 /** A signed-in player's panel gets a card; a signed-out visitor's invitation is one line, like the one to save reads. */
 function BesideRead({ signedIn, children }: { signedIn: boolean; children: ReactNode }) {
   return signedIn ? <Card>{children}</Card> : <div>{children}</div>;
-}
-
-const noSubscription = () => () => {};
-
-function CopyLinkButton() {
-  const [copied, setCopied] = useState(false);
-  // Shown once the page runs in a browser that offers the clipboard (a secure page): the page drawn at build time
-  // (src/prerender.tsx) has no clipboard, and the browser's hydrating render must match it, then add the button.
-  const canCopy = useSyncExternalStore(
-    noSubscription,
-    () => Boolean(navigator.clipboard),
-    () => false,
-  );
-  if (!canCopy) return null;
-  return (
-    <Button
-      variant="ghost"
-      size="sm"
-      onClick={() => {
-        void navigator.clipboard.writeText(window.location.href).then(() => setCopied(true));
-        window.setTimeout(() => setCopied(false), 2500);
-      }}
-    >
-      {copied ? "Link copied" : "Copy link to this read"}
-    </Button>
-  );
 }
 
 /** What a panel beside the read (the route module's slot) gets to work with; the reads feature knows nothing else of it. */
@@ -204,7 +178,12 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
               <ButtonLink to={paths.breakChart.href(encoded)} variant="secondary" size="sm">
                 Break chart for this green
               </ButtonLink>
-              <CopyLinkButton />
+              <CopyLinkButton
+                link={() => window.location.href}
+                linkName="the link to this read"
+                label="Copy link to this read"
+                variant="ghost"
+              />
             </div>
           </Card>
 
