@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
-import { DESKTOP, PHONE, openBrowser, screenshot, startAppServer } from "./harness";
+import { DESKTOP, PHONE, appRunning, openBrowser, screenshot, startAppServer } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -45,6 +45,8 @@ test("on a phone the menu opens with the keyboard and shows the account", async 
   const { page } = browser;
   try {
     await page.goto(`${server.url}/`);
+    // The home page comes drawn; its menu answers once the app runs.
+    await appRunning(page);
     const menu = page.getByRole("button", { name: /menu/i });
     await menu.focus();
     await page.keyboard.press("Enter");

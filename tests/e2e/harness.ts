@@ -121,6 +121,17 @@ export async function openBrowser(viewport = DESKTOP): Promise<Browser> {
   return browser;
 }
 
+/**
+ * Waits until the app runs in the page. A page drawn at build time ("/" and "/read" for a visitor without a session)
+ * shows its buttons before its scripts arrive, and a tap or key then does nothing; the app registers its service
+ * worker only after its first page has mounted (src/app/app.tsx), so a registration means the page is live.
+ */
+export async function appRunning(page: Page): Promise<void> {
+  await page.waitForFunction(async () => (await navigator.serviceWorker?.getRegistration()) !== undefined, undefined, {
+    timeout: 60_000,
+  });
+}
+
 export async function screenshot(page: Page, name: string): Promise<string> {
   fs.mkdirSync(SHOTS_DIR, { recursive: true });
   const file = path.join(SHOTS_DIR, `${name}.png`);

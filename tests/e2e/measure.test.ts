@@ -77,7 +77,8 @@ test(
     const { page } = browser;
     try {
       await page.goto(`${server.url}/read`);
-      await page.getByLabel("Slope (%)").waitFor();
+      // The page comes drawn (scripts still on their way); the first read shows once it runs.
+      await page.getByTestId("aim-headline").waitFor();
       await installFeeder(page);
       // Keyboard: the button is reached and pressed with Enter.
       await page.getByRole("button", { name: "Measure on the green" }).press("Enter");
@@ -107,6 +108,7 @@ test(
     const desk = await openBrowser(DESKTOP);
     try {
       await desk.page.goto(`${server.url}/read`);
+      await desk.page.getByTestId("aim-headline").waitFor();
       await desk.page.getByRole("button", { name: "Measure on the green" }).click();
       await desk.page.getByText("No tilt readings came from this device").waitFor();
       // The form is untouched and still works.
