@@ -175,7 +175,12 @@ test("the manifest names Borrowline with its own icons, and the worker keeps no 
   expect(manifest).toMatchObject({ name: "Borrowline", short_name: "Borrowline", start_url: "/", display: "standalone" });
   const sizes = (manifest.icons as { sizes: string; type: string }[]).map((i) => `${i.sizes} ${i.type}`);
   expect(sizes).toEqual(expect.arrayContaining(["192x192 image/png", "512x512 image/png"]));
-  for (const icon of manifest.icons as { src: string }[]) expect((await fetch(`${server.url}${icon.src}`)).status).toBe(200);
+  for (const icon of manifest.icons as { src: string; type: string }[]) {
+    const res = await fetch(`${server.url}${icon.src}`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toContain(icon.type);
+    expect((await res.arrayBuffer()).byteLength).toBeGreaterThan(100);
+  }
   const sw = await (await fetch(`${server.url}/sw.js`)).text();
   // API answers are cached only by the one network-first route for the logging screens (src/lib/offline-cache.ts).
   expect(sw.match(/cacheName:"[^"]+"/g)).toEqual(['cacheName:"borrowline-api"']);
