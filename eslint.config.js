@@ -22,7 +22,7 @@ function featureNames() {
 const NO_ENUM = { selector: "TSEnumDeclaration", message: "Use a const object or a union instead of enum." };
 
 export default tseslint.config(
-  { ignores: ["dist/", "dist-server/", "dist-bench/", "node_modules/", "data/", "coverage/", "drizzle/"] },
+  { ignores: ["dist/", "dist-server/", "dist-bench/", "dist-test/", "node_modules/", "data/", "coverage/", "drizzle/"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

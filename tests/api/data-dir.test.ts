@@ -1,12 +1,12 @@
 // The data directory is private whatever the umask the server is started under: directories 0700, files
 // 0600, the auth secret and backups included, and a directory left world-writable by an older version is fixed.
-import { execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { execFileSync, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import readline from "node:readline";
 import { afterAll, expect, test } from "vitest";
 import { TEST_PASSWORD, uniqueEmail } from "../factories/users";
+import { childServerArgv, spawnChildServer } from "../setup/children";
 import { HttpClient } from "../setup/http";
 
 const root = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-private-"));
@@ -46,17 +46,15 @@ test("started under umask 000, the server keeps DATA_DIR at 0700/0600, and npm r
   fs.writeFileSync(path.join(dataDir, "old-notes.txt"), "left over", { mode: 0o666 });
   fs.chmodSync(path.join(dataDir, "old-notes.txt"), 0o666);
 
-  const child = spawn("sh", underUmask0(`"${process.execPath}" --import tsx tests/setup/child-server.ts`), {
-    env: envFor(dataDir),
-    stdio: ["ignore", "pipe", "inherit"],
-  });
-  children.push(child);
-  const exited = new Promise<number | null>((resolve) => child.once("exit", (code) => resolve(code)));
-  const line = await new Promise<string>((resolve, reject) => {
-    readline.createInterface({ input: child.stdout! }).once("line", resolve);
-    void exited.then((code) => reject(new Error(`server exited early (${code})`)));
-  });
-  const { url } = JSON.parse(line) as { url: string };
+  const argv = [
+    "sh",
+    ...underUmask0(
+      childServerArgv()
+        .map((a) => `"${a}"`)
+        .join(" "),
+    ),
+  ];
+  const { url, child, exited } = await spawnChildServer(envFor(dataDir), children, { argv });
   const client = new HttpClient(url);
   expect(
     (

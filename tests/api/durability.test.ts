@@ -1,12 +1,12 @@
 // Durability: what the server acknowledged survives a SIGKILL; SIGTERM lets in-flight requests finish.
-import { spawn, type ChildProcess } from "node:child_process";
+import type { ChildProcess } from "node:child_process";
 import crypto from "node:crypto";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import readline from "node:readline";
 import { afterAll, expect, test } from "vitest";
 import { TEST_PASSWORD, uniqueEmail } from "../factories/users";
+import { spawnChildServer, type ChildServer } from "../setup/children";
 import { HttpClient } from "../setup/http";
 
 const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-durable-"));
@@ -16,24 +16,8 @@ afterAll(() => {
   fs.rmSync(dataDir, { recursive: true, force: true });
 });
 
-async function spawnServer(): Promise<{ child: ChildProcess; url: string; exited: Promise<number | null> }> {
-  const child = spawn(process.execPath, ["--import", "tsx", "tests/setup/child-server.ts"], {
-    // A clean environment: vitest's own variables (BASE_URL="/", …) are not the server's.
-    env: {
-      PATH: process.env.PATH,
-      HOME: process.env.HOME,
-      DATA_DIR: dataDir,
-      BETTER_AUTH_SECRET: "durability-secret-durability-secret-01",
-    },
-    stdio: ["ignore", "pipe", "inherit"],
-  });
-  children.push(child);
-  const exited = new Promise<number | null>((resolve) => child.once("exit", (code) => resolve(code)));
-  const line = await new Promise<string>((resolve, reject) => {
-    readline.createInterface({ input: child.stdout! }).once("line", resolve);
-    void exited.then((code) => reject(new Error(`server exited early (${code})`)));
-  });
-  return { child, url: (JSON.parse(line) as { url: string }).url, exited };
+function spawnServer(): Promise<ChildServer> {
+  return spawnChildServer({ DATA_DIR: dataDir, BETTER_AUTH_SECRET: "durability-secret-durability-secret-01" }, children);
 }
 
 function withBase(client: HttpClient, url: string): HttpClient {

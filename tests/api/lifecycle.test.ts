@@ -4,11 +4,11 @@ import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import readline from "node:readline";
 import { afterAll, expect, test } from "vitest";
 import { DataDirLockedError } from "../../server/db/lock";
 import { readEnv } from "../../server/env";
 import { start } from "../../server/start";
+import { backupArgv, seedDataDir, spawnChildServer, type ChildServer } from "../setup/children";
 import { startTestServer } from "../setup/server";
 
 const root = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-lifecycle-"));
@@ -21,30 +21,9 @@ const onPglite = !process.env.DATABASE_URL;
 // A PID namespace needs root (or user namespaces); CI runs as root.
 const canUnshare = onPglite && spawnSync("unshare", ["--pid", "--fork", "true"]).status === 0;
 
-type Child = { child: ChildProcess; url: string; pid: number; hostPid: number; lines: readline.Interface; exited: Promise<number | null> };
-
-async function spawnServer(dataDir: string, prefix: string[] = []): Promise<Child> {
-  const command = [...prefix, process.execPath, "--import", "tsx", "tests/setup/child-server.ts"];
-  const child = spawn(command[0]!, command.slice(1), {
-    // A clean environment: vitest's own variables (BASE_URL="/", …) are not the server's.
-    env: {
-      PATH: process.env.PATH,
-      HOME: process.env.HOME,
-      DATA_DIR: dataDir,
-      BETTER_AUTH_SECRET: "lifecycle-secret-lifecycle-secret-0001",
-    },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  children.push(child);
-  let stderr = "";
-  child.stderr!.on("data", (d: Buffer) => (stderr += d.toString()));
-  const exited = new Promise<number | null>((resolve) => child.once("exit", (code) => resolve(code)));
-  const lines = readline.createInterface({ input: child.stdout! });
-  const line = await new Promise<string>((resolve, reject) => {
-    lines.once("line", resolve);
-    void exited.then((code) => reject(new Error(`server exited early (${code}): ${stderr}`)));
-  });
-  return { child, lines, exited, ...(JSON.parse(line) as { url: string; pid: number; hostPid: number }) };
+function spawnServer(dataDir: string, prefix: string[] = []): Promise<ChildServer> {
+  const env = { DATA_DIR: dataDir, BETTER_AUTH_SECRET: "lifecycle-secret-lifecycle-secret-0001" };
+  return spawnChildServer(env, children, { prefix });
 }
 
 test("GET /api/health and GET / while the server is starting answer 503 with Retry-After and the error body", async () => {
@@ -74,6 +53,7 @@ test.skipIf(!canUnshare)(
   "a server restarted after SIGKILL with the same PID (1, as in a container) starts at once",
   async () => {
     const dataDir = path.join(root, "pid1");
+    seedDataDir(dataDir);
     const first = await spawnServer(dataDir, ["unshare", "--pid", "--fork"]);
     expect(first.pid).toBe(1);
     expect((await fetch(first.url + "/api/health")).status).toBe(200);
@@ -94,6 +74,7 @@ test.skipIf(!onPglite)(
   "a second server and a backup are refused while the owner's event loop is blocked for 15 s",
   async () => {
     const dataDir = path.join(root, "blocked");
+    seedDataDir(dataDir);
     const owner = await spawnServer(dataDir);
     const blocking = new Promise<void>((resolve) => owner.lines.on("line", (l) => l === "blocking" && resolve()));
     owner.child.kill("SIGUSR2");
@@ -105,7 +86,8 @@ test.skipIf(!onPglite)(
       env: readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" }),
     });
     const backup = new Promise<{ status: number | null; stderr: string }>((resolve) => {
-      const b = spawn(process.execPath, ["--import", "tsx", "server/cli/backup.ts", path.join(root, "b.tar.gz")], {
+      const [command, ...args] = backupArgv(path.join(root, "b.tar.gz"));
+      const b = spawn(command!, args, {
         env: { PATH: process.env.PATH, HOME: process.env.HOME, DATA_DIR: dataDir },
         stdio: ["ignore", "ignore", "pipe"],
       });

@@ -1,12 +1,12 @@
 // More than one server on one PostgreSQL database (DATABASE_URL), as behind a load balancer: a putt burst split
 // across two servers loses no acknowledged putt when one is SIGKILLed mid-burst, a session made on one server
 // is good on the other, and the sign-in rate limit counts across both. Runs in the PostgreSQL pass of .ci/run.
-import { spawn, type ChildProcess } from "node:child_process";
+import type { ChildProcess } from "node:child_process";
 import crypto from "node:crypto";
-import readline from "node:readline";
 import pg from "pg";
 import { afterAll, expect, test } from "vitest";
 import { TEST_PASSWORD, uniqueEmail } from "../factories/users";
+import { spawnChildServer, type ChildServer } from "../setup/children";
 import { HttpClient } from "../setup/http";
 import { freshPostgresDatabase } from "../setup/server";
 
@@ -21,28 +21,17 @@ afterAll(async () => {
   for (const drop of drops) await drop();
 });
 
-type Child = { child: ChildProcess; url: string; exited: Promise<unknown> };
-
-async function spawnServer(databaseUrl: string, env: Record<string, string> = {}): Promise<Child> {
-  const child = spawn(process.execPath, ["--import", "tsx", "tests/setup/child-server.ts"], {
-    // The same secret on every server, as the README asks; no DATA_DIR is shared (each gets its own).
-    env: {
-      PATH: process.env.PATH,
-      HOME: process.env.HOME,
+function spawnServer(databaseUrl: string, env: Record<string, string> = {}): Promise<ChildServer> {
+  // The same secret on every server, as the README asks; no DATA_DIR is shared (each gets its own).
+  return spawnChildServer(
+    {
       DATABASE_URL: databaseUrl,
       BETTER_AUTH_SECRET: "multi-server-secret-multi-server-secret-1",
       DATA_DIR: `/tmp/borrowline-multi-${crypto.randomUUID()}`,
       ...env,
     },
-    stdio: ["ignore", "pipe", "inherit"],
-  });
-  children.push(child);
-  const exited = new Promise((resolve) => child.once("exit", resolve));
-  const line = await new Promise<string>((resolve, reject) => {
-    readline.createInterface({ input: child.stdout! }).once("line", resolve);
-    void exited.then((code) => reject(new Error(`server exited early (${String(code)})`)));
-  });
-  return { child, exited, url: (JSON.parse(line) as { url: string }).url };
+    children,
+  );
 }
 
 /** The same signed-in client (cookie jar) pointed at another server. */
