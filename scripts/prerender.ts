@@ -83,7 +83,9 @@ export async function prerender() {
         // The page is drawn: its scripts only make it work, so they wait behind the HTML, the CSS and the fonts (on a
         // slow link they would otherwise share it with what paints the page).
         .replace(/<(script type="module"|link rel="modulepreload") crossorigin/g, '<$1 fetchpriority="low" crossorigin')
-        .replace('<div id="root"></div>', `<div id="root">${html}</div>`);
+        .replace('<div id="root"></div>', `<div id="root">${html}</div>`)
+        // Its controls take no taps until the app runs (src/index.css; App removes the mark once hydrated).
+        .replace(/<html( [^>]*)?>/, (tag) => tag.replace(">", " data-drawn>"));
       fs.writeFileSync(path.join(dist, "prerendered", page.file), out);
     }
     fs.writeFileSync(

@@ -28,6 +28,8 @@ function AfterFirstPage({ children }: { children: ReactNode }) {
  * produces and React can hydrate it. `signedOut`: see AppProvider.
  */
 export function App({ router, signedOut = false }: { router: ReactNode; signedOut?: boolean }) {
+  // The page is the app's now: a drawn page's controls take taps (src/index.css, html[data-drawn]).
+  useEffect(() => document.documentElement.removeAttribute("data-drawn"), []);
   return (
     <StrictMode>
       <AppProvider signedOut={signedOut}>

@@ -1,6 +1,7 @@
 // The first pages a visitor lands on ("/" and "/read") come drawn from the build (scripts/prerender.ts), so their text
 // paints when the HTML and CSS arrive; the browser then hydrates them (src/main.tsx). A hydration that does not match
 // is a page error in production React, which the harness's console check fails on (harness.ts, checkQuiet).
+import type { Route } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
 import { PHONE, openBrowser, screenshot, signInWithForm, startAppServer } from "./harness";
@@ -69,6 +70,43 @@ test("before any script has run, the drawn /read already shows its heading, form
     await expect.poll(() => page.getByLabel("Distance (ft)").inputValue()).toBe("10");
     expect(await page.getByText(/Grain, wind and contours are yours to judge/).isVisible()).toBe(true);
     await screenshot(page, "first-paint-read-before-scripts");
+  } finally {
+    await phone.close();
+  }
+});
+
+test("until its scripts have run, the drawn /read's controls take no tap and soon look it; then they work", async () => {
+  const phone = await openBrowser(PHONE);
+  try {
+    const { page } = phone;
+    // The scripts are held back, as on a slow link, until the test lets them through.
+    const held: Route[] = [];
+    let release = false;
+    await page.route("**/*.js", (route) => (release ? route.continue() : void held.push(route)));
+    await page.goto(`${server.url}/read`, { waitUntil: "commit" });
+    const copy = page.getByRole("button", { name: "Copy link to this read" });
+    const distance = page.getByLabel("Distance (ft)");
+    await copy.waitFor();
+    const look = (name: "pointerEvents" | "opacity") => copy.evaluate((el, n) => getComputedStyle(el)[n], name);
+    expect(await look("pointerEvents")).toBe("none");
+    // A moment later (0.3 s) they say they are not ready: dimmed.
+    await expect.poll(() => look("opacity")).toBe("0.55");
+    await screenshot(page, "first-paint-read-not-ready");
+    // A tap on the distance does not start typing that the app would then overwrite.
+    const box = (await distance.boundingBox())!;
+    await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
+    expect(await distance.evaluate((el) => el === document.activeElement)).toBe(false);
+    expect(held.length).toBeGreaterThan(0);
+
+    release = true;
+    for (const route of held.splice(0)) await route.continue();
+    await page.waitForFunction(() => !document.documentElement.hasAttribute("data-drawn"));
+    expect(await look("pointerEvents")).toBe("auto");
+    expect(await look("opacity")).toBe("1");
+    await distance.fill("12");
+    await page.waitForURL(/[?&]d=3\.65/); // the link carries metres: 12 ft = 3.658 m
+    await page.getByTestId("aim-headline").waitFor();
+    expect(phone.unexpected()).toEqual([]);
   } finally {
     await phone.close();
   }
