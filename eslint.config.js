@@ -110,6 +110,18 @@ export default tseslint.config(
     },
   },
   {
+    // Toasts go through src/lib/toast.ts, which loads sonner after the first page; a direct import would put it back
+    // into every first page's scripts.
+    files: ["src/**/*.{ts,tsx}"],
+    ignores: ["src/lib/toast.ts", "src/components/ui/toaster.tsx"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        { paths: [{ name: "sonner", message: "Use toast from src/lib/toast.ts and Toaster from src/components/ui/toaster.tsx." }] },
+      ],
+    },
+  },
+  {
     files: ["src/**/*.{ts,tsx}"],
     plugins: { "react-hooks": reactHooks },
     rules: { ...reactHooks.configs.recommended.rules },

@@ -1,6 +1,6 @@
 import { useEffect, useState, type ReactNode } from "react";
 import { QueryClientProvider } from "@tanstack/react-query";
-import { Toaster } from "sonner";
+import { Toaster } from "../components/ui/toaster";
 import { meQueryOptions } from "../features/auth/api/get-me";
 import { createQueryClient, startOnlineState } from "../lib/query-client";
 import { startOutbox } from "./outbox";

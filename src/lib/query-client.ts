@@ -1,5 +1,5 @@
 import { MutationCache, onlineManager, QueryCache, QueryClient } from "@tanstack/react-query";
-import { toast } from "sonner";
+import { toast } from "./toast";
 import { ApiError, isApiError } from "./api-client";
 
 declare module "@tanstack/react-query" {

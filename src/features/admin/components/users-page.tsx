@@ -1,6 +1,6 @@
 import { formatDate } from "#shared/format";
 import { useState } from "react";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import { Alert, Button, ConfirmDialog, EmptyState, InputField, PageHeader, SelectField } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";
 import { useAdminAction, useAdminUsers, type AdminActionName, type AdminUser, type UsersQuery } from "../api/admin";

@@ -3,7 +3,7 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useNavigate } from "react-router";
 import { z } from "zod";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import { Alert, Button, ButtonLink, InputField } from "../../../components/ui";
 import { authClient } from "../../../lib/auth-client";
 import { paths } from "../../../config/paths";

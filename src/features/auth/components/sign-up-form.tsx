@@ -5,7 +5,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
 import { signUpSchema, type SignUpValues } from "#shared/schemas/auth";
 import type { SignUpRole } from "#shared/roles";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import { Alert, Button, ChoiceGroup, InputField } from "../../../components/ui";
 import { authClient } from "../../../lib/auth-client";
 import { describeAuthError } from "../utils/auth-errors";

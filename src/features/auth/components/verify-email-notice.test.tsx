@@ -3,7 +3,7 @@ import "@testing-library/jest-dom/vitest";
 import { afterEach, expect, test } from "vitest";
 import { cleanup, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { Toaster } from "sonner";
+import { Toaster } from "../../../components/ui/toaster";
 import { renderRoute } from "../../../testing/render";
 import { HttpResponse, http, meAnswer, serve } from "../../../testing/network";
 import { VerifyEmailNotice } from "./verify-email-notice";

@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import { paths } from "../../../config/paths";
 import { useMe } from "../api/get-me";
 import { describeAuthError } from "../utils/auth-errors";

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useNavigate } from "react-router";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import { paths } from "../../../config/paths";
 import { clearOfflineApiCache } from "../../../lib/offline-cache";
 import { authKeys } from "../api/keys";

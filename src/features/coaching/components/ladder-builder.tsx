@@ -1,7 +1,7 @@
 import { useMemo, useState } from "react";
 import { useFieldArray, useForm, useWatch, get, type FieldErrors, type Resolver } from "react-hook-form";
 import { useNavigate } from "react-router";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import {
   DndContext,
   KeyboardSensor,

@@ -1,5 +1,5 @@
 import { useNavigate } from "react-router";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import type { Ladder } from "#shared/schemas/ladders";
 import { Button, ButtonLink, PageHeader, TextLink } from "../../../components/ui";
 import { paths } from "../../../config/paths";

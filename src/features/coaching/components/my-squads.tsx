@@ -1,5 +1,5 @@
 import { formatDate } from "#shared/format";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import { Alert, Card, CardTitle, Spinner } from "../../../components/ui";
 import { useLeaveSquad } from "../api/leave-squad";
 import { useMySquads } from "../api/get-squads";

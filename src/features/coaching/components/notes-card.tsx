@@ -1,6 +1,6 @@
 import { formatDate } from "#shared/format";
 import { useState } from "react";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import { NOTE_MAX } from "#shared/schemas/notes";
 import { Alert, Button, Card, CardTitle } from "../../../components/ui";
 import { errorMessage } from "../../../lib/query-client";

@@ -1,6 +1,6 @@
 import { formatDate } from "#shared/format";
 import { useMemo, useState } from "react";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import {
   createColumnHelper,
   getCoreRowModel,

@@ -1,7 +1,7 @@
 import { formatDate } from "#shared/format";
 import { useState } from "react";
 import { useNavigate } from "react-router";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import type { Invitation, InvitationStatus, Squad } from "#shared/schemas/squads";
 import {
   Alert,

@@ -1,5 +1,5 @@
 import { Link, useNavigate } from "react-router";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import type { Squad } from "#shared/schemas/squads";
 import { Card, CardTitle, EmptyState, PageHeader } from "../../../components/ui";
 import { paths } from "../../../config/paths";

@@ -1,5 +1,5 @@
 import { useMutation, useMutationState, type Mutation, type QueryClient } from "@tanstack/react-query";
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import type { BreakType, MissSide, Putt } from "#shared/schemas/putts";
 import { apiPaths } from "../../../config/paths";
 import { api } from "../../../lib/api-client";

@@ -1,4 +1,4 @@
-import { toast } from "sonner";
+import { toast } from "../../../lib/toast";
 import { Button } from "../../../components/ui";
 import { useExportCsv, type ExportKind } from "../api/export-csv";
 
