@@ -4,7 +4,7 @@
 import type { Route } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
-import { PHONE, openBrowser, screenshot, signInWithForm, startAppServer } from "./harness";
+import { PHONE, appRunning, openBrowser, screenshot, signInWithForm, startAppServer } from "./harness";
 import type { TestServer } from "../setup/server";
 
 let server: TestServer;
@@ -100,7 +100,7 @@ test("until its scripts have run, the drawn /read's controls take no tap and soo
 
     release = true;
     for (const route of held.splice(0)) await route.continue();
-    await page.waitForFunction(() => !document.documentElement.hasAttribute("data-drawn"));
+    await appRunning(page);
     expect(await look("pointerEvents")).toBe("auto");
     expect(await look("opacity")).toBe("1");
     await distance.fill("12");

@@ -127,13 +127,12 @@ export async function openBrowser(viewport = DESKTOP): Promise<Browser> {
 
 /**
  * Waits until the app runs in the page. A page drawn at build time ("/" and "/read" for a visitor without a session)
- * shows its buttons before its scripts arrive, and a tap or key then does nothing; the app registers its service
- * worker only after its first page has mounted (src/app/app.tsx), so a registration means the page is live.
+ * shows its buttons before its scripts arrive, and a key then does nothing; the drawing marks its <html> data-drawn
+ * and the app removes the mark once it has hydrated (src/app/app.tsx), so the mark's absence means the page is live.
+ * A page not drawn at build time never has the mark: the app draws its controls itself.
  */
 export async function appRunning(page: Page): Promise<void> {
-  await page.waitForFunction(async () => (await navigator.serviceWorker?.getRegistration()) !== undefined, undefined, {
-    timeout: 60_000,
-  });
+  await page.waitForFunction(() => !document.documentElement.hasAttribute("data-drawn"), undefined, { timeout: 60_000 });
 }
 
 export async function screenshot(page: Page, name: string): Promise<string> {
