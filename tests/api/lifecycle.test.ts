@@ -73,12 +73,18 @@ test.skipIf(!canUnshare)(
 test.skipIf(!onPglite)(
   "a second server and a backup are refused while the owner's event loop is blocked for 15 s",
   async () => {
+    // Each step's time is logged: a CI run (1 in 4 after 37c2feb) stalled somewhere in this test for 90 s, and the
+    // log is what will say where.
+    const began = Date.now();
+    const step = (what: string) => console.log(`lifecycle, blocked owner: ${what} at ${Date.now() - began} ms`);
     const dataDir = path.join(root, "blocked");
     seedDataDir(dataDir);
     const owner = await spawnServer(dataDir);
+    step("owner listening");
     const blocking = new Promise<void>((resolve) => owner.lines.on("line", (l) => l === "blocking" && resolve()));
     owner.child.kill("SIGUSR2");
     await blocking;
+    step("owner blocking");
     // Past the 10 s after which the old mkdir lock counted as stale (its refresh timer cannot run meanwhile).
     await new Promise((r) => setTimeout(r, 11_000));
 
@@ -96,7 +102,9 @@ test.skipIf(!onPglite)(
       b.once("exit", (status) => resolve({ status, stderr }));
     });
     await expect(second).rejects.toBeInstanceOf(DataDirLockedError);
+    step("second server refused");
     const b = await backup;
+    step("backup exited");
     expect(b.status).not.toBe(0);
     expect(b.stderr).toMatch(new RegExp(`already using the data directory`));
     expect(b.stderr).toContain(`pid ${owner.hostPid}`);
@@ -104,8 +112,10 @@ test.skipIf(!onPglite)(
 
     // The owner comes back from its stall still the owner, and serves.
     expect((await fetch(owner.url + "/api/health")).status).toBe(200);
+    step("owner answered");
     owner.child.kill("SIGTERM");
     expect(await owner.exited).toBe(0);
+    step("owner stopped");
   },
   90_000,
 );
