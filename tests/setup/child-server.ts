@@ -18,8 +18,9 @@ const running = await start({
     imports: { windowMs: 60_000, limit: 100_000 },
   },
 });
-const hostPid = Number(fs.readlinkSync("/proc/self"));
-process.stdout.write(JSON.stringify({ url: running.url, pid: process.pid, hostPid }) + "\n");
+// The handlers go in before the first line: a test sends its signal the moment it reads that line, and a signal
+// with no handler yet does what SIGUSR2's default does — ends the process (1 start in 5 did, and the test then
+// waited 90 s for a "blocking" that never came).
 process.once("SIGTERM", () => {
   void running.close().then(() => process.exit(0));
 });
@@ -27,3 +28,5 @@ process.on("SIGUSR2", () => {
   fs.writeSync(1, "blocking\n");
   Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, Number(process.env.BLOCK_MS ?? 15_000));
 });
+const hostPid = Number(fs.readlinkSync("/proc/self"));
+process.stdout.write(JSON.stringify({ url: running.url, pid: process.pid, hostPid }) + "\n");

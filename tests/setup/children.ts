@@ -17,7 +17,12 @@ export type ChildServer = {
   hostPid: number;
   /** Its stdout after the first line ("blocking" when it starts holding its event loop). */
   lines: readline.Interface;
+  /** Resolves when the child prints `text` on a line of its own; rejects, saying how it ended, if it exits first. */
+  line: (text: string) => Promise<void>;
+  /** Its exit code (null when a signal ended it). */
   exited: Promise<number | null>;
+  /** The signal that ended it, if one did. */
+  signal: Promise<NodeJS.Signals | null>;
 };
 
 /** node + the bundled child server: the command line a test runs (or wraps, as under `sh -c "umask 000; …"`). */
@@ -63,12 +68,19 @@ export async function spawnChildServer(
     stderr += d.toString();
     process.stderr.write(d);
   });
-  const exited = new Promise<number | null>((resolve) => child.once("exit", (code) => resolve(code)));
+  const ended = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) =>
+    child.once("exit", (code, signal) => resolve({ code, signal })),
+  );
+  const exited = ended.then((e) => e.code);
+  const signal = ended.then((e) => e.signal);
+  const diedBefore = (what: string) =>
+    ended.then(({ code, signal }) => {
+      throw new Error(`the child server ended (${signal ?? `exit ${code}`}) before ${what}: ${stderr}`);
+    });
   const lines = readline.createInterface({ input: child.stdout! });
-  const line = await new Promise<string>((resolve, reject) => {
-    lines.once("line", resolve);
-    void exited.then((code) => reject(new Error(`server exited early (${code}): ${stderr}`)));
-  });
-  const info = JSON.parse(line) as { url: string; pid: number; hostPid: number };
-  return { child, lines, exited, ...info };
+  const first = await Promise.race([new Promise<string>((resolve) => lines.once("line", resolve)), diedBefore("listening")]);
+  const info = JSON.parse(first) as { url: string; pid: number; hostPid: number };
+  const line = (text: string) =>
+    Promise.race([new Promise<void>((resolve) => lines.on("line", (l) => l === text && resolve())), diedBefore(`printing "${text}"`)]);
+  return { child, lines, line, exited, signal, ...info };
 }
