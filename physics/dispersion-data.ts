@@ -121,7 +121,19 @@ export function prepareData(putts: readonly LoggedPutt[], defaultStimp: number, 
     else if (sided) g.missedSided++;
     else g.missedUnsided++;
   }
-  return { groups: [...groups.values()], misses };
+  // A canonical order: the likelihood is summed in floating point, so the same putts in another order (the database
+  // returns putts logged in the same instant in no fixed order) would give an estimate a few ulps apart.
+  const byKey = [...groups.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, g]) => g);
+  misses.sort(
+    (a, b) =>
+      a.D - b.D ||
+      a.L - b.L ||
+      a.capDeg - b.capDeg ||
+      a.extraAngleDeg - b.extraAngleDeg ||
+      a.extraPace - b.extraPace ||
+      Number(a.sided) - Number(b.sided),
+  );
+  return { groups: byKey, misses };
 }
 
 /**

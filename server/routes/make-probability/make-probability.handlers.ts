@@ -49,7 +49,8 @@ async function dispersionOf(db: Db, playerId: string): Promise<DispersionEstimat
     .from(putts)
     .innerJoin(practiceSessions, eq(practiceSessions.id, putts.sessionId))
     .where(eq(putts.playerId, playerId))
-    .orderBy(desc(putts.createdAt))
+    // The id breaks ties: putts logged in the same instant (a batch from the outbox) must not make the 2000 differ.
+    .orderBy(desc(putts.createdAt), desc(putts.id))
     .limit(MAX_PUTTS);
   return estimateDispersion(rows.map((r) => ({ ...r, missSide: r.missSide === "left" || r.missSide === "right" ? r.missSide : null })));
 }
