@@ -3,15 +3,9 @@ import { DEFAULT_ROLL_PAST_M } from "../../physics/constants";
 import { timestampSchema } from "./common";
 import { plainText } from "./text";
 
-/** Limits of the public read API (issue-agreed ranges; a flat-green Stimp of 4–16 ft covers real greens). */
-export const READ_LIMITS = {
-  distanceM: { min: 0.3, max: 30 },
-  slopePct: { min: 0, max: 8 },
-  fallLineDeg: { min: 0, max: 360 },
-  stimpFt: { min: 4, max: 16 },
-  rollPastM: { min: 0, max: 3 },
-  entrySpeedMps: { min: 0, max: 2.5 },
-} as const;
+import { READ_LIMITS } from "../read-limits";
+
+export { READ_LIMITS };
 
 const within = (name: keyof typeof READ_LIMITS, unit: string) => {
   const { min, max } = READ_LIMITS[name];

@@ -1,4 +1,6 @@
+import fc from "fast-check";
 import { expect, test } from "vitest";
+import { READ_LIMITS, readRequestSchema } from "#shared/schemas/reads";
 import {
   decodeReadQuery,
   decodeReadQueryChecked,
@@ -82,4 +84,43 @@ test("the checked decode (rehearse, chart) replaces out-of-range or garbled valu
   const entry = decodeReadQueryChecked(new URLSearchParams("d=3&s=2&f=10&st=10&es=0.9"), "metric");
   expect(entry.replaced).toEqual([]);
   expect(entry.values).toMatchObject({ paceMode: "entrySpeed", entrySpeedMps: 0.9 });
+});
+
+test("toReadRequest gives a request exactly when the API's schema accepts the read, and the same request", () => {
+  // The plain range check keeps zod off /read's first load; the API's schema (shared/schemas/reads.ts) is the judge.
+  const near = (key: keyof typeof READ_LIMITS) => {
+    const { min, max } = READ_LIMITS[key];
+    const span = max - min;
+    // Mostly in range, so that whole reads pass often; the limits themselves, just past them, and far off too.
+    return fc.oneof(
+      { arbitrary: fc.double({ min, max, noNaN: true }), weight: 6 },
+      { arbitrary: fc.constantFrom(min, max), weight: 2 },
+      { arbitrary: fc.constantFrom(min - 1e-9, max + 1e-9, Number.POSITIVE_INFINITY, Number.NaN), weight: 1 },
+      { arbitrary: fc.double({ min: min - span, max: max + span }), weight: 1 },
+    );
+  };
+  fc.assert(
+    fc.property(
+      fc.record({
+        distanceM: near("distanceM"),
+        slopePct: near("slopePct"),
+        fallLineDeg: near("fallLineDeg"),
+        stimpFt: near("stimpFt"),
+        paceMode: fc.constantFrom("rollPast" as const, "entrySpeed" as const),
+        rollPastM: near("rollPastM"),
+        entrySpeedMps: near("entrySpeedMps"),
+      }),
+      (v) => {
+        const api = readRequestSchema.safeParse({
+          distanceM: v.distanceM,
+          slopePct: v.slopePct,
+          fallLineDeg: v.fallLineDeg,
+          stimpFt: v.stimpFt,
+          pace: v.paceMode === "entrySpeed" ? { entrySpeedMps: v.entrySpeedMps } : { rollPastM: v.rollPastM },
+        });
+        expect(toReadRequest(v)).toEqual(api.success ? api.data : null);
+      },
+    ),
+    { numRuns: 2000 },
+  );
 });

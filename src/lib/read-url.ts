@@ -3,7 +3,11 @@
 //   ?d=3.048&s=2&f=90&st=10&rp=0.4318   distance m, slope %, fall line °, Stimp ft, roll-past m
 //   ?d=3&s=2&f=90&st=10&es=0.8           entry speed m/s instead of roll-past
 // Numbers go through shared/units.ts parseDecimal (never Number(), which reads "0x1A" as 26).
-import { READ_LIMITS, readRequestSchema, type ReadRequest } from "../../shared/schemas/reads";
+// Only types from the schemas: this module is on /read's first load, which must not wait for zod's full API. The
+// range check below is the API schema's (shared/schemas/reads.ts, built from the same READ_LIMITS); a property test
+// holds the two to the same verdict.
+import { READ_LIMITS } from "../../shared/read-limits";
+import type { ReadRequest } from "../../shared/schemas/reads";
 import { feetToMetres, inchesToMetres, parseDecimal, type UnitSystem } from "../../shared/units";
 
 export type PaceMode = "rollPast" | "entrySpeed";
@@ -107,16 +111,20 @@ export function encodeReadQuery(v: ReadValues): string {
   return params.toString();
 }
 
+const within = (key: ReadKey, value: number) => value >= READ_LIMITS[key].min && value <= READ_LIMITS[key].max;
+
 /** The API request for these values, or null when a value is out of the API's limits. */
 export function toReadRequest(v: ReadValues): ReadRequest | null {
-  const parsed = readRequestSchema.safeParse({
+  const paceKey = v.paceMode === "entrySpeed" ? "entrySpeedMps" : "rollPastM";
+  const keys: ReadKey[] = ["distanceM", "slopePct", "fallLineDeg", "stimpFt", paceKey];
+  if (!keys.every((key) => within(key, v[key]))) return null;
+  return {
     distanceM: v.distanceM,
     slopePct: v.slopePct,
     fallLineDeg: v.fallLineDeg,
     stimpFt: v.stimpFt,
     pace: v.paceMode === "entrySpeed" ? { entrySpeedMps: v.entrySpeedMps } : { rollPastM: v.rollPastM },
-  });
-  return parsed.success ? parsed.data : null;
+  };
 }
 
 /** A saved read's request back to values (for "open": a saved read becomes a link). */

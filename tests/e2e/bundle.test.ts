@@ -66,6 +66,17 @@ test("recharts stays out of the first page too", () => {
   expect(first.filter((k) => /recharts|charts/i.test(manifest[k]!.name ?? "") || read(k).includes("recharts-wrapper"))).toEqual([]);
 });
 
+test("the first load of / and /read carries none of zod's full API (only zod/mini's builders for the read form)", () => {
+  // zod's full builders (ZodString and the rest, 20 KiB of brotli) are for the pages that use the shared schemas; the
+  // read form checks its text with zod/mini and /read's address with the same limits (shared/read-limits.ts).
+  const classic = (key: string) => read(key).includes("`ZodString`") || read(key).includes('"ZodString"');
+  expect(Object.keys(manifest).some(classic)).toBe(true); // the marker still finds the full API where it is
+  for (const route of ["index.html", "src/app/routes/home.tsx", "src/app/routes/read.tsx"]) {
+    expect(manifest[route], route).toBeDefined();
+    expect([...staticClosure(route)].filter(classic), route).toEqual([]);
+  }
+});
+
 // ---- per route: three.js only on the 3D pages; what is sent, compressed, in a real browser ----------------------
 
 /** Every chunk a route can load: its static closure plus the lazy modules it imports itself (not other routes). */

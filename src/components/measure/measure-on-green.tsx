@@ -3,7 +3,7 @@
 // training, so it lives in components (a feature may not import another).
 import { useRef, useState } from "react";
 import { HALF_TURN_SUSPECT_PCT, gradientFromUp, halfTurn, slopeAndFallLine, type StillReading } from "../../../shared/phone-level";
-import { READ_LIMITS } from "../../../shared/schemas/reads";
+import { READ_LIMITS } from "../../../shared/read-limits";
 import { TILT_PROBLEM_WORDS, isTiltProblem, type TiltProblem } from "../../lib/tilt-sensor";
 import { fallLineWords } from "../green-3d/words";
 import { Alert, Button, Spinner } from "../ui";

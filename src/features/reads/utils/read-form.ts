@@ -1,8 +1,10 @@
 // The read form works in the user's units as text; SI numbers stand behind each field so that switching units
 // never drifts: a field remembers the exact SI value behind the text it shows, and while the text is unchanged
 // that exact value is used (10 ft → "3.05 m" → back to "10 ft", not 10.01).
-import { z } from "zod";
-import { READ_LIMITS } from "#shared/schemas/reads";
+// zod/mini, not zod: the form is on the first page a visitor sees, and zod's mini builders are a few KiB where the
+// full API (shared/schemas/*) is 20 KiB of brotli the page would wait for. The same core checks both.
+import * as z from "zod/mini";
+import { READ_LIMITS } from "#shared/read-limits";
 import {
   fromLongUnit,
   fromShortUnit,
@@ -114,10 +116,12 @@ function rangeMessage(field: NumericField, units: UnitSystem): string {
 function numberField(field: NumericField, units: UnitSystem) {
   const { min, max } = fieldLimits(field, units);
   const message = rangeMessage(field, units);
-  return z.string().refine((text) => {
-    const n = parseNumber(text);
-    return Number.isFinite(n) && n >= min && n <= max;
-  }, message);
+  return z.string().check(
+    z.refine((text) => {
+      const n = parseNumber(text);
+      return Number.isFinite(n) && n >= min && n <= max;
+    }, message),
+  );
 }
 
 function buildReadFormSchema(units: UnitSystem) {
@@ -132,11 +136,14 @@ function buildReadFormSchema(units: UnitSystem) {
       rollPast: z.string(),
       entrySpeed: z.string(),
     })
-    .superRefine((v, ctx) => {
-      // Only the pace in use is checked.
-      const field = v.paceMode === "entrySpeed" ? "entrySpeed" : "rollPast";
-      if (!pace[field].safeParse(v[field]).success) ctx.addIssue({ code: "custom", path: [field], message: rangeMessage(field, units) });
-    });
+    .check(
+      z.superRefine((v, ctx) => {
+        // Only the pace in use is checked.
+        const field = v.paceMode === "entrySpeed" ? "entrySpeed" : "rollPast";
+        if (!pace[field].safeParse(v[field]).success)
+          ctx.addIssue({ code: "custom", path: [field], message: rangeMessage(field, units), input: v[field] });
+      }),
+    );
 }
 
 const formSchemas = new Map<UnitSystem, ReturnType<typeof buildReadFormSchema>>();
