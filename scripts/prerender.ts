@@ -7,6 +7,7 @@ import path from "node:path";
 import { pathToFileURL } from "node:url";
 import react from "@vitejs/plugin-react";
 import { build } from "vite";
+import { drawnQueriesElement, type DrawnQuery } from "../src/lib/drawn-queries";
 
 const PRERENDERED_PAGES = [
   { url: "/", module: "src/app/routes/home.tsx", file: "home.html" },
@@ -53,7 +54,7 @@ export async function prerender() {
       },
     });
     const { renderPage } = (await import(pathToFileURL(path.join(outDir, "prerender.js")).href)) as {
-      renderPage: (url: string) => Promise<string>;
+      renderPage: (url: string) => Promise<{ html: string; queries: DrawnQuery[] }>;
     };
     // Lexend's Latin faces in the weights the drawn pages use (body 400, labels 500, headings 600), fetched with the
     // CSS so the text is drawn in them from the first paint instead of swapping in later and moving it.
@@ -67,7 +68,7 @@ export async function prerender() {
     fs.rmSync(path.join(dist, "prerendered"), { recursive: true, force: true });
     fs.mkdirSync(path.join(dist, "prerendered"));
     for (const page of PRERENDERED_PAGES) {
-      const drawn = await renderPage(`http://localhost${page.url}`);
+      const { html: drawn, queries } = await renderPage(`http://localhost${page.url}`);
       // React puts the page's <title> first in its output; it belongs in the head, in place of the template's, so the
       // tab is named before any script runs (React finds it there when it hydrates).
       const title = /^<title>[^<]*<\/title>/.exec(drawn)?.[0];
@@ -83,7 +84,8 @@ export async function prerender() {
         // The page is drawn: its scripts only make it work, so they wait behind the HTML, the CSS and the fonts (on a
         // slow link they would otherwise share it with what paints the page).
         .replace(/<(script type="module"|link rel="modulepreload") crossorigin/g, '<$1 fetchpriority="low" crossorigin')
-        .replace('<div id="root"></div>', `<div id="root">${html}</div>`)
+        // The answers the drawing shows go with it, for the browser's first render (src/lib/drawn-queries.ts).
+        .replace('<div id="root"></div>', `<div id="root">${html}</div>${queries.length > 0 ? drawnQueriesElement(queries) : ""}`)
         // Its controls take no taps until the app runs (src/index.css; App removes the mark once hydrated).
         .replace(/<html( [^>]*)?>/, (tag) => tag.replace(">", " data-drawn>"));
       fs.writeFileSync(path.join(dist, "prerendered", page.file), out);

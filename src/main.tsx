@@ -9,6 +9,8 @@ import "@fontsource/lexend/700.css";
 import "./index.css";
 import { App } from "./app/app";
 import { createAppRouter, createHydratingRouter } from "./app/router";
+import { seedDrawnQueries } from "./lib/drawn-queries";
+import { createQueryClient } from "./lib/query-client";
 
 const container = document.getElementById("root");
 if (!container) throw new Error("Missing #root element in index.html");
@@ -19,8 +21,13 @@ const drawn = container.firstElementChild !== null;
 if (drawn) {
   // Hydrating inside a transition lets React do it in slices that yield to the browser (a tap on the drawn page is
   // not held up behind one long task).
+  // The answers the drawing shows come with it (src/lib/drawn-queries.ts): the first render has them, as the drawing did.
+  const queryClient = createQueryClient();
+  seedDrawnQueries(queryClient, document);
   void createHydratingRouter().then((router) =>
-    startTransition(() => void hydrateRoot(container, <App router={<RouterProvider router={router} />} signedOut />)),
+    startTransition(
+      () => void hydrateRoot(container, <App router={<RouterProvider router={router} />} signedOut queryClient={queryClient} />),
+    ),
   );
 } else {
   // Drawn here, at once, as the entry runs (nothing to wait for: the matched route loads as the router starts).

@@ -1,4 +1,5 @@
 import { StrictMode, Suspense, lazy, useEffect, useState, type ReactNode } from "react";
+import type { QueryClient } from "@tanstack/react-query";
 import { AppProvider } from "./provider";
 
 // The service worker's registration (and workbox-window) is not needed to draw the first page: it loads a few seconds
@@ -25,14 +26,15 @@ function AfterFirstPage({ children }: { children: ReactNode }) {
 /**
  * The whole app around its router: the browser (src/main.tsx) and the build-time drawing of first pages
  * (src/prerender.tsx) render this same tree, so the HTML drawn at build time is what the browser's first render
- * produces and React can hydrate it. `signedOut`: see AppProvider.
+ * produces and React can hydrate it. `signedOut`: see AppProvider. `queryClient`: one that already holds the answers
+ * a drawn page shows (the drawing's queries, src/lib/drawn-queries.ts), so the browser's first render has them too.
  */
-export function App({ router, signedOut = false }: { router: ReactNode; signedOut?: boolean }) {
+export function App({ router, signedOut = false, queryClient }: { router: ReactNode; signedOut?: boolean; queryClient?: QueryClient }) {
   // The page is the app's now: a drawn page's controls take taps (src/index.css, html[data-drawn]).
   useEffect(() => document.documentElement.removeAttribute("data-drawn"), []);
   return (
     <StrictMode>
-      <AppProvider signedOut={signedOut}>
+      <AppProvider signedOut={signedOut} queryClient={queryClient}>
         {router}
         <AfterFirstPage>
           <ServiceWorker />

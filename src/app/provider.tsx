@@ -1,5 +1,5 @@
 import { useEffect, useState, type ReactNode } from "react";
-import { QueryClientProvider } from "@tanstack/react-query";
+import { QueryClientProvider, type QueryClient } from "@tanstack/react-query";
 import { Toaster } from "../components/ui/toaster";
 import { meQueryOptions } from "../features/auth/api/get-me";
 import { createQueryClient, startOnlineState } from "../lib/query-client";
@@ -8,11 +8,20 @@ import { startOutbox } from "./outbox";
 /**
  * `signedOut`: known from the start that nobody is signed in — a page the server drew for a visitor without a session
  * cookie (src/prerender.tsx). The account check then has its answer at once, so the first render is the page itself
- * and not "checking account".
+ * and not "checking account". `queryClient`: see App.
  */
-export function AppProvider({ children, signedOut = false }: { children: ReactNode; signedOut?: boolean }) {
+export function AppProvider({
+  children,
+  signedOut = false,
+  queryClient: given,
+}: {
+  children: ReactNode;
+  signedOut?: boolean;
+  /** A client that already holds answers the drawn page showed (src/main.tsx, src/prerender.tsx). */
+  queryClient?: QueryClient;
+}) {
   const [queryClient] = useState(() => {
-    const client = createQueryClient();
+    const client = given ?? createQueryClient();
     if (signedOut) client.setQueryData(meQueryOptions().queryKey, null);
     return client;
   });

@@ -124,3 +124,11 @@ test("toReadRequest gives a request exactly when the API's schema accepts the re
     { numRuns: 2000 },
   );
 });
+
+test("the defaults are exactly what a link carries, so a bare /read and the link it writes ask for the same read", () => {
+  for (const units of ["imperial", "metric"] as const) {
+    const defaults = defaultReadValues(units);
+    expect(decodeReadQuery(new URLSearchParams(encodeReadQuery(defaults)), units)).toEqual(defaults);
+    expect(toReadRequest(decodeReadQuery(new URLSearchParams(encodeReadQuery(defaults)), units))).toEqual(toReadRequest(defaults));
+  }
+});

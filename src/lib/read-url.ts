@@ -35,22 +35,27 @@ export const READ_URL_KEYS: Record<ReadKey, string> = {
 };
 const ORDER: ReadKey[] = ["distanceM", "slopePct", "fallLineDeg", "stimpFt"];
 
-/** The one set of defaults, a putt a golfer would recognise: 10 ft (3 m), 2 %, falls right, Stimp 10, 17 in (45 cm) past. */
+/** Six decimals are far below anything a golfer can judge, and keep links short. */
+function short(n: number): string {
+  return String(Number.parseFloat(n.toFixed(6)));
+}
+
+/**
+ * The one set of defaults, a putt a golfer would recognise: 10 ft (3 m), 2 %, falls right, Stimp 10, 17 in (45 cm)
+ * past — each exactly as a link carries it (17 in is 0.4318 m, not 0.43179999999999996), so the read a bare /read
+ * shows is the read of the link the page then writes into its address: one answer, asked for once.
+ */
 export function defaultReadValues(units: UnitSystem): ReadValues {
+  const asLinked = (n: number) => Number(short(n));
   return {
-    distanceM: units === "imperial" ? feetToMetres(10) : 3,
+    distanceM: asLinked(units === "imperial" ? feetToMetres(10) : 3),
     slopePct: 2,
     fallLineDeg: 90,
     stimpFt: 10,
     paceMode: "rollPast",
-    rollPastM: units === "imperial" ? inchesToMetres(17) : 0.45,
+    rollPastM: asLinked(units === "imperial" ? inchesToMetres(17) : 0.45),
     entrySpeedMps: 0.8,
   };
-}
-
-/** Six decimals are far below anything a golfer can judge, and keep links short. */
-function short(n: number): string {
-  return String(Number.parseFloat(n.toFixed(6)));
 }
 
 function num(params: URLSearchParams, key: ReadKey): number | undefined {

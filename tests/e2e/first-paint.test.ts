@@ -58,7 +58,7 @@ test("a visitor without a session gets / and /read already drawn, with their hea
   expect((await drawnText("/chart")).text).toBe("");
 });
 
-test("before any script has run, the drawn /read already shows its heading, form and footer", async () => {
+test("before any script has run, the drawn /read already shows its heading, form, the read's answer and footer", async () => {
   const phone = await openBrowser(PHONE);
   try {
     const { page } = phone;
@@ -68,6 +68,8 @@ test("before any script has run, the drawn /read already shows its heading, form
     await page.goto(`${server.url}/read`);
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("Where to start it, and how firmly");
     await expect.poll(() => page.getByLabel("Distance (ft)").inputValue()).toBe("10");
+    // The default putt's answer is in the drawing: aim and pace show before any script (10 ft, 2 %, falls right).
+    expect(await page.getByTestId("aim-headline").textContent()).toMatch(/^Start it \d+ in outside the left edge$/);
     expect(await page.getByText(/Grain, wind and contours are yours to judge/).isVisible()).toBe(true);
     await screenshot(page, "first-paint-read-before-scripts");
   } finally {
@@ -106,6 +108,43 @@ test("until its scripts have run, the drawn /read's controls take no tap and soo
     await distance.fill("12");
     await page.waitForURL(/[?&]d=3\.65/); // the link carries metres: 12 ft = 3.658 m
     await page.getByTestId("aim-headline").waitFor();
+    expect(phone.unexpected()).toEqual([]);
+  } finally {
+    await phone.close();
+  }
+});
+
+test("the answer drawn into /read is the API's answer to its read, and the running page does not ask for it again", async () => {
+  const phone = await openBrowser(PHONE);
+  try {
+    const { page } = phone;
+    const solves: string[] = [];
+    page.on("request", (r) => {
+      if (r.url().endsWith("/api/reads/solve")) solves.push(r.postData() ?? "");
+    });
+    await page.goto(`${server.url}/read`);
+    await appRunning(page);
+    await page.waitForURL(/[?&]rp=0\.4318/); // the page writes its read into the address: 17 in past
+    await page.waitForLoadState("networkidle");
+    expect(solves).toEqual([]);
+
+    const drawn = JSON.parse((await page.locator("#drawn-queries").textContent()) ?? "[]") as {
+      queryKey: [string, string, unknown];
+      data: unknown;
+    }[];
+    expect(drawn).toHaveLength(1);
+    const [{ queryKey, data }] = drawn as [(typeof drawn)[number]];
+    expect(queryKey[2]).toEqual({ distanceM: 3.048, slopePct: 2, fallLineDeg: 90, stimpFt: 10, pace: { rollPastM: 0.4318 } });
+    const api = await page.evaluate(async (read) => {
+      const res = await fetch("/api/reads/solve", {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(read),
+      });
+      return { status: res.status, body: (await res.json()) as unknown };
+    }, queryKey[2]);
+    expect(api.status).toBe(200);
+    expect(data).toEqual(api.body);
     expect(phone.unexpected()).toEqual([]);
   } finally {
     await phone.close();
