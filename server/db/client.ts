@@ -69,12 +69,21 @@ export function pgliteDirIsNew(dir: string): boolean {
  * `<dir>.new`, which is renamed to `dir` only after it exited cleanly (PGlite closed, files flushed): a crash half-way
  * leaves no half-built `dir`, and the next start builds again. The caller holds the data-directory lock.
  */
+/** The builder's command line for a server run from source: its own bundle, if one was named (the API tests name
+ *  theirs, tests/setup/unit.ts: tsx compiling the builder on every first start was most of those tests' time on a
+ *  loaded machine); else tsx and the TypeScript. */
+let builtBuilder: string | undefined;
+export function useBuiltDatabaseBuilder(file: string): void {
+  builtBuilder = file;
+}
+
 export async function createPgliteDir(dir: string, sharedBuffers = "32MB"): Promise<void> {
   const building = `${dir}.new`;
   fs.rmSync(building, { recursive: true, force: true });
   const source = import.meta.url.endsWith(".ts");
   const entry = fileURLToPath(new URL(source ? "./pglite-create.ts" : "./pglite-create.js", import.meta.url));
-  const args = [...(source ? ["--import", "tsx"] : []), entry, building, sharedBuffers];
+  const args = !source ? [entry] : builtBuilder ? [builtBuilder] : ["--import", "tsx", entry];
+  args.push(building, sharedBuffers);
   await new Promise<void>((resolve, reject) => {
     const child = spawn(process.execPath, args, { stdio: ["ignore", "ignore", "pipe"] });
     let stderr = "";

@@ -6,10 +6,16 @@ import { readEnv } from "../../server/env";
 import { start } from "../../server/start";
 import { DataDirLockedError } from "../../server/db/lock";
 import { TEST_PASSWORD, uniqueEmail } from "../factories/users";
+import { seedDataDir } from "../setup/children";
 import { HttpClient } from "../setup/http";
 
 const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "borrowline-persist-"));
 afterAll(() => fs.rmSync(dataDir, { recursive: true, force: true }));
+// Begins from the run's migrated database, as a server that started here before would have left it: these tests are
+// about what a restart keeps and who may open the directory, not about building a database (tests/api/first-start
+// does that). Building it took the first test past its 30 s on CI's loaded machine, and the server it left open then
+// held the lock against the next test.
+if (!process.env.DATABASE_URL) seedDataDir(dataDir);
 
 const env = () => readEnv({ NODE_ENV: "test", PORT: "0", HOST: "127.0.0.1", DATA_DIR: dataDir, SEED: "0", LOG_LEVEL: "silent" });
 
@@ -17,15 +23,18 @@ test.skipIf(Boolean(process.env.DATABASE_URL))("data and the session survive a r
   const email = uniqueEmail("persist");
   const first = await start({ env: env() });
   const client = new HttpClient(first.url);
-  const signUp = await client.post("/api/auth/sign-up/email", {
-    name: "Persistent",
-    email,
-    password: TEST_PASSWORD,
-    accountType: "player",
-  });
-  expect(signUp.status).toBe(200);
-  expect((await client.patch("/api/me/preferences", { units: "metric" })).status).toBe(200);
-  await first.close();
+  try {
+    const signUp = await client.post("/api/auth/sign-up/email", {
+      name: "Persistent",
+      email,
+      password: TEST_PASSWORD,
+      accountType: "player",
+    });
+    expect(signUp.status).toBe(200);
+    expect((await client.patch("/api/me/preferences", { units: "metric" })).status).toBe(200);
+  } finally {
+    await first.close();
+  }
 
   const second = await start({ env: env() });
   try {

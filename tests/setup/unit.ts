@@ -1,5 +1,6 @@
 // An unexpected console.error fails the test that caused it.
-import { afterAll, afterEach, beforeAll, vi } from "vitest";
+import path from "node:path";
+import { afterAll, afterEach, beforeAll, inject, vi } from "vitest";
 
 const original = console.error;
 let errors: unknown[][] = [];
@@ -26,4 +27,11 @@ if (typeof window !== "undefined") {
     network.events.removeAllListeners();
   });
   afterAll(() => network.close());
+}
+
+// A server started in this process (start() from source) builds a new database with the run's bundle of the builder
+// (tests/setup/global-unit.ts), not through tsx, which compiled it again on every first start.
+if (typeof window === "undefined") {
+  const { useBuiltDatabaseBuilder } = await import("../../server/db/client");
+  useBuiltDatabaseBuilder(path.join(inject("childBundleDir"), "pglite-create.js"));
 }
