@@ -37,7 +37,7 @@ export async function renderPage(url: string): Promise<{ html: string; queries: 
 
   const first = await draw();
   const queries: DrawnQuery[] = [];
-  for (const asked of queryClient.getQueryCache().findAll({ queryKey: readsKeys.solve(null).slice(0, 2) })) {
+  for (const asked of queryClient.getQueryCache().findAll({ queryKey: readsKeys.solves() })) {
     const request = asked.queryKey[2] as ReadRequest | null;
     if (!request) continue;
     const answer = answerRead(request);

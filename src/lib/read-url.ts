@@ -85,6 +85,9 @@ export function decodeReadQuery(params: URLSearchParams, units: UnitSystem): Rea
   };
 }
 
+/** Inside the API's limits (NaN is not). */
+const within = (key: ReadKey, value: number) => value >= READ_LIMITS[key].min && value <= READ_LIMITS[key].max;
+
 /**
  * For pages that cannot show an out-of-range value in a form (rehearse, the chart): values that are not numbers
  * or lie outside the API's limits take the default and are named in `replaced`.
@@ -97,8 +100,7 @@ export function decodeReadQueryChecked(params: URLSearchParams, units: UnitSyste
     const raw = params.get(READ_URL_KEYS[key]);
     if (raw === null || raw.trim() === "") continue;
     const n = parseDecimal(raw);
-    const { min, max } = READ_LIMITS[key];
-    if (n === null || n < min || n > max) {
+    if (n === null || !within(key, n)) {
       values[key] = base[key];
       replaced.push(key);
     }
@@ -115,8 +117,6 @@ export function encodeReadQuery(v: ReadValues): string {
   else params.set(READ_URL_KEYS.rollPastM, short(v.rollPastM));
   return params.toString();
 }
-
-const within = (key: ReadKey, value: number) => value >= READ_LIMITS[key].min && value <= READ_LIMITS[key].max;
 
 /** The API request for these values, or null when a value is out of the API's limits. */
 export function toReadRequest(v: ReadValues): ReadRequest | null {

@@ -15,8 +15,6 @@ export type ChildServer = {
   pid: number;
   /** Its pid as this process sees it. */
   hostPid: number;
-  /** Its stdout after the first line ("blocking" when it starts holding its event loop). */
-  lines: readline.Interface;
   /** Resolves when the child prints `text` on a line of its own; rejects, saying how it ended, if it exits first. */
   line: (text: string) => Promise<void>;
   /** Its exit code (null when a signal ended it). */
@@ -82,5 +80,5 @@ export async function spawnChildServer(
   const info = JSON.parse(first) as { url: string; pid: number; hostPid: number };
   const line = (text: string) =>
     Promise.race([new Promise<void>((resolve) => lines.on("line", (l) => l === text && resolve())), diedBefore(`printing "${text}"`)]);
-  return { child, lines, line, exited, signal, ...info };
+  return { child, line, exited, signal, ...info };
 }

@@ -3,7 +3,8 @@ import type { ChartRequest, ReadRequest } from "#shared/schemas/reads";
 
 export const readsKeys = {
   all: ["reads"] as const,
-  solve: (input: ReadRequest | null) => [...readsKeys.all, "solve", input] as const,
+  solves: () => [...readsKeys.all, "solve"] as const,
+  solve: (input: ReadRequest | null) => [...readsKeys.solves(), input] as const,
   chart: (input: ChartRequest | null) => [...readsKeys.all, "chart", input] as const,
   saved: () => [...readsKeys.all, "saved"] as const,
   greens: () => [...readsKeys.all, "greens"] as const,
