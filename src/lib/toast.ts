@@ -1,13 +1,27 @@
-// Toasts, through sonner — loaded after the first page instead of with it: its 34 KiB of script (8.6 KiB brotli) drew
-// nothing on any first page, yet every page evaluated it before its first frame (issue 18). `toast` has sonner's shape
-// for what the app uses. A toast asked for before sonner has arrived is sent once it has, and sonner's <Toaster>
-// (src/components/ui/toaster.tsx) shows the toasts still active when it starts listening, so none is lost.
+// Toasts, through sonner — loaded only when the app first says something in a toast: its 34 KiB of script
+// (8.6 KiB brotli) and the stylesheet it inserts drew nothing on any first page, yet loading it as the app started put
+// a fetch, its evaluation and a restyle of the whole page into hydration (issue 18). `toast` has sonner's shape for
+// what the app uses. The first toast waits for sonner to arrive (the service worker keeps it after the first visit);
+// sonner's <Toaster> (src/components/ui/toaster.tsx) starts then and shows the toasts still active, so none is lost.
 type Sonner = typeof import("sonner");
 type Options = { id?: string };
 
 let loading: Promise<Sonner> | undefined;
-export function loadSonner(): Promise<Sonner> {
-  return (loading ??= import("sonner"));
+let wanted: (sonner: Promise<Sonner>) => void = () => {};
+const whenWanted = new Promise<Sonner>((resolve) => (wanted = resolve));
+
+/** sonner, fetched the first time it is asked for. */
+function loadSonner(): Promise<Sonner> {
+  if (!loading) {
+    loading = import("sonner");
+    wanted(loading);
+  }
+  return loading;
+}
+
+/** sonner, once something has asked for it (a toast); never fetches it itself. */
+export function whenSonnerWanted(): Promise<Sonner> {
+  return whenWanted;
 }
 
 function show(kind: "success" | "error", message: string, options?: Options): void {

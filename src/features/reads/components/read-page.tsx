@@ -77,9 +77,13 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
   const live = useMemo(() => previewRead(solveInBrowser, liveValues), [solveInBrowser, liveValues]);
   const liveRequest = useMemo(() => (liveValues ? toReadRequest(liveValues) : null), [liveValues]);
 
-  // A bare /read (or a partial link) gets every value written into the address, so it can be shared as it is.
+  // A bare /read (or a partial link) gets every value written into the address, so it can be shared as it is. In a
+  // task of its own: on a drawn /read this runs as hydration ends, and the router's navigation would otherwise lengthen
+  // the task that commits the hydrated page (issue 18).
   useEffect(() => {
-    if (ready && !isCompleteReadQuery(new URLSearchParams(query))) setParams(encodeReadQuery(values), { replace: true });
+    if (!ready || isCompleteReadQuery(new URLSearchParams(query))) return;
+    const later = setTimeout(() => setParams(encodeReadQuery(values), { replace: true }));
+    return () => clearTimeout(later);
   }, [ready, query, values, setParams]);
 
   const onCommit = useCallback((next: ReadValues) => setParams(encodeReadQuery(next), { replace: true }), [setParams]);
