@@ -5,9 +5,10 @@ import react from "@vitejs/plugin-react";
 // that drive Debian's Chromium through playwright-core against a real server.
 export default defineConfig({
   test: {
-    // Two files at a time (vitest otherwise keeps one core free, which on CI's two cores runs the unit files one by
-    // one): most API files wait on servers, child processes and the disk, so two overlap well. The browser project
-    // still runs its files one at a time (fileParallelism: false).
+    // Two files at a time (vitest otherwise keeps one core free, which on CI's two cores runs the files one by one):
+    // most API files wait on servers, child processes and the disk, and a browser test on its page, its server and
+    // Chromium (one at a time, the browser suite used 0.8 of CI's two cores), so two overlap well. Every file starts
+    // its own server on its own port and data directory, and its own Chromium.
     maxWorkers: 2,
     projects: [
       {
@@ -36,7 +37,6 @@ export default defineConfig({
           environment: "node",
           testTimeout: 90_000,
           hookTimeout: 180_000,
-          fileParallelism: false,
         },
       },
     ],

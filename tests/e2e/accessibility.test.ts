@@ -141,29 +141,34 @@ const RUNS: { size: string; viewport: typeof PHONE; people: [string, Visit[]][] 
   },
 ];
 
+// The two sizes walk at once, each in its own browsers (most of a walk is waiting for pages to settle).
 for (const { size, viewport, people } of RUNS) {
-  test(`axe: no violations at ${size} size, signed out and as ${size === "phone" ? "a player" : "a coach and an admin"}`, async () => {
-    const found: string[] = [];
-    // Pages reached through a link that the demo did not offer (listed, so a lost page shows).
-    const unreached: string[] = [];
-    const signedOut = await openBrowser(viewport);
-    try {
-      found.push(...(await violations(signedOut, SIGNED_OUT, unreached)));
-    } finally {
-      await signedOut.close();
-    }
-    for (const [email, visits] of people) {
-      const b = await openBrowser(viewport);
+  test.concurrent(
+    `axe: no violations at ${size} size, signed out and as ${size === "phone" ? "a player" : "a coach and an admin"}`,
+    async () => {
+      const found: string[] = [];
+      // Pages reached through a link that the demo did not offer (listed, so a lost page shows).
+      const unreached: string[] = [];
+      const signedOut = await openBrowser(viewport);
       try {
-        await signInWithForm(b.page, server.url, email, DEMO_PASSWORD);
-        if (visits === PLAYER) await logRound(b.page);
-        found.push(...(await violations(b, visits, unreached)).map((v) => `${email} ${v}`));
+        found.push(...(await violations(signedOut, SIGNED_OUT, unreached)));
       } finally {
-        await b.close();
+        await signedOut.close();
       }
-    }
-    expect(found).toEqual([]);
-    // Every page with an id in its path was reached through the demo (a missing link would hide a page from axe).
-    expect(unreached).toEqual([]);
-  }, 600_000);
+      for (const [email, visits] of people) {
+        const b = await openBrowser(viewport);
+        try {
+          await signInWithForm(b.page, server.url, email, DEMO_PASSWORD);
+          if (visits === PLAYER) await logRound(b.page);
+          found.push(...(await violations(b, visits, unreached)).map((v) => `${email} ${v}`));
+        } finally {
+          await b.close();
+        }
+      }
+      expect(found).toEqual([]);
+      // Every page with an id in its path was reached through the demo (a missing link would hide a page from axe).
+      expect(unreached).toEqual([]);
+    },
+    600_000,
+  );
 }
