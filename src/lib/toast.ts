@@ -6,22 +6,18 @@
 type Sonner = typeof import("sonner");
 type Options = { id?: string };
 
-let loading: Promise<Sonner> | undefined;
-let wanted: (sonner: Promise<Sonner>) => void = () => {};
-const whenWanted = new Promise<Sonner>((resolve) => (wanted = resolve));
+let want: () => void = () => {};
+const sonnerOnceWanted: Promise<Sonner> = new Promise<void>((resolve) => (want = resolve)).then(() => import("sonner"));
 
 /** sonner, fetched the first time it is asked for. */
 function loadSonner(): Promise<Sonner> {
-  if (!loading) {
-    loading = import("sonner");
-    wanted(loading);
-  }
-  return loading;
+  want();
+  return sonnerOnceWanted;
 }
 
 /** sonner, once something has asked for it (a toast); never fetches it itself. */
 export function whenSonnerWanted(): Promise<Sonner> {
-  return whenWanted;
+  return sonnerOnceWanted;
 }
 
 function show(kind: "success" | "error", message: string, options?: Options): void {
