@@ -316,3 +316,66 @@ test("in feet and inches the answer gives speeds in ft/s, never m/s", async () =
   expect(answer).toHaveTextContent("Still rolling at the hole (2.2 ft/s)");
   expect(answer.textContent).not.toMatch(/m\/s/);
 });
+
+// A link followed while the next page's code is still loading must not be cancelled by the read writing its own
+// address: a second navigation replaces the one in progress (React Router). Both were seen: the dial's arrow keys
+// wrote the same address again a pause later (CI: Enter on "Break chart" stayed on /read), and a typed value's pause.
+function renderWithSlowChart() {
+  let chartAsked = 0;
+  const chart = {
+    path: "/chart",
+    lazy: async () => {
+      chartAsked++;
+      await new Promise((r) => setTimeout(r, 800));
+      return { element: <h1>The chart page</h1> };
+    },
+  };
+  const rendered = renderRoute(
+    <>
+      <ReadPage />
+      <Where />
+    </>,
+    { at: "/read?d=3.048&s=2&f=90&st=10&rp=0.4318", routes: [chart] },
+  );
+  return { ...rendered, chartAsked: () => chartAsked };
+}
+
+test("turning the dial by keyboard writes the address once, and a link followed at once is not cancelled", async () => {
+  stubApi();
+  const user = userEvent.setup();
+  const { router, chartAsked } = renderWithSlowChart();
+  const dial = await screen.findByRole("slider", { name: "Which way the green falls" });
+  const writes: string[] = [];
+  let lastKey = router.state.location.key;
+  router.subscribe(({ location }) => {
+    if (location.key !== lastKey) writes.push(location.pathname + location.search);
+    lastKey = location.key;
+  });
+  dial.focus();
+  await user.keyboard("{ArrowRight}");
+  await waitFor(() => expect(screen.getByTestId("where")).toHaveTextContent("f=95"));
+  // Past the typing pause: the turn was written once.
+  await act(async () => {
+    await new Promise((r) => setTimeout(r, 500));
+  });
+  expect(writes).toEqual(["/read?d=3.048&s=2&f=95&st=10&rp=0.4318"]);
+  await user.keyboard("{ArrowRight}");
+  await waitFor(() => expect(screen.getByTestId("where")).toHaveTextContent("f=100"));
+  await user.click(screen.getByRole("link", { name: "Break chart for this green" }));
+  expect(chartAsked()).toBe(1);
+  expect(await screen.findByRole("heading", { name: "The chart page" }, { timeout: 3000 })).toBeInTheDocument();
+  expect(router.state.location.pathname).toBe("/chart");
+  expect(router.state.location.search).toContain("f=100");
+});
+
+test("a link followed during the pause after typing still opens its page", async () => {
+  stubApi();
+  const user = userEvent.setup();
+  const { router } = renderWithSlowChart();
+  const distance = await screen.findByLabelText("Distance (ft)");
+  await user.clear(distance);
+  await user.type(distance, "25");
+  await user.click(screen.getByRole("link", { name: "Break chart for this green" }));
+  expect(await screen.findByRole("heading", { name: "The chart page" }, { timeout: 3000 })).toBeInTheDocument();
+  expect(router.state.location.pathname).toBe("/chart");
+});

@@ -1,5 +1,5 @@
-import { useCallback, useEffect, useMemo, useState, type ReactNode } from "react";
-import { useSearchParams } from "react-router";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type ReactNode } from "react";
+import { useLocation, useNavigation, useSearchParams } from "react-router";
 // The live preview while the dial is dragged is computed in the browser with the physics engine itself (about a
 // millisecond a read), so the line follows the finger at 60 fps; the answer the page commits to always comes from
 // POST /api/reads/solve through TanStack Query once the dial is let go or typing pauses. The engine is fetched the
@@ -77,16 +77,35 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
   const live = useMemo(() => previewRead(solveInBrowser, liveValues), [solveInBrowser, liveValues]);
   const liveRequest = useMemo(() => (liveValues ? toReadRequest(liveValues) : null), [liveValues]);
 
+  // The read's values live in the address. Writing it is a navigation, and a navigation replaces one in progress: so
+  // what the form commits is not written while a link to another page is being followed (its code still loading),
+  // nor when the address already says it (the dial's arrow keys commit at once and then again after the typing pause).
+  const { pathname } = useLocation();
+  const navigation = useNavigation();
+  const latest = useRef({ query, leaving: false });
+  useLayoutEffect(() => {
+    latest.current = { query, leaving: navigation.state !== "idle" && navigation.location.pathname !== pathname };
+  });
+  const writeAddress = useCallback(
+    (next: ReadValues) => {
+      const encoded = encodeReadQuery(next);
+      if (latest.current.leaving || encoded === latest.current.query) return;
+      setParams(encoded, { replace: true });
+    },
+    [setParams],
+  );
+
   // A bare /read (or a partial link) gets every value written into the address, so it can be shared as it is. In a
   // task of its own: on a drawn /read this runs as hydration ends, and the router's navigation would otherwise lengthen
   // the task that commits the hydrated page (issue 18).
   useEffect(() => {
     if (!ready || isCompleteReadQuery(new URLSearchParams(query))) return;
-    const later = setTimeout(() => setParams(encodeReadQuery(values), { replace: true }));
+    const later = setTimeout(() => writeAddress(values));
     return () => clearTimeout(later);
-  }, [ready, query, values, setParams]);
+  }, [ready, query, values, writeAddress]);
 
-  const onCommit = useCallback((next: ReadValues) => setParams(encodeReadQuery(next), { replace: true }), [setParams]);
+  const onCommit = useCallback((next: ReadValues) => writeAddress(next), [writeAddress]);
+  // A button the player pressed (a roll past suggested beside the read): written at once.
   const applyRollPast = useCallback(
     (rollPastM: number) =>
       setParams(encodeReadQuery({ ...values, paceMode: "rollPast", rollPastM }), { replace: true, preventScrollReset: true }),
