@@ -73,6 +73,8 @@ export async function start(options: StartOptions): Promise<Running> {
   usePrivateUmask();
   const dataDirOnDisk = !env.DATABASE_URL && !(options.pgliteDir ?? "").startsWith("memory://");
   const logger = createLogger(env.LOG_LEVEL, options.logDestination);
+  // PostgreSQL ended an idle connection (a restart, a failover, an administrator): its pool drops it and opens another.
+  const connectionLost = (err: Error) => logger.warn({ err }, "PostgreSQL ended an idle connection; a new one is opened when needed");
   const releases: Array<() => Promise<void>> = [];
   try {
     const pgliteDir = options.pgliteDir ?? path.join(env.DATA_DIR, "pglite");
@@ -96,7 +98,7 @@ export async function start(options: StartOptions): Promise<Running> {
     // A first-ever start builds the new database in a short-lived child process (its memory is returned when it ends).
     if (dataDirOnDisk && !options.pgliteLoad && pgliteDirIsNew(pgliteDir)) await createPgliteDir(pgliteDir, env.PGLITE_SHARED_BUFFERS);
     const database: Database = env.DATABASE_URL
-      ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS)
+      ? await openPostgres(env.DATABASE_URL, env.DB_STATEMENT_TIMEOUT_MS, connectionLost)
       : await openPglite(pgliteDir, options.pgliteLoad, env.PGLITE_SHARED_BUFFERS);
     releases.unshift(() => database.close());
     await migrate(database);
@@ -110,7 +112,10 @@ export async function start(options: StartOptions): Promise<Running> {
 
     let smtpFake: SmtpFake | undefined;
     if (!env.SMTP_URL) {
-      smtpFake = await startSmtpFake({ keep: keepInInbox(database.db) });
+      smtpFake = await startSmtpFake({
+        keep: keepInInbox(database.db),
+        onConnectionError: (err) => logger.warn({ err }, "the local mail fake lost a connection mid-message"),
+      });
       releases.unshift(() => smtpFake!.close());
       logger.warn(
         { smtp: smtpFake.url },
@@ -137,7 +142,7 @@ export async function start(options: StartOptions): Promise<Running> {
     if (env.SEED === "1") await seedDemo(database.db, logger);
 
     // With DATABASE_URL every server on the database shares the rate-limit counts (PostgreSQL store).
-    const sharedLimits = env.DATABASE_URL ? postgresRateLimits(env.DATABASE_URL) : undefined;
+    const sharedLimits = env.DATABASE_URL ? postgresRateLimits(env.DATABASE_URL, connectionLost) : undefined;
     if (sharedLimits) releases.unshift(sharedLimits.close);
 
     const ready = createApp({

@@ -47,13 +47,19 @@ export async function openPglite(dataDir: string, load?: Blob, sharedBuffers = "
   return { db, kind: "pglite", pglite: client, close: () => client.close() };
 }
 
-/** statementTimeoutMs: PostgreSQL cancels longer statements (SQLSTATE 57014), so one slow query cannot hold a connection. */
-export async function openPostgres(url: string, statementTimeoutMs = 0): Promise<Database> {
+/**
+ * statementTimeoutMs: PostgreSQL cancels longer statements (SQLSTATE 57014), so one slow query cannot hold a connection.
+ * onIdleError: an idle connection the database ended (a restart, a failover, an administrator). The pool has already
+ * dropped it and opens a new one when next needed; without a listener node-postgres throws the error and the process
+ * ends (its documentation: always listen for the pool's "error").
+ */
+export async function openPostgres(url: string, statementTimeoutMs = 0, onIdleError: (err: Error) => void = () => {}): Promise<Database> {
   const pool = new pg.Pool({
     connectionString: url,
     max: 10,
     ...(statementTimeoutMs > 0 ? { statement_timeout: statementTimeoutMs } : {}),
   });
+  pool.on("error", onIdleError);
   const db = drizzlePg(pool, { schema }) as unknown as Db;
   return { db, kind: "postgres", url, close: () => pool.end() };
 }

@@ -7,9 +7,14 @@ import pg from "pg";
 import type { Store } from "express-rate-limit";
 import type { RateLimitStoreFactory } from "../middleware/rate-limit";
 
-type PgStore = Store & { pool?: { end: () => Promise<void> } };
+type PgPool = { end: () => Promise<void>; on: (event: "error", listener: (err: Error) => void) => unknown };
+type PgStore = Store & { pool?: PgPool };
 
-export function postgresRateLimits(databaseUrl: string): {
+/** onIdleError: an idle connection the database ended (see openPostgres); the pool replaces it. */
+export function postgresRateLimits(
+  databaseUrl: string,
+  onIdleError: (err: Error) => void = () => {},
+): {
   store: RateLimitStoreFactory;
   ready: () => Promise<void>;
   close: () => Promise<void>;
@@ -25,6 +30,11 @@ export function postgresRateLimits(databaseUrl: string): {
   return {
     store: (name) => {
       const store = Object.assign(Object.create(PostgresStore.prototype) as PgStore, { config, prefix: name });
+      // express-rate-limit calls init(), where the package makes the store's pool: listen on it as soon as it exists.
+      store.init = (options) => {
+        PostgresStore.prototype.init.call(store, options);
+        store.pool?.on("error", onIdleError);
+      };
       stores.push(store);
       return store;
     },

@@ -31,9 +31,14 @@ export type SmtpFakeOptions = {
    * waits for it, so a message the sender saw accepted is in the inbox; a failure is an SMTP error to the sender.
    */
   keep?: (mail: ReceivedMail) => Promise<void>;
+  /**
+   * A connection that failed mid-message (the sender's socket reset, say). smtp-server reports it as an "error" on the
+   * server, which with no listener would end the process; the fake carries on serving the other connections.
+   */
+  onConnectionError?: (err: Error) => void;
 };
 
-export async function startSmtpFake({ port = 0, keep }: SmtpFakeOptions = {}): Promise<SmtpFake> {
+export async function startSmtpFake({ port = 0, keep, onConnectionError = () => {} }: SmtpFakeOptions = {}): Promise<SmtpFake> {
   const messages: ReceivedMail[] = [];
   const waiters = new Set<{ match: (m: ReceivedMail) => boolean; resolve: (m: ReceivedMail) => void }>();
   let counter = 0;
@@ -73,8 +78,12 @@ export async function startSmtpFake({ port = 0, keep }: SmtpFakeOptions = {}): P
 
   await new Promise<void>((resolve, reject) => {
     server.once("error", reject);
-    server.listen(port, "127.0.0.1", () => resolve());
+    server.listen(port, "127.0.0.1", () => {
+      server.off("error", reject);
+      resolve();
+    });
   });
+  server.on("error", onConnectionError);
   const address = server.server.address();
   const actualPort = typeof address === "object" && address ? address.port : port;
 

@@ -187,3 +187,39 @@ test.skipIf(!adminUrl)(
   },
   120_000,
 );
+
+test.skipIf(!adminUrl)(
+  "connections the database ends (a restart, a failover, an administrator) are replaced: the server stays up and answers",
+  async () => {
+    const db = await freshPostgresDatabase(adminUrl!);
+    drops.push(db.drop);
+    const server = await spawnServer(db.url, { LOG_LEVEL: "warn" });
+    const signUp = (name: string) =>
+      new HttpClient(server.url).post("/api/auth/sign-up/email", {
+        name,
+        email: uniqueEmail(name.toLowerCase()),
+        password: TEST_PASSWORD,
+        accountType: "player",
+      });
+    // Every pool has idle connections now: the app's queries, the rate-limit counts and the mail fake's inbox.
+    expect((await signUp("Before")).status).toBe(200);
+    const admin = new pg.Client({ connectionString: db.url });
+    await admin.connect();
+    try {
+      const ended = await admin.query(
+        `select pg_terminate_backend(pid) as ok from pg_stat_activity where datname = current_database() and pid <> pg_backend_pid()`,
+      );
+      expect(ended.rows.length).toBeGreaterThan(0);
+    } finally {
+      await admin.end();
+    }
+    await new Promise((r) => setTimeout(r, 500));
+    expect(server.child.exitCode).toBeNull();
+    expect((await signUp("After")).status).toBe(200);
+    expect((await new HttpClient(server.url).get("/api/health")).status).toBe(200);
+    expect(server.child.exitCode).toBeNull();
+    server.child.kill("SIGTERM");
+    await server.exited;
+  },
+  120_000,
+);
