@@ -362,7 +362,7 @@ test("turning the dial by keyboard writes the address once, and a link followed 
   await user.keyboard("{ArrowRight}");
   await waitFor(() => expect(screen.getByTestId("where")).toHaveTextContent("f=100"));
   await user.click(screen.getByRole("link", { name: "Break chart for this green" }));
-  expect(chartAsked()).toBe(1);
+  await waitFor(() => expect(chartAsked()).toBe(1));
   expect(await screen.findByRole("heading", { name: "The chart page" }, { timeout: 3000 })).toBeInTheDocument();
   expect(router.state.location.pathname).toBe("/chart");
   expect(router.state.location.search).toContain("f=100");
