@@ -53,7 +53,7 @@ export async function openPglite(dataDir: string, load?: Blob, sharedBuffers = "
  * dropped it and opens a new one when next needed; without a listener node-postgres throws the error and the process
  * ends (its documentation: always listen for the pool's "error").
  */
-export async function openPostgres(url: string, statementTimeoutMs = 0, onIdleError: (err: Error) => void = () => {}): Promise<Database> {
+export async function openPostgres(url: string, statementTimeoutMs: number, onIdleError: (err: Error) => void): Promise<Database> {
   const pool = new pg.Pool({
     connectionString: url,
     max: 10,

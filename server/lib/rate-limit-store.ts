@@ -13,7 +13,7 @@ type PgStore = Store & { pool?: PgPool };
 /** onIdleError: an idle connection the database ended (see openPostgres); the pool replaces it. */
 export function postgresRateLimits(
   databaseUrl: string,
-  onIdleError: (err: Error) => void = () => {},
+  onIdleError: (err: Error) => void,
 ): {
   store: RateLimitStoreFactory;
   ready: () => Promise<void>;

@@ -104,7 +104,6 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
     return () => clearTimeout(later);
   }, [ready, query, values, writeAddress]);
 
-  const onCommit = useCallback((next: ReadValues) => writeAddress(next), [writeAddress]);
   // A button the player pressed (a roll past suggested beside the read): written at once.
   const applyRollPast = useCallback(
     (rollPastM: number) =>
@@ -148,7 +147,7 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
           <ReadForm
             units={units}
             values={values}
-            onCommit={onCommit}
+            onCommit={writeAddress}
             onLive={setLiveValues}
             serverErrors={serverErrors}
             slopeNote={steepest !== undefined ? `Steepest a ball stops on at this Stimp: ${steepest.toFixed(1)} %` : undefined}
