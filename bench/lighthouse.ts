@@ -13,6 +13,8 @@ import lighthouse from "lighthouse";
 const RUNS = Number(process.env.LIGHTHOUSE_RUNS ?? 3);
 const PAGES = (process.env.LIGHTHOUSE_PAGES ?? "/,/read").split(",");
 const CHROME = process.env.CHROME_PATH ?? "/usr/bin/chromium";
+// LIGHTHOUSE_REPORT_DIR=dir keeps each run's full report (JSON) there, to look into what the figures come from.
+const REPORT_DIR = process.env.LIGHTHOUSE_REPORT_DIR;
 
 type Figures = {
   performance: number;
@@ -69,6 +71,11 @@ function median(xs: number[]): number {
 async function audit(url: string, port: number): Promise<Figures> {
   const result = await lighthouse(url, { port, output: "json", logLevel: "error" });
   if (!result) throw new Error(`no Lighthouse result for ${url}`);
+  if (REPORT_DIR) {
+    fs.mkdirSync(REPORT_DIR, { recursive: true });
+    const name = `${new URL(url).pathname.replace(/\W+/g, "_") || "_"}-${Date.now()}.json`;
+    fs.writeFileSync(path.join(REPORT_DIR, name), JSON.stringify(result.lhr));
+  }
   const { categories, audits } = result.lhr;
   const score = (c: string) => Math.round(100 * (categories[c]?.score ?? 0));
   return {
@@ -111,6 +118,11 @@ try {
         m("cls").toFixed(3).padStart(8) +
         `   ${met ? "met" : "NOT met"}`,
     );
+    // The runs themselves: on a small shared machine one build's score moves by several points from run to run.
+    if (RUNS > 1)
+      console.log(
+        `  each run: performance ${runs.map((r) => r.performance).join(" ")}; TBT ms ${runs.map((r) => r.tbtMs.toFixed(0)).join(" ")}; LCP ms ${runs.map((r) => r.lcpMs.toFixed(0)).join(" ")}`,
+      );
   }
 } finally {
   await chrome.kill();
