@@ -96,6 +96,13 @@ test("until its scripts have run, the drawn /read's controls take no tap and soo
     const held: Route[] = [];
     let release = false;
     await page.route("**/*.js", (route) => (release ? route.continue() : void held.push(route)));
+    // Animation events inside #root reach React's listener there as the page hydrates: the dimming sends none.
+    await page.addInitScript(() => {
+      const w = window as unknown as { animationEventsInRoot: number };
+      w.animationEventsInRoot = 0;
+      for (const type of ["animationstart", "animationend"])
+        document.addEventListener(type, (e) => (e.target as Element).closest?.("#root") && w.animationEventsInRoot++, true);
+    });
     await page.goto(`${server.url}/read`, { waitUntil: "commit" });
     const copy = page.getByRole("button", { name: "Copy link to this read" });
     const distance = page.getByLabel("Distance (ft)");
@@ -105,6 +112,7 @@ test("until its scripts have run, the drawn /read's controls take no tap and soo
     // A moment later (0.3 s) they say they are not ready: dimmed.
     await expect.poll(() => look("opacity")).toBe("0.55");
     await screenshot(page, "first-paint-read-not-ready");
+    expect(await page.evaluate(() => (window as unknown as { animationEventsInRoot: number }).animationEventsInRoot)).toBe(0);
     // A tap on the distance does not start typing that the app would then overwrite.
     const box = (await distance.boundingBox())!;
     await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
