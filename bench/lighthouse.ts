@@ -70,12 +70,10 @@ async function startServer(): Promise<{ url: string; stop: () => Promise<void> }
 /** The share of the machine's CPU time spent busy over the next `ms` (all cores together, 0..1). */
 async function busyShare(ms: number): Promise<number> {
   const total = () =>
-    os
-      .cpus()
-      .reduce((t, c) => ({ idle: t.idle + c.times.idle, all: t.all + Object.values(c.times).reduce((a, b) => a + b, 0) }), {
-        idle: 0,
-        all: 0,
-      });
+    os.cpus().reduce((t, c) => ({ idle: t.idle + c.times.idle, all: t.all + Object.values(c.times).reduce((a, b) => a + b, 0) }), {
+      idle: 0,
+      all: 0,
+    });
   const before = total();
   await new Promise((r) => setTimeout(r, ms));
   const after = total();
