@@ -27,8 +27,11 @@ export async function renderPage(url: string): Promise<{ html: string; queries: 
     // The same tree as src/main.tsx. `hydrate` off: the router's state is not written into the page as an inline
     // script (the Content-Security-Policy forbids one); the client rebuilds it from the URL, which is all a page
     // without loaders needs.
+    // Every Suspense boundary (src/lib/drawn-part.tsx) is written finished, in place: never split out to be moved by an
+    // inline script.
     const { prelude } = await prerenderToNodeStream(
       <App router={<StaticRouterProvider router={router} context={context} hydrate={false} />} signedOut queryClient={queryClient} />,
+      { progressiveChunkSize: Number.POSITIVE_INFINITY },
     );
     const chunks: Buffer[] = [];
     for await (const chunk of prelude) chunks.push(Buffer.from(chunk as Uint8Array));

@@ -1,5 +1,6 @@
 import { StrictMode, Suspense, lazy, useEffect, useState, type ReactNode } from "react";
 import type { QueryClient } from "@tanstack/react-query";
+import { drawnShellHydrated } from "../lib/drawn-part";
 import { AppProvider } from "./provider";
 
 // The service worker's registration (and workbox-window) is not needed to draw the first page: it loads a few seconds
@@ -30,8 +31,9 @@ function AfterFirstPage({ children }: { children: ReactNode }) {
  * a drawn page shows (the drawing's queries, src/lib/drawn-queries.ts), so the browser's first render has them too.
  */
 export function App({ router, signedOut = false, queryClient }: { router: ReactNode; signedOut?: boolean; queryClient?: QueryClient }) {
-  // The page is the app's now: a drawn page's controls take taps (src/index.css, html[data-drawn]).
-  useEffect(() => document.documentElement.removeAttribute("data-drawn"), []);
+  // The page is the app's now: a drawn page's controls take taps (src/index.css, html[data-drawn]) once its parts
+  // have hydrated too (src/lib/drawn-part.tsx).
+  useEffect(drawnShellHydrated, []);
   return (
     <StrictMode>
       <AppProvider signedOut={signedOut} queryClient={queryClient}>

@@ -88,6 +88,18 @@ test("before any script has run, the drawn /read already shows its heading, form
   }
 });
 
+test("the drawn /read's form and answer are parts hydrated after the page around them, written whole and in place", async () => {
+  // Each is a finished Suspense boundary (src/lib/drawn-part.tsx): React hydrates the page first and the parts in a
+  // pass of their own, so hydration ends in shorter tasks. Finished and in place: no inline script moves them (CSP).
+  const html = await (await fetch(`${server.url}/read`)).text();
+  const root = html.slice(html.indexOf('<div id="root">'), html.indexOf("<noscript>"));
+  const parts = root.split("<!--$-->").slice(1);
+  expect(parts).toHaveLength(2);
+  expect(parts[0]).toContain("Distance (ft)");
+  expect(parts[1]).toContain("Copy link to this read");
+  expect(root).not.toMatch(/<template|<!--\$[?!]-->|<script(?![^>]*type="application\/json")/);
+});
+
 test("until its scripts have run, the drawn /read's controls take no tap and soon look it; then they work", async () => {
   const phone = await openBrowser(PHONE);
   try {
@@ -109,8 +121,10 @@ test("until its scripts have run, the drawn /read's controls take no tap and soo
     await copy.waitFor();
     const look = (name: "pointerEvents" | "opacity") => copy.evaluate((el, n) => getComputedStyle(el)[n], name);
     expect(await look("pointerEvents")).toBe("none");
-    // A moment later (0.3 s) they say they are not ready: dimmed.
-    await expect.poll(() => look("opacity")).toBe("0.55");
+    // A second later they say they are not ready: dimmed. Not sooner: an app that runs within a second shows no dim
+    // flash, and spares the page a full restyle as the dimming starts (issue 18).
+    expect(await page.evaluate(() => getComputedStyle(document.documentElement).animationDelay)).toBe("1s");
+    await expect.poll(() => look("opacity"), { timeout: 10_000 }).toBe("0.55");
     await screenshot(page, "first-paint-read-not-ready");
     expect(await page.evaluate(() => (window as unknown as { animationEventsInRoot: number }).animationEventsInRoot)).toBe(0);
     // A tap on the distance does not start typing that the app would then overwrite.

@@ -16,6 +16,7 @@ import { cannotStopWords } from "../utils/answer-text";
 import { maxStoppableSlopeOf } from "#shared/errors";
 import { formFieldForApi, type NumericField } from "../utils/read-form";
 import { decodeReadQuery, encodeReadQuery, isCompleteReadQuery, toReadRequest, type ReadValues } from "../../../lib/read-url";
+import { DrawnPart } from "../../../lib/drawn-part";
 import { AnswerBar } from "./answer-bar";
 import { ReadAnswer } from "./read-answer";
 import { ReadForm } from "./read-form";
@@ -144,69 +145,73 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
       />
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <Card>
-          <ReadForm
-            units={units}
-            values={values}
-            onCommit={writeAddress}
-            onLive={setLiveValues}
-            serverErrors={serverErrors}
-            slopeNote={steepest !== undefined ? `Steepest a ball stops on at this Stimp: ${steepest.toFixed(1)} %` : undefined}
-            solving={solve.isFetching}
-            onProblems={setFormProblems}
-          />
+          <DrawnPart>
+            <ReadForm
+              units={units}
+              values={values}
+              onCommit={writeAddress}
+              onLive={setLiveValues}
+              serverErrors={serverErrors}
+              slopeNote={steepest !== undefined ? `Steepest a ball stops on at this Stimp: ${steepest.toFixed(1)} %` : undefined}
+              solving={solve.isFetching}
+              onProblems={setFormProblems}
+            />
+          </DrawnPart>
         </Card>
 
         <div className="flex flex-col gap-6 lg:sticky lg:top-20">
           <Card id="answer">
-            {cannotStop && !live ? (
-              <div className="flex flex-col gap-3">
-                <h2 className="text-sm font-semibold tracking-wide text-coral-700 uppercase">The read</h2>
-                <Alert tone="warning" title="This ball would not stop">
-                  {cannotStopWords(values.slopePct, values.stimpFt, steepest)} Try a gentler slope or a slower green.
+            <DrawnPart>
+              {cannotStop && !live ? (
+                <div className="flex flex-col gap-3">
+                  <h2 className="text-sm font-semibold tracking-wide text-coral-700 uppercase">The read</h2>
+                  <Alert tone="warning" title="This ball would not stop">
+                    {cannotStopWords(values.slopePct, values.stimpFt, steepest)} Try a gentler slope or a slower green.
+                  </Alert>
+                </div>
+              ) : unplacedError && !live ? (
+                <Alert
+                  tone="error"
+                  title="Could not work out the read"
+                  action={
+                    <Button size="sm" variant="secondary" onClick={() => void solve.refetch()}>
+                      Try again
+                    </Button>
+                  }
+                >
+                  {unplacedError.message}
                 </Alert>
-              </div>
-            ) : unplacedError && !live ? (
-              <Alert
-                tone="error"
-                title="Could not work out the read"
-                action={
-                  <Button size="sm" variant="secondary" onClick={() => void solve.refetch()}>
-                    Try again
-                  </Button>
-                }
-              >
-                {unplacedError.message}
-              </Alert>
-            ) : shownRead ? (
-              <ReadAnswer
-                read={shownRead}
-                distanceM={live && liveValues ? liveValues.distanceM : values.distanceM}
-                fallLineDeg={live && liveValues ? liveValues.fallLineDeg : values.fallLineDeg}
-                units={units}
-                state={live ? "live" : staleBecause ? "stale" : solve.isPlaceholderData ? "updating" : "fresh"}
-                staleBecause={staleBecause ?? undefined}
-              />
-            ) : !request ? (
-              <p className="text-ink-600">Fix the values marked in the form and the read appears here.</p>
-            ) : (
-              <PageSpinner label="Working out the read" />
-            )}
-            <div className="mt-5 flex flex-wrap items-center gap-2 border-t border-ink-900/10 pt-4 print:hidden">
-              {cannotStop ? null : (
-                <ButtonLink to={paths.rehearse.href(encoded)} variant="accent" size="sm">
-                  Rehearse this putt
-                </ButtonLink>
+              ) : shownRead ? (
+                <ReadAnswer
+                  read={shownRead}
+                  distanceM={live && liveValues ? liveValues.distanceM : values.distanceM}
+                  fallLineDeg={live && liveValues ? liveValues.fallLineDeg : values.fallLineDeg}
+                  units={units}
+                  state={live ? "live" : staleBecause ? "stale" : solve.isPlaceholderData ? "updating" : "fresh"}
+                  staleBecause={staleBecause ?? undefined}
+                />
+              ) : !request ? (
+                <p className="text-ink-600">Fix the values marked in the form and the read appears here.</p>
+              ) : (
+                <PageSpinner label="Working out the read" />
               )}
-              <ButtonLink to={paths.breakChart.href(encoded)} variant="secondary" size="sm">
-                Break chart for this green
-              </ButtonLink>
-              <CopyLinkButton
-                link={() => window.location.href}
-                linkName="the link to this read"
-                label="Copy link to this read"
-                variant="ghost"
-              />
-            </div>
+              <div className="mt-5 flex flex-wrap items-center gap-2 border-t border-ink-900/10 pt-4 print:hidden">
+                {cannotStop ? null : (
+                  <ButtonLink to={paths.rehearse.href(encoded)} variant="accent" size="sm">
+                    Rehearse this putt
+                  </ButtonLink>
+                )}
+                <ButtonLink to={paths.breakChart.href(encoded)} variant="secondary" size="sm">
+                  Break chart for this green
+                </ButtonLink>
+                <CopyLinkButton
+                  link={() => window.location.href}
+                  linkName="the link to this read"
+                  label="Copy link to this read"
+                  variant="ghost"
+                />
+              </div>
+            </DrawnPart>
           </Card>
 
           {besideRead ? (
