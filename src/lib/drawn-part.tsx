@@ -14,6 +14,11 @@ function releaseIfDone() {
   if (shellHydrated && waiting.size === 0) document.documentElement.removeAttribute("data-drawn");
 }
 
+function partDone(id: string) {
+  waiting.delete(id);
+  releaseIfDone();
+}
+
 /** App's tree around the parts has hydrated (or was drawn in the browser). */
 export function drawnShellHydrated() {
   shellHydrated = true;
@@ -21,10 +26,7 @@ export function drawnShellHydrated() {
 }
 
 function PartHydrated({ id }: { id: string }) {
-  useEffect(() => {
-    waiting.delete(id);
-    releaseIfDone();
-  }, [id]);
+  useEffect(() => partDone(id), [id]);
   return null;
 }
 
@@ -34,10 +36,7 @@ export function DrawnPart({ children }: { children: ReactNode }) {
   // waited for until PartHydrated's effect runs (at once, in the same commit, when nothing was drawn).
   useLayoutEffect(() => {
     waiting.add(id);
-    return () => {
-      waiting.delete(id);
-      releaseIfDone();
-    };
+    return () => partDone(id);
   }, [id]);
   return (
     <Suspense fallback={null}>
