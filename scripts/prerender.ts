@@ -9,6 +9,7 @@ import react from "@vitejs/plugin-react";
 import { build } from "vite";
 import { drawnQueriesElement, type DrawnQuery } from "../src/lib/drawn-queries";
 
+// Their routes' modules are named in vite.config.ts too (DRAWN_ROUTE_MODULES: no preload list for their chunks).
 const PRERENDERED_PAGES = [
   { url: "/", file: "home.html" },
   { url: "/read", file: "read.html" },

@@ -147,6 +147,32 @@ test("until its scripts have run, the drawn /read's controls take no tap and soo
   }
 });
 
+test("a drawn page starts without the app appending a preload link for each chunk its route imports", async () => {
+  // Vite's preload helper appends one <link rel="modulepreload"> per chunk a lazy route imports, in the task that
+  // starts the app; for the drawn pages' routes the build leaves the list empty (vite.config.ts, issue 18: /read's
+  // blocking time halved in Lighthouse). The route's chunks then come as its imports, and the page still starts.
+  const phone = await openBrowser(PHONE);
+  try {
+    const { page } = phone;
+    for (const path of ["/read", "/"]) {
+      const html = await (await fetch(`${server.url}${path}`)).text();
+      const inHtml = [...html.matchAll(/<link rel="modulepreload"/g)].length;
+      await page.goto(`${server.url}${path}`);
+      await appRunning(page);
+      await page.waitForLoadState("networkidle");
+      expect({ path, links: await page.locator('link[rel="modulepreload"]').count() }).toEqual({ path, links: inHtml });
+    }
+    // The app works: the read answers a typed putt.
+    await page.goto(`${server.url}/read`);
+    await appRunning(page);
+    await page.getByLabel("Distance (ft)").fill("14");
+    await page.waitForURL(/[?&]d=4\.26/); // 14 ft = 4.267 m
+    expect(phone.unexpected()).toEqual([]);
+  } finally {
+    await phone.close();
+  }
+});
+
 test("the answer drawn into /read is the API's answer to its read, and the running page does not ask for it again", async () => {
   const phone = await openBrowser(PHONE);
   try {
