@@ -1,8 +1,8 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 
-// Two projects: fast unit/API tests (node or jsdom per file) and browser tests
-// that drive Debian's Chromium through playwright-core against a real server.
+// Three projects: unit tests (physics, shared code, the client's components in jsdom), API and server tests (node),
+// and browser tests that drive Debian's Chromium through playwright-core against a real server.
 export default defineConfig({
   test: {
     // Two files at a time (vitest otherwise keeps one core free, which on CI's two cores runs the files one by one):
@@ -15,18 +15,27 @@ export default defineConfig({
         plugins: [react()],
         test: {
           name: "unit",
-          include: [
-            "physics/**/*.test.ts",
-            "shared/**/*.test.ts",
-            "server/**/*.test.ts",
-            "src/**/*.test.{ts,tsx}",
-            "tests/api/**/*.test.ts",
-          ],
+          include: ["physics/**/*.test.ts", "shared/**/*.test.ts", "src/**/*.test.{ts,tsx}"],
           environment: "node",
           setupFiles: ["tests/setup/unit.ts"],
           globalSetup: ["tests/setup/global-unit.ts"],
           testTimeout: 30_000,
           hookTimeout: 60_000,
+        },
+      },
+      {
+        test: {
+          name: "api",
+          include: ["server/**/*.test.ts", "tests/api/**/*.test.ts"],
+          environment: "node",
+          setupFiles: ["tests/setup/unit.ts"],
+          globalSetup: ["tests/setup/global-unit.ts"],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+          // Each file starts its own servers and databases, and none mocks a module, so the files of a worker share
+          // one import of the server and its libraries instead of importing them again per file (2026-12-04: the API
+          // and server tests 433 → 326 s, 13.2 → 9.6 CPU-minutes; CI was near its 30-minute limit).
+          isolate: false,
         },
       },
       {

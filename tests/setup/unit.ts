@@ -2,7 +2,10 @@
 import path from "node:path";
 import { afterAll, afterEach, beforeAll, inject, vi } from "vitest";
 
-const original = console.error;
+// API files share one module registry per worker (vitest.config.ts, isolate: false) and this file runs again before
+// each: wrap the console's own error function, not the wrapper an earlier file left.
+const consoleState = globalThis as { consoleErrorBeforeTests?: typeof console.error };
+const original = (consoleState.consoleErrorBeforeTests ??= console.error);
 let errors: unknown[][] = [];
 console.error = (...args: unknown[]) => {
   errors.push(args);
