@@ -261,10 +261,14 @@ test("a 400 from the API is shown beside the field it names", async () => {
   await waitFor(() => expect(distance).toHaveAccessibleDescription("distanceM must be at least 0.3 m"));
 });
 
-test("a bare /read writes the defaults into the address so it can be shared", async () => {
+test("a bare /read writes the defaults into the browser's address so it can be shared, without a navigation", async () => {
   stubApi();
+  window.history.replaceState({ kept: true }, "", "/read");
   renderPage("/read");
-  await waitFor(() => expect(screen.getByTestId("where")).toHaveTextContent("?d=3.048&s=2&f=90&st=10&rp=0.4318"));
+  await waitFor(() => expect(window.location.search).toBe("?d=3.048&s=2&f=90&st=10&rp=0.4318"));
+  expect(window.history.state).toEqual({ kept: true });
+  // The router was not asked to navigate (a navigation renders the whole page again as a drawn /read hydrates).
+  expect(screen.getByTestId("where")).toHaveTextContent(/^$/);
   expect(await screen.findByRole("link", { name: "Rehearse this putt" })).toHaveAttribute(
     "href",
     "/rehearse?d=3.048&s=2&f=90&st=10&rp=0.4318",

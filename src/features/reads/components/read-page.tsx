@@ -96,14 +96,17 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
     [setParams],
   );
 
-  // A bare /read (or a partial link) gets every value written into the address, so it can be shared as it is. In a
-  // task of its own: on a drawn /read this runs as hydration ends, and the router's navigation would otherwise lengthen
-  // the task that commits the hydrated page (issue 18).
+  // A bare /read (or a partial link) gets every value written into the address, so it can be shared as it is. Into
+  // the browser's address only, keeping the history entry's state: the values on the page come from the router's
+  // query and are the same either way, and a router navigation would render the whole page again just as a drawn
+  // /read finishes hydrating (≈ 20 ms, a long task on a phone; issue 18). The next value the player commits is a
+  // router navigation as usual.
   useEffect(() => {
     if (!ready || isCompleteReadQuery(new URLSearchParams(query))) return;
-    const later = setTimeout(() => writeAddress(values));
-    return () => clearTimeout(later);
-  }, [ready, query, values, writeAddress]);
+    const address = new URL(window.location.href);
+    address.search = encodeReadQuery(values);
+    window.history.replaceState(window.history.state, "", address);
+  }, [ready, query, values]);
 
   // A button the player pressed (a roll past suggested beside the read): written at once.
   const applyRollPast = useCallback(
