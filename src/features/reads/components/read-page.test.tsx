@@ -269,6 +269,14 @@ test("a bare /read writes the defaults into the browser's address so it can be s
   expect(window.history.state).toEqual({ kept: true });
   // The router was not asked to navigate (a navigation renders the whole page again as a drawn /read hydrates).
   expect(screen.getByTestId("where")).toHaveTextContent(/^$/);
+});
+
+test("the defaults are not written over the address of another page the browser has already moved to", async () => {
+  stubApi();
+  window.history.replaceState(null, "", "/rehearse?d=2");
+  renderPage("/read");
+  await screen.findByTestId("aim-headline");
+  expect(window.location.pathname + window.location.search).toBe("/rehearse?d=2");
   expect(await screen.findByRole("link", { name: "Rehearse this putt" })).toHaveAttribute(
     "href",
     "/rehearse?d=3.048&s=2&f=90&st=10&rp=0.4318",

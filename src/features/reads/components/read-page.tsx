@@ -100,13 +100,14 @@ export function ReadPage({ besideRead }: ReadPageProps = {}) {
   // the browser's address only, keeping the history entry's state: the values on the page come from the router's
   // query and are the same either way, and a router navigation would render the whole page again just as a drawn
   // /read finishes hydrating (≈ 20 ms, a long task on a phone; issue 18). The next value the player commits is a
-  // router navigation as usual.
+  // router navigation as usual. Never once the browser's address has moved on to another page (a link followed
+  // while this page was still showing).
   useEffect(() => {
-    if (!ready || isCompleteReadQuery(new URLSearchParams(query))) return;
+    if (!ready || isCompleteReadQuery(new URLSearchParams(query)) || window.location.pathname !== pathname) return;
     const address = new URL(window.location.href);
     address.search = encodeReadQuery(values);
     window.history.replaceState(window.history.state, "", address);
-  }, [ready, query, values]);
+  }, [ready, query, values, pathname]);
 
   // A button the player pressed (a roll past suggested beside the read): written at once.
   const applyRollPast = useCallback(
