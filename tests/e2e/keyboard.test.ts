@@ -5,7 +5,7 @@ import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Locator, Page } from "playwright-core";
 import { DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
 import type { TestServer } from "../setup/server";
-import { DESKTOP, openBrowser, screenshot, startAppServer, type Browser } from "./harness";
+import { DESKTOP, appRunning, openBrowser, screenshot, startAppServer, type Browser } from "./harness";
 
 // One browser for the three tests, in order: the read signed out, then signed in (by keyboard) a session and a rung.
 let server: TestServer;
@@ -41,7 +41,8 @@ const focused = (page: Page) =>
 test("the read by keyboard: type the distance, turn the fall-line dial with the arrows, follow a link with Enter", async () => {
   const { page } = browser;
   await page.goto(`${server.url}/read`);
-  await page.getByTestId("aim-headline").waitFor();
+  // The page comes drawn before its scripts run; keys typed then would be the drawing's, not the app's.
+  await appRunning(page);
   const distance = page.getByLabel("Distance (ft)");
   await tabTo(page, distance);
   await page.keyboard.press("ControlOrMeta+A");
