@@ -88,7 +88,7 @@ export async function createHydratingRouter() {
       Object.assign(route, { ...module, lazy: undefined });
     }),
   );
-  // The route's module has just run in this task; the router's creation (≈ 20 ms on a phone) gets a task of its own.
+  // The route's module has just run in this task; the router's creation (≈ 20 ms here, unthrottled) gets a task of its own.
   await nextTask();
   return createBrowserRouter(routes);
 }
