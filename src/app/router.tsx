@@ -1,7 +1,6 @@
 import { createBrowserRouter, matchRoutes, type RouteObject } from "react-router";
 import { PageSpinner } from "../components/ui";
 import { paths } from "../config/paths";
-import { nextTask } from "../lib/next-task";
 import { AppShell } from "./layout/app-shell";
 import { NotFoundRoute, RootErrorBoundary, RouteErrorBoundary } from "./routes/errors";
 
@@ -74,12 +73,12 @@ export function createAppRouter() {
 }
 
 /**
- * The browser's router for a page the server sent already drawn (src/prerender.tsx): the route modules the URL matches
- * are loaded first, so the router's first render is the page itself, as drawn, and not its loading placeholder —
+ * The routes for a page the server sent already drawn (src/prerender.tsx), with the route modules the URL matches
+ * already loaded, so the router's first render is the page itself, as drawn, and not its loading placeholder —
  * React can then hydrate the HTML instead of replacing it (React Router's guidance for lazy routes with server
- * rendering).
+ * rendering). src/main.tsx creates the router from them.
  */
-export async function createHydratingRouter() {
+export async function loadDrawnPageRoutes() {
   const routes = createAppRoutes();
   const lazyMatches = (matchRoutes(routes, window.location) ?? []).filter((m) => typeof m.route.lazy === "function");
   await Promise.all(
@@ -88,7 +87,5 @@ export async function createHydratingRouter() {
       Object.assign(route, { ...module, lazy: undefined });
     }),
   );
-  // The route's module has just run in this task; the router's creation (≈ 20 ms here, unthrottled) gets a task of its own.
-  await nextTask();
-  return createBrowserRouter(routes);
+  return routes;
 }
