@@ -6,7 +6,9 @@
 // Lighthouse's simulated throttling multiplies the CPU time it observes, so time this page loses to other processes
 // counts as the page's own. Following Lighthouse's own advice on score variability (docs/variability.md: several
 // runs, their median, no resource contention), it takes 5 runs by default and starts each once the machine's CPUs
-// have been mostly idle for a second (the previous run's browser work and the server's start have settled).
+// have been mostly idle for a second (the previous run's browser work and the server's start have settled). Each run's
+// line also shows Lighthouse's benchmark index of the host, measured at the run's start: on a shared virtual machine
+// the CPU's speed itself moves from run to run, and a slow moment shows there rather than as a mystery in the scores.
 import { execSync, spawn } from "node:child_process";
 import fs from "node:fs";
 import os from "node:os";
@@ -28,6 +30,9 @@ type Figures = {
   lcpMs: number;
   tbtMs: number;
   cls: number;
+  /** Lighthouse's own measure of the host's CPU speed at the run's start (higher is faster; it moved 1660–2860 between
+   *  runs on this two-core virtual machine, and the blocking time follows it). */
+  benchmarkIndex: number;
 };
 
 async function startServer(): Promise<{ url: string; stop: () => Promise<void> }> {
@@ -113,6 +118,7 @@ async function audit(url: string, port: number): Promise<Figures> {
     lcpMs: audits["largest-contentful-paint"]?.numericValue ?? Number.NaN,
     tbtMs: audits["total-blocking-time"]?.numericValue ?? Number.NaN,
     cls: audits["cumulative-layout-shift"]?.numericValue ?? Number.NaN,
+    benchmarkIndex: result.lhr.environment.benchmarkIndex,
   };
 }
 
@@ -152,7 +158,7 @@ try {
     // The runs themselves: on a small shared machine one build's score moves by several points from run to run.
     if (RUNS > 1)
       console.log(
-        `  each run: performance ${runs.map((r) => r.performance).join(" ")}; TBT ms ${runs.map((r) => r.tbtMs.toFixed(0)).join(" ")}; LCP ms ${runs.map((r) => r.lcpMs.toFixed(0)).join(" ")}`,
+        `  each run: performance ${runs.map((r) => r.performance).join(" ")}; TBT ms ${runs.map((r) => r.tbtMs.toFixed(0)).join(" ")}; LCP ms ${runs.map((r) => r.lcpMs.toFixed(0)).join(" ")}; host benchmark index ${runs.map((r) => r.benchmarkIndex.toFixed(0)).join(" ")}`,
       );
     if (busyStarts > 0)
       console.log(`  ${busyStarts} of ${RUNS} runs started on a busy machine (CPUs over 15 % busy for ${QUIET_WAIT_MAX_MS / 1000} s)`);
