@@ -70,6 +70,10 @@ test("aim words: an offset by side, the centre, and a start line too wide for an
   expect(aimWords(-0.39, "metric")).toBe("39 cm left of the hole");
   expect(aimWords(0.003, "imperial")).toBe("straight at the hole");
   expect(aimWords(null, "imperial", -75.4)).toBe("start it 75° left of the hole");
+  // From a yard or a metre on, an aim is a length, as a golfer says it.
+  expect(aimWords(-3.2766, "imperial")).toBe("10 ft 9 in left of the hole");
+  expect(aimWords(0.8, "imperial")).toBe("31 in right of the hole");
+  expect(aimWords(1.5, "metric")).toBe("1.50 m right of the hole");
   // 4.25 in = 10.795 cm a hole width (Rules of Golf, Definitions "Hole").
   expect(holeWidthsWords(0.10795)).toBe("1.0 hole width");
   expect(holeWidthsWords(-0.27)).toBe("2.5 hole widths");

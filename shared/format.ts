@@ -1,6 +1,6 @@
 // Numbers and dates for people: the one place they are rounded and worded (issue 14). Storage stays SI and
 // unrounded; only what is shown or exported passes through here. Lengths come from units.ts (re-exported).
-import { formatLength, formatShort, metresToHoleWidths, mpsToFtps, type UnitSystem } from "./units";
+import { formatLength, formatShort, metresToHoleWidths, mpsToFtps, toShortUnit, type UnitSystem } from "./units";
 
 export { formatLength, formatShort };
 
@@ -127,7 +127,14 @@ export function startLineAimText(startLineDeg: number): string {
 export function aimWords(aimOffsetM: number | null, units: UnitSystem, startLineDeg = 0): string {
   if (aimOffsetM === null) return `start it ${startLineAimText(startLineDeg)}`;
   if (Math.abs(aimOffsetM) < AIM_CENTRE_M) return "straight at the hole";
-  return `${formatShort(aimOffsetM, units)} ${sideOf(aimOffsetM)} of the hole`;
+  const size = isLongAim(aimOffsetM, units) ? formatLength(Math.abs(aimOffsetM), units) : formatShort(aimOffsetM, units);
+  return `${size} ${sideOf(aimOffsetM)} of the hole`;
+}
+
+/** From a yard (36 in, as rounded) or a metre (100 cm) on, an aim reads better as a length, "10 ft 9 in" or "3.28 m",
+ *  than as "129 in": a long putt across a slope is aimed that far outside. */
+export function isLongAim(m: number, units: UnitSystem): boolean {
+  return Math.round(toShortUnit(Math.abs(m), units)) >= (units === "imperial" ? 36 : 100);
 }
 
 /** "3.6 hole widths", "1 hole width", "12 hole widths". */

@@ -17,6 +17,17 @@ test("aims are rounded the way a golfer says them", () => {
   expect(formatAim(-0.274, "metric")).toBe("27 cm");
 });
 
+test("a big aim (a yard or a metre and more) is said in feet and inches or in metres, not as 129 in", () => {
+  expect(formatAim(inchesToMetres(129), "imperial")).toBe("10 ft 9 in");
+  expect(formatAim(inchesToMetres(35.4), "imperial")).toBe("35 in");
+  // 35.6 in is said as 36 in, which is a yard.
+  expect(formatAim(inchesToMetres(35.6), "imperial")).toBe("3 ft");
+  expect(formatAim(-3.284, "metric")).toBe("3.28 m");
+  expect(formatAim(0.994, "metric")).toBe("99 cm");
+  expect(formatAim(0.996, "metric")).toBe("1.00 m");
+  expect(aimWords(-inchesToMetres(131.125), -20, "imperial").headline).toBe("Start it 10 ft 9 in outside the left edge");
+});
+
 test("a small aim stays inside the hole, a tiny one is the centre", () => {
   expect(aimWords(inchesToMetres(1.5), 0.7, "metric").headline).toBe("Aim inside the right edge");
   expect(aimWords(0.002, 0.05, "metric").headline).toBe("Aim at the centre of the hole");

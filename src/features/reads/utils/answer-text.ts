@@ -5,6 +5,7 @@ import {
   STOPPED_AT_HOLE_MPS,
   formatSpeed,
   holeWidthsWords,
+  isLongAim,
   paceWords,
   sideOf,
   startLineAimText,
@@ -26,9 +27,11 @@ export type AimWords = {
   startLine: string;
 };
 
-/** An aim as a golfer says it: whole inches (half inches under 2 in), whole centimetres (tenths under 5 cm). */
+/** An aim as a golfer says it: whole inches (half inches under 2 in), whole centimetres (tenths under 5 cm); from a
+ *  yard or a metre on, as a length ("10 ft 9 in", "3.28 m"): a long breaking putt is not aimed 129 in outside. */
 export function formatAim(m: number, units: UnitSystem): string {
   const v = toShortUnit(Math.abs(m), units);
+  if (isLongAim(m, units)) return formatLength(Math.abs(m), units);
   if (units === "imperial") return `${v < 2 ? String(Math.round(v * 2) / 2) : Math.round(v)} in`;
   return `${v < 5 ? v.toFixed(1) : Math.round(v)} cm`;
 }
