@@ -9,12 +9,16 @@ import "@fontsource/lexend/700.css";
 import "./index.css";
 import { App } from "./app/app";
 import { createAppRouter, loadDrawnPageRoutes } from "./app/router";
+import { forgetPlaceOnNewVisit } from "./app/scroll-positions";
 import { seedDrawnQueries } from "./lib/drawn-queries";
 import { nextTask } from "./lib/next-task";
 import { createQueryClient } from "./lib/query-client";
 
 const container = document.getElementById("root");
 if (!container) throw new Error("Missing #root element in index.html");
+
+// A new visit to a page opens at its top, not where this tab last left a page loaded fresh (src/app/scroll-positions.ts).
+forgetPlaceOnNewVisit();
 
 // A first page the server sent already drawn (src/prerender.tsx: "/" and "/read", only for a visitor without a session
 // cookie, so nobody is signed in) is hydrated; every other page is drawn here.

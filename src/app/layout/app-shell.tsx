@@ -2,6 +2,7 @@ import { Outlet, ScrollRestoration } from "react-router";
 import { VerifyEmailNotice } from "../../features/auth/components/verify-email-notice";
 import { Link } from "react-router";
 import { paths } from "../../config/paths";
+import { SCROLL_POSITIONS_KEY, scrollKey } from "../scroll-positions";
 import { useDevMailAvailable } from "../../features/dev-mail/api/get-dev-mail";
 import { useFocusHeadingOnNavigate } from "./focus-on-navigate";
 import { SectionNav } from "./section-nav";
@@ -56,7 +57,7 @@ export function AppShell() {
           <DevMailLink />
         </div>
       </footer>
-      <ScrollRestoration />
+      <ScrollRestoration storageKey={SCROLL_POSITIONS_KEY} getKey={scrollKey} />
     </div>
   );
 }

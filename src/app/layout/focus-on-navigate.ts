@@ -18,7 +18,9 @@ export function focusHeadingWhenReady(root: () => HTMLElement | null, waitMs = W
     const heading = root()?.querySelector("h1");
     if (heading instanceof HTMLElement) {
       if (!heading.hasAttribute("tabindex")) heading.setAttribute("tabindex", "-1");
-      heading.focus();
+      // Without scrolling: a new page starts at its top anyway (the router scrolls there), and after Back the router
+      // has just put the page back where the golfer left it, which focusing the heading undid.
+      heading.focus({ preventScroll: true });
       return;
     }
     if (performance.now() - started < waitMs) frame = requestAnimationFrame(tryFocus);
