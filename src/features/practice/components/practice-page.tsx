@@ -11,16 +11,14 @@ export function PracticePage() {
       <PageHeader
         eyebrow="Practice log"
         title="Practice"
-        // Phone first: on a phone the header stays short so "Start logging" shows without scrolling.
-        description={
-          <span className="hidden sm:inline">Log putts on the practice green as you hit them; every putt feeds your make rates.</span>
-        }
+        // Phone first: on a phone the header stays short so "Start logging" shows without scrolling; the CSV link
+        // comes after the form there.
+        shortOnPhone
+        description="Log putts on the practice green as you hit them; every putt feeds your make rates."
         actions={
-          <span className="hidden sm:block">
-            <ButtonLink to={paths.practiceImport.href()} variant="secondary" size="sm">
-              Import or export CSV
-            </ButtonLink>
-          </span>
+          <ButtonLink to={paths.practiceImport.href()} variant="secondary" size="sm">
+            Import or export CSV
+          </ButtonLink>
         }
       />
       <StartSessionForm />
