@@ -34,6 +34,6 @@ export function forgetPlaceOnNewVisit(address: Pick<Location, "pathname"> = wind
     delete places[key];
     sessionStorage.setItem(SCROLL_POSITIONS_KEY, JSON.stringify(places));
   } catch {
-    // No sessionStorage (a private window's quota, a blocked store): nothing was kept, nothing to forget.
+    // No sessionStorage (a blocked store) or an entry that is not JSON: the router keeps nothing usable there either.
   }
 }

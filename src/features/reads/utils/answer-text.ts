@@ -30,8 +30,8 @@ export type AimWords = {
 /** An aim as a golfer says it: whole inches (half inches under 2 in), whole centimetres (tenths under 5 cm); from a
  *  yard or a metre on, as a length ("10 ft 9 in", "3.28 m"): a long breaking putt is not aimed 129 in outside. */
 export function formatAim(m: number, units: UnitSystem): string {
-  const v = toShortUnit(Math.abs(m), units);
   if (isLongAim(m, units)) return formatLength(Math.abs(m), units);
+  const v = toShortUnit(Math.abs(m), units);
   if (units === "imperial") return `${v < 2 ? String(Math.round(v * 2) / 2) : Math.round(v)} in`;
   return `${v < 5 ? v.toFixed(1) : Math.round(v)} cm`;
 }
