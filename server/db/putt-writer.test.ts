@@ -97,3 +97,28 @@ test("one putt the database refuses (a NUL character in text) fails alone; the r
   expect(results.map((r) => r.status)).toEqual(["fulfilled", "fulfilled", "rejected", "fulfilled"]);
   expect((await stored(2)).slice(before).map((r) => r.distance_m)).toEqual([4, 5, 7]);
 });
+
+test("when a refused putt makes its group go one by one, the others still keep the order posted, however fast each statement returns", async () => {
+  // On a PostgreSQL server each statement may take its own pooled connection, and a later one can commit first;
+  // here the first putt's lone retry is held back longest. (The same reorder showed once in CI on PGlite, 5 before 4.)
+  const writer = puttWriter(database.db);
+  const original = database.db.execute.bind(database.db);
+  let call = 0;
+  const execute = vi.spyOn(database.db, "execute").mockImplementation(((query: Parameters<typeof original>[0]) => {
+    const delay = call++ === 0 ? 0 : Math.max(0, 40 - 10 * call); // call 0 is the group that fails
+    return new Promise((resolve) => setTimeout(resolve, delay)).then(() => original(query));
+  }) as typeof original);
+  try {
+    const before = (await stored(2)).length;
+    const results = await Promise.allSettled([
+      writer.write(putt(2, 8)),
+      writer.write(putt(2, 9, { missSide: "right\u0000" })),
+      writer.write(putt(2, 10)),
+      writer.write(putt(2, 11)),
+    ]);
+    expect(results.map((r) => r.status)).toEqual(["fulfilled", "rejected", "fulfilled", "fulfilled"]);
+    expect((await stored(2)).slice(before).map((r) => r.distance_m)).toEqual([8, 10, 11]);
+  } finally {
+    execute.mockRestore();
+  }
+});

@@ -62,16 +62,19 @@ export function puttWriter(db: Db, options: { maxGroup?: number } = {}) {
     async (group) => {
       const run = insertGroup(db, group).catch(async (error: unknown) => {
         // One putt the database refuses must not take the others down with it: each is tried alone, and only
-        // the refused one fails.
+        // the refused one fails. One after another, so they keep the order posted (statements sent together may
+        // commit in any order on a pool of connections).
         if (group.length === 1) throw error;
-        return await Promise.all(
-          group.map((p) =>
-            insertGroup(db, [p]).then(
+        const results: (string | null | Error)[] = [];
+        for (const p of group) {
+          results.push(
+            await insertGroup(db, [p]).then(
               ([id]) => id ?? null,
               (e: unknown) => toError(e),
             ),
-          ),
-        );
+          );
+        }
+        return results;
       });
       writing = run.catch(() => undefined);
       return await run;
