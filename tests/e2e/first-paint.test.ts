@@ -1,8 +1,11 @@
 // The first pages a visitor lands on ("/" and "/read") come drawn from the build (scripts/prerender.ts), so their text
 // paints when the HTML and CSS arrive; the browser then hydrates them (src/main.tsx). A hydration that does not match
 // is a page error in production React, which the harness's console check fails on (harness.ts, checkQuiet).
+import fs from "node:fs";
+import path from "node:path";
 import type { Route } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
+import { ICONS, renderIcon } from "../../scripts/render-icons";
 import { DEMO_PASSWORD, DEMO_PLAYERS } from "../../server/db/seed-data";
 import { PHONE, appRunning, openBrowser, screenshot, signInWithForm, startAppServer } from "./harness";
 import type { TestServer } from "../setup/server";
@@ -277,5 +280,43 @@ test("a page's icons are pictures: loading a page fetches no SVG icon, which Chr
     expect(phone.unexpected()).toEqual([]);
   } finally {
     await phone.close();
+  }
+});
+
+test("the PNG icons are the drawing in public/favicon.svg, as `npm run icons` renders it", async () => {
+  // Only the PNGs reach a browser (above); a change to the drawing that was not rendered again would leave the tab,
+  // the home screen and the install prompt showing the old one. Anti-aliasing may differ by a level or two between
+  // Chromium builds; a changed colour or shape changes far more than 0.5 % of the channels by more than 16 levels.
+  const desk = await openBrowser();
+  try {
+    const page = await desk.context.newPage();
+    const svg = fs.readFileSync(path.resolve("public/favicon.svg"), "utf8");
+    for (const { file, size, fullBleed } of ICONS) {
+      const drawn = await renderIcon(page, svg, size, fullBleed);
+      const committed = fs.readFileSync(path.resolve("public", file));
+      const compared = await page.evaluate(
+        async ([a, b]) => {
+          const pixels = async (base64: string) => {
+            const img = new Image();
+            img.src = `data:image/png;base64,${base64}`;
+            await img.decode();
+            const canvas = new OffscreenCanvas(img.width, img.height);
+            const g = canvas.getContext("2d")!;
+            g.drawImage(img, 0, 0);
+            return { width: img.width, height: img.height, data: g.getImageData(0, 0, img.width, img.height).data };
+          };
+          const [x, y] = [await pixels(a), await pixels(b)];
+          let far = 0;
+          for (let i = 0; i < Math.min(x.data.length, y.data.length); i++) if (Math.abs(x.data[i]! - y.data[i]!) > 16) far++;
+          return { size: [y.width, y.height], sameSize: x.width === y.width && x.height === y.height, farShare: far / x.data.length };
+        },
+        [drawn.toString("base64"), committed.toString("base64")] as const,
+      );
+      expect({ file, size: compared.size, sameSize: compared.sameSize }).toEqual({ file, size: [size, size], sameSize: true });
+      expect(compared.farShare, file).toBeLessThanOrEqual(0.005);
+    }
+    expect(desk.unexpected()).toEqual([]);
+  } finally {
+    await desk.close();
   }
 });
