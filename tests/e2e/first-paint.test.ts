@@ -259,7 +259,7 @@ test("a page's icons are pictures: loading a page fetches no SVG icon, which Chr
   // An SVG icon (the tab's <link rel="icon">, or the manifest's) is drawn by Chromium as a whole SVG document in the
   // page's own renderer while the page loads, and torn down after: ~30 ms of main thread each time in a trace of
   // /read on this machine, and Lighthouse counted it as blocking. The icons are PNG (public/favicon-32.png and the
-  // manifest's icon-*.png, rendered once from public/favicon.svg).
+  // manifest's icon-*.png, rendered from public/favicon.svg by `npm run icons`).
   const phone = await openBrowser(PHONE);
   try {
     const { page, context } = phone;
