@@ -289,7 +289,7 @@ test("the PNG icons are the drawing in public/favicon.svg, as `npm run icons` re
   // Chromium builds; a changed colour or shape changes far more than 0.5 % of the channels by more than 16 levels.
   const desk = await openBrowser();
   try {
-    const page = await desk.context.newPage();
+    const { page } = desk;
     const svg = fs.readFileSync(path.resolve("public/favicon.svg"), "utf8");
     for (const { file, size, fullBleed } of ICONS) {
       const drawn = await renderIcon(page, svg, size, fullBleed);
